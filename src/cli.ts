@@ -1,0 +1,120 @@
+import { parseArgs } from "node:util";
+import { type CommandIo, runBuild } from "./commands/build.ts";
+import { runCheck } from "./commands/check.ts";
+import { TOOL_VERSION } from "./version.ts";
+
+const USAGE =
+  `fluxnote ${TOOL_VERSION} — heat flow through walls and roofs, as a reviewable calculation package
+
+usage: fluxnote <command> [options]
+
+commands:
+  build <project> [--out <dir>]            write package.html, results.json and csv/
+  check <project> [--format text|json] [--strict]
+                                           validate the project, write nothing
+  help [command]                           show help
+
+Run "fluxnote <command> --help" for a command's options.`;
+
+const HELP: Record<string, string> = {
+  build: `usage: fluxnote build <project> [--out <dir>]
+
+Reads the project folder, computes every construction and writes one output set:
+  <dir>/package.html   the self-contained calculation package
+  <dir>/results.json   machine-readable results (schema fluxnote-results/1)
+  <dir>/csv/           tables as CSV
+--out defaults to <project>/out. The set is replaced as a whole; on an input error nothing is written.
+Exit codes: 0 success; 1 input errors or a failed computed check (the package is still written then);
+2 usage error or internal fault.`,
+  check: `usage: fluxnote check <project> [--format text|json] [--strict]
+
+Runs all validation of a build and reports every finding as path:line:col: severity: message.
+--format json   print {"schema": "fluxnote-check/1", "findings": [...]} on stdout
+--strict        warnings also give exit code 1
+Exit codes: 0 no errors; 1 errors (or warnings with --strict); 2 usage error.`,
+};
+
+const LATER = ["diff", "verify", "init", "serve"];
+
+/** Runs the command line; returns the process exit code. */
+export async function main(args: readonly string[], io: CommandIo): Promise<number> {
+  const [command, ...rest] = args;
+  if (command === undefined || command === "help" || command === "--help" || command === "-h") {
+    const topic = rest[0];
+    io.stdout(topic !== undefined && HELP[topic] !== undefined ? HELP[topic] : USAGE);
+    return 0;
+  }
+  if (command === "--version") {
+    io.stdout(`fluxnote ${TOOL_VERSION}`);
+    return 0;
+  }
+  if (LATER.includes(command)) {
+    io.stderr(`fluxnote: the "${command}" command is not available in version ${TOOL_VERSION}`);
+    return 2;
+  }
+  if (command !== "build" && command !== "check") {
+    io.stderr(`fluxnote: unknown command "${command}"\n\n${USAGE}`);
+    return 2;
+  }
+  let parsed;
+  try {
+    parsed = parseArgs({
+      args: [...rest],
+      allowPositionals: true,
+      strict: true,
+      options: command === "build" ? { out: { type: "string" }, help: { type: "boolean", short: "h" } } : {
+        format: { type: "string", default: "text" },
+        strict: { type: "boolean" },
+        help: { type: "boolean", short: "h" },
+      },
+    });
+  } catch (cause) {
+    io.stderr(
+      `fluxnote ${command}: ${cause instanceof Error ? cause.message : String(cause)}\n\n${HELP[command]}`,
+    );
+    return 2;
+  }
+  const values = parsed.values as Record<string, string | boolean | undefined>;
+  if (values.help === true) {
+    io.stdout(HELP[command] ?? USAGE);
+    return 0;
+  }
+  if (parsed.positionals.length !== 1) {
+    io.stderr(
+      `fluxnote ${command}: expected one project folder, found ${parsed.positionals.length}\n\n${
+        HELP[command]
+      }`,
+    );
+    return 2;
+  }
+  const project = parsed.positionals[0] ?? "";
+  if (command === "build") {
+    const out = values.out;
+    return await runBuild(typeof out === "string" ? { project, out } : { project }, io);
+  }
+  const format = values.format;
+  if (format !== "text" && format !== "json") {
+    io.stderr(`fluxnote check: --format must be text or json, found "${String(format)}"`);
+    return 2;
+  }
+  return await runCheck({ project, format, strict: values.strict === true }, io);
+}
+
+if (import.meta.main) {
+  const encoder = new TextEncoder();
+  const io: CommandIo = {
+    stdout: (line) => Deno.stdout.writeSync(encoder.encode(`${line}\n`)),
+    stderr: (line) => Deno.stderr.writeSync(encoder.encode(`${line}\n`)),
+  };
+  let code: number;
+  try {
+    code = await main(Deno.args, io);
+  } catch (cause) {
+    const message = cause instanceof Error ? `${cause.name}: ${cause.message}` : String(cause);
+    io.stderr(
+      `fluxnote: internal error: ${message}\nThis is a fault in fluxnote, not in your project; nothing was changed.`,
+    );
+    code = 2;
+  }
+  Deno.exit(code);
+}

@@ -1,0 +1,38 @@
+import { sha256Hex } from "../archive/hash.ts";
+import { type Diagnostic, hasErrors, sortDiagnostics } from "../project/diagnostic.ts";
+import type { Model } from "../project/model.ts";
+import { type InputFile, readProject } from "../project/readProject.ts";
+import { type LibraryUse, resolveProject } from "../project/resolveProject.ts";
+import type { InputFileRecord } from "../results/types.ts";
+
+/** A project read and resolved, ready to compute, or the diagnostics that stopped it. */
+export interface LoadedProject {
+  readonly model?: Model;
+  readonly files: readonly InputFile[];
+  readonly library: readonly (LibraryUse & { readonly sha256: string })[];
+  /** Input records in build order: the files, then the library entries used. */
+  readonly inputRecords: readonly InputFileRecord[];
+  readonly diagnostics: readonly Diagnostic[];
+}
+
+/** Reads and resolves a project folder; every diagnostic of both stages is collected and sorted. */
+export async function loadProject(folder: string): Promise<LoadedProject> {
+  const read = await readProject(folder);
+  if (hasErrors(read.diagnostics) || read.sources.length === 0) {
+    return {
+      files: read.files,
+      library: [],
+      inputRecords: [],
+      diagnostics: sortDiagnostics(read.diagnostics),
+    };
+  }
+  const resolved = resolveProject(read.sources);
+  const diagnostics = sortDiagnostics([...read.diagnostics, ...resolved.diagnostics]);
+  const library = resolved.libraryUsed.map((entry) => ({ ...entry, sha256: sha256Hex(entry.canonical) }));
+  const inputRecords: InputFileRecord[] = [
+    ...read.files.map((f) => ({ path: f.path, sha256: f.sha256 })),
+    ...library.map((entry) => ({ path: `builtin-library/${entry.id}`, sha256: entry.sha256 })),
+  ];
+  const base = { files: read.files, library, inputRecords, diagnostics };
+  return resolved.model === undefined || hasErrors(diagnostics) ? base : { ...base, model: resolved.model };
+}

@@ -1,0 +1,88 @@
+import type { LibraryMaterial } from "./libraryMaterial.ts";
+
+/** Renders, plasters, plasterboard, screed and tiles of the built-in library, SI values with sources. */
+export const FINISH_MATERIALS: readonly LibraryMaterial[] = [
+  {
+    id: "render-cement-sand-1800",
+    name: "Cement-sand render, 1800 kg/m3",
+    materialClass: "cement-mortar",
+    conductivity: 1.0,
+    density: 1800,
+    specificHeat: 1000,
+    source: 'from memory (believed ISO 10456:2007, Table 3, plasters and renders, row "cement, sand")',
+  },
+  {
+    id: "plaster-lime-sand-1600",
+    name: "Lime-sand plaster or render, 1600 kg/m3",
+    materialClass: "lime-plaster",
+    conductivity: 0.8,
+    density: 1600,
+    specificHeat: 1000,
+    source: 'from memory (believed ISO 10456:2007, Table 3, plasters and renders, row "lime, sand")',
+  },
+  {
+    id: "plaster-gypsum-1000",
+    name: "Gypsum plaster, 1000 kg/m3",
+    materialClass: "gypsum-plaster",
+    conductivity: 0.4,
+    density: 1000,
+    specificHeat: 1000,
+    source:
+      'from memory (believed ISO 10456:2007, Table 3, plasters and renders, row "gypsum plastering, 1000")',
+  },
+  {
+    id: "gypsum-plasterboard-700",
+    name: "Gypsum plasterboard, 700 kg/m3",
+    materialClass: "gypsum-board",
+    conductivity: 0.21,
+    density: 700,
+    specificHeat: 1000,
+    source: 'from memory (believed ISO 10456:2007, Table 3, row "gypsum plasterboard, 700 kg/m3")',
+  },
+  {
+    id: "gypsum-plasterboard-900",
+    name: "Gypsum plasterboard, 900 kg/m3",
+    materialClass: "gypsum-board",
+    conductivity: 0.25,
+    density: 900,
+    specificHeat: 1000,
+    source: 'from memory (believed ISO 10456:2007, Table 3, row "gypsum plasterboard, 900 kg/m3")',
+  },
+  {
+    id: "screed-cement-sand-1800",
+    name: "Cement-sand screed, 1800 kg/m3",
+    materialClass: "cement-mortar",
+    conductivity: 1.0,
+    density: 1800,
+    specificHeat: 1000,
+    source: 'from memory (believed ISO 10456:2007, Table 3, row "cement, sand", applied to a screed)',
+  },
+  {
+    id: "ceramic-tile-2500",
+    name: "Ceramic tile, glazed, 2500 kg/m3",
+    materialClass: "ceramic-tile",
+    conductivity: 1.4,
+    density: 2500,
+    specificHeat: 840,
+    source: 'CIBSE Guide A, Table 3.36 "impermeable materials", row "ceramic, glazed" ' +
+      "(read in a secondary copy of the table; edition believed 2006)",
+  },
+  {
+    id: "roof-tile-clay-2000",
+    name: "Clay roof tile, 2000 kg/m3",
+    materialClass: "clay-masonry",
+    conductivity: 1.0,
+    density: 2000,
+    specificHeat: 800,
+    source: 'from memory (believed ISO 10456:2007, Table 3, row "tiles (roofing), clay")',
+  },
+  {
+    id: "roof-tile-concrete-2100",
+    name: "Concrete roof tile, 2100 kg/m3",
+    materialClass: "dense-concrete",
+    conductivity: 1.5,
+    density: 2100,
+    specificHeat: 1000,
+    source: 'from memory (believed ISO 10456:2007, Table 3, row "tiles (roofing), concrete")',
+  },
+];

@@ -1,0 +1,92 @@
+import { type Diagnostic, error, warning } from "./diagnostic.ts";
+import { splitFrontMatter, splitMarkdown } from "./fences.ts";
+import type { SourceText } from "./sourceText.ts";
+import { parseYamlAt, type YamlValue } from "./yamlTree.ts";
+
+export type InputBlockKind = "material" | "construction" | "scenario";
+const INPUT_KINDS: readonly string[] = ["material", "construction", "scenario"];
+
+/** One piece of a file in reading order, with input blocks already parsed to YAML trees. */
+export type FilePiece =
+  | { readonly kind: "prose"; readonly markdown: string; readonly line: number }
+  | { readonly kind: "code"; readonly raw: string; readonly line: number }
+  | {
+    readonly kind: "input";
+    readonly blockKind: InputBlockKind;
+    readonly raw: string;
+    readonly line: number;
+    /** Parsed body, absent when it did not parse (the error is reported). */
+    readonly value?: YamlValue;
+  };
+
+/** A file split into front matter and pieces. */
+export interface SplitFile {
+  readonly path: string;
+  readonly frontMatter?: YamlValue;
+  readonly pieces: readonly FilePiece[];
+}
+
+/** Splits a file into front matter and pieces and parses every input block's YAML, collecting errors. */
+export function splitFile(source: SourceText, isProjectFile: boolean, out: Diagnostic[]): SplitFile {
+  const split = splitFrontMatter(source.text);
+  let frontMatter: YamlValue | undefined;
+  if (split.unterminated) {
+    out.push(
+      error(
+        { file: source.path, line: 1, col: 1 },
+        "front-matter-unterminated",
+        "Front matter opened with `---` is never closed",
+        "end the front matter with a line `---`",
+      ),
+    );
+  } else if (split.yaml !== undefined) {
+    if (!isProjectFile) {
+      out.push(
+        warning(
+          { file: source.path, line: 1, col: 1 },
+          "front-matter-ignored",
+          "Front matter is read only in project.md; it is ignored here",
+          "move project settings to project.md",
+        ),
+      );
+    } else {
+      const parsed = parseYamlAt(split.yaml, source.path, split.yamlLine);
+      if (parsed.ok) frontMatter = parsed.value;
+      else out.push(...parsed.diagnostics);
+    }
+  }
+  const pieces: FilePiece[] = [];
+  for (const piece of splitMarkdown(split.body, split.bodyLine)) {
+    if (piece.kind === "prose") {
+      pieces.push(piece);
+      continue;
+    }
+    if (!INPUT_KINDS.includes(piece.info)) {
+      pieces.push({ kind: "code", raw: piece.raw, line: piece.line });
+      continue;
+    }
+    const blockKind = piece.info as InputBlockKind;
+    if (piece.body.trim() === "") {
+      out.push(
+        error(
+          { file: source.path, line: piece.line, col: 1 },
+          "empty-block",
+          `The ${blockKind} block is empty`,
+          `write the ${blockKind}'s keys inside the fence, starting with \`id:\``,
+        ),
+      );
+      pieces.push({ kind: "input", blockKind, raw: piece.raw, line: piece.line });
+      continue;
+    }
+    const parsed = parseYamlAt(piece.body, source.path, piece.bodyLine);
+    if (!parsed.ok) out.push(...parsed.diagnostics);
+    pieces.push(
+      parsed.ok
+        ? { kind: "input", blockKind, raw: piece.raw, line: piece.line, value: parsed.value }
+        : { kind: "input", blockKind, raw: piece.raw, line: piece.line },
+    );
+  }
+  return frontMatter === undefined
+    ? { path: source.path, pieces }
+    : { path: source.path, frontMatter, pieces };
+}

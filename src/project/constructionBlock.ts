@@ -1,0 +1,318 @@
+import { type Diagnostic, error, errorCount, warning } from "./diagnostic.ts";
+import {
+  type Fields,
+  readChoice,
+  readFields,
+  readId,
+  readList,
+  readQuantity,
+  readText,
+  textOf,
+} from "./fields.ts";
+import { positive } from "./materialBlock.ts";
+import type { HeatFlowDirection, MaterialDef, ResolvedLayer } from "./model.ts";
+import type { Position } from "./position.ts";
+import { didYouMean } from "./suggest.ts";
+import type { YamlValue } from "./yamlTree.ts";
+
+export const CONSTRUCTION_KEYS = [
+  "id",
+  "name",
+  "layers",
+  "outside-surface-resistance",
+  "inside-surface-resistance",
+  "heat-flow",
+  "timestep",
+] as const;
+
+export const LAYER_KEYS = [
+  "material",
+  "name",
+  "thickness",
+  "conductivity",
+  "density",
+  "specific-heat",
+  "resistance",
+  "source",
+] as const;
+
+export const HEAT_FLOWS: readonly HeatFlowDirection[] = ["horizontal", "upward", "downward"];
+
+/** A construction block as written, before defaults are filled. */
+export interface ConstructionDraft {
+  readonly id: string;
+  readonly name: string;
+  readonly layers: readonly ResolvedLayer[];
+  readonly heatFlow?: HeatFlowDirection;
+  readonly outsideResistance?: number;
+  readonly insideResistance?: number;
+  readonly timestepS?: number;
+  readonly at: Position;
+}
+
+/** Looks up a material id among the project's blocks and the built-in library. */
+export interface MaterialLookup {
+  find(id: string): MaterialDef | undefined;
+  ids(): readonly string[];
+}
+
+const MAX_LAYERS = 40;
+const WARN_THICKNESS_M = 1;
+const MAX_THICKNESS_M = 3;
+
+/** Reads a `construction` block and resolves its layers against the materials. */
+export function readConstructionBlock(
+  value: YamlValue,
+  materials: MaterialLookup,
+  out: Diagnostic[],
+): ConstructionDraft | undefined {
+  const fields = readFields(value, CONSTRUCTION_KEYS, "construction block", out);
+  if (fields === undefined) return undefined;
+  const before = errorCount(out);
+  const id = readId(fields, "id", out);
+  const name = readText(fields, "name", out) ?? id?.id ?? "";
+  const heatFlow = readChoice(fields, "heat-flow", HEAT_FLOWS, out);
+  const outsideResistance = readQuantity(fields, "outside-surface-resistance", "resistance", out);
+  const insideResistance = readQuantity(fields, "inside-surface-resistance", "resistance", out);
+  const timestepS = readTimestep(fields, out);
+  nonNegative(fields, "outside-surface-resistance", outsideResistance, out);
+  nonNegative(fields, "inside-surface-resistance", insideResistance, out);
+  const items = readList(fields, "layers", out, true);
+  const label = id?.id ?? "construction";
+  const layers: ResolvedLayer[] = [];
+  if (items !== undefined && items.length === 0) {
+    out.push(
+      error(
+        fields.entries.get("layers")?.value.at ?? fields.at,
+        "no-layers",
+        `Construction "${label}" has no layers`,
+        "list at least one layer, outside to inside, e.g. `- { material: dense-concrete, thickness: 200 mm }`",
+      ),
+    );
+  }
+  if (items !== undefined && items.length > MAX_LAYERS) {
+    out.push(
+      error(
+        fields.entries.get("layers")?.value.at ?? fields.at,
+        "too-many-layers",
+        `Construction "${label}" has ${items.length} layers: at most ${MAX_LAYERS} are accepted`,
+        "merge thin similar layers",
+      ),
+    );
+  }
+  items?.slice(0, MAX_LAYERS).forEach((item, index) => {
+    const layer = readLayer(item, `layer ${index + 1} of ${label}`, materials, out);
+    if (layer !== undefined) layers.push(layer);
+  });
+  if (errorCount(out) > before || id === undefined) return undefined;
+  return {
+    id: id.id,
+    name,
+    layers,
+    at: fields.at,
+    ...(heatFlow === undefined ? {} : { heatFlow }),
+    ...(outsideResistance === undefined ? {} : { outsideResistance }),
+    ...(insideResistance === undefined ? {} : { insideResistance }),
+    ...(timestepS === undefined ? {} : { timestepS }),
+  };
+}
+
+/** Reads a timestep that divides one hour, 5 min to 1 h. */
+export function readTimestep(fields: Fields, out: Diagnostic[]): number | undefined {
+  const seconds = readQuantity(fields, "timestep", "time", out);
+  if (seconds === undefined) return undefined;
+  const stepsPerHour = 3600 / seconds;
+  if (!(seconds >= 300 && seconds <= 3600) || Math.abs(stepsPerHour - Math.round(stepsPerHour)) > 1e-9) {
+    out.push(
+      error(
+        fields.entries.get("timestep")?.value.at ?? fields.at,
+        "bad-timestep",
+        `Cannot use a timestep of ${seconds} s: it must divide one hour and be between 5 min and 1 h`,
+        "write e.g. `timestep: 1 h`, `30 min`, `15 min` or `10 min`",
+      ),
+    );
+    return undefined;
+  }
+  return seconds;
+}
+
+function nonNegative(fields: Fields, key: string, value: number | undefined, out: Diagnostic[]): void {
+  if (value !== undefined && value < 0) {
+    out.push(
+      error(
+        fields.entries.get(key)?.value.at ?? fields.at,
+        "negative",
+        `Expected a non-negative ${key}, found ${value}`,
+        "surface resistances are zero or positive",
+      ),
+    );
+  }
+}
+
+function readLayer(
+  value: YamlValue,
+  what: string,
+  materials: MaterialLookup,
+  out: Diagnostic[],
+): ResolvedLayer | undefined {
+  const fields = readFields(value, LAYER_KEYS, what, out);
+  if (fields === undefined) return undefined;
+  const before = errorCount(out);
+  const materialEntry = fields.entries.get("material");
+  const thickness = readQuantity(fields, "thickness", "length", out);
+  const thicknessAt = fields.entries.get("thickness")?.value.at ?? fields.at;
+  if (thickness !== undefined) checkThickness(thickness, thicknessAt, what, out);
+  const ownSource = readText(fields, "source", out);
+  if (materialEntry !== undefined) {
+    const inlineKeys = ["conductivity", "density", "specific-heat", "resistance"].filter((k) =>
+      fields.entries.has(k)
+    );
+    if (inlineKeys.length > 0) {
+      out.push(
+        error(
+          fields.entries.get(inlineKeys[0] ?? "")?.keyAt ?? fields.at,
+          "layer-overrides-material",
+          `The ${what} names a material and also gives ${inlineKeys.join(", ")}`,
+          "either refer to a material (material + thickness) or describe the layer inline, not both",
+        ),
+      );
+      return undefined;
+    }
+    const materialId = textOf(materialEntry.value, `"material" in the ${what}`, out);
+    if (materialId === undefined) return undefined;
+    const material = materials.find(materialId);
+    if (material === undefined) {
+      out.push(
+        error(
+          materialEntry.value.at,
+          "unknown-material",
+          `Unknown material "${materialId}" in the ${what}`,
+          `${
+            didYouMean(materialId, materials.ids(), "materials")
+          }; define it in a \`material\` block or use a built-in id`,
+        ),
+      );
+      return undefined;
+    }
+    const name = readText(fields, "name", out) ?? material.name;
+    const common = { name, materialId, source: ownSource ?? material.source, at: fields.at };
+    if (material.resistance !== undefined) {
+      if (thickness !== undefined) {
+        out.push(
+          error(
+            thicknessAt,
+            "thickness-on-resistive",
+            `The ${what} uses the massless material "${materialId}" and gives a thickness`,
+            "remove `thickness`: a massless material is described by its resistance alone",
+          ),
+        );
+        return undefined;
+      }
+      return errorCount(out) > before
+        ? undefined
+        : { kind: "resistive", resistance: material.resistance, ...common };
+    }
+    if (!fields.entries.has("thickness")) {
+      out.push(
+        error(
+          fields.at,
+          "missing-key",
+          `Missing required key "thickness" in the ${what}`,
+          "add e.g. `thickness: 100 mm`",
+        ),
+      );
+      return undefined;
+    }
+    if (errorCount(out) > before || thickness === undefined) return undefined;
+    return {
+      kind: "massive",
+      thicknessM: thickness,
+      conductivity: material.conductivity ?? NaN,
+      density: material.density ?? NaN,
+      specificHeat: material.specificHeat ?? NaN,
+      ...common,
+    };
+  }
+  const name = readText(fields, "name", out, { example: "lining" });
+  const source = ownSource ?? "";
+  if (fields.entries.has("resistance")) {
+    const resistance = readQuantity(fields, "resistance", "resistance", out);
+    positive(fields.entries.get("resistance")?.value.at, "resistance", resistance, out);
+    const extra = ["thickness", "conductivity", "density", "specific-heat"].filter((k) =>
+      fields.entries.has(k)
+    );
+    if (extra.length > 0) {
+      out.push(
+        error(
+          fields.entries.get(extra[0] ?? "")?.keyAt ?? fields.at,
+          "mixed-layer",
+          `The ${what} gives a resistance and also ${extra.join(", ")}`,
+          "a massless layer gives only `name` and `resistance`; a massive layer gives thickness, conductivity, density and specific-heat",
+        ),
+      );
+    }
+    if (errorCount(out) > before || name === undefined || resistance === undefined) return undefined;
+    return { kind: "resistive", resistance, name, source, at: fields.at };
+  }
+  const conductivity = readQuantity(fields, "conductivity", "conductivity", out, true);
+  const density = readQuantity(fields, "density", "density", out, true);
+  const specificHeat = readQuantity(fields, "specific-heat", "specificHeat", out, true);
+  if (thickness === undefined && !fields.entries.has("thickness")) {
+    out.push(
+      error(
+        fields.at,
+        "missing-key",
+        `Missing required key "thickness" in the ${what}`,
+        "add e.g. `thickness: 13 mm`",
+      ),
+    );
+  }
+  positive(fields.entries.get("conductivity")?.value.at, "conductivity", conductivity, out);
+  positive(fields.entries.get("density")?.value.at, "density", density, out);
+  positive(fields.entries.get("specific-heat")?.value.at, "specific-heat", specificHeat, out);
+  if (
+    errorCount(out) > before || name === undefined || thickness === undefined || conductivity === undefined ||
+    density === undefined || specificHeat === undefined
+  ) return undefined;
+  return {
+    kind: "massive",
+    thicknessM: thickness,
+    conductivity,
+    density,
+    specificHeat,
+    name,
+    source,
+    at: fields.at,
+  };
+}
+
+function checkThickness(thicknessM: number, at: Position, what: string, out: Diagnostic[]): void {
+  if (!(thicknessM > 0)) {
+    out.push(
+      error(
+        at,
+        "not-positive",
+        `Expected a positive thickness for the ${what}, found ${thicknessM} m`,
+        "remove the layer or give its real thickness, e.g. `thickness: 10 mm`",
+      ),
+    );
+  } else if (thicknessM > MAX_THICKNESS_M) {
+    out.push(
+      error(
+        at,
+        "thickness-too-large",
+        `Thickness ${thicknessM} m of the ${what} is more than ${MAX_THICKNESS_M} m`,
+        "check the unit: did you mean mm? (write e.g. `200 mm`)",
+      ),
+    );
+  } else if (thicknessM > WARN_THICKNESS_M) {
+    out.push(
+      warning(
+        at,
+        "thickness-large",
+        `Thickness ${thicknessM} m of the ${what} is more than ${WARN_THICKNESS_M} m`,
+        "check the unit: did you mean mm?",
+      ),
+    );
+  }
+}

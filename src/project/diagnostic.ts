@@ -1,0 +1,53 @@
+import { formatPosition, type Position } from "./position.ts";
+
+export type Severity = "error" | "warning" | "note";
+
+/** One finding about the input: what is wrong, where, and how to fix it. */
+export interface Diagnostic {
+  readonly severity: Severity;
+  readonly at: Position;
+  /** Stable rule name, e.g. `unit-missing`, `unknown-material`. */
+  readonly rule: string;
+  readonly message: string;
+  readonly hint?: string;
+}
+
+/** Creates an error diagnostic. */
+export function error(at: Position, rule: string, message: string, hint?: string): Diagnostic {
+  return hint === undefined
+    ? { severity: "error", at, rule, message }
+    : { severity: "error", at, rule, message, hint };
+}
+
+/** Creates a warning diagnostic. */
+export function warning(at: Position, rule: string, message: string, hint?: string): Diagnostic {
+  return hint === undefined
+    ? { severity: "warning", at, rule, message }
+    : { severity: "warning", at, rule, message, hint };
+}
+
+/** Orders diagnostics by file, line, column, then message, so output is stable. */
+export function sortDiagnostics(list: readonly Diagnostic[]): Diagnostic[] {
+  return [...list].sort((a, b) =>
+    a.at.file < b.at.file ? -1 : a.at.file > b.at.file ? 1 : a.at.line - b.at.line || a.at.col - b.at.col ||
+      (a.message < b.message ? -1 : a.message > b.message ? 1 : 0)
+  );
+}
+
+/** Formats a diagnostic as `path:line:col: severity: message` plus an indented hint line. */
+export function formatDiagnostic(d: Diagnostic): string {
+  const head = `${formatPosition(d.at)}: ${d.severity}: ${d.message}`;
+  return d.hint === undefined ? head : `${head}\n  hint: ${d.hint}`;
+}
+
+/** True when the list holds at least one error. */
+export function hasErrors(list: readonly Diagnostic[]): boolean {
+  return list.some((d) => d.severity === "error");
+}
+
+/** Number of errors in the list (warnings and notes do not count). */
+export function errorCount(list: readonly Diagnostic[]): number {
+  let n = 0;
+  for (const d of list) if (d.severity === "error") n++;
+  return n;
+}

@@ -1,0 +1,102 @@
+import { Lexer } from "marked";
+
+/** A top-level piece of a Markdown body: prose or a fenced code block, with its 1-based start line. */
+export type MarkdownPiece =
+  | { readonly kind: "prose"; readonly markdown: string; readonly line: number }
+  | {
+    readonly kind: "fence";
+    /** First word of the info string, read from the fence line itself. */
+    readonly info: string;
+    /** Raw text of the whole fence, for display. */
+    readonly raw: string;
+    /** Text between the fences. */
+    readonly body: string;
+    /** Line of the opening fence. */
+    readonly line: number;
+    /** Line of the first body line. */
+    readonly bodyLine: number;
+  };
+
+/** Front matter split from a Markdown file: the YAML text and the line its first line is on. */
+export interface FrontMatterSplit {
+  readonly yaml: string | undefined;
+  readonly yamlLine: number;
+  /** The rest of the file. */
+  readonly body: string;
+  /** Line of the body's first line in the file. */
+  readonly bodyLine: number;
+  /** True when an opening `---` has no closing line. */
+  readonly unterminated: boolean;
+}
+
+/** Splits YAML front matter (`---` ... `---` at the very start) from the Markdown body. */
+export function splitFrontMatter(text: string): FrontMatterSplit {
+  if (!text.startsWith("---\n")) {
+    return { yaml: undefined, yamlLine: 1, body: text, bodyLine: 1, unterminated: false };
+  }
+  const lines = text.split("\n");
+  for (let i = 1; i < lines.length; i++) {
+    if (lines[i] === "---" || lines[i] === "...") {
+      return {
+        yaml: lines.slice(1, i).join("\n"),
+        yamlLine: 2,
+        body: lines.slice(i + 1).join("\n"),
+        bodyLine: i + 2,
+        unterminated: false,
+      };
+    }
+  }
+  return {
+    yaml: lines.slice(1).join("\n"),
+    yamlLine: 2,
+    body: "",
+    bodyLine: lines.length + 1,
+    unterminated: true,
+  };
+}
+
+/**
+ * Lexes a Markdown body into prose and top-level fenced blocks with line numbers.
+ * marked's tokens carry no positions, but their `raw` texts concatenate to the source, so a
+ * running offset gives each token's line.
+ */
+export function splitMarkdown(body: string, firstLine: number): MarkdownPiece[] {
+  const tokens = new Lexer({ gfm: true }).lex(body);
+  const pieces: MarkdownPiece[] = [];
+  let line = firstLine;
+  let prose = "";
+  let proseLine = line;
+  const flushProse = () => {
+    if (prose.trim() !== "") pieces.push({ kind: "prose", markdown: prose, line: proseLine });
+    prose = "";
+  };
+  for (const token of tokens) {
+    const raw = token.raw;
+    if (token.type === "code" && /^ {0,3}(```|~~~)/.test(raw)) {
+      flushProse();
+      const fenceLine = raw.split("\n", 1)[0] ?? "";
+      const info = fenceLine.replace(/^ {0,3}(`{3,}|~{3,})/, "").trim().split(/\s+/, 1)[0] ?? "";
+      const leading = /^\n*/.exec(raw)?.[0].length ?? 0;
+      pieces.push({
+        kind: "fence",
+        info,
+        raw,
+        body: String(token.text ?? ""),
+        line: line + leading,
+        bodyLine: line + leading + 1,
+      });
+    } else {
+      if (prose === "") proseLine = line;
+      prose += raw;
+    }
+    line += countNewlines(raw);
+  }
+  flushProse();
+  return pieces;
+}
+
+function countNewlines(text: string): number {
+  let n = 0;
+  for (let i = 0; i < text.length; i++) if (text.charCodeAt(i) === 10) n++;
+  return n;
+}

@@ -1,0 +1,304 @@
+import { canonicalLibraryEntry, findLibraryMaterial, libraryIds } from "../materials/library.ts";
+import { isResistiveLibraryMaterial, type LibraryMaterial } from "../materials/libraryMaterial.ts";
+import { defaultSurfaceResistances } from "../materials/surfaceResistance.ts";
+import { type SplitFile, splitFile } from "./blocks.ts";
+import { type ConstructionDraft, type MaterialLookup, readConstructionBlock } from "./constructionBlock.ts";
+import { type Diagnostic, error, errorCount } from "./diagnostic.ts";
+import { type FrontMatter, readFrontMatter } from "./frontMatter.ts";
+import { readMaterialBlock } from "./materialBlock.ts";
+import type {
+  Assumption,
+  Construction,
+  MaterialDef,
+  Model,
+  ProjectDocument,
+  Scenario,
+  Segment,
+} from "./model.ts";
+import { formatPosition, type Position } from "./position.ts";
+import { readScenarioBlock } from "./scenarioBlock.ts";
+import type { SourceText } from "./sourceText.ts";
+
+/** A built-in library entry a project used, with its canonical text (hashed with the inputs). */
+export interface LibraryUse {
+  readonly id: string;
+  readonly canonical: string;
+}
+
+export interface ResolveResult {
+  readonly model?: Model;
+  readonly libraryUsed: readonly LibraryUse[];
+  readonly diagnostics: readonly Diagnostic[];
+}
+
+const DEFAULT_TIMESTEP_S = 3600;
+
+/** Reads the front matter of `project.md` only (to learn the file list before the other files are read). */
+export function readProjectFrontMatter(source: SourceText, out: Diagnostic[]): FrontMatter | undefined {
+  const split = splitFile(source, true, []);
+  if (split.frontMatter === undefined) return undefined;
+  return readFrontMatter(split.frontMatter, out);
+}
+
+/** Resolves a project's decoded files (project.md first, then in reading order) into a model. */
+export function resolveProject(sources: readonly SourceText[]): ResolveResult {
+  const out: Diagnostic[] = [];
+  const files = sources.map((s, i) => splitFile(s, i === 0, out));
+  const projectFile = files[0];
+  let frontMatter: FrontMatter | undefined;
+  if (projectFile?.frontMatter === undefined) {
+    out.push(
+      error(
+        { file: "project.md", line: 1, col: 1 },
+        "front-matter-missing",
+        "project.md has no front matter",
+        "start project.md with `---`, the keys title, reference, revision, status, prepared-by, checked-by, date, units, then `---`",
+      ),
+    );
+  } else {
+    frontMatter = readFrontMatter(projectFile.frontMatter, out);
+  }
+  const assumptions: Assumption[] = [];
+  const materials = readMaterials(files, out, assumptions);
+  const libraryUsed = new Map<string, LibraryMaterial>();
+  const lookup: MaterialLookup = {
+    find(id) {
+      const own = materials.get(id);
+      if (own !== undefined) return own;
+      const entry = findLibraryMaterial(id);
+      if (entry === undefined) return undefined;
+      libraryUsed.set(id, entry);
+      return fromLibrary(entry);
+    },
+    ids: () => [...materials.keys(), ...libraryIds()],
+  };
+  const constructions = readConstructions(files, lookup, out, assumptions);
+  const scenarios = readScenarios(files, constructions.map((c) => c.id), out);
+  for (const entry of [...libraryUsed.values()].sort((a, b) => a.id < b.id ? -1 : 1)) {
+    assumptions.push({
+      id: `library:material:${entry.id}`,
+      text: `Material "${entry.id}" (${entry.name}) taken from the built-in library: ${
+        describeLibrary(entry)
+      }`,
+      source: entry.source,
+      at: firstUse(constructions, entry.id),
+    });
+  }
+  const libraryList = [...libraryUsed.values()].sort((a, b) => a.id < b.id ? -1 : 1)
+    .map((m) => ({ id: m.id, canonical: canonicalLibraryEntry(m) }));
+  if (errorCount(out) > 0 || frontMatter === undefined) return { diagnostics: out, libraryUsed: libraryList };
+  const usedMaterials: MaterialDef[] = [
+    ...materials.values(),
+    ...[...libraryUsed.values()].filter((m) => !materials.has(m.id)).map(fromLibrary),
+  ];
+  const model: Model = {
+    info: frontMatter.info,
+    documents: files.map(toDocument),
+    materials: usedMaterials,
+    constructions,
+    scenarios,
+    assumptions,
+  };
+  return { model, diagnostics: out, libraryUsed: libraryList };
+}
+
+function readMaterials(
+  files: readonly SplitFile[],
+  out: Diagnostic[],
+  assumptions: Assumption[],
+): Map<string, MaterialDef> {
+  const materials = new Map<string, MaterialDef>();
+  for (const piece of inputs(files, "material")) {
+    const material = readMaterialBlock(piece.value, out);
+    if (material === undefined) continue;
+    const earlier = materials.get(material.id);
+    if (earlier !== undefined) {
+      out.push(duplicate("material", material.id, material.at, earlier.at));
+      continue;
+    }
+    const library = findLibraryMaterial(material.id);
+    if (library !== undefined) {
+      assumptions.push({
+        id: `override:library-material:${material.id}`,
+        text:
+          `The project's material "${material.id}" replaces the built-in library entry of the same id (${library.name})`,
+        source: material.source === "" ? "project block (no source given)" : material.source,
+        at: formatPosition(material.at),
+      });
+    }
+    materials.set(material.id, material);
+  }
+  return materials;
+}
+
+function readConstructions(
+  files: readonly SplitFile[],
+  lookup: MaterialLookup,
+  out: Diagnostic[],
+  assumptions: Assumption[],
+): Construction[] {
+  const constructions: Construction[] = [];
+  for (const piece of inputs(files, "construction")) {
+    const draft = readConstructionBlock(piece.value, lookup, out);
+    if (draft === undefined) continue;
+    const earlier = constructions.find((c) => c.id === draft.id);
+    if (earlier !== undefined) {
+      out.push(duplicate("construction", draft.id, draft.at, earlier.at));
+      continue;
+    }
+    constructions.push(withDefaults(draft, assumptions));
+  }
+  return constructions;
+}
+
+function withDefaults(draft: ConstructionDraft, assumptions: Assumption[]): Construction {
+  const at = formatPosition(draft.at);
+  const heatFlow = draft.heatFlow ?? "horizontal";
+  if (draft.heatFlow === undefined) {
+    assumptions.push({
+      id: `default:heat-flow:${draft.id}`,
+      text:
+        `Heat-flow direction of ${draft.id} not given: horizontal assumed (a wall); set \`heat-flow\` for roofs and floors`,
+      source: "fluxnote default",
+      at,
+    });
+  }
+  const defaults = defaultSurfaceResistances(heatFlow);
+  if (draft.insideResistance === undefined) {
+    assumptions.push({
+      id: `default:inside-surface-resistance:${draft.id}`,
+      text:
+        `Inside surface resistance of ${draft.id}: R_si = ${defaults.insideM2KPerW} m²·K/W for ${heatFlow} heat flow`,
+      source: defaults.source,
+      at,
+    });
+  }
+  if (draft.outsideResistance === undefined) {
+    assumptions.push({
+      id: `default:outside-surface-resistance:${draft.id}`,
+      text: `Outside surface resistance of ${draft.id}: R_se = ${defaults.outsideM2KPerW} m²·K/W`,
+      source: defaults.source,
+      at,
+    });
+  }
+  if (draft.timestepS === undefined) {
+    assumptions.push({
+      id: `default:timestep:${draft.id}`,
+      text: `Time step of ${draft.id} not given: 1 h used for its dynamic response`,
+      source: "fluxnote default",
+      at,
+    });
+  }
+  return {
+    id: draft.id,
+    name: draft.name,
+    layers: draft.layers,
+    heatFlow,
+    outsideResistance: draft.outsideResistance ?? defaults.outsideM2KPerW,
+    outsideResistanceDefaulted: draft.outsideResistance === undefined,
+    insideResistance: draft.insideResistance ?? defaults.insideM2KPerW,
+    insideResistanceDefaulted: draft.insideResistance === undefined,
+    timestepS: draft.timestepS ?? DEFAULT_TIMESTEP_S,
+    at: draft.at,
+  };
+}
+
+function readScenarios(
+  files: readonly SplitFile[],
+  constructionIds: readonly string[],
+  out: Diagnostic[],
+): Scenario[] {
+  const scenarios: Scenario[] = [];
+  for (const piece of inputs(files, "scenario")) {
+    const scenario = readScenarioBlock(piece.value, constructionIds, out);
+    if (scenario === undefined) continue;
+    const earlier = scenarios.find((s) => s.id === scenario.id);
+    if (earlier !== undefined) out.push(duplicate("scenario", scenario.id, scenario.at, earlier.at));
+    else scenarios.push(scenario);
+  }
+  return scenarios;
+}
+
+function* inputs(files: readonly SplitFile[], kind: "material" | "construction" | "scenario") {
+  for (const file of files) {
+    for (const piece of file.pieces) {
+      if (piece.kind === "input" && piece.blockKind === kind && piece.value !== undefined) {
+        yield { ...piece, value: piece.value };
+      }
+    }
+  }
+}
+
+function duplicate(kind: string, id: string, at: Position, earlier: Position): Diagnostic {
+  return error(
+    at,
+    "duplicate-id",
+    `Duplicate ${kind} id "${id}": already defined at ${formatPosition(earlier)}`,
+    `rename one of the two ${kind}s or delete the copy`,
+  );
+}
+
+function fromLibrary(entry: LibraryMaterial): MaterialDef {
+  const at = { file: "(built-in library)", line: 1, col: 1 };
+  const common = {
+    id: entry.id,
+    name: entry.name,
+    origin: "library" as const,
+    source: entry.source,
+    materialClass: entry.materialClass,
+    at,
+  };
+  return isResistiveLibraryMaterial(entry) ? { ...common, resistance: entry.resistance } : {
+    ...common,
+    conductivity: entry.conductivity,
+    density: entry.density,
+    specificHeat: entry.specificHeat,
+  };
+}
+
+function describeLibrary(entry: LibraryMaterial): string {
+  return isResistiveLibraryMaterial(entry)
+    ? `R = ${entry.resistance} m²·K/W`
+    : `λ = ${entry.conductivity} W/(m·K), ρ = ${entry.density} kg/m³, c = ${entry.specificHeat} J/(kg·K)`;
+}
+
+function firstUse(constructions: readonly Construction[], materialId: string): string {
+  for (const c of constructions) {
+    const layer = c.layers.find((l) => l.materialId === materialId);
+    if (layer !== undefined) return formatPosition(layer.at);
+  }
+  return "(built-in library)";
+}
+
+function toDocument(file: SplitFile): ProjectDocument {
+  const segments: Segment[] = [];
+  for (const piece of file.pieces) {
+    const at = { file: file.path, line: piece.line, col: 1 };
+    switch (piece.kind) {
+      case "prose":
+        segments.push({ kind: "prose", markdown: piece.markdown, at });
+        break;
+      case "code":
+        segments.push({ kind: "prose", markdown: piece.raw, at });
+        break;
+      case "input": {
+        const id = idOf(piece.value);
+        segments.push(
+          id === undefined
+            ? { kind: "block", blockKind: piece.blockKind, source: piece.raw, at }
+            : { kind: "block", blockKind: piece.blockKind, id, source: piece.raw, at },
+        );
+        break;
+      }
+    }
+  }
+  return { path: file.path, segments };
+}
+
+function idOf(value: SplitFile["frontMatter"]): string | undefined {
+  if (value?.kind !== "map") return undefined;
+  const entry = value.entries.find((e) => e.key === "id");
+  return entry?.value.kind === "scalar" && typeof entry.value.value === "string"
+    ? entry.value.value
+    : undefined;
+}

@@ -1,0 +1,134 @@
+import { isAlias, isMap, isScalar, isSeq, LineCounter, type Node, parseDocument } from "yaml";
+import { type Diagnostic, error } from "./diagnostic.ts";
+import type { Position } from "./position.ts";
+
+/** A YAML value with the position of its first character in the project file. */
+export type YamlValue =
+  | {
+    readonly kind: "scalar";
+    readonly value: string | number | boolean | null;
+    readonly text: string;
+    readonly at: Position;
+  }
+  | { readonly kind: "map"; readonly entries: readonly YamlEntry[]; readonly at: Position }
+  | { readonly kind: "list"; readonly items: readonly YamlValue[]; readonly at: Position };
+
+export interface YamlEntry {
+  readonly key: string;
+  readonly keyAt: Position;
+  readonly value: YamlValue;
+}
+
+export type YamlParse =
+  | { readonly ok: true; readonly value: YamlValue }
+  | { readonly ok: false; readonly diagnostics: readonly Diagnostic[] };
+
+const MAX_DEPTH = 16;
+
+/**
+ * Parses a YAML text that sits at `firstLine` of `file` into a position-carrying tree.
+ * Aliases, tags and duplicate keys are errors, so alias bombs and object tags cannot get in.
+ */
+export function parseYamlAt(text: string, file: string, firstLine: number, firstCol = 1): YamlParse {
+  const lineCounter = new LineCounter();
+  const doc = parseDocument(text, {
+    lineCounter,
+    uniqueKeys: true,
+    prettyErrors: false,
+    schema: "core",
+    strict: true,
+  });
+  const place = (offset: number): Position => {
+    const p = lineCounter.linePos(offset);
+    return { file, line: firstLine + p.line - 1, col: (p.line === 1 ? firstCol - 1 : 0) + p.col };
+  };
+  const problems = [...doc.errors, ...doc.warnings];
+  if (problems.length > 0) {
+    return {
+      ok: false,
+      diagnostics: problems.map((e) =>
+        error(
+          place(e.pos[0]),
+          "yaml-syntax",
+          `Cannot parse the block as YAML: ${firstSentence(e.message)}`,
+          "check indentation and that each line reads `key: value`; quote values containing `: ` or `#`",
+        )
+      ),
+    };
+  }
+  const diagnostics: Diagnostic[] = [];
+  const convert = (node: unknown, depth: number): YamlValue | undefined => {
+    const n = node as Node | null;
+    const at = place(n?.range?.[0] ?? 0);
+    if (depth > MAX_DEPTH) {
+      diagnostics.push(
+        error(at, "yaml-depth", `Too deeply nested: more than ${MAX_DEPTH} levels`, "flatten the block"),
+      );
+      return undefined;
+    }
+    if (n === null || n === undefined) return { kind: "scalar", value: null, text: "", at };
+    if (isAlias(n)) {
+      diagnostics.push(
+        error(
+          at,
+          "yaml-alias",
+          "Cannot use YAML aliases (*name) in input blocks",
+          "write the value out in full",
+        ),
+      );
+      return undefined;
+    }
+    if (n.tag !== undefined && !n.tag.startsWith("tag:yaml.org,2002:")) {
+      diagnostics.push(error(at, "yaml-tag", `Cannot use the YAML tag "${n.tag}"`, "remove the tag"));
+      return undefined;
+    }
+    if (isScalar(n)) {
+      const [start, end] = n.range ?? [0, 0];
+      const value = n.value;
+      const plain = typeof value === "string" || typeof value === "number" || typeof value === "boolean" ||
+          value === null
+        ? value
+        : String(value);
+      return { kind: "scalar", value: plain, text: text.slice(start, end), at };
+    }
+    if (isSeq(n)) {
+      const items: YamlValue[] = [];
+      for (const item of n.items) {
+        const v = convert(item, depth + 1);
+        if (v !== undefined) items.push(v);
+      }
+      return { kind: "list", items, at };
+    }
+    if (isMap(n)) {
+      const entries: YamlEntry[] = [];
+      for (const pair of n.items) {
+        const keyNode = pair.key as Node | null;
+        const keyAt = place(keyNode?.range?.[0] ?? 0);
+        if (!isScalar(keyNode) || typeof keyNode.value !== "string") {
+          diagnostics.push(
+            error(keyAt, "yaml-key", "Cannot use a non-text key", "write keys as plain words, e.g. `id:`"),
+          );
+          continue;
+        }
+        const value = convert(pair.value, depth + 1) ?? { kind: "scalar", value: null, text: "", at: keyAt };
+        entries.push({
+          key: keyNode.value,
+          keyAt,
+          value: pair.value === null ? { ...value, at: keyAt } : value,
+        });
+      }
+      return { kind: "map", entries, at };
+    }
+    diagnostics.push(
+      error(at, "yaml-node", "Cannot read this YAML value", "write a plain value, list or mapping"),
+    );
+    return undefined;
+  };
+  const value = convert(doc.contents, 0);
+  if (diagnostics.length > 0 || value === undefined) return { ok: false, diagnostics };
+  return { ok: true, value };
+}
+
+function firstSentence(message: string): string {
+  return (message.split("\n", 1)[0] ?? message).replace(/ at line \d+, column \d+:?$/, "").replace(/\.$/, "");
+}

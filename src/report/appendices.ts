@@ -1,0 +1,53 @@
+/** Appendix A (every input file's exact bytes, base64) and Appendix B (the results JSON). */
+import { encodeBase64 } from "./base64.ts";
+import { html, PRE_LEAD, type Trusted } from "./html.ts";
+import type { InputFile, RenderContext } from "./packageInput.ts";
+
+/** Decodes bytes as UTF-8 text, or undefined when they are not valid UTF-8. */
+function asText(bytes: Uint8Array): string | undefined {
+  try {
+    return new TextDecoder("utf-8", { fatal: true }).decode(bytes);
+  } catch {
+    return undefined;
+  }
+}
+
+function embeddedFile(file: InputFile, index: number): Trusted {
+  const text = asText(file.bytes);
+  const readable = text === undefined
+    ? html`<p class="muted">Not valid UTF-8 text: only the base64 form is given.</p>`
+    : html`
+      <details>
+        <summary>Readable view of ${file.path}</summary>
+        <pre class="readable-file">${PRE_LEAD}${text}</pre>
+      </details>
+    `;
+  return html`
+    <h3 id="s-a-${String(index + 1)}">A.${String(index + 1)} ${file.path}</h3>
+    <p class="muted">${String(file.bytes.length)} bytes, SHA-256 <span class="hash">${file.sha256}</span></p>
+    <pre class="embedded-file" data-path="${file.path}" data-sha256="${file.sha256}"
+      data-encoding="base64">${encodeBase64(file.bytes)}</pre>
+    ${readable}
+  `;
+}
+
+/** Renders Appendix A: each input file's bytes as base64 in an inert element, plus a readable view. */
+export function renderInputsAppendix(ctx: RenderContext): Trusted {
+  return html`<section id="s-a"><h2>Appendix A Embedded inputs</h2>
+<p>Each input file's exact bytes, base64-encoded (RFC 4648), so the package alone can regenerate its results. The base64 blocks are hidden when printed.</p>
+${ctx.input.inputFiles.map(embeddedFile)}
+</section>`;
+}
+
+/** Renders Appendix B: the results JSON as escaped text. */
+export function renderResultsAppendix(ctx: RenderContext): Trusted {
+  return html`
+    <section id="s-b">
+      <h2>Appendix B Results (results.json)</h2>
+      <details>
+        <summary>Machine-readable results, schema ${ctx.input.results.schema}</summary>
+        <pre data-embedded="results-json">${PRE_LEAD}${ctx.input.resultsJsonText}</pre>
+      </details>
+    </section>
+  `;
+}

@@ -1,0 +1,106 @@
+/** The echo of one input block (verbatim, with file:line) followed by its computed output. */
+import type { Segment } from "../project/model.ts";
+import { formatPosition } from "../project/position.ts";
+import { renderConstructionOutput } from "./constructionOutput.ts";
+import { formatSig, formatTrim } from "./format.ts";
+import { html, PRE_LEAD, type Trusted } from "./html.ts";
+import type { RenderContext } from "./packageInput.ts";
+import { MATERIAL_TABLE_HEAD, materialTableRow } from "./materialRows.ts";
+
+type BlockSegment = Extract<Segment, { kind: "block" }>;
+
+function unresolved(block: BlockSegment): Trusted {
+  return html`
+    <p
+      class="fail">No computed output: this ${block
+        .blockKind} block did not resolve (see the findings in section 3).</p>
+  `;
+}
+
+function materialOutput(block: BlockSegment, ctx: RenderContext): Trusted {
+  const material = ctx.input.model.materials.find((m) => m.id === block.id && m.origin === "project");
+  if (material === undefined) return unresolved(block);
+  return html`
+    <table
+      class="material-table"><caption>Material ${material
+        .id} as resolved (SI units)</caption>${MATERIAL_TABLE_HEAD}<tbody>${materialTableRow(
+          material,
+        )}</tbody></table>
+  `;
+}
+
+function scenarioOutput(block: BlockSegment, ctx: RenderContext): Trusted {
+  const scenario = ctx.input.model.scenarios.find((s) => s.id === block.id);
+  if (scenario === undefined) return unresolved(block);
+  const rows = scenario.surfaces.map((s) =>
+    html`
+      <tr>
+        <td>${s.id}</td>
+        <td>${s.construction}</td>
+        <td class="num">${formatTrim(s.areaM2, 4)}</td>
+        <td class="num">${s.azimuthDeg === undefined ? "—" : formatTrim(s.azimuthDeg, 4)}</td>
+        <td class="num">${s.tiltDeg === undefined ? "—" : formatTrim(s.tiltDeg, 4)}</td>
+      </tr>
+    `
+  );
+  return html`
+    <p
+      class="note">Scenario ${scenario.id} (${scenario.kind}, time step ${formatSig(
+        scenario.timestepS / 3600,
+        3,
+      )} h) was read and validated only: hourly heat flows for scenarios are not computed in this version of the tool.</p>
+    <table>
+      <caption>Surfaces of scenario ${scenario.id}</caption>
+      <thead>
+        <tr>
+          <th>Surface</th>
+          <th>Construction</th>
+          <th>Area m²</th>
+          <th>Azimuth ° (from north, clockwise)</th>
+          <th>Tilt ° (from horizontal)</th>
+        </tr>
+      </thead>
+      <tbody>${rows}</tbody>
+    </table>
+  `;
+}
+
+function constructionOutput(block: BlockSegment, ctx: RenderContext): Trusted {
+  const construction = ctx.input.model.constructions.find((c) => c.id === block.id);
+  if (construction === undefined) return unresolved(block);
+  const results = Object.hasOwn(ctx.input.results.constructions, construction.id)
+    ? ctx.input.results.constructions[construction.id]
+    : undefined;
+  return renderConstructionOutput(construction, results, ctx.input.results.checks);
+}
+
+function outputFor(block: BlockSegment, ctx: RenderContext): Trusted {
+  if (block.id === undefined) return unresolved(block);
+  switch (block.blockKind) {
+    case "material":
+      return materialOutput(block, ctx);
+    case "construction":
+      return constructionOutput(block, ctx);
+    case "scenario":
+      return scenarioOutput(block, ctx);
+  }
+}
+
+/** Renders an input block verbatim (escaped) with its position, then its computed output. */
+export function renderBlock(block: BlockSegment, ctx: RenderContext): Trusted {
+  const anchor = block.blockKind === "construction" && block.id !== undefined
+    ? ctx.constructionAnchors.get(block.id)
+    : undefined;
+  const idAttr = anchor === undefined ? html`` : html`
+    id="${anchor}"
+  `;
+  return html`
+    <div class="input-block" ${idAttr}>
+      <p class="input-label">Input: ${block.blockKind} block${block.id === undefined
+        ? ""
+        : ` "${block.id}"`}, ${formatPosition(block.at)}</p>
+      <pre>${PRE_LEAD}${block.source}</pre>
+    </div>
+    <div class="block-output"><p class="input-label">Computed output</p>${outputFor(block, ctx)}</div>
+  `;
+}

@@ -1,0 +1,82 @@
+/** Section 3: the automated checks with value, limit and result, then the review findings. */
+import { formatPosition } from "../project/position.ts";
+import { sortDiagnostics } from "../project/diagnostic.ts";
+import { formatSig } from "./format.ts";
+import { html, type Trusted } from "./html.ts";
+import type { RenderContext } from "./packageInput.ts";
+
+function subjectCell(subject: string, ctx: RenderContext): Trusted {
+  const id = subject.startsWith("construction:") ? subject.slice("construction:".length) : undefined;
+  const anchor = id === undefined ? undefined : ctx.constructionAnchors.get(id);
+  return anchor === undefined
+    ? html`<td>${subject}</td>`
+    : html`<td><a href="#${anchor}">${subject}</a></td>`;
+}
+
+function checksTable(ctx: RenderContext): Trusted {
+  const checks = ctx.input.results.checks;
+  if (checks.length === 0) return html`<p>No automated checks apply yet.</p>`;
+  const rows = checks.map((c) =>
+    html`<tr><td>${c.id}</td>${subjectCell(c.subject, ctx)}<td>${c.description}</td><td class="num">${
+      formatSig(c.value, 3)
+    }</td><td class="num">${formatSig(c.limit, 3)}</td><td class="${c.pass ? "pass" : "fail"}">${
+      c.pass ? "PASS" : "FAIL"
+    }</td></tr>`
+  );
+  return html`
+    <table>
+      <thead>
+        <tr>
+          <th>Check</th>
+          <th>Subject</th>
+          <th>Description</th>
+          <th>Value</th>
+          <th>Limit</th>
+          <th>Result</th>
+        </tr>
+      </thead>
+      <tbody>${rows}</tbody>
+    </table>
+    <p class="muted">A check passes when |value| ≤ limit.</p>
+  `;
+}
+
+function findingsTable(ctx: RenderContext): Trusted {
+  const findings = sortDiagnostics(ctx.input.findings);
+  if (findings.length === 0) return html`<p>No findings were raised on the inputs.</p>`;
+  const rows = findings.map((f) =>
+    html`
+      <tr>
+        <td class="${f.severity === "error" ? "finding-error" : ""}">${f.severity}</td>
+        <td><code>${formatPosition(f.at)}</code></td>
+        <td>${f.rule}</td>
+        <td>${f.message}</td>
+        <td>${f.hint ?? ""}</td>
+      </tr>
+    `
+  );
+  return html`
+    <table>
+      <thead>
+        <tr>
+          <th>Severity</th>
+          <th>At</th>
+          <th>Rule</th>
+          <th>Message</th>
+          <th>Hint</th>
+        </tr>
+      </thead>
+      <tbody>${rows}</tbody>
+    </table>
+  `;
+}
+
+/** Renders section 3. */
+export function renderChecksSection(ctx: RenderContext): Trusted {
+  return html`<section id="s-3"><h2>3 Checks and findings</h2>
+<h3 id="s-3-1">3.1 Automated checks</h3>
+${checksTable(ctx)}
+<h3 id="s-3-2">3.2 Review findings on the inputs</h3>
+${findingsTable(ctx)}
+</section>`;
+}

@@ -1,0 +1,99 @@
+/** The cover: identity, status, sign-off, input hash, tool version and the summary of checks. */
+import type { ProjectStatus } from "../project/model.ts";
+import { html, type Trusted } from "./html.ts";
+import type { PackageInput } from "./packageInput.ts";
+
+/** Printed status word of each project status. */
+export const STATUS_LABEL: Readonly<Record<ProjectStatus, string>> = {
+  "draft": "DRAFT",
+  "for-review": "DRAFT FOR REVIEW",
+  "issued": "ISSUED",
+};
+
+/** The watermark text for a status; undefined once the package is issued. */
+export function watermarkFor(status: ProjectStatus): string | undefined {
+  return status === "issued" ? undefined : "DRAFT";
+}
+
+function statusBanner(status: ProjectStatus): Trusted {
+  switch (status) {
+    case "draft":
+      return html`
+        <p
+          class="status-banner">DRAFT: work in progress, not checked and not issued. Do not rely on these results.</p>
+      `;
+    case "for-review":
+      return html`
+        <p
+          class="status-banner">DRAFT FOR REVIEW: submitted for checking, not issued. Do not rely on these results until issued.</p>
+      `;
+    case "issued":
+      return html`<p class="status-banner issued">Issued at the revision and date shown.</p>`;
+  }
+}
+
+/** One line stating whether all automated checks passed; failures are named. */
+export function checkSummary(input: PackageInput): Trusted {
+  const checks = input.results.checks;
+  const failed = checks.filter((c) => !c.pass);
+  if (checks.length === 0) {
+    return html`<p class="check-summary">Automated checks: none apply yet (see section 3).</p>`;
+  }
+  if (failed.length === 0) {
+    return html`<p class="check-summary">Automated checks: all ${
+      String(checks.length)
+    } passed (see section 3).</p>`;
+  }
+  const names = failed.map((c) => html`<li>${c.id} on ${c.subject}</li>`);
+  return html`
+    <div class="check-summary has-failures">
+      <p>Automated checks: ${String(failed.length)} of ${String(checks.length)} FAILED (see section 3).</p>
+      <ul>${names}</ul>
+    </div>
+  `;
+}
+
+function findingSummary(input: PackageInput): Trusted {
+  const count = (severity: string, noun: string) => {
+    const n = input.findings.filter((f) => f.severity === severity).length;
+    return `${n} ${noun}${n === 1 ? "" : "s"}`;
+  };
+  const counts = `${count("error", "error")}, ${count("warning", "warning")}, ${count("note", "note")}`;
+  return html`<p class="check-summary">Review findings: ${counts} (see section 3).</p>`;
+}
+
+function signOffRow(role: string, name: string | undefined): Trusted {
+  return html`
+    <tr>
+      <th scope="row">${role}</th>
+      <td>${name === undefined || name === "" ? "(not given)" : name}</td>
+    </tr>
+  `;
+}
+
+/** Renders the cover page. */
+export function renderCover(input: PackageInput): Trusted {
+  const info = input.model.info;
+  const independence = info.preparedBy !== "" && info.preparedBy === info.checkedBy
+    ? html`<p class="fail">The checker is the same person as the preparer: the check is not independent.</p>`
+    : html``;
+  return html`<section class="cover" aria-label="Cover">
+<p class="muted">Calculation package</p>
+<h1>${info.title}</h1>
+${statusBanner(info.status)}
+<table>
+<tr><th scope="row">Reference</th><td>${info.reference}</td></tr>
+<tr><th scope="row">Revision</th><td>${info.revision}</td></tr>
+<tr><th scope="row">Status</th><td>${STATUS_LABEL[info.status]}</td></tr>
+<tr><th scope="row">Date</th><td>${info.date}</td></tr>
+${signOffRow("Prepared by", info.preparedBy)}
+${signOffRow("Checked by", info.checkedBy)}
+${signOffRow("Approved by", info.approvedBy)}
+<tr><th scope="row">Input SHA-256</th><td class="hash">${input.results.inputs.sha256}</td></tr>
+<tr><th scope="row">Tool</th><td>fluxnote ${input.toolVersion}</td></tr>
+</table>
+${independence}
+${checkSummary(input)}
+${findingSummary(input)}
+</section>`;
+}

@@ -1,0 +1,83 @@
+/** The package's one stylesheet: screen and print, running header, and the watermark when not issued. */
+import { cssStringLiteral, html, raw, type Trusted } from "./html.ts";
+
+const BASE_CSS = raw(`
+:root { --ink: #111; --muted: #555; --rule: #999; --fail: #a40000; --pass: #1d5e20; --paper: #fff; }
+html { background: #eee; }
+body { font-family: Georgia, "Times New Roman", serif; font-size: 10.5pt; line-height: 1.45; color: var(--ink);
+  background: var(--paper); max-width: 180mm; margin: 0 auto; padding: 12mm 15mm; }
+h1, h2, h3, h4, h5, h6, th, .running-header, caption, figcaption, .status-banner, .check-summary {
+  font-family: system-ui, -apple-system, "Segoe UI", Arial, sans-serif; }
+h1 { font-size: 20pt; margin: 0 0 4mm; }
+h2 { font-size: 14pt; border-bottom: 1px solid var(--rule); margin-top: 10mm; padding-bottom: 1mm; }
+h3 { font-size: 12pt; margin-top: 7mm; }
+h4, h5, h6 { font-size: 10.5pt; }
+table { border-collapse: collapse; margin: 3mm 0; font-size: 9.5pt; break-inside: avoid; }
+th, td { border: 1px solid var(--rule); padding: 1mm 2mm; vertical-align: top; text-align: left; }
+th { background: #f0f0f0; font-weight: 600; }
+td.num { text-align: right; font-variant-numeric: tabular-nums; white-space: nowrap; }
+tr.total td { font-weight: bold; border-top: 2px solid var(--ink); }
+figure { margin: 3mm 0; break-inside: avoid; }
+figure svg { max-width: 100%; height: auto; }
+figcaption, caption { font-size: 9pt; color: var(--muted); text-align: left; }
+pre { font-family: ui-monospace, "DejaVu Sans Mono", Consolas, monospace; font-size: 8.5pt; background: #f7f7f7;
+  border: 1px solid #ddd; padding: 2mm; white-space: pre-wrap; overflow-wrap: anywhere; }
+code { font-family: ui-monospace, "DejaVu Sans Mono", Consolas, monospace; font-size: 9pt; }
+.input-block { break-inside: avoid; }
+.input-label, .muted { color: var(--muted); font-size: 9pt; }
+.block-output { border-left: 3px solid var(--rule); padding-left: 3mm; margin: 2mm 0 6mm; }
+.note { font-style: italic; }
+.fail, .finding-error { color: var(--fail); font-weight: bold; }
+.pass { color: var(--pass); }
+.status-banner { border: 2px solid var(--fail); color: var(--fail); padding: 2mm 3mm; font-weight: bold; margin: 4mm 0; }
+.status-banner.issued { border-color: var(--pass); color: var(--pass); }
+.check-summary { border: 1px solid var(--rule); padding: 2mm 3mm; margin: 4mm 0; }
+.check-summary.has-failures { border: 2px solid var(--fail); color: var(--fail); font-weight: bold; }
+.cover { break-after: page; }
+.cover table th { width: 40mm; }
+.hash { font-family: ui-monospace, "DejaVu Sans Mono", Consolas, monospace; font-size: 8.5pt; overflow-wrap: anywhere; }
+.raw-html, .image-omitted, .link-removed { color: var(--muted); }
+.link-removed { text-decoration: underline dotted; }
+.running-header { position: sticky; top: 0; background: var(--paper); border-bottom: 1px solid var(--rule);
+  font-size: 8.5pt; color: var(--muted); padding: 1mm 0; margin-bottom: 4mm; z-index: 2; }
+.embedded-file { max-height: 30mm; overflow: auto; font-size: 7pt; }
+.end-marker { text-align: center; font-weight: bold; border-top: 2px solid var(--ink); margin-top: 10mm; padding-top: 3mm; }
+nav.contents ol { list-style: none; padding-left: 0; }
+@media print {
+  html { background: none; }
+  body { max-width: none; margin: 0; padding: 0; font-size: 10pt; }
+  .running-header { display: none; }
+  .embedded-file { display: none; }
+  details { display: block; }
+  a { color: inherit; text-decoration: none; }
+  h2, h3 { break-after: avoid; }
+  tr, figure, table, .input-block { break-inside: avoid; }
+}
+`);
+
+/** Text of the running header: title, reference, revision and status. */
+export interface RunningHeader {
+  readonly left: string;
+  readonly right: string;
+}
+
+/**
+ * Builds the stylesheet. Page size is left to the printer so the same file prints on A4 and Letter;
+ * the margins fit both. `watermark` is the diagonal text on every page, absent when issued.
+ */
+export function packageCss(header: RunningHeader, watermark: string | undefined): Trusted {
+  const pageRules = html`
+    @page { margin: 20mm 18mm 20mm 18mm;
+      @top-left { content: ${cssStringLiteral(header.left)}; font: 8pt system-ui, sans-serif; color: #555; }
+      @top-right { content: ${cssStringLiteral(header.right)}; font: 8pt system-ui, sans-serif; color: #555; }
+      @bottom-right { content: "Page " counter(page) " of " counter(pages); font: 8pt system-ui, sans-serif; }
+    }
+    @page :first { @top-left { content: none; } @top-right { content: none; } }
+  `;
+  const watermarkRule = watermark === undefined ? html`` : html`
+    body::before { content: ${cssStringLiteral(watermark)}; position: fixed; top: 42%; left: 0; right: 0;
+      text-align: center; font: bold 110pt system-ui, sans-serif; color: rgba(170, 0, 0, 0.10);
+      transform: rotate(-35deg); pointer-events: none; z-index: 10; letter-spacing: 8pt; }
+  `;
+  return html`${BASE_CSS}${pageRules}${watermarkRule}`;
+}

@@ -1,0 +1,98 @@
+/** Assembles the self-contained HTML calculation package from the model, results and inputs. */
+import { renderInputsAppendix, renderResultsAppendix } from "./appendices.ts";
+import { renderCalculationSection } from "./calculationSection.ts";
+import { renderChecksSection } from "./checksSection.ts";
+import { renderCover, STATUS_LABEL, watermarkFor } from "./cover.ts";
+import { packageCss } from "./css.ts";
+import { renderCautionsSection, renderScopeSection } from "./fixedSections.ts";
+import { html, type Trusted } from "./html.ts";
+import { makeRenderContext, type PackageInput, type RenderContext } from "./packageInput.ts";
+import { renderReproducibilitySection, renderRevisionSection } from "./recordSections.ts";
+import {
+  renderAssumptionsSection,
+  renderMaterialsSection,
+  renderSourcesSection,
+} from "./registerSections.ts";
+
+export type { InputFile, LibraryEntry, PackageInput } from "./packageInput.ts";
+
+/** The Content-Security-Policy of the package: nothing may load or run except inline style and data: images. */
+export const PACKAGE_CSP = "default-src 'none'; img-src data:; style-src 'unsafe-inline'";
+
+/** Contents entries: fragment id and numbered title, in page order. */
+const CONTENTS: readonly (readonly [string, string])[] = [
+  ["s-1", "1 Scope and exclusions"],
+  ["s-2", "2 Calculation"],
+  ["s-3", "3 Checks and findings"],
+  ["s-4", "4 Assumptions register"],
+  ["s-5", "5 Materials and their sources"],
+  ["s-6", "6 Sources"],
+  ["s-7", "7 Cautions"],
+  ["s-8", "8 Revision history"],
+  ["s-9", "9 Reproducibility"],
+  ["s-a", "Appendix A Embedded inputs"],
+  ["s-b", "Appendix B Results (results.json)"],
+];
+
+function renderContents(ctx: RenderContext): Trusted {
+  const docs = ctx.input.model.documents.map((d, i) =>
+    html`<li><a href="#s-2-${String(i + 1)}">2.${String(i + 1)} ${d.path}</a></li>`
+  );
+  const items = CONTENTS.map(([id, title]) =>
+    id === "s-2"
+      ? html`<li><a href="#${id}">${title}</a><ol>${docs}</ol></li>`
+      : html`<li><a href="#${id}">${title}</a></li>`
+  );
+  return html`
+    <nav class="contents" aria-label="Contents">
+      <h2>Contents</h2>
+      <ol>${items}</ol>
+    </nav>
+  `;
+}
+
+function endMarker(input: PackageInput): Trusted {
+  return html`<p class="end-marker">END OF CALCULATION PACKAGE<br><span class="hash">Input SHA-256 ${input.results.inputs.sha256}</span></p>`;
+}
+
+/** Renders the whole package as one HTML document; the same input always gives the same string. */
+export function renderPackage(input: PackageInput): string {
+  const ctx = makeRenderContext(input);
+  const info = input.model.info;
+  const status = STATUS_LABEL[info.status];
+  const headerLeft = `${info.title} | ${info.reference} rev ${info.revision}`;
+  const css = packageCss({ left: headerLeft, right: status }, watermarkFor(info.status));
+  const page = html`
+    <!doctype html>
+    <html lang="en">
+      <head>
+        <meta charset="utf-8">
+        <meta http-equiv="Content-Security-Policy" content="${PACKAGE_CSP}">
+        <meta name="viewport" content="width=device-width, initial-scale=1">
+        <meta name="generator" content="fluxnote ${input.toolVersion}">
+        <title>${info.title} (${info.reference} rev ${info.revision}, ${status})</title>
+        <style>${css}</style>
+      </head>
+      <body class="${info.status === "issued" ? "issued" : "not-issued"}">
+    <div class="running-header">${headerLeft} | ${status}</div>
+    ${renderCover(input)}
+    ${renderContents(ctx)}
+    <main>
+    ${renderScopeSection()}
+    ${renderCalculationSection(ctx)}
+    ${renderChecksSection(ctx)}
+    ${renderAssumptionsSection(ctx)}
+    ${renderMaterialsSection(ctx)}
+    ${renderSourcesSection(ctx)}
+    ${renderCautionsSection()}
+    ${renderRevisionSection(ctx)}
+    ${renderReproducibilitySection(ctx)}
+    ${renderInputsAppendix(ctx)}
+    ${renderResultsAppendix(ctx)}
+    </main>
+    ${endMarker(input)}
+      </body>
+    </html>
+  `;
+  return page.markup;
+}

@@ -1,0 +1,62 @@
+/** The data `renderPackage` turns into the calculation package, and shared rendering context. */
+import type { Diagnostic } from "../project/diagnostic.ts";
+import type { Model } from "../project/model.ts";
+import type { ResultsJson } from "../results/types.ts";
+
+/** One input file of the project with its exact bytes and SHA-256 (hex). */
+export interface InputFile {
+  readonly path: string;
+  readonly sha256: string;
+  readonly bytes: Uint8Array;
+}
+
+/** A built-in library entry the project used: its canonical serialisation and SHA-256 (hex). */
+export interface LibraryEntry {
+  readonly id: string;
+  readonly canonical: string;
+  readonly sha256: string;
+}
+
+/**
+ * Everything the package shows. Steady-state figures are read from `results.constructions`,
+ * so the printed numbers are the ones embedded in Appendix B.
+ */
+export interface PackageInput {
+  readonly model: Model;
+  readonly results: ResultsJson;
+  readonly inputFiles: readonly InputFile[];
+  readonly libraryEntries: readonly LibraryEntry[];
+  readonly findings: readonly Diagnostic[];
+  readonly toolVersion: string;
+  readonly runtimeVersion: string;
+  /** The exact text written as results.json. */
+  readonly resultsJsonText: string;
+}
+
+/** Ids and anchors shared by the sections of one rendering. */
+export interface RenderContext {
+  readonly input: PackageInput;
+  /** Ids used by prose headings (`u-` prefix). */
+  readonly proseIds: Set<string>;
+  /** Fragment id of each construction's output, `c-` prefix. */
+  readonly constructionAnchors: ReadonlyMap<string, string>;
+}
+
+/** Builds the rendering context: deterministic, collision-free anchors for constructions. */
+export function makeRenderContext(input: PackageInput): RenderContext {
+  const anchors = new Map<string, string>();
+  const used = new Set<string>();
+  for (const c of input.model.constructions) {
+    const slug = c.id.toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-+|-+$/g, "") || "construction";
+    let id = `c-${slug}`;
+    for (let n = 2; used.has(id); n++) id = `c-${slug}-${n}`;
+    used.add(id);
+    if (!anchors.has(c.id)) anchors.set(c.id, id);
+  }
+  return { input, proseIds: new Set<string>(), constructionAnchors: anchors };
+}
+
+/** True when every computed check passed. */
+export function allChecksPass(input: PackageInput): boolean {
+  return input.results.checks.every((c) => c.pass);
+}

@@ -1,0 +1,271 @@
+/** A small invented project, its results and inputs, for rendering tests. All content is made up. */
+import { steadyState } from "../../src/engine/steady.ts";
+import type { Diagnostic } from "../../src/project/diagnostic.ts";
+import type { Construction, Model, ProjectInfo } from "../../src/project/model.ts";
+import type { PackageInput } from "../../src/report/package.ts";
+import type { CheckResult, ConstructionResults, ResultsJson } from "../../src/results/types.ts";
+
+/** Text pieces that must never come out as live markup or script. */
+export const HOSTILE = {
+  script: "<script>alert('x')</script>",
+  img: '<img src=x onerror="alert(1)">',
+  attr: '" onmouseover="alert(2)" x="',
+  entity: "&lt;script&gt;alert(3)&lt;/script&gt; &#60;script&#62;",
+  style: '"; } body { background: url(https://evil.example/t.png) } </style><script>alert(4)</script>',
+  svg: "<svg onload=alert(5)><a xlink:href='javascript:alert(6)'>x</a></svg>",
+} as const;
+
+const at = (file: string, line: number) => ({ file, line, col: 1 });
+
+const WALL_SOURCE = [
+  "```construction",
+  "id: EW-9",
+  "name: Rendered block wall",
+  "layers:",
+  "  - { material: lime-render, thickness: 15 mm }",
+  "  - { material: eps-board, thickness: 120 mm }",
+  "  - { name: cavity, resistance: 0.18 m^2 K/W }",
+  "  - { material: clay-block, thickness: 175 mm }",
+  "  - { name: gypsum plaster, thickness: 12.5 mm, conductivity: 0.21 W/(m K), density: 700 kg/m^3, specific-heat: 1000 J/(kg K) }",
+  "```",
+].join("\n");
+
+/** The invented wall: 15 mm render, 120 mm EPS, 0.18 cavity, 175 mm clay block, 12.5 mm plaster. */
+export function wall(name = "Rendered block wall", layerName = "lime render"): Construction {
+  return {
+    id: "EW-9",
+    name,
+    heatFlow: "horizontal",
+    outsideResistance: 0.04,
+    outsideResistanceDefaulted: true,
+    insideResistance: 0.13,
+    insideResistanceDefaulted: true,
+    timestepS: 3600,
+    at: at("walls.md", 5),
+    layers: [
+      {
+        kind: "massive",
+        thicknessM: 0.015,
+        conductivity: 0.8,
+        density: 1600,
+        specificHeat: 1000,
+        name: layerName,
+        materialId: "lime-render",
+        source: "invented test value",
+        at: at("walls.md", 9),
+      },
+      {
+        kind: "massive",
+        thicknessM: 0.12,
+        conductivity: 0.035,
+        density: 20,
+        specificHeat: 1450,
+        name: "EPS board",
+        materialId: "eps-board",
+        source: "invented test value",
+        at: at("walls.md", 10),
+      },
+      { kind: "resistive", resistance: 0.18, name: "cavity", source: "", at: at("walls.md", 11) },
+      {
+        kind: "massive",
+        thicknessM: 0.175,
+        conductivity: 0.52,
+        density: 1400,
+        specificHeat: 900,
+        name: "clay block",
+        materialId: "clay-block",
+        source: "invented library value",
+        at: at("walls.md", 12),
+      },
+      {
+        kind: "massive",
+        thicknessM: 0.0125,
+        conductivity: 0.21,
+        density: 700,
+        specificHeat: 1000,
+        name: "gypsum plaster",
+        source: "",
+        at: at("walls.md", 13),
+      },
+    ],
+  };
+}
+
+/** Options that vary the fixture: status, hostile strings, checks. */
+export interface FixtureOptions {
+  readonly status?: ProjectInfo["status"];
+  readonly text?: string;
+  readonly prose?: string;
+  readonly checks?: readonly CheckResult[];
+}
+
+/** A passing check on the wall. */
+export const PASSING_CHECK: CheckResult = {
+  id: "sum-rule-Y",
+  subject: "construction:EW-9",
+  description: "sum of Y equals U",
+  value: 2e-6,
+  limit: 1e-3,
+  pass: true,
+};
+
+/** A failing check on the wall. */
+export const FAILING_CHECK: CheckResult = {
+  id: "energy-balance",
+  subject: "construction:EW-9",
+  description: "energy balance over the day",
+  value: 0.02,
+  limit: 0.001,
+  pass: false,
+};
+
+function constructionResults(c: Construction): ConstructionResults {
+  const s = steadyState(c);
+  return {
+    U: s.uValue,
+    R: s.totalResistance,
+    timestep_h: 1,
+    steady: {
+      outsideSurfaceResistance: c.outsideResistance,
+      insideSurfaceResistance: c.insideResistance,
+      surfaceToSurfaceU: s.surfaceToSurfaceU,
+      arealHeatCapacity: s.arealHeatCapacity,
+      layers: c.layers.map((l, i) => ({
+        name: l.name,
+        kind: l.kind,
+        R: s.layerResistances[i] ?? NaN,
+        arealHeatCapacity: s.layerArealHeatCapacities[i] ?? NaN,
+      })),
+    },
+  };
+}
+
+/** Bytes of the input files: a text file with BOM and CRLF, and a binary file with every byte value. */
+export function inputBytes(text: string): { project: Uint8Array; walls: Uint8Array; binary: Uint8Array } {
+  const enc = new TextEncoder();
+  const project = enc.encode(`\uFEFF---\r\ntitle: ${text}\r\n---\r\nIntro.\r\n`);
+  const walls = enc.encode(`# Walls\n\n${WALL_SOURCE}\n`);
+  const binary = new Uint8Array(256).map((_, i) => i);
+  return { project, walls, binary };
+}
+
+/** Builds a complete PackageInput; `text` is written into every free-text field. */
+export function fixture(options: FixtureOptions = {}): PackageInput {
+  const t = options.text ?? "";
+  const c = wall(`Rendered block wall${t}`, `lime render${t}`);
+  const info: ProjectInfo = {
+    title: `Riverside depot${t}`,
+    reference: `J-0042${t}`,
+    revision: `B${t}`,
+    status: options.status ?? "draft",
+    preparedBy: `A. Preparer${t}`,
+    checkedBy: `B. Checker${t}`,
+    approvedBy: `C. Approver${t}`,
+    date: "2031-03-14",
+    units: "SI",
+    revisions: [{ revision: "A", date: "2031-02-01", description: `First issue for comment${t}` }],
+  };
+  const model: Model = {
+    info,
+    documents: [
+      {
+        path: "project.md",
+        segments: [{ kind: "prose", markdown: options.prose ?? "Intro.", at: at("project.md", 4) }],
+      },
+      {
+        path: `walls${t}.md`,
+        segments: [
+          {
+            kind: "prose",
+            markdown: "# Walls\n\nSee [the brief](https://example.org/brief).",
+            at: at("walls.md", 1),
+          },
+          {
+            kind: "block",
+            blockKind: "construction",
+            id: "EW-9",
+            source: WALL_SOURCE + t,
+            at: at("walls.md", 3),
+          },
+        ],
+      },
+    ],
+    materials: [
+      {
+        id: "lime-render",
+        name: `Lime render${t}`,
+        origin: "project",
+        conductivity: 0.8,
+        density: 1600,
+        specificHeat: 1000,
+        source: `invented test value${t}`,
+        at: at("walls.md", 20),
+      },
+      {
+        id: "eps-board",
+        name: "EPS board",
+        origin: "project",
+        conductivity: 0.035,
+        density: 20,
+        specificHeat: 1450,
+        source: "invented test value",
+        at: at("walls.md", 28),
+      },
+      {
+        id: "clay-block",
+        name: "Clay block",
+        origin: "library",
+        conductivity: 0.52,
+        density: 1400,
+        specificHeat: 900,
+        source: "invented library value",
+        at: at("library", 1),
+      },
+    ],
+    constructions: [c],
+    scenarios: [],
+    assumptions: [
+      {
+        id: "default:inside-surface-resistance:EW-9",
+        text: `R_si = 0.13 m^2 K/W${t}`,
+        source: `ISO 6946:2017${t}`,
+        at: "walls.md:3:1",
+      },
+    ],
+  };
+  const bytes = inputBytes(t);
+  const files = [
+    { path: "project.md", sha256: "a".repeat(64), bytes: bytes.project },
+    { path: `walls${t}.md`, sha256: "b".repeat(64), bytes: bytes.walls },
+    { path: "data/blob.bin", sha256: "c".repeat(64), bytes: bytes.binary },
+  ];
+  const results: ResultsJson = {
+    schema: "fluxnote-results/1",
+    tool: { name: "fluxnote", version: "0.1.0" },
+    inputs: { files: files.map((f) => ({ path: f.path, sha256: f.sha256 })), sha256: "d".repeat(64) },
+    constructions: { "EW-9": constructionResults(c) },
+    scenarios: {},
+    checks: options.checks ?? [PASSING_CHECK],
+    assumptions: [],
+    warnings: [],
+  };
+  const findings: Diagnostic[] = [
+    {
+      severity: "warning",
+      at: at(`walls${t}.md`, 11),
+      rule: "layer-source-missing",
+      message: `Layer has no source${t}`,
+      hint: `Add a source${t}`,
+    },
+  ];
+  return {
+    model,
+    results,
+    inputFiles: files,
+    libraryEntries: [{ id: `clay-block${t}`, canonical: `{"id":"clay-block"${t}}`, sha256: "e".repeat(64) }],
+    findings,
+    toolVersion: "0.1.0",
+    runtimeVersion: "2.9.6",
+    resultsJsonText: JSON.stringify(results, null, 2) + t,
+  };
+}

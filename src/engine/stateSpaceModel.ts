@@ -16,21 +16,13 @@ export interface FiniteVolumeModel {
   readonly insideConductance: number;
 }
 
-/** Relative cell widths in a layer of `cells` cells, growing by `grading` from both faces towards the middle. */
-export function cellWidths(cells: number, grading: number): number[] {
-  const raw = Array.from({ length: cells }, (_, i) => grading ** Math.min(i, cells - 1 - i));
-  const total = raw.reduce((a, b) => a + b, 0);
-  return raw.map((w) => w / total);
-}
-
 /**
- * Builds the cell-centred finite-volume model with `cellsPerElement[e]` cells in each massive element,
- * cell widths graded geometrically by `grading` from each face of a layer (1 = uniform).
+ * Builds the cell-centred finite-volume model: `cellWidths[e]` gives the relative widths (summing to 1) of the
+ * cells of massive element e; resistive elements carry no node and are folded into the link conductances.
  */
 export function finiteVolumeModel(
   chain: ConductionChain,
-  cellsPerElement: readonly number[],
-  grading = 1,
+  cellWidths: readonly (readonly number[])[],
 ): FiniteVolumeModel {
   const capacities: number[] = [];
   const links: number[] = [];
@@ -42,7 +34,8 @@ export function finiteVolumeModel(
         pendingResistance += element.resistance;
         break;
       case "massive": {
-        const widths = cellWidths(Math.max(1, cellsPerElement[e] ?? 1), grading);
+        const given = cellWidths[e] ?? [];
+        const widths = given.length > 0 ? given : [1];
         for (const width of widths) {
           const halfCellResistance = (element.resistance * width) / 2;
           const linkResistance = pendingResistance + halfCellResistance;
@@ -55,7 +48,7 @@ export function finiteVolumeModel(
       }
     }
   }
-  const cells = chain.elements.map((e, i) => (e.kind === "massive" ? Math.max(1, cellsPerElement[i] ?? 1) : 0));
+  const cells = chain.elements.map((e, i) => (e.kind === "massive" ? Math.max(1, cellWidths[i]?.length ?? 1) : 0));
   return {
     cellsPerElement: cells,
     capacities,

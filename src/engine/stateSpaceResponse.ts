@@ -74,12 +74,11 @@ function impulseResponse(model: FiniteVolumeModel, discrete: DiscreteModel, term
 /** Builds, discretises and runs the finite-volume state-space model for `terms` response factors. */
 export function stateSpaceResponse(
   chain: ConductionChain,
-  cellsPerElement: readonly number[],
+  cellWidths: readonly (readonly number[])[],
   timestepS: number,
   terms: number,
-  grading = 1,
 ): StateSpaceResponse {
-  const model = finiteVolumeModel(chain, cellsPerElement, grading);
+  const model = finiteVolumeModel(chain, cellWidths);
   const u = 1 / chain.totalResistance;
   if (model.capacities.length === 0) {
     const rf = [u, ...new Array<number>(Math.max(0, terms - 1)).fill(0)];

@@ -64,7 +64,7 @@ export const MATERIAL_CLASSES: readonly MaterialClass[] = [
     [0.08, 0.25],
     [300, 800],
     [840, 1100],
-    `${SECONDARY} trade guidance on aerated concrete; ${MEMORY} for c`,
+    `${SECONDARY} a trade reference page on thermal conductivity (aerated 0.16 W/(m K); cellular 400 kg/m3 0.10); c band ${MEMORY}`,
   ),
   massive(
     "clay-masonry",

@@ -189,7 +189,7 @@ function readLayer(
           `Unknown material "${materialId}" in the ${what}`,
           `${
             didYouMean(materialId, materials.ids(), "materials")
-          }; define it in a \`material\` block or use a built-in id`,
+          } Otherwise define it in a \`material\` block or use a built-in id`,
         ),
       );
       return undefined;

@@ -63,7 +63,6 @@ export function renderPackage(input: PackageInput): string {
   const headerLeft = `${info.title} | ${info.reference} rev ${info.revision}`;
   const css = packageCss({ left: headerLeft, right: status }, watermarkFor(info.status));
   const page = html`
-    <!doctype html>
     <html lang="en">
       <head>
         <meta charset="utf-8">
@@ -94,5 +93,5 @@ export function renderPackage(input: PackageInput): string {
       </body>
     </html>
   `;
-  return page.markup;
+  return `<!doctype html>\n${page.markup.trim()}\n`;
 }

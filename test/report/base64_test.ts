@@ -13,15 +13,20 @@ Deno.test("encodeBase64() matches the RFC 4648 §10 test vectors", () => {
     ["fooba", "Zm9vYmE="],
     ["foobar", "Zm9vYmFy"],
   ];
-  for (const [text, expected] of vectors) assert.equal(encodeBase64(new TextEncoder().encode(text), 0), expected);
+  for (const [text, expected] of vectors) {
+    assert.equal(encodeBase64(new TextEncoder().encode(text), 0), expected);
+  }
 });
 
 Deno.test("encodeBase64() agrees with the platform's atob for any bytes (property)", () => {
   // Independent oracle: the web-standard atob decoder of the runtime.
-  fc.assert(fc.property(fc.uint8Array({ maxLength: 300 }), (bytes) => {
-    const decoded = atob(encodeBase64(bytes).replace(/\n/g, ""));
-    assert.deepEqual(Uint8Array.from(decoded, (c) => c.charCodeAt(0)), bytes);
-  }), { seed: 7, numRuns: 200 });
+  fc.assert(
+    fc.property(fc.uint8Array({ maxLength: 300 }), (bytes) => {
+      const decoded = atob(encodeBase64(bytes).replace(/\n/g, ""));
+      assert.deepEqual(Uint8Array.from(decoded, (c) => c.charCodeAt(0)), bytes);
+    }),
+    { seed: 7, numRuns: 200 },
+  );
 });
 
 Deno.test("encodeBase64() breaks lines at 76 characters", () => {

@@ -12,8 +12,30 @@ export function parseFragment(markup: string): HTMLElement {
   return parseDocument(`<!doctype html><html><head></head><body>${markup}</body></html>`).body;
 }
 
-const URL_ATTRIBUTES = ["href", "src", "xlink:href", "action", "formaction", "srcset", "poster", "data", "background"];
-const FORBIDDEN_ELEMENTS = ["script", "iframe", "object", "embed", "img", "link", "base", "form", "frame", "video", "audio"];
+const URL_ATTRIBUTES = [
+  "href",
+  "src",
+  "xlink:href",
+  "action",
+  "formaction",
+  "srcset",
+  "poster",
+  "data",
+  "background",
+];
+const FORBIDDEN_ELEMENTS = [
+  "script",
+  "iframe",
+  "object",
+  "embed",
+  "img",
+  "link",
+  "base",
+  "form",
+  "frame",
+  "video",
+  "audio",
+];
 
 /**
  * Asserts the markup holds no script, no event attribute, no dangerous element and no URL attribute
@@ -21,7 +43,12 @@ const FORBIDDEN_ELEMENTS = ["script", "iframe", "object", "embed", "img", "link"
  */
 export function assertNoLiveMarkup(markup: string, root: ParentNode): void {
   assert.doesNotMatch(markup, /<script/i, "raw output contains a <script tag");
-  assert.doesNotMatch(markup, /<[a-z][^<>]*\son[a-z]+\s*=/i, "raw output has an on* attribute inside a tag");
+  const unquoted = markup.replace(/"[^"]*"/g, '""');
+  assert.doesNotMatch(
+    unquoted,
+    /<[a-z][^<>]*\son[a-z]+\s*=/i,
+    "raw output has an on* attribute inside a tag",
+  );
   for (const name of FORBIDDEN_ELEMENTS) {
     assert.equal(root.querySelectorAll(name).length, 0, `found a <${name}> element`);
   }

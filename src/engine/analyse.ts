@@ -1,0 +1,220 @@
+import { type EngineCheck, engineCheck } from "./check.ts";
+import { CTF_MAX_COEFFICIENT, CTF_MAX_RESYNTHESIS_ERROR } from "./ctf.ts";
+import { transmissionDeterminantError } from "./determinantCheck.ts";
+import { type ConductionChain, conductionChain } from "./elements.ts";
+import { unresolvable, type Unresolvable } from "./engineError.ts";
+import { harmonicErrors } from "./harmonicCheck.ts";
+import { type Iso13786Characteristics, iso13786 } from "./iso13786.ts";
+import type { ConstructionInput } from "./layer.ts";
+import { foldPeriodic, periodicFromModes } from "./periodic.ts";
+import { pulseModes } from "./pulseModes.ts";
+import { responseFactors, sumRuleResidual } from "./responseFactors.ts";
+import { type RootAnalysis, rootAnalysis } from "./rootAnalysis.ts";
+import { STATE_SPACE_AGREEMENT_LIMIT, type StateSpaceAnalysis, stateSpaceAnalysis } from "./stateSpaceAnalysis.ts";
+import { type SteadyState, steadyState } from "./steady.ts";
+
+/** Options of the dynamic analysis. */
+export interface AnalysisOptions {
+  /** Run the state-space method as the second route (default true). */
+  readonly stateSpace?: boolean;
+}
+
+/** 24-hour periodic response factors at 1 h (air to air) and the conduction time series. */
+export interface PeriodicFactors {
+  readonly X: readonly number[];
+  readonly Y: readonly number[];
+  readonly Z: readonly number[];
+  /** Y / U, sums to 1 */
+  readonly cts: readonly number[];
+}
+
+/** Complete dynamic analysis of one construction. */
+export interface DynamicAnalysis {
+  readonly kind: "analysis";
+  readonly timestepS: number;
+  readonly steady: SteadyState;
+  /** Films included (TFM, RTS/CTS, ISO 13786 convention). */
+  readonly airToAir: RootAnalysis;
+  /** No films (heat-balance convention). */
+  readonly surfaceToSurface: RootAnalysis;
+  /** Air-to-air root analysis at 1 h (the same object as airToAir when the timestep is 1 h). */
+  readonly hourly: RootAnalysis;
+  readonly periodic: PeriodicFactors;
+  readonly stateSpace: StateSpaceAnalysis | null;
+  /** State-space cells in each input layer (0 for resistive layers), or null without the state-space route. */
+  readonly cellsPerLayer: readonly number[] | null;
+  readonly iso13786: Iso13786Characteristics;
+  readonly checks: readonly EngineCheck[];
+}
+
+/** Timesteps accepted: whole seconds from 60 s to 3600 s that divide one hour. */
+export function isValidTimestep(timestepS: number): boolean {
+  return Number.isInteger(timestepS) && timestepS >= 60 && timestepS <= 3600 && 3600 % timestepS === 0;
+}
+
+function sumRuleChecks(root: RootAnalysis, suffix: string): EngineCheck[] {
+  const rf = root.responseFactors;
+  return (["X", "Y", "Z"] as const).map((key) =>
+    engineCheck(
+      `sum-rule-${key}${suffix}`,
+      `|Σ ${key}_j − U| / U of ${rf.termCount} ${root.boundary} response factors (Δ = ${rf.timestepS} s)`,
+      sumRuleResidual(rf[key], root.uValue),
+      1e-8,
+    )
+  );
+}
+
+function rootChecks(root: RootAnalysis, suffix: string): EngineCheck[] {
+  const c = root.ctfCandidate;
+  return [
+    ...sumRuleChecks(root, suffix),
+    engineCheck(
+      `root-count${suffix}`,
+      `Poles found minus the exact oscillation count below β = ${root.poles.betaMax.toExponential(4)} 1/s (plus unresolved intervals)`,
+      Math.abs(root.poles.bracketedCount - root.poles.exactCount) + root.poles.unresolvedIntervals,
+      0,
+    ),
+    engineCheck(`ctf-identity${suffix}`, "max |ΣCTF / (1 − ΣΦ) − U| / U over X, Y, Z", c.identityError, 1e-6),
+    engineCheck(
+      `ctf-resynthesis${suffix}`,
+      `Root CTF (${c.ctf.Phi.length} poles) long division versus response factors, max error / U`,
+      c.resynthesisError,
+      CTF_MAX_RESYNTHESIS_ERROR,
+    ),
+    engineCheck(`ctf-coefficient-bound${suffix}`, "Largest |CTF coefficient|", c.maxAbsCoefficient, CTF_MAX_COEFFICIENT),
+  ];
+}
+
+function stateSpaceChecks(ss: StateSpaceAnalysis): EngineCheck[] {
+  const c = ss.ctfCandidate;
+  return [
+    engineCheck(
+      "state-space-agreement",
+      `max_j |RF state space − RF roots| / U over X, Y, Z (${ss.response.model.capacities.length} graded cells)`,
+      ss.agreement.max,
+      STATE_SPACE_AGREEMENT_LIMIT,
+    ),
+    engineCheck(
+      "state-space-reciprocity",
+      "max_j |q_i per T_o pulse + q_o per T_i pulse| / U of the state-space model",
+      ss.response.reciprocityError,
+      1e-9,
+    ),
+    engineCheck(
+      "ctf-state-space-resynthesis",
+      `State-space CTF (${c.ctf.Phi.length} poles) long division versus its response factors, max error / U`,
+      c.resynthesisError,
+      CTF_MAX_RESYNTHESIS_ERROR,
+    ),
+    engineCheck("ctf-state-space-coefficient-bound", "Largest |state-space CTF coefficient|", c.maxAbsCoefficient, CTF_MAX_COEFFICIENT),
+    engineCheck("ctf-state-space-identity", "max |ΣCTF / (1 − ΣΦ) − U| / U (state space)", c.identityError, 1e-6),
+  ];
+}
+
+function periodicFactors(hourly: RootAnalysis): PeriodicFactors {
+  const periodic = (key: "X" | "Y" | "Z") => periodicFromModes(hourly.modes[key], 24);
+  const Y = periodic("Y");
+  return { X: periodic("X"), Y, Z: periodic("Z"), cts: Y.map((v) => v / hourly.uValue) };
+}
+
+function periodicFoldError(hourly: RootAnalysis, periodic: PeriodicFactors): number {
+  let worst = 0;
+  for (const key of ["X", "Y", "Z"] as const) {
+    const folded = foldPeriodic(hourly.responseFactors[key], 24);
+    folded.forEach((v, j) => (worst = Math.max(worst, Math.abs(v - periodic[key][j]!) / hourly.uValue)));
+  }
+  return worst;
+}
+
+function hourlyAnalysis(airToAir: RootAnalysis): RootAnalysis {
+  if (airToAir.responseFactors.timestepS === 3600) return airToAir;
+  const modes = {
+    X: pulseModes(airToAir.ramp, "X", 3600),
+    Y: pulseModes(airToAir.ramp, "Y", 3600),
+    Z: pulseModes(airToAir.ramp, "Z", 3600),
+  };
+  return { ...airToAir, responseFactors: responseFactors(airToAir.ramp, 3600), modes };
+}
+
+/** Dynamic conduction analysis of a construction at the given timestep (s), or why it cannot be resolved. */
+export function analyseConstruction(
+  input: ConstructionInput,
+  timestepS: number,
+  options: AnalysisOptions = {},
+): DynamicAnalysis | Unresolvable {
+  if (!isValidTimestep(timestepS)) {
+    return unresolvable("invalid-timestep", `Cannot analyse at timestep ${timestepS} s: expected whole seconds dividing 3600 s, at least 60 s`);
+  }
+  const air = conductionChain(input, "air-to-air");
+  if (air.kind === "unresolvable") return air;
+  const surface = conductionChain(input, "surface-to-surface");
+  if (surface.kind === "unresolvable") return surface;
+  const airToAir = rootAnalysis(air, timestepS);
+  const surfaceToSurface = rootAnalysis(surface, timestepS);
+  const hourly = hourlyAnalysis(airToAir);
+  const periodic = periodicFactors(hourly);
+  const stateSpace = options.stateSpace === false
+    ? null
+    : stateSpaceAnalysis(air, timestepS, airToAir.responseFactors, airToAir.uValue);
+  const iso = iso13786(air);
+  return {
+    kind: "analysis",
+    timestepS,
+    steady: steadyState(input),
+    airToAir,
+    surfaceToSurface,
+    hourly,
+    periodic,
+    stateSpace,
+    cellsPerLayer: stateSpace === null ? null : stateSpace.cellsPerElement.slice(
+      input.outsideResistance > 0 ? 1 : 0,
+      (input.outsideResistance > 0 ? 1 : 0) + input.layers.length,
+    ),
+    iso13786: iso,
+    checks: buildChecks(air, surface, airToAir, surfaceToSurface, hourly, periodic, stateSpace),
+  };
+}
+
+function buildChecks(
+  air: ConductionChain,
+  surface: ConductionChain,
+  airToAir: RootAnalysis,
+  surfaceToSurface: RootAnalysis,
+  hourly: RootAnalysis,
+  periodic: PeriodicFactors,
+  stateSpace: StateSpaceAnalysis | null,
+): EngineCheck[] {
+  const harmonic = harmonicErrors(air, periodic.Y);
+  return [
+    ...rootChecks(airToAir, ""),
+    ...rootChecks(surfaceToSurface, "-surface"),
+    engineCheck(
+      "transmission-determinant",
+      "max |det M − 1| / max(1, |AD|) at sampled s, air to air and surface to surface",
+      Math.max(
+        transmissionDeterminantError(air, airToAir.poles.betas),
+        transmissionDeterminantError(surface, surfaceToSurface.poles.betas),
+      ),
+      1e-9,
+    ),
+    engineCheck(
+      "iso13786-harmonic-amplitude",
+      "|H₁| of hourly periodic Y versus |Y(iω)| sinc²(π/24) (+ aliases 24m+1), relative",
+      harmonic.amplitude,
+      1e-3,
+    ),
+    engineCheck(
+      "iso13786-harmonic-phase",
+      "Phase of H₁ of hourly periodic Y versus arg Y(iω), h",
+      harmonic.phaseH,
+      0.01,
+    ),
+    engineCheck(
+      "periodic-fold",
+      "Closed-form periodic factors versus folded hourly response factors, max / U",
+      periodicFoldError(hourly, periodic),
+      1e-8,
+    ),
+    ...(stateSpace === null ? [] : stateSpaceChecks(stateSpace)),
+  ];
+}

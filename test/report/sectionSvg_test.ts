@@ -1,0 +1,49 @@
+import assert from "node:assert/strict";
+import { renderSectionSvg } from "../../src/report/sectionSvg.ts";
+import { assertNoLiveMarkup, parseFragment } from "./dom.ts";
+import { HOSTILE, wall } from "./fixture.ts";
+
+function layerRects(svg: Element): Element[] {
+  // Layer rectangles are the full-height ones (y = 62); the legend and scale bar are shorter.
+  return Array.from(svg.querySelectorAll("rect")).filter((r) => r.getAttribute("height") === "128");
+}
+
+Deno.test("renderSectionSvg() draws massive layers to scale and gaps at nominal width", () => {
+  const svg = parseFragment(renderSectionSvg(wall()).markup).querySelector("svg");
+  assert.ok(svg !== null);
+  const widths = layerRects(svg).map((r) => Number(r.getAttribute("width")));
+  assert.equal(widths.length, 5);
+  const [render, eps, gap, block, plaster] = widths as [number, number, number, number, number];
+  // Thickness ratios of the invented wall, by hand: 120/15 = 8, 175/12.5 = 14.
+  assert.ok(Math.abs(eps / render - 8) < 0.02, `EPS/render width ratio ${eps / render}`);
+  assert.ok(Math.abs(block / plaster - 14) < 0.05, `block/plaster width ratio ${block / plaster}`);
+  assert.equal(gap, 10);
+  const gapRect = layerRects(svg)[2];
+  assert.equal(gapRect?.getAttribute("stroke-dasharray"), "4 3");
+});
+
+Deno.test("renderSectionSvg() labels OUTSIDE left of INSIDE, numbers layers and marks not to scale", () => {
+  const markup = renderSectionSvg(wall()).markup;
+  const svg = parseFragment(markup).querySelector("svg");
+  assert.ok(svg !== null);
+  assert.equal(svg.getAttribute("xmlns"), "http://www.w3.org/2000/svg");
+  const texts = Array.from(svg.querySelectorAll("text"));
+  const xOf = (label: string) => Number(texts.find((t) => t.textContent === label)?.getAttribute("x"));
+  assert.ok(xOf("OUTSIDE") < xOf("INSIDE"));
+  for (const n of ["1", "2", "3", "4", "5"]) {
+    assert.ok(texts.some((t) => t.textContent === n), `layer number ${n}`);
+  }
+  // Overall massive thickness by hand: 15 + 120 + 175 + 12.5 = 322.5 mm.
+  assert.ok(texts.some((t) => t.textContent?.startsWith("322.5\u2009mm overall")));
+  assert.ok(texts.some((t) => t.textContent?.includes("NOT TO SCALE")));
+  assert.equal(svg.querySelectorAll("[id]").length, 0, "no ids that could collide");
+});
+
+Deno.test("renderSectionSvg() escapes hostile construction ids", () => {
+  const c = { ...wall(), id: HOSTILE.svg + HOSTILE.script };
+  const markup = renderSectionSvg(c).markup;
+  const body = parseFragment(markup);
+  assertNoLiveMarkup(markup, body);
+  assert.equal(body.querySelectorAll("svg").length, 1);
+  assert.equal(body.querySelectorAll("a").length, 0);
+});

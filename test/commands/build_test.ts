@@ -21,7 +21,7 @@ Deno.test("runBuild() computes U of the minimal wall as the hand sum of ISO 6946
   const out = join(await Deno.makeTempDir(), "out");
   assert.deepStrictEqual(await build(MINIMAL, out), 0);
   const results = JSON.parse(Deno.readTextFileSync(join(out, "results.json"))) as ResultsJson;
-  // ISO 6946:2017 §6.7: R_T = R_se + sum(d/lambda) + R_si, U = 1/R_T, with Table 7 R_se = 0.04, R_si = 0.13
+  // ISO 6946:2017 (component of homogeneous layers): R_T = R_se + sum(d/lambda) + R_si, U = 1/R_T, with Table 7 R_se = 0.04, R_si = 0.13
   // (horizontal heat flow). Layers: 0.200/1.65 (concrete-2200), 0.100/0.035 (mineral-wool-25),
   // 0.18 (cavity given as a resistance), 0.013/0.21 (lining given inline).
   const expectedR = 0.04 + 0.2 / 1.65 + 0.1 / 0.035 + 0.18 + 0.013 / 0.21 + 0.13;

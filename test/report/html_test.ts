@@ -41,7 +41,9 @@ Deno.test("html`` round-trips any text through element content and a quoted attr
     fc.constantFrom("&", "<", ">", '"', "'", "=", "/", " ", "&amp;", "&#60;"),
     fc.string({ unit: "binary", minLength: 1, maxLength: 1 }),
   );
-  const text = fc.array(char, { maxLength: 40 }).map((parts) => parts.join("")).filter((s) => !/[\r\0]/.test(s));
+  const text = fc.array(char, { maxLength: 40 }).map((parts) => parts.join("")).filter((s) =>
+    !/[\r\0]/.test(s)
+  );
   fc.assert(
     fc.property(text, (s) => {
       const body = parseFragment(html`<p title="${s}">${s}</p>`.markup);

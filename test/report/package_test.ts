@@ -139,3 +139,30 @@ Deno.test("renderPackage() orders the sections and ends with the end marker and 
   );
   assert.ok(out.lastIndexOf("END OF CALCULATION PACKAGE") > positions[10]!);
 });
+
+Deno.test("renderPackage() follows each block with its output: material, scenario note, unresolved", () => {
+  const doc = parseDocument(renderPackage(fixture()));
+  const outputs = Array.from(doc.querySelectorAll(".block-output")).map((o) => o.textContent ?? "");
+  assert.equal(outputs.length, 4);
+  assert.match(outputs[1] ?? "", /Material lime-render as resolved/);
+  assert.match(
+    outputs[2] ?? "",
+    /hourly heat flows for scenarios are not computed in this version of the tool/,
+  );
+  assert.match(outputs[3] ?? "", /did not resolve/);
+  const labels = Array.from(doc.querySelectorAll(".input-label")).map((l) => l.textContent ?? "");
+  assert.ok(labels.some((l) => l.includes("walls.md:3:1")), "each block shows its file:line");
+});
+
+Deno.test("renderPackage() lists used materials with origin, and the sources and assumptions", () => {
+  const doc = parseDocument(renderPackage(fixture()));
+  const rows = Array.from(doc.querySelectorAll("#s-5 tbody tr")).map((r) => r.textContent ?? "");
+  assert.deepEqual(rows.map((r) => r.split(/\s/).find((w) => w !== "")), [
+    "lime-render",
+    "eps-board",
+    "clay-block",
+  ]);
+  assert.match(rows[2] ?? "", /library$/);
+  assert.match(text(doc, "#s-6"), /ISO 6946:2017/);
+  assert.match(text(doc, "#s-4"), /default:inside-surface-resistance:EW-9/);
+});

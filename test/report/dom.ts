@@ -56,6 +56,7 @@ export function assertNoLiveMarkup(markup: string, root: ParentNode): void {
     for (const attr of Array.from(el.attributes)) {
       assert.ok(!/^on/i.test(attr.name), `event attribute ${attr.name} on <${el.tagName}>`);
       if (URL_ATTRIBUTES.includes(attr.name.toLowerCase())) {
+        // deno-lint-ignore no-control-regex
         const value = attr.value.replace(/[\u0000-\u0020]/g, "").toLowerCase();
         assert.ok(
           value.startsWith("#") || /^(https?|mailto):/.test(value) || !/^[^/?#]*:/.test(value),

@@ -1,7 +1,9 @@
 /** A small invented project, its results and inputs, for rendering tests. All content is made up. */
 import { steadyState } from "../../src/engine/steady.ts";
+import { wall, WALL_SOURCE } from "./wallFixture.ts";
 import type { Diagnostic } from "../../src/project/diagnostic.ts";
 import type { Construction, Model, ProjectInfo } from "../../src/project/model.ts";
+export { wall } from "./wallFixture.ts";
 import type { PackageInput } from "../../src/report/package.ts";
 import type { CheckResult, ConstructionResults, ResultsJson } from "../../src/results/types.ts";
 
@@ -16,80 +18,6 @@ export const HOSTILE = {
 } as const;
 
 const at = (file: string, line: number) => ({ file, line, col: 1 });
-
-const WALL_SOURCE = [
-  "```construction",
-  "id: EW-9",
-  "name: Rendered block wall",
-  "layers:",
-  "  - { material: lime-render, thickness: 15 mm }",
-  "  - { material: eps-board, thickness: 120 mm }",
-  "  - { name: cavity, resistance: 0.18 m^2 K/W }",
-  "  - { material: clay-block, thickness: 175 mm }",
-  "  - { name: gypsum plaster, thickness: 12.5 mm, conductivity: 0.21 W/(m K), density: 700 kg/m^3, specific-heat: 1000 J/(kg K) }",
-  "```",
-].join("\n");
-
-/** The invented wall: 15 mm render, 120 mm EPS, 0.18 cavity, 175 mm clay block, 12.5 mm plaster. */
-export function wall(name = "Rendered block wall", layerName = "lime render"): Construction {
-  return {
-    id: "EW-9",
-    name,
-    heatFlow: "horizontal",
-    outsideResistance: 0.04,
-    outsideResistanceDefaulted: true,
-    insideResistance: 0.13,
-    insideResistanceDefaulted: true,
-    timestepS: 3600,
-    at: at("walls.md", 5),
-    layers: [
-      {
-        kind: "massive",
-        thicknessM: 0.015,
-        conductivity: 0.8,
-        density: 1600,
-        specificHeat: 1000,
-        name: layerName,
-        materialId: "lime-render",
-        source: "invented test value",
-        at: at("walls.md", 9),
-      },
-      {
-        kind: "massive",
-        thicknessM: 0.12,
-        conductivity: 0.035,
-        density: 20,
-        specificHeat: 1450,
-        name: "EPS board",
-        materialId: "eps-board",
-        source: "invented test value",
-        at: at("walls.md", 10),
-      },
-      { kind: "resistive", resistance: 0.18, name: "cavity", source: "", at: at("walls.md", 11) },
-      {
-        kind: "massive",
-        thicknessM: 0.175,
-        conductivity: 0.52,
-        density: 1400,
-        specificHeat: 900,
-        name: "clay block",
-        materialId: "clay-block",
-        source: "invented library value",
-        at: at("walls.md", 12),
-      },
-      {
-        kind: "massive",
-        thicknessM: 0.0125,
-        conductivity: 0.21,
-        density: 700,
-        specificHeat: 1000,
-        name: "gypsum plaster",
-        source: "",
-        at: at("walls.md", 13),
-      },
-    ],
-  };
-}
 
 /** Options that vary the fixture: status, hostile strings, checks. */
 export interface FixtureOptions {

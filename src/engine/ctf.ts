@@ -67,13 +67,17 @@ export function resynthesise(b: readonly number[], d: readonly number[], terms: 
   return out;
 }
 
-function maxError(b: readonly number[], d: readonly number[], rf: readonly number[], u: number): number {
-  const r = resynthesise(b, d, rf.length);
+/** max_k |long division − RF_k| / U, stopping early once it exceeds `stopAbove`. */
+function maxError(b: readonly number[], d: readonly number[], rf: readonly number[], u: number, stopAbove: number): number {
+  const out = new Float64Array(rf.length);
   let worst = 0;
   for (let k = 0; k < rf.length; k++) {
-    const e = Math.abs(r[k]! - rf[k]!) / u;
+    let v = b[k] ?? 0;
+    for (let n = 1; n < d.length && n <= k; n++) v -= d[n]! * out[k - n]!;
+    out[k] = v;
+    const e = Math.abs(v - rf[k]!) / u;
     if (!(e <= worst)) worst = Number.isFinite(e) ? e : Infinity;
-    if (worst === Infinity) break;
+    if (worst > stopAbove) break;
   }
   return worst;
 }
@@ -87,6 +91,7 @@ export function ctfCandidate(
   ratios: readonly number[],
   rf: ResponseFactors,
   uValue: number,
+  stopAbove = Infinity,
 ): CtfCandidate {
   const d = denominatorFromPoles(ratios);
   const X = numeratorByConvolution(rf.X, d);
@@ -100,9 +105,9 @@ export function ctfCandidate(
   const all = [...X, ...Y, ...Z, ...Phi];
   const maxAbsCoefficient = all.reduce((m, v) => Math.max(m, Math.abs(v)), 0);
   const resynthesisError = Math.max(
-    maxError(X, d, rf.X, uValue),
-    maxError(Y, d, rf.Y, uValue),
-    maxError(Z, d, rf.Z, uValue),
+    maxError(X, d, rf.X, uValue, stopAbove),
+    maxError(Y, d, rf.Y, uValue, stopAbove),
+    maxError(Z, d, rf.Z, uValue, stopAbove),
   );
   return {
     ctf: { X, Y, Z, Phi },
@@ -117,7 +122,7 @@ export function selectCtf(ratios: readonly number[], rf: ResponseFactors, uValue
   const usable = ratios.filter((q) => q > 1e-12);
   let best: CtfCandidate | undefined;
   for (let n = 0; n <= usable.length; n++) {
-    const candidate = ctfCandidate(usable.slice(0, n), rf, uValue);
+    const candidate = ctfCandidate(usable.slice(0, n), rf, uValue, best?.resynthesisError ?? Infinity);
     if (best === undefined || candidate.resynthesisError < best.resynthesisError) best = candidate;
     if (candidate.resynthesisError <= CTF_TARGET_ERROR) break;
     if (candidate.maxAbsCoefficient > 1e12) break;

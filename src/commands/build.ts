@@ -34,7 +34,15 @@ export async function runBuild(options: BuildOptions, io: CommandIo): Promise<nu
     );
     return 1;
   }
-  const computed = computeProject(loaded.model, loaded.inputRecords);
+  const outcome = computeProject(loaded.model, loaded.inputRecords);
+  if (!outcome.ok) {
+    for (const d of outcome.diagnostics) io.stderr(formatDiagnostic(d));
+    io.stderr(
+      `build stopped: ${outcome.diagnostics.length} construction(s) cannot be computed; nothing was written`,
+    );
+    return 1;
+  }
+  const computed = outcome.computed;
   const results: ResultsJson = {
     ...computed.results,
     warnings: loaded.diagnostics.filter((d) => d.severity !== "error").map((d) => ({

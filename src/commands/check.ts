@@ -1,4 +1,5 @@
-import { formatDiagnostic } from "../project/diagnostic.ts";
+import { formatDiagnostic, sortDiagnostics } from "../project/diagnostic.ts";
+import { computeProject } from "../results/buildResults.ts";
 import { formatPosition } from "../project/position.ts";
 import type { CommandIo } from "./build.ts";
 import { loadProject } from "./loadProject.ts";
@@ -12,10 +13,15 @@ export interface CheckOptions {
 /** Validates a project without writing anything; returns the exit code. */
 export async function runCheck(options: CheckOptions, io: CommandIo): Promise<number> {
   const loaded = await loadProject(options.project);
-  const errors = loaded.diagnostics.filter((d) => d.severity === "error").length;
-  const warnings = loaded.diagnostics.filter((d) => d.severity === "warning").length;
+  const computed = loaded.model === undefined ? undefined : computeProject(loaded.model, loaded.inputRecords);
+  const diagnostics = computed === undefined || computed.ok
+    ? loaded.diagnostics
+    : sortDiagnostics([...loaded.diagnostics, ...computed.diagnostics]);
+  const failedChecks = computed?.ok ? computed.computed.results.checks.filter((c) => !c.pass) : [];
+  const errors = diagnostics.filter((d) => d.severity === "error").length + failedChecks.length;
+  const warnings = diagnostics.filter((d) => d.severity === "warning").length;
   if (options.format === "json") {
-    const findings = loaded.diagnostics.map((d) => ({
+    const findings = diagnostics.map((d) => ({
       severity: d.severity,
       rule: d.rule,
       at: formatPosition(d.at),
@@ -27,7 +33,12 @@ export async function runCheck(options: CheckOptions, io: CommandIo): Promise<nu
     }));
     io.stdout(JSON.stringify({ schema: "fluxnote-check/1", findings }, null, 2));
   } else {
-    for (const d of loaded.diagnostics) io.stderr(formatDiagnostic(d));
+    for (const d of diagnostics) io.stderr(formatDiagnostic(d));
+    for (const c of failedChecks) {
+      io.stderr(
+        `${c.subject}: error: computed check ${c.id} failed: ${c.value} > ${c.limit} (${c.description})`,
+      );
+    }
     io.stdout(
       `${errors} error(s), ${warnings} warning(s)${
         loaded.model === undefined ? "" : `, ${loaded.model.constructions.length} constructions read`

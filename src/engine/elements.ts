@@ -65,6 +65,9 @@ function layerElement(layer: Layer, index: number): ConductionElement | Unresolv
   }
 }
 
+/** Smallest total resistance analysed, m^2 K/W (below it U overflows or loses all digits). */
+export const MIN_RESISTANCE = 1e-9;
+
 /** Validates a construction and builds its conduction chain for the given boundary. */
 export function conductionChain(
   input: ConstructionInput,
@@ -96,10 +99,10 @@ export function conductionChain(
     elements.push({ kind: "resistive", resistance: input.insideResistance });
   }
   const totalResistance = elements.reduce((sum, e) => sum + e.resistance, 0);
-  if (!(totalResistance > 0)) {
+  if (!(totalResistance >= MIN_RESISTANCE)) {
     return unresolvable(
       "zero-resistance",
-      `Cannot analyse construction ${boundary}: total thermal resistance is ${totalResistance} m^2 K/W`,
+      `Cannot analyse construction ${boundary}: total thermal resistance is ${totalResistance} m^2 K/W, expected at least ${MIN_RESISTANCE}`,
     );
   }
   return { kind: "chain", boundary, elements, totalResistance };

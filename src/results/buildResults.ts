@@ -1,35 +1,67 @@
 import { inputsHash } from "../archive/hash.ts";
-import { type SteadyState, steadyState } from "../engine/steady.ts";
+import {
+  analyseConstruction,
+  constructionChecksJson,
+  constructionDynamicJson,
+  type DynamicAnalysis,
+} from "../engine/mod.ts";
+import type { SteadyState } from "../engine/steady.ts";
+import { type Diagnostic, error } from "../project/diagnostic.ts";
 import type { Construction, Model } from "../project/model.ts";
 import { TOOL_VERSION } from "../version.ts";
-import type { ConstructionResults, InputFileRecord, LayerResult, ResultsJson } from "./types.ts";
+import type { CheckResult, ConstructionResults, InputFileRecord, LayerResult, ResultsJson } from "./types.ts";
 
 /** The computed results of a project, before rendering. */
 export interface ComputedProject {
   readonly results: ResultsJson;
   readonly steady: Readonly<Record<string, SteadyState>>;
+  readonly analyses: Readonly<Record<string, DynamicAnalysis>>;
 }
 
-/** Computes every construction's steady state and assembles results.json. */
-export function computeProject(model: Model, inputs: readonly InputFileRecord[]): ComputedProject {
+export type ComputeOutcome =
+  | { readonly ok: true; readonly computed: ComputedProject }
+  | { readonly ok: false; readonly diagnostics: readonly Diagnostic[] };
+
+/** Computes every construction (steady state and dynamic response) and assembles results.json. */
+export function computeProject(model: Model, inputs: readonly InputFileRecord[]): ComputeOutcome {
   const steady: Record<string, SteadyState> = {};
+  const analyses: Record<string, DynamicAnalysis> = {};
   const constructions: Record<string, ConstructionResults> = {};
+  const checks: CheckResult[] = [];
+  const problems: Diagnostic[] = [];
   for (const construction of model.constructions) {
-    const result = steadyState(construction);
-    steady[construction.id] = result;
-    constructions[construction.id] = constructionResults(construction, result);
+    const analysis = analyseConstruction(construction, construction.timestepS);
+    if (analysis.kind === "unresolvable") {
+      problems.push(
+        error(
+          construction.at,
+          `unresolvable-${analysis.reason}`,
+          `Cannot compute construction "${construction.id}": ${analysis.message}`,
+          "check the layers and surface resistances of this construction",
+        ),
+      );
+      continue;
+    }
+    analyses[construction.id] = analysis;
+    steady[construction.id] = analysis.steady;
+    constructions[construction.id] = {
+      ...constructionResults(construction, analysis.steady),
+      ...constructionDynamicJson(analysis),
+    };
+    checks.push(...constructionChecksJson(construction.id, analysis));
   }
+  if (problems.length > 0) return { ok: false, diagnostics: problems };
   const results: ResultsJson = {
     schema: "fluxnote-results/1",
     tool: { name: "fluxnote", version: TOOL_VERSION },
     inputs: { files: inputs, sha256: inputsHash(inputs) },
     constructions,
     scenarios: {},
-    checks: [],
+    checks,
     assumptions: model.assumptions.map((a) => ({ id: a.id, text: a.text, source: a.source, at: a.at })),
     warnings: [],
   };
-  return { results, steady };
+  return { ok: true, computed: { results, steady, analyses } };
 }
 
 function constructionResults(construction: Construction, steady: SteadyState): ConstructionResults {

@@ -14,7 +14,9 @@ export function dayOfYear(month: number, day: number): number {
   }
   const monthLength = DAYS_IN_MONTH_NON_LEAP[month - 1] ?? 0;
   if (!Number.isInteger(day) || day < 1 || day > monthLength) {
-    throw new RangeError(`Cannot compute day of year: day "${day}" is not in 1…${monthLength} for month ${month}`);
+    throw new RangeError(
+      `Cannot compute day of year: day "${day}" is not in 1…${monthLength} for month ${month}`,
+    );
   }
   let total = day;
   for (let m = 0; m < month - 1; m++) total += DAYS_IN_MONTH_NON_LEAP[m] ?? 0;

@@ -1,16 +1,20 @@
 import { type EngineCheck, engineCheck } from "./check.ts";
-import { CTF_MAX_COEFFICIENT, CTF_MAX_RESYNTHESIS_ERROR } from "./ctf.ts";
+import { CTF_MAX_COEFFICIENT, CTF_MAX_IDENTITY_ERROR, CTF_MAX_RESYNTHESIS_ERROR } from "./ctf.ts";
 import { transmissionDeterminantError } from "./determinantCheck.ts";
 import { type ConductionChain, conductionChain } from "./elements.ts";
-import { unresolvable, type Unresolvable } from "./engineError.ts";
+import { type Unresolvable, unresolvable } from "./engineError.ts";
 import { harmonicErrors } from "./harmonicCheck.ts";
-import { type Iso13786Characteristics, iso13786 } from "./iso13786.ts";
+import { iso13786, type Iso13786Characteristics } from "./iso13786.ts";
 import type { ConstructionInput } from "./layer.ts";
 import { foldPeriodic, periodicFromModes } from "./periodic.ts";
 import { pulseModes } from "./pulseModes.ts";
 import { responseFactors, sumRuleResidual } from "./responseFactors.ts";
 import { type RootAnalysis, rootAnalysis } from "./rootAnalysis.ts";
-import { STATE_SPACE_AGREEMENT_LIMIT, type StateSpaceAnalysis, stateSpaceAnalysis } from "./stateSpaceAnalysis.ts";
+import {
+  STATE_SPACE_AGREEMENT_LIMIT,
+  type StateSpaceAnalysis,
+  stateSpaceAnalysis,
+} from "./stateSpaceAnalysis.ts";
 import { type SteadyState, steadyState } from "./steady.ts";
 
 /** Options of the dynamic analysis. */
@@ -70,18 +74,30 @@ function rootChecks(root: RootAnalysis, suffix: string): EngineCheck[] {
     ...sumRuleChecks(root, suffix),
     engineCheck(
       `root-count${suffix}`,
-      `Poles found minus the exact oscillation count below β = ${root.poles.betaMax.toExponential(4)} 1/s (plus unresolved intervals)`,
+      `Poles found minus the exact oscillation count below β = ${
+        root.poles.betaMax.toExponential(4)
+      } 1/s (plus unresolved intervals)`,
       Math.abs(root.poles.bracketedCount - root.poles.exactCount) + root.poles.unresolvedIntervals,
       0,
     ),
-    engineCheck(`ctf-identity${suffix}`, "max |ΣCTF / (1 − ΣΦ) − U| / U over X, Y, Z", c.identityError, 1e-6),
+    engineCheck(
+      `ctf-identity${suffix}`,
+      "max |ΣCTF / (1 − ΣΦ) − U| / U over X, Y, Z",
+      c.identityError,
+      CTF_MAX_IDENTITY_ERROR,
+    ),
     engineCheck(
       `ctf-resynthesis${suffix}`,
       `Root CTF (${c.ctf.Phi.length} poles) long division versus response factors, max error / U`,
       c.resynthesisError,
       CTF_MAX_RESYNTHESIS_ERROR,
     ),
-    engineCheck(`ctf-coefficient-bound${suffix}`, "Largest |CTF coefficient|", c.maxAbsCoefficient, CTF_MAX_COEFFICIENT),
+    engineCheck(
+      `ctf-coefficient-bound${suffix}`,
+      "Largest |CTF coefficient|",
+      c.maxAbsCoefficient,
+      CTF_MAX_COEFFICIENT,
+    ),
   ];
 }
 
@@ -106,8 +122,18 @@ function stateSpaceChecks(ss: StateSpaceAnalysis): EngineCheck[] {
       c.resynthesisError,
       CTF_MAX_RESYNTHESIS_ERROR,
     ),
-    engineCheck("ctf-state-space-coefficient-bound", "Largest |state-space CTF coefficient|", c.maxAbsCoefficient, CTF_MAX_COEFFICIENT),
-    engineCheck("ctf-state-space-identity", "max |ΣCTF / (1 − ΣΦ) − U| / U (state space)", c.identityError, 1e-6),
+    engineCheck(
+      "ctf-state-space-coefficient-bound",
+      "Largest |state-space CTF coefficient|",
+      c.maxAbsCoefficient,
+      CTF_MAX_COEFFICIENT,
+    ),
+    engineCheck(
+      "ctf-state-space-identity",
+      "max |ΣCTF / (1 − ΣΦ) − U| / U (state space)",
+      c.identityError,
+      CTF_MAX_IDENTITY_ERROR,
+    ),
   ];
 }
 
@@ -143,7 +169,10 @@ export function analyseConstruction(
   options: AnalysisOptions = {},
 ): DynamicAnalysis | Unresolvable {
   if (!isValidTimestep(timestepS)) {
-    return unresolvable("invalid-timestep", `Cannot analyse at timestep ${timestepS} s: expected whole seconds dividing 3600 s, at least 60 s`);
+    return unresolvable(
+      "invalid-timestep",
+      `Cannot analyse at timestep ${timestepS} s: expected whole seconds dividing 3600 s, at least 60 s`,
+    );
   }
   const air = conductionChain(input, "air-to-air");
   if (air.kind === "unresolvable") return air;
@@ -199,7 +228,7 @@ function buildChecks(
     ),
     engineCheck(
       "iso13786-harmonic-amplitude",
-      "|H₁| of hourly periodic Y versus |Y(iω)| sinc²(π/24) (+ aliases 24m+1), relative",
+      "|H₁| of hourly periodic Y versus |Y(iω)| sinc²(π/24) (+ aliases 24m+1), relative (floor 1e-6 U)",
       harmonic.amplitude,
       1e-3,
     ),

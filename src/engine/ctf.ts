@@ -24,6 +24,8 @@ export interface CtfCandidate {
 export const CTF_MAX_COEFFICIENT = 1e3;
 /** Largest accepted resynthesis error, relative to U. */
 export const CTF_MAX_RESYNTHESIS_ERROR = 1e-6;
+/** Largest accepted |ΣCTF/(1 − ΣΦ) − U| / U. */
+export const CTF_MAX_IDENTITY_ERROR = 1e-6;
 /** Resynthesis error at which the pole search stops adding poles, relative to U. */
 const CTF_TARGET_ERROR = 1e-9;
 
@@ -68,7 +70,13 @@ export function resynthesise(b: readonly number[], d: readonly number[], terms: 
 }
 
 /** max_k |long division − RF_k| / U, stopping early once it exceeds `stopAbove`. */
-function maxError(b: readonly number[], d: readonly number[], rf: readonly number[], u: number, stopAbove: number): number {
+function maxError(
+  b: readonly number[],
+  d: readonly number[],
+  rf: readonly number[],
+  u: number,
+  stopAbove: number,
+): number {
   const out = new Float64Array(rf.length);
   let worst = 0;
   for (let k = 0; k < rf.length; k++) {
@@ -104,11 +112,14 @@ export function ctfCandidate(
   );
   const all = [...X, ...Y, ...Z, ...Phi];
   const maxAbsCoefficient = all.reduce((m, v) => Math.max(m, Math.abs(v)), 0);
-  const resynthesisError = Math.max(
-    maxError(X, d, rf.X, uValue, stopAbove),
-    maxError(Y, d, rf.Y, uValue, stopAbove),
-    maxError(Z, d, rf.Z, uValue, stopAbove),
-  );
+  // A candidate over the coefficient bound is rejected whatever its resynthesis: skip the long division.
+  const resynthesisError = maxAbsCoefficient > CTF_MAX_COEFFICIENT && stopAbove !== Infinity
+    ? Infinity
+    : Math.max(
+      maxError(X, d, rf.X, uValue, stopAbove),
+      maxError(Y, d, rf.Y, uValue, stopAbove),
+      maxError(Z, d, rf.Z, uValue, stopAbove),
+    );
   return {
     ctf: { X, Y, Z, Phi },
     maxAbsCoefficient,
@@ -117,21 +128,38 @@ export function ctfCandidate(
   };
 }
 
-/** Smallest pole set (slowest first) whose CTF resynthesises the response factors; the best one if none does. */
+/** Worst of the three acceptance ratios (≤ 1 means accepted). */
+function score(c: CtfCandidate): number {
+  return Math.max(
+    c.resynthesisError / CTF_MAX_RESYNTHESIS_ERROR,
+    c.identityError / CTF_MAX_IDENTITY_ERROR,
+    c.maxAbsCoefficient / CTF_MAX_COEFFICIENT,
+  );
+}
+
+/**
+ * Smallest pole set (slowest first) whose CTF resynthesises the response factors to 1e-9 U with the identity to
+ * 1e-8; otherwise the candidate with the best acceptance score.
+ */
 export function selectCtf(ratios: readonly number[], rf: ResponseFactors, uValue: number): CtfCandidate {
   const usable = ratios.filter((q) => q > 1e-12);
   let best: CtfCandidate | undefined;
   for (let n = 0; n <= usable.length; n++) {
-    const candidate = ctfCandidate(usable.slice(0, n), rf, uValue, best?.resynthesisError ?? Infinity);
-    if (best === undefined || candidate.resynthesisError < best.resynthesisError) best = candidate;
-    if (candidate.resynthesisError <= CTF_TARGET_ERROR) break;
+    const stopAbove = Math.max(best?.resynthesisError ?? Infinity, CTF_MAX_RESYNTHESIS_ERROR);
+    const candidate = ctfCandidate(usable.slice(0, n), rf, uValue, stopAbove);
+    if (best === undefined || score(candidate) < score(best)) best = candidate;
+    if (candidate.resynthesisError <= CTF_TARGET_ERROR && candidate.identityError <= 10 * CTF_TARGET_ERROR) {
+      break;
+    }
+    if (candidate.maxAbsCoefficient > CTF_MAX_COEFFICIENT && best.maxAbsCoefficient <= CTF_MAX_COEFFICIENT) {
+      break;
+    }
     if (candidate.maxAbsCoefficient > 1e12) break;
   }
   return best!;
 }
 
-/** Whether a CTF candidate passes the coefficient-size and resynthesis limits. */
+/** Whether a CTF candidate passes the coefficient-size, resynthesis and identity limits. */
 export function ctfAccepted(candidate: CtfCandidate): boolean {
-  return candidate.maxAbsCoefficient <= CTF_MAX_COEFFICIENT &&
-    candidate.resynthesisError <= CTF_MAX_RESYNTHESIS_ERROR;
+  return score(candidate) <= 1;
 }

@@ -14,7 +14,12 @@ export interface PeriodicQuantity {
 export interface Iso13786Characteristics {
   readonly periodS: number;
   /** Heat transfer matrix in ISO form [[Z11, Z12], [Z21, Z22]] (side 1 = inside). */
-  readonly heatTransferMatrix: { readonly z11: Complex; readonly z12: Complex; readonly z21: Complex; readonly z22: Complex } | null;
+  readonly heatTransferMatrix: {
+    readonly z11: Complex;
+    readonly z12: Complex;
+    readonly z21: Complex;
+    readonly z22: Complex;
+  } | null;
   /** Y12 = −1/Z12; its time shift is the unwrapped one (−timeLag_h). */
   readonly periodicTransmittance: PeriodicQuantity;
   /** Principal-value ISO time shift of Y12 in (−P/2, P/2], h, as the standard's arg() would give it. */
@@ -34,7 +39,10 @@ export interface Iso13786Characteristics {
 }
 
 /** X(iω), Y(iω), Z(iω) of a chain: outside admittance D/B, cross 1/B, inside admittance A/B. */
-export function frequencyResponse(chain: ConductionChain, omega: number): { x: Complex; y: Complex; z: Complex } {
+export function frequencyResponse(
+  chain: ConductionChain,
+  omega: number,
+): { x: Complex; y: Complex; z: Complex } {
   const { scaled, logScale } = scaledTransmission(chain, { re: 0, im: omega });
   return {
     x: cDiv(scaled.d, scaled.b),
@@ -89,9 +97,7 @@ export function iso13786(chain: ConductionChain, periodS = 86400): Iso13786Chara
   const a = full(scaled.a), b = full(scaled.b), c = full(scaled.c), d = full(scaled.d);
   return {
     periodS,
-    heatTransferMatrix: a && b && c && d
-      ? { z11: a, z12: cScale(b, -1), z21: cScale(c, -1), z22: d }
-      : null,
+    heatTransferMatrix: a && b && c && d ? { z11: a, z12: cScale(b, -1), z21: cScale(c, -1), z22: d } : null,
     periodicTransmittance: { amplitude: cAbs(y12), timeShift_h: -timeLag_h },
     periodicTransmittanceWrappedShift_h: wrapShiftH(cArg(y12), periodS),
     admittanceInside: { amplitude: cAbs(y11), timeShift_h: wrapShiftH(cArg(y11), periodS) },

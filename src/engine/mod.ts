@@ -8,13 +8,17 @@ export { type SteadyState, steadyState } from "./steady.ts";
 export type { Unresolvable, UnresolvableReason } from "./engineError.ts";
 export type { EngineCheck } from "./check.ts";
 export {
-  type AnalysisOptions,
   analyseConstruction,
+  type AnalysisOptions,
   type DynamicAnalysis,
   isValidTimestep,
   type PeriodicFactors,
 } from "./analyse.ts";
-export { constructionChecksJson, type ConstructionDynamicJson, constructionDynamicJson } from "./resultsJson.ts";
+export {
+  constructionChecksJson,
+  type ConstructionDynamicJson,
+  constructionDynamicJson,
+} from "./resultsJson.ts";
 export type { RootAnalysis } from "./rootAnalysis.ts";
 export type { StateSpaceAnalysis } from "./stateSpaceAnalysis.ts";
 export type { ResponseFactors } from "./responseFactors.ts";

@@ -35,7 +35,11 @@ export interface ConstructionDynamicJson {
   readonly responseFactors: ResponseFactorsJson;
   readonly ctf: CtfJson | null;
   readonly ctfStateSpace: (CtfJson & { readonly cellsPerLayer: readonly number[] }) | null;
-  readonly surfaceToSurface: { readonly U: number; readonly responseFactors: ResponseFactorsJson; readonly ctf: CtfJson | null };
+  readonly surfaceToSurface: {
+    readonly U: number;
+    readonly responseFactors: ResponseFactorsJson;
+    readonly ctf: CtfJson | null;
+  };
   readonly periodic: readonly number[];
   readonly periodicX: readonly number[];
   readonly periodicZ: readonly number[];

@@ -2,7 +2,7 @@ import { ctfAccepted, type CtfCandidate, selectCtf } from "./ctf.ts";
 import type { ConductionChain } from "./elements.ts";
 import { type PulseModes, pulseModes } from "./pulseModes.ts";
 import { type RampResponse, rampResponse } from "./residues.ts";
-import { responseFactors, type ResponseFactors } from "./responseFactors.ts";
+import { type ResponseFactors, responseFactors } from "./responseFactors.ts";
 import { findPoles, type PoleSet } from "./roots.ts";
 
 /** Everything the root method gives for one chain at one timestep. */
@@ -28,7 +28,10 @@ const POLE_EXPONENT = 40;
 const NEGLECTED_POLE_LIMIT = 1e-10;
 
 /** Poles up to β Δ = 40, extended until the first neglected pole's term is below 1e-10 U. */
-export function polesAndRamp(chain: ConductionChain, timestepS: number): { poles: PoleSet; ramp: RampResponse } {
+export function polesAndRamp(
+  chain: ConductionChain,
+  timestepS: number,
+): { poles: PoleSet; ramp: RampResponse } {
   let betaMax = POLE_EXPONENT / timestepS;
   for (let attempt = 0;; attempt++) {
     const poles = findPoles(chain, betaMax);

@@ -50,7 +50,10 @@ export function stateSpaceAnalysis(
   for (let attempt = 0;; attempt++) {
     const widths = gradedCellWidths(chain, timestepS, refinement);
     const cells = widths.reduce((s, w) => s + w.length, 0);
-    const terms = Math.max(3, Math.min(root.termCount, Math.floor(MAX_PROPAGATION_WORK / Math.max(1, cells * cells))));
+    const terms = Math.max(
+      3,
+      Math.min(root.termCount, Math.floor(MAX_PROPAGATION_WORK / Math.max(1, cells * cells))),
+    );
     const response = stateSpaceResponse(chain, widths, timestepS, terms);
     const agreement = agreementOf(response.responseFactors, root, uValue);
     result = { widths, response, agreement };

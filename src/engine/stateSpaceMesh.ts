@@ -9,7 +9,9 @@ import type { ConductionChain } from "./elements.ts";
 export function gradedCellWidths(chain: ConductionChain, timestepS: number, refinement: number): number[][] {
   const a = 0.08 * refinement;
   const b = 0.15 * refinement;
-  const depths = chain.elements.map((e) => (e.kind === "massive" ? e.thicknessM / Math.sqrt(e.diffusivity * timestepS) : 0));
+  const depths = chain.elements.map((
+    e,
+  ) => (e.kind === "massive" ? e.thicknessM / Math.sqrt(e.diffusivity * timestepS) : 0));
   const total = depths.reduce((s, v) => s + v, 0);
   const half = total / 2;
   // Cell-count coordinate N(τ) = ∫ dτ / size(τ) and its inverse.
@@ -26,8 +28,10 @@ export function gradedCellWidths(chain: ConductionChain, timestepS: number, refi
     const nStart = count(start);
     const span = count(end) - nStart;
     const cells = Math.max(1, Math.ceil(span - 1e-9));
-    const bounds = Array.from({ length: cells + 1 }, (_, k) =>
-      k === 0 ? start : k === cells ? end : countInverse(nStart + (span * k) / cells));
+    const bounds = Array.from(
+      { length: cells + 1 },
+      (_, k) => k === 0 ? start : k === cells ? end : countInverse(nStart + (span * k) / cells),
+    );
     const widths = bounds.slice(1).map((t, k) => (t - bounds[k]!) / depth);
     start = end;
     return widths;

@@ -48,7 +48,10 @@ export function finiteVolumeModel(
       }
     }
   }
-  const cells = chain.elements.map((e, i) => (e.kind === "massive" ? Math.max(1, cellWidths[i]?.length ?? 1) : 0));
+  const cells = chain.elements.map((
+    e,
+    i,
+  ) => (e.kind === "massive" ? Math.max(1, cellWidths[i]?.length ?? 1) : 0));
   return {
     cellsPerElement: cells,
     capacities,

@@ -1,7 +1,12 @@
 import type { ConductionChain } from "./elements.ts";
 import type { ResponseFactors } from "./responseFactors.ts";
 import { sumRuleResidual } from "./responseFactors.ts";
-import { type DiscreteModel, discretise, type FiniteVolumeModel, finiteVolumeModel } from "./stateSpaceModel.ts";
+import {
+  type DiscreteModel,
+  discretise,
+  type FiniteVolumeModel,
+  finiteVolumeModel,
+} from "./stateSpaceModel.ts";
 import { smallestEigenvalues } from "./tridiagonalEigen.ts";
 
 /** Response factors of the discrete state-space model, with the reciprocity residual of its cross terms. */

@@ -12,7 +12,11 @@ export function tridiagonalCountBelow(diag: readonly number[], off: readonly num
 }
 
 /** Eigenvalues below `upper` of a symmetric positive definite tridiagonal matrix, ascending, by bisection. */
-export function smallestEigenvalues(diag: readonly number[], off: readonly number[], upper: number): number[] {
+export function smallestEigenvalues(
+  diag: readonly number[],
+  off: readonly number[],
+  upper: number,
+): number[] {
   const m = tridiagonalCountBelow(diag, off, upper);
   const out: number[] = [];
   for (let k = 0; k < m; k++) {

@@ -13,7 +13,7 @@ function unresolved(block: BlockSegment): Trusted {
   return html`
     <p
       class="fail">No computed output: this ${block
-        .blockKind} block did not resolve (see the findings in section 3).</p>
+        .blockKind} block did not resolve (see the findings in section 4).</p>
   `;
 }
 
@@ -71,7 +71,8 @@ function constructionOutput(block: BlockSegment, ctx: RenderContext): Trusted {
   const results = Object.hasOwn(ctx.input.results.constructions, construction.id)
     ? ctx.input.results.constructions[construction.id]
     : undefined;
-  return renderConstructionOutput(construction, results, ctx.input.results.checks);
+  const anchor = ctx.constructionAnchors.get(construction.id) ?? "c-construction";
+  return renderConstructionOutput(construction, results, ctx.input.results.checks, anchor);
 }
 
 function outputFor(block: BlockSegment, ctx: RenderContext): Trusted {

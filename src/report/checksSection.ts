@@ -1,4 +1,4 @@
-/** Section 3: the automated checks with value, limit and result, then the review findings. */
+/** Section 4: the automated checks with value, limit and result, then the review findings. */
 import { formatPosition } from "../project/position.ts";
 import { sortDiagnostics } from "../project/diagnostic.ts";
 import { formatSig } from "./format.ts";
@@ -71,12 +71,12 @@ function findingsTable(ctx: RenderContext): Trusted {
   `;
 }
 
-/** Renders section 3. */
+/** Renders section 4. */
 export function renderChecksSection(ctx: RenderContext): Trusted {
-  return html`<section id="s-3"><h2>3 Checks and findings</h2>
-<h3 id="s-3-1">3.1 Automated checks</h3>
+  return html`<section id="s-4"><h2>4 Checks and findings</h2>
+<h3 id="s-4-1">4.1 Automated checks</h3>
 ${checksTable(ctx)}
-<h3 id="s-3-2">3.2 Review findings on the inputs</h3>
+<h3 id="s-4-2">4.2 Review findings on the inputs</h3>
 ${findingsTable(ctx)}
 </section>`;
 }

@@ -3,6 +3,7 @@ import type { Construction, ResolvedLayer } from "../project/model.ts";
 import type { CheckResult, ConstructionResults } from "../results/types.ts";
 import { formatSig, formatTrim } from "./format.ts";
 import { html, type Trusted } from "./html.ts";
+import { renderDynamicResponse } from "./dynamicOutput.ts";
 import { renderSectionSvg } from "./sectionSvg.ts";
 
 const DASH = "—";
@@ -64,7 +65,7 @@ function totalRows(results: ConstructionResults | undefined): Trusted {
   if (results === undefined) {
     return html`
       <tr class="total">
-        <td colspan="8" class="fail">Not computed: no results for this construction (see section 3).</td>
+        <td colspan="8" class="fail">Not computed: no results for this construction (see section 4).</td>
       </tr>
     `;
   }
@@ -86,23 +87,32 @@ function totalRows(results: ConstructionResults | undefined): Trusted {
   `;
 }
 
-/** Lists the automated checks on one subject with PASS/FAIL beside their values. */
+/** Tables the automated checks on one subject: id, what is checked, value, limit and PASS/FAIL. */
 export function subjectChecks(checks: readonly CheckResult[], subject: string): Trusted {
   const mine = checks.filter((c) => c.subject === subject);
   if (mine.length === 0) return html``;
-  const items = mine.map((c) =>
-    html`<li class="${c.pass ? "pass" : "fail"}">${
-      c.pass ? "PASS" : "FAIL"
-    }: ${c.id} (${c.description}): value ${formatSig(c.value, 3)}, limit ${formatSig(c.limit, 3)}</li>`
+  const rows = mine.map((c) =>
+    html`<tr class="${c.pass ? "pass" : "fail"}"><td class="result">${c.pass ? "PASS" : "FAIL"}</td><td><code>${c.id}</code></td><td>${c.description}</td><td class="num">${
+      formatSig(c.value, 3)
+    }</td><td class="num">${formatSig(c.limit, 3)}</td></tr>`
   );
-  return html`<ul class="subject-checks">${items}</ul>`;
+  return html`
+    <table class="subject-checks">
+      <thead><tr><th>Result</th><th>Check</th><th>What is checked</th><th>Value</th><th>Limit</th></tr></thead>
+      <tbody>${rows}</tbody>
+    </table>
+  `;
 }
 
-/** Renders the output of a construction block, reading R and U from its results entry. */
+/**
+ * Renders the output of a construction block, reading R, U and the dynamic response from its results
+ * entry; `anchor` is the block's fragment id, used to keep the plots' ids unique.
+ */
 export function renderConstructionOutput(
   construction: Construction,
   results: ConstructionResults | undefined,
   checks: readonly CheckResult[],
+  anchor = "c-construction",
 ): Trusted {
   const countMismatch = results !== undefined && results.steady.layers.length !== construction.layers.length
     ? html`
@@ -150,8 +160,16 @@ export function renderConstructionOutput(
     </table>
     ${countMismatch}
     ${uLine}
-    ${subjectChecks(checks, `construction:${construction.id}`)}
     <figure>${renderSectionSvg(construction)}<figcaption>Section of ${construction
       .id}, drawn from outside (left) to inside (right); numbers refer to the table above.</figcaption></figure>
+    ${
+    renderDynamicResponse(
+      construction,
+      results,
+      checks,
+      anchor,
+      subjectChecks(checks, `construction:${construction.id}`),
+    )
+  }
   `;
 }

@@ -37,17 +37,17 @@ export function checkSummary(input: PackageInput): Trusted {
   const checks = input.results.checks;
   const failed = checks.filter((c) => !c.pass);
   if (checks.length === 0) {
-    return html`<p class="check-summary">Automated checks: none apply yet (see section 3).</p>`;
+    return html`<p class="check-summary">Automated checks: none apply yet (see section 4).</p>`;
   }
   if (failed.length === 0) {
     return html`<p class="check-summary">Automated checks: all ${
       String(checks.length)
-    } passed (see section 3).</p>`;
+    } passed (see section 4).</p>`;
   }
   const names = failed.map((c) => html`<li>${c.id} on ${c.subject}</li>`);
   return html`
     <div class="check-summary has-failures">
-      <p>Automated checks: ${String(failed.length)} of ${String(checks.length)} FAILED (see section 3).</p>
+      <p>Automated checks: ${String(failed.length)} of ${String(checks.length)} FAILED (see section 4).</p>
       <ul>${names}</ul>
     </div>
   `;
@@ -59,7 +59,7 @@ function findingSummary(input: PackageInput): Trusted {
     return `${n} ${noun}${n === 1 ? "" : "s"}`;
   };
   const counts = `${count("error", "error")}, ${count("warning", "warning")}, ${count("note", "note")}`;
-  return html`<p class="check-summary">Review findings: ${counts} (see section 3).</p>`;
+  return html`<p class="check-summary">Review findings: ${counts} (see section 4).</p>`;
 }
 
 function signOffRow(role: string, name: string | undefined): Trusted {

@@ -43,6 +43,26 @@ code { font-family: ui-monospace, "DejaVu Sans Mono", Consolas, monospace; font-
 .embedded-file { max-height: 30mm; overflow: auto; font-size: 7pt; }
 .end-marker { text-align: center; font-weight: bold; border-top: 2px solid var(--ink); margin-top: 10mm; padding-top: 3mm; }
 nav.contents ol { list-style: none; padding-left: 0; }
+.dynamic-response { margin-top: 5mm; }
+.dynamic-response h4 { font-size: 11pt; margin: 5mm 0 1mm; border-top: 1px solid var(--rule); padding-top: 2mm; }
+.dynamic-response h5 { font-size: 10pt; margin: 4mm 0 1mm; }
+.dynamic-response table { font-size: 8.5pt; }
+.dynamic-response th, .dynamic-response td { padding: 0.6mm 1.5mm; }
+tr.group-start td { border-top: 2px solid var(--ink); }
+.side-by-side { display: flex; flex-wrap: wrap; gap: 0 5mm; align-items: flex-start; }
+.side-by-side > * { flex: 1 1 70mm; }
+.ctf-table { width: 100%; table-layout: fixed; }
+.ctf-table th:first-child, .ctf-table td:first-child { width: 8mm; }
+table.subject-checks tr.fail td { color: var(--fail); font-weight: bold; }
+table.subject-checks td.result { font-weight: bold; }
+table.subject-checks tr.pass td.result { color: var(--pass); }
+.ctf-rejected { border: 1px solid var(--fail); padding: 1mm 2mm; margin: 3mm 0; }
+.equation { font-family: "Cambria Math", "STIX Two Math", Georgia, serif; margin: 1.5mm 0 1.5mm 6mm; }
+figure.plot-figure svg { display: block; width: 100%; max-width: 160mm; height: auto; }
+figure.plot-figure svg text { white-space: pre; }
+.key { display: inline-block; width: 7mm; height: 0; vertical-align: middle; border-top: 2px solid #111; }
+.key-x { border-top: 2px dashed #1f5fa8; }
+.key-z { border-top: 2px dotted #b5470f; }
 @media print {
   html { background: none; }
   body { max-width: none; margin: 0; padding: 0; font-size: 10pt; }

@@ -1,12 +1,14 @@
-/** Sections whose text the tool states itself: scope and conventions (1) and cautions (7). */
+/** Sections whose text the tool states itself: scope and conventions (1) and cautions (8). */
 import { html, raw, type Trusted } from "./html.ts";
 
 /** Section 1: scope, exclusions and the sign and time conventions. */
 export function renderScopeSection(): Trusted {
   return html`<section id="s-1"><h2>1 Scope and exclusions</h2>
 ${
-    raw(`<p>This package computes steady-state thermal resistance and transmittance of plane constructions
-from the layers given in the input. The calculation rests on these simplifications:</p>
+    raw(`<p>This package computes the steady-state thermal resistance and transmittance of plane constructions from the
+layers given in the input, and their dynamic response: response factors, conduction transfer functions, periodic
+response factors, the conduction time series and the ISO 13786 characteristics (method in section 3). The calculation
+rests on these simplifications:</p>
 <ul>
 <li>one-dimensional heat conduction through plane, parallel layers;</li>
 <li>constant material properties (no dependence on temperature or moisture content);</li>
@@ -25,16 +27,17 @@ from the layers given in the input. The calculation rests on these simplificatio
 <tr><td>U</td><td>Thermal transmittance air to air, W/(m²·K), U = 1/R with R including R_se and R_si.</td></tr>
 <tr><td>λ, ρ, c</td><td>Thermal conductivity W/(m·K), density kg/m³, specific heat capacity J/(kg·K).</td></tr>
 <tr><td>Areal heat capacity</td><td>ρ·c·d of a layer, kJ/(m²·K).</td></tr>
-<tr><td>Numbers</td><td>Computed values are printed to three significant figures; inputs as given (up to four).</td></tr>
+<tr><td>Numbers</td><td>Computed values are printed to three significant figures, response factors and periodic factors to four, CTF coefficients to six, sums checked against U to six; inputs as given (up to four). results.json (Appendix B) holds full precision.</td></tr>
+<tr><td>Time shift</td><td>ISO 13786 sign: negative = lag, positive = lead; the time lag is unwrapped and may exceed 12 h.</td></tr>
 </tbody>
 </table>`)
   }
 </section>`;
 }
 
-/** Section 7: cautions on the use of the results. */
+/** Section 8: cautions on the use of the results. */
 export function renderCautionsSection(): Trusted {
-  return html`<section id="s-7"><h2>7 Cautions</h2>
+  return html`<section id="s-8"><h2>8 Cautions</h2>
 ${
     raw(`<ul>
 <li>These results support professional judgment; they do not replace it. The applicable local codes and the

@@ -5,6 +5,7 @@ import { renderChecksSection } from "./checksSection.ts";
 import { renderCover, STATUS_LABEL, watermarkFor } from "./cover.ts";
 import { packageCss } from "./css.ts";
 import { renderCautionsSection, renderScopeSection } from "./fixedSections.ts";
+import { renderMethodSection } from "./methodSection.ts";
 import { html, type Trusted } from "./html.ts";
 import { makeRenderContext, type PackageInput, type RenderContext } from "./packageInput.ts";
 import { renderReproducibilitySection, renderRevisionSection } from "./recordSections.ts";
@@ -23,13 +24,14 @@ export const PACKAGE_CSP = "default-src 'none'; img-src data:; style-src 'unsafe
 const CONTENTS: readonly (readonly [string, string])[] = [
   ["s-1", "1 Scope and exclusions"],
   ["s-2", "2 Calculation"],
-  ["s-3", "3 Checks and findings"],
-  ["s-4", "4 Assumptions register"],
-  ["s-5", "5 Materials and their sources"],
-  ["s-6", "6 Sources"],
-  ["s-7", "7 Cautions"],
-  ["s-8", "8 Revision history"],
-  ["s-9", "9 Reproducibility"],
+  ["s-3", "3 Method statement"],
+  ["s-4", "4 Checks and findings"],
+  ["s-5", "5 Assumptions register"],
+  ["s-6", "6 Materials and their sources"],
+  ["s-7", "7 Sources"],
+  ["s-8", "8 Cautions"],
+  ["s-9", "9 Revision history"],
+  ["s-10", "10 Reproducibility"],
   ["s-a", "Appendix A Embedded inputs"],
   ["s-b", "Appendix B Results (results.json)"],
 ];
@@ -79,6 +81,7 @@ export function renderPackage(input: PackageInput): string {
     <main>
     ${renderScopeSection()}
     ${renderCalculationSection(ctx)}
+    ${renderMethodSection(ctx)}
     ${renderChecksSection(ctx)}
     ${renderAssumptionsSection(ctx)}
     ${renderMaterialsSection(ctx)}

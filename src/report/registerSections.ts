@@ -1,10 +1,10 @@
-/** Sections 4 to 6: the assumptions register, the materials used with their sources, and the sources. */
+/** Sections 5 to 7: the assumptions register, the materials used with their sources, and the sources. */
 import type { MaterialDef } from "../project/model.ts";
 import { html, type Trusted } from "./html.ts";
 import { MATERIAL_TABLE_HEAD, materialTableRow } from "./materialRows.ts";
 import type { RenderContext } from "./packageInput.ts";
 
-/** Renders section 4, one row per assumption. */
+/** Renders section 5, one row per assumption. */
 export function renderAssumptionsSection(ctx: RenderContext): Trusted {
   const list = ctx.input.model.assumptions;
   const body = list.length === 0 ? html`<p>No assumptions were recorded.</p>` : html`
@@ -29,7 +29,7 @@ export function renderAssumptionsSection(ctx: RenderContext): Trusted {
       )}</tbody>
     </table>
   `;
-  return html`<section id="s-4"><h2>4 Assumptions register</h2>
+  return html`<section id="s-5"><h2>5 Assumptions register</h2>
 <p>Every value the tool filled in or chose, with its basis and the input line it applies to.</p>
 ${body}
 </section>`;
@@ -47,7 +47,7 @@ export function usedMaterials(ctx: RenderContext): MaterialDef[] {
   return out;
 }
 
-/** Renders section 5: each material used, with properties, source and origin. */
+/** Renders section 6: each material used, with properties, source and origin. */
 export function renderMaterialsSection(ctx: RenderContext): Trusted {
   const used = usedMaterials(ctx);
   const unused = ctx.input.model.materials.filter((m) => m.origin === "project" && !used.includes(m));
@@ -59,14 +59,14 @@ export function renderMaterialsSection(ctx: RenderContext): Trusted {
     : html`<p class="muted">Defined in the project but not used by any construction: ${
       unused.map((m) => m.id).join(", ")
     }.</p>`;
-  return html`<section id="s-5"><h2>5 Materials and their sources</h2>
+  return html`<section id="s-6"><h2>6 Materials and their sources</h2>
 <p>Layers given inline (without a material id) show their values in the layer tables of section 2.</p>
 ${table}
 ${unusedNote}
 </section>`;
 }
 
-/** Renders section 6: the standards the tool applied and the distinct material sources. */
+/** Renders section 7: the standards the tool applied and the distinct material sources. */
 export function renderSourcesSection(ctx: RenderContext): Trusted {
   const sources: string[] = [];
   for (const m of usedMaterials(ctx)) {
@@ -80,12 +80,23 @@ export function renderSourcesSection(ctx: RenderContext): Trusted {
   const list = sources.length === 0
     ? html`<p class="fail">No material source is cited in the inputs.</p>`
     : html`<ol>${sources.map((s) => html`<li>${s}</li>`)}</ol>`;
-  return html`<section id="s-6"><h2>6 Sources</h2>
-<h3 id="s-6-1">6.1 Standards and methods applied by the tool</h3>
+  return html`<section id="s-7"><h2>7 Sources</h2>
+<h3 id="s-7-1">7.1 Standards and methods applied by the tool</h3>
 <ul>
 <li>ISO 6946:2017, Building components and building elements: Thermal resistance and thermal transmittance: calculation methods. Used for the thermal resistance of homogeneous layers (R = d/λ), the default surface resistances by direction of heat flow, and the total resistance and U-value.</li>
+<li>ISO 13786:2017, Thermal performance of building components: Dynamic thermal characteristics: Calculation methods. Used for the heat transfer matrix at 24 h and the periodic thermal transmittance, decrement factor, time shifts, admittances and areal heat capacities (3.8).</li>
+<li>Pipes, L.A. (1957). Matrix analysis of heat transfer problems. Journal of the Franklin Institute 263. Transmission matrices of layers (3.2).</li>
+<li>Stephenson, D.G., Mitalas, G.P. (1967). Cooling load calculations by thermal response factor method. ASHRAE Transactions 73(1). Response factors (3.4).</li>
+<li>Kusuda, T. (1969). Thermal response factors for multi-layer structures of various heat conduction systems. ASHRAE Transactions 75(1). Response factors of multilayer constructions (3.4).</li>
+<li>Stephenson, D.G., Mitalas, G.P. (1971). Calculation of heat conduction transfer functions for multi-layer slabs. ASHRAE Transactions 77(2). Poles, residues and CTF by the z-transform (3.3 to 3.5).</li>
+<li>Hittle, D.C. (1981). Calculating building heating and cooling loads using the frequency response of multilayered slabs. US Army CERL Technical Manuscript E-169. Poles, residues and response factors (3.3, 3.4).</li>
+<li>Seem, J.E. (1987). Modeling of heat transfer in buildings. PhD thesis, University of Wisconsin–Madison. State-space CTF (3.6).</li>
+<li>Ouyang, K., Haghighat, F. (1991). A procedure for calculating thermal response factors of multi-layer walls: state space method. Building and Environment 26. State-space response factors (3.6).</li>
+<li>Spitler, J.D., Fisher, D.E., Pedersen, C.O. (1997). The radiant time series cooling load calculation procedure. ASHRAE Transactions 103(2). Conduction time series (3.7).</li>
+<li>Spitler, J.D., Fisher, D.E. (1999). Development of periodic response factors for use with the radiant time series method. ASHRAE Transactions 105(2). Periodic response factors (3.7).</li>
+<li>ASHRAE Handbook—Fundamentals, chapter on nonresidential cooling and heating load calculations. Periodic response factors and conduction time series (3.7).</li>
 </ul>
-<h3 id="s-6-2">6.2 Material data sources cited in the inputs</h3>
+<h3 id="s-7-2">7.2 Material data sources cited in the inputs</h3>
 ${list}
 </section>`;
 }

@@ -1,5 +1,10 @@
 import assert from "node:assert/strict";
-import { analyseConstruction, constructionDynamicJson, type DynamicAnalysis, modalConvolve } from "../../src/engine/mod.ts";
+import {
+  analyseConstruction,
+  constructionDynamicJson,
+  type DynamicAnalysis,
+  modalConvolve,
+} from "../../src/engine/mod.ts";
 import { denominatorFromPoles, resynthesise } from "../../src/engine/ctf.ts";
 import type { ConstructionInput } from "../../src/engine/layer.ts";
 import { assertClose, HEAVY_WALL, massive, resistive } from "./walls.ts";
@@ -44,7 +49,9 @@ Deno.test("ctf heavy wall: identity ΣY/(1 − ΣΦ) = U and resynthesis of the 
     for (const candidate of [a.airToAir.ctfCandidate, a.stateSpace!.ctfCandidate]) {
       const { X, Y, Z, Phi } = candidate.ctf;
       const sd = 1 - Phi.reduce((s, v) => s + v, 0);
-      for (const num of [X, Y, Z]) assertClose(num.reduce((s, v) => s + v, 0) / sd / u, 1, 1e-6, "ΣCTF/(1−ΣΦ)/U");
+      for (const num of [X, Y, Z]) {
+        assertClose(num.reduce((s, v) => s + v, 0) / sd / u, 1, 1e-6, "ΣCTF/(1−ΣΦ)/U");
+      }
     }
     const rf = a.airToAir.responseFactors;
     const root = a.airToAir.ctfCandidate.ctf;
@@ -61,7 +68,11 @@ Deno.test("ctf heavy wall: identity ΣY/(1 − ΣΦ) = U and resynthesis of the 
 Deno.test("ctf thick light insulation at 15 min is rejected (null + failed check) and the modal form is used", () => {
   // A 0.3048 m layer, k 0.023 W/(m K), ρ 1121 kg/m³, c 1465 J/(kg K): slow poles close to z = 1 give binomially
   // growing d coefficients (loss of significance; Ciulla, Lo Brano & Orioli 2010 discuss such CTF failures).
-  const c: ConstructionInput = { layers: [massive(0.3048, 0.023, 1121, 1465)], outsideResistance: 0.04, insideResistance: 0.13 };
+  const c: ConstructionInput = {
+    layers: [massive(0.3048, 0.023, 1121, 1465)],
+    outsideResistance: 0.04,
+    insideResistance: 0.13,
+  };
   const a = analyse(c, 900, false);
   const json = constructionDynamicJson(a);
   assert.equal(json.ctf, null);

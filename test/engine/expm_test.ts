@@ -10,9 +10,11 @@ function lcg(seed: number) {
 
 function compare(rows: number[][], what: string, tol: number) {
   const ours = toRows(expm(fromRows(rows)));
-  const ref = (mathjsExpm(matrix(rows)).toArray() as number[][]);
+  const ref = mathjsExpm(matrix(rows)).toArray() as number[][];
   const scale = Math.max(1, ...ref.flat().map(Math.abs));
-  ours.forEach((row, i) => row.forEach((v, j) => assertClose(v / scale, ref[i]![j]! / scale, tol, `${what}[${i}][${j}]`)));
+  ours.forEach((row, i) =>
+    row.forEach((v, j) => assertClose(v / scale, ref[i]![j]! / scale, tol, `${what}[${i}][${j}]`))
+  );
 }
 
 Deno.test("expm() agrees with mathjs expm on random, rotation, nilpotent and stiff matrices", () => {
@@ -28,10 +30,11 @@ Deno.test("expm() agrees with mathjs expm on random, rotation, nilpotent and sti
   compare([[0, 1, 0], [0, 0, 1], [0, 0, 0]], "nilpotent", 1e-15);
   // Stiff diffusion-like tridiagonal matrix (as in the state-space model), eigenvalues spread over 1e-2 … 1e3.
   const n = 10;
-  const stiff = Array.from({ length: n }, (_, i) => Array.from({ length: n }, (_, j) => {
-    const w = 10 ** (i / 3);
-    return i === j ? -2 * w : Math.abs(i - j) === 1 ? w : 0;
-  }));
+  const stiff = Array.from({ length: n }, (_, i) =>
+    Array.from({ length: n }, (_, j) => {
+      const w = 10 ** (i / 3);
+      return i === j ? -2 * w : Math.abs(i - j) === 1 ? w : 0;
+    }));
   compare(stiff, "stiff", 1e-10);
 });
 

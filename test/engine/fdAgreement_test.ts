@@ -40,9 +40,13 @@ for (const [name, construction, dt] of CASES) {
       });
     }
     if (dt === 3600) {
-      for (const [key, periodic] of [["X", a.periodic.X], ["Y", a.periodic.Y], ["Z", a.periodic.Z]] as const) {
+      for (
+        const [key, periodic] of [["X", a.periodic.X], ["Y", a.periodic.Y], ["Z", a.periodic.Z]] as const
+      ) {
         const folded = foldPeriodic(fd[key], 24);
-        folded.forEach((v, j) => assert.ok(Math.abs(v - periodic[j]!) <= 5e-3 * u, `${key}P_${j}: fd ${v} root ${periodic[j]}`));
+        folded.forEach((v, j) =>
+          assert.ok(Math.abs(v - periodic[j]!) <= 5e-3 * u, `${key}P_${j}: fd ${v} root ${periodic[j]}`)
+        );
       }
     }
   });
@@ -53,7 +57,13 @@ Deno.test("fd reference agrees with ISO 13786 decrement factor (1 %) and time la
     const a = analyse(c, 3600);
     const days = Math.ceil((10 * a.airToAir.tau1H) / 24) + 2;
     const fd = fdDecrementAndLag(c, days, { dxM: 0.002, substeps: 16 }, a.airToAir.uValue);
-    assert.ok(Math.abs(fd.decrement / a.iso13786.decrementFactor - 1) <= 0.01, `f fd ${fd.decrement} iso ${a.iso13786.decrementFactor}`);
-    assert.ok(Math.abs(fd.lagH - (a.iso13786.timeLag_h % 24)) <= 0.1, `lag fd ${fd.lagH} iso ${a.iso13786.timeLag_h}`);
+    assert.ok(
+      Math.abs(fd.decrement / a.iso13786.decrementFactor - 1) <= 0.01,
+      `f fd ${fd.decrement} iso ${a.iso13786.decrementFactor}`,
+    );
+    assert.ok(
+      Math.abs(fd.lagH - (a.iso13786.timeLag_h % 24)) <= 0.1,
+      `lag fd ${fd.lagH} iso ${a.iso13786.timeLag_h}`,
+    );
   }
 });

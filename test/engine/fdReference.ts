@@ -114,8 +114,24 @@ export function fdFluxes(
   options: FdOptions,
 ): { qo: number[]; qi: number[] } {
   const timeExtrapolated = (g: Grid) => {
-    const coarse = run(g, tOutside, tInside, t0, intervalS / options.substeps, options.substeps * (outputs - 1), options.substeps);
-    const fine = run(g, tOutside, tInside, t0, intervalS / (2 * options.substeps), 2 * options.substeps * (outputs - 1), 2 * options.substeps);
+    const coarse = run(
+      g,
+      tOutside,
+      tInside,
+      t0,
+      intervalS / options.substeps,
+      options.substeps * (outputs - 1),
+      options.substeps,
+    );
+    const fine = run(
+      g,
+      tOutside,
+      tInside,
+      t0,
+      intervalS / (2 * options.substeps),
+      2 * options.substeps * (outputs - 1),
+      2 * options.substeps,
+    );
     return {
       qo: fine.qo.map((v, k) => 2 * v - coarse.qo[k]!),
       qi: fine.qi.map((v, k) => 2 * v - coarse.qi[k]!),
@@ -130,7 +146,12 @@ export function fdFluxes(
 }
 
 /** Response factors X, Y, Z by simulating unit triangular pulses (base 2Δ) on the fine grid. */
-export function fdResponseFactors(c: ConstructionInput, timestepS: number, terms: number, options: FdOptions) {
+export function fdResponseFactors(
+  c: ConstructionInput,
+  timestepS: number,
+  terms: number,
+  options: FdOptions,
+) {
   const pulse = (t: number) => Math.max(0, 1 - Math.abs(t) / timestepS);
   const zero = () => 0;
   const outsidePulse = fdFluxes(c, pulse, zero, -timestepS, timestepS, terms + 1, options);
@@ -145,7 +166,15 @@ export function fdResponseFactors(c: ConstructionInput, timestepS: number, terms
 /** Decrement factor and time lag (h) of q_i for a 24 h sinusoidal outside air temperature, after `days` days. */
 export function fdDecrementAndLag(c: ConstructionInput, days: number, options: FdOptions, uValue: number) {
   const period = 86400, perDay = 96;
-  const out = fdFluxes(c, (t) => Math.cos((2 * Math.PI * t) / period), () => 0, 0, period / perDay, days * perDay + 1, options);
+  const out = fdFluxes(
+    c,
+    (t) => Math.cos((2 * Math.PI * t) / period),
+    () => 0,
+    0,
+    period / perDay,
+    days * perDay + 1,
+    options,
+  );
   const lastDay = out.qi.slice(out.qi.length - 1 - perDay, out.qi.length - 1);
   let re = 0, im = 0;
   lastDay.forEach((v, k) => {

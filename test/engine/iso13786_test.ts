@@ -67,7 +67,11 @@ const shiftH = (a: C) => (arg(a) * 24) / (2 * Math.PI);
 Deno.test("iso13786() single layer matches the ISO 13786 closed-form matrix (amplitudes, shifts, κ1, κ2)", () => {
   for (const [d, rsi, rse] of [[0.2, 0.13, 0.04], [0.1, 0.1, 0.04], [0.3, 0.17, 0.04]] as const) {
     const ref = isoSingleLayer(d, 1.65, 2300 * 1000, rsi, rse);
-    const iso = isoOf({ layers: [massive(d, 1.65, 2300, 1000)], outsideResistance: rse, insideResistance: rsi });
+    const iso = isoOf({
+      layers: [massive(d, 1.65, 2300, 1000)],
+      outsideResistance: rse,
+      insideResistance: rsi,
+    });
     // ISO 13786:2017 closed form above; relative 1e-10.
     assertClose(iso.periodicTransmittance.amplitude / abs(ref.y12), 1, 1e-10, "|Y12|");
     assertClose(iso.periodicTransmittanceWrappedShift_h, shiftH(ref.y12), 1e-9, "Δt12 (wrapped)");
@@ -85,10 +89,18 @@ Deno.test("iso13786() thick layer admittance equals the semi-infinite solid e√
   // Carslaw & Jaeger (1959) §2.6 periodic surface temperature of a semi-infinite solid: q = e√(iω) θ,
   // |Y| = e√ω, phase +45° (a lead of T/8 = 3 h). With R_si in series: Y = 1/(R_si + 1/(e√(iω))).
   const e = Math.sqrt(1.65 * 2300 * 1000), omega = (2 * Math.PI) / 86400;
-  const thick = isoOf({ layers: [massive(2.0, 1.65, 2300, 1000)], outsideResistance: 0, insideResistance: 0 });
+  const thick = isoOf({
+    layers: [massive(2.0, 1.65, 2300, 1000)],
+    outsideResistance: 0,
+    insideResistance: 0,
+  });
   assertClose(thick.admittanceInside.amplitude / (e * Math.sqrt(omega)), 1, 1e-9, "|Y11| semi-infinite");
   assertClose(thick.admittanceInside.timeShift_h, 3, 1e-8, "Δt11 semi-infinite");
-  const withFilm = isoOf({ layers: [massive(2.0, 1.65, 2300, 1000)], outsideResistance: 0, insideResistance: 0.13 });
+  const withFilm = isoOf({
+    layers: [massive(2.0, 1.65, 2300, 1000)],
+    outsideResistance: 0,
+    insideResistance: 0.13,
+  });
   const ys: C = [e * Math.sqrt(omega / 2), e * Math.sqrt(omega / 2)];
   const y = div([1, 0], [0.13 + div([1, 0], ys)[0], div([1, 0], ys)[1]]);
   assertClose(withFilm.admittanceInside.amplitude / abs(y), 1, 1e-9, "|Y11| with R_si");
@@ -99,7 +111,11 @@ Deno.test("iso13786() time lag is unwrapped: grows continuously past 12 h and ma
   // ISO 13786 gives arg(Y12) modulo 2π; the physical lag follows the phase continuously as the layer thickens.
   let previous = 0;
   for (let d = 0.05; d <= 0.6001; d += 0.05) {
-    const iso = isoOf({ layers: [massive(d, 1.65, 2300, 1000)], outsideResistance: 0.04, insideResistance: 0.13 });
+    const iso = isoOf({
+      layers: [massive(d, 1.65, 2300, 1000)],
+      outsideResistance: 0.04,
+      insideResistance: 0.13,
+    });
     const ref = isoSingleLayer(d, 1.65, 2.3e6, 0.13, 0.04);
     assert.ok(iso.timeLag_h > previous, `lag grows with thickness at d = ${d}`);
     const wrapped = ((-shiftH(ref.y12)) % 24 + 24) % 24;
@@ -107,8 +123,17 @@ Deno.test("iso13786() time lag is unwrapped: grows continuously past 12 h and ma
     previous = iso.timeLag_h;
   }
   assert.ok(previous > 12, `0.6 m of concrete lags more than 12 h, found ${previous}`);
-  const json = isoOf({ layers: [massive(0.6, 1.65, 2300, 1000)], outsideResistance: 0.04, insideResistance: 0.13 });
-  assertClose(json.periodicTransmittance.timeShift_h, -json.timeLag_h, 0, "reported shift is the unwrapped lag");
+  const json = isoOf({
+    layers: [massive(0.6, 1.65, 2300, 1000)],
+    outsideResistance: 0.04,
+    insideResistance: 0.13,
+  });
+  assertClose(
+    json.periodicTransmittance.timeShift_h,
+    -json.timeLag_h,
+    0,
+    "reported shift is the unwrapped lag",
+  );
 });
 
 Deno.test("iso13786() side labelling: concrete inside gives the larger inside areal heat capacity", () => {
@@ -128,7 +153,11 @@ Deno.test("iso13786() side labelling: concrete inside gives the larger inside ar
 Deno.test("iso13786 heat transfer matrix equals [[A, −B], [−C, D]] of the Laplace matrix at s = iω", () => {
   // Identity between ISO 13786 (side 1 = inside) and the transmission-matrix convention (outside → inside).
   const ref = isoSingleLayer(0.2, 1.65, 2.3e6, 0.13, 0.04);
-  const z = isoOf({ layers: [massive(0.2, 1.65, 2300, 1000)], outsideResistance: 0.04, insideResistance: 0.13 })
+  const z = isoOf({
+    layers: [massive(0.2, 1.65, 2300, 1000)],
+    outsideResistance: 0.04,
+    insideResistance: 0.13,
+  })
     .heatTransferMatrix!;
   const y12 = div([-1, 0], [z.z12.re, z.z12.im]);
   assertClose(abs(y12) / abs(ref.y12), 1, 1e-12, "|−1/Z12|");

@@ -17,7 +17,13 @@ const layerArb: fc.Arbitrary<Layer> = fc.oneof(
       specificHeat: fc.double({ min: 400, max: 2000, noNaN: true }),
     }),
   },
-  { weight: 1, arbitrary: fc.record({ kind: fc.constant("resistive" as const), resistance: fc.double({ min: 0, max: 3, noNaN: true }) }) },
+  {
+    weight: 1,
+    arbitrary: fc.record({
+      kind: fc.constant("resistive" as const),
+      resistance: fc.double({ min: 0, max: 3, noNaN: true }),
+    }),
+  },
 );
 
 const wallArb: fc.Arbitrary<ConstructionInput> = fc.record({
@@ -27,9 +33,20 @@ const wallArb: fc.Arbitrary<ConstructionInput> = fc.record({
 });
 
 Deno.test("analyseConstruction() identities hold on random walls (fast-check)", () => {
-  const ids = ["sum-rule-X", "sum-rule-Y", "sum-rule-Z", "sum-rule-X-surface", "sum-rule-Y-surface", "sum-rule-Z-surface",
-    "root-count", "root-count-surface", "transmission-determinant", "iso13786-harmonic-amplitude",
-    "iso13786-harmonic-phase", "periodic-fold"];
+  const ids = [
+    "sum-rule-X",
+    "sum-rule-Y",
+    "sum-rule-Z",
+    "sum-rule-X-surface",
+    "sum-rule-Y-surface",
+    "sum-rule-Z-surface",
+    "root-count",
+    "root-count-surface",
+    "transmission-determinant",
+    "iso13786-harmonic-amplitude",
+    "iso13786-harmonic-phase",
+    "periodic-fold",
+  ];
   fc.assert(
     fc.property(wallArb, fc.constantFrom(3600, 1800, 900, 600), (wall, dt) => {
       const a = analyseConstruction(wall, dt, { stateSpace: false });
@@ -42,10 +59,16 @@ Deno.test("analyseConstruction() identities hold on random walls (fast-check)", 
         assert.ok(a.checks.find((x) => x.id === "ctf-identity")!.pass);
       }
       const rTotal = wall.outsideResistance + wall.insideResistance +
-        wall.layers.reduce((s, l) => s + (l.kind === "massive" ? l.thicknessM / l.conductivity : l.resistance), 0);
+        wall.layers.reduce(
+          (s, l) => s + (l.kind === "massive" ? l.thicknessM / l.conductivity : l.resistance),
+          0,
+        );
       assert.ok(Math.abs(a.airToAir.uValue * rTotal - 1) < 1e-12);
       const sumP = a.periodic.Y.reduce((s, v) => s + v, 0);
-      assert.ok(Math.abs(sumP / a.airToAir.uValue - 1) < 1e-9, `Σ periodic Y / U = ${sumP / a.airToAir.uValue}`);
+      assert.ok(
+        Math.abs(sumP / a.airToAir.uValue - 1) < 1e-9,
+        `Σ periodic Y / U = ${sumP / a.airToAir.uValue}`,
+      );
       return true;
     }),
     { numRuns: 150, seed: 20310721 },

@@ -45,7 +45,11 @@ Deno.test("responseFactors thick layer early response equals the semi-infinite s
   // Carslaw & Jaeger (1959) §2.5: step flux q = e ΔT/√(πt), e = √(kρc); ramp → 2e√t/√π, so
   // X0 = 2e/√(πΔ), X1 = X0(√2 − 2), X2 = X0(√3 − 2√2 + 1).
   for (const dt of [3600, 600]) {
-    const c: ConstructionInput = { layers: [massive(1.0, 1.4, 2300, 880)], outsideResistance: 0, insideResistance: 0 };
+    const c: ConstructionInput = {
+      layers: [massive(1.0, 1.4, 2300, 880)],
+      outsideResistance: 0,
+      insideResistance: 0,
+    };
     const e = Math.sqrt(1.4 * 2300 * 880);
     const x0 = (2 * e) / Math.sqrt(Math.PI * dt);
     const rf = analyse(c, dt).airToAir.responseFactors;
@@ -79,7 +83,9 @@ Deno.test("responseFactors R–C–R lumped wall match the first-order closed fo
   const beta = 1 / (0.25 * 1e5), q = Math.exp(-beta * 3600);
   const rf = a.airToAir.responseFactors;
   assertClose(rf.Y[0]!, 1 - (1 - q) / (beta * 3600), 2e-5, "Y0");
-  for (let j = 1; j < 10; j++) assertClose(rf.Y[j]!, (1 - q) ** 2 * q ** (j - 1) / (beta * 3600), 2e-5, `Y_${j}`);
+  for (let j = 1; j < 10; j++) {
+    assertClose(rf.Y[j]!, (1 - q) ** 2 * q ** (j - 1) / (beta * 3600), 2e-5, `Y_${j}`);
+  }
   // Only one pole with βΔ < 40: the layer's own first internal pole is far beyond it.
   assert.equal(a.airToAir.poles.betas.length, 1);
   assertClose(a.airToAir.poles.betas[0]! / beta, 1, 2e-5, "β");
@@ -87,7 +93,11 @@ Deno.test("responseFactors R–C–R lumped wall match the first-order closed fo
 
 Deno.test("responseFactors purely resistive construction: RF_0 = U, later terms 0", () => {
   // Identity: without storage B(s) = R for all s, so the flux follows the temperature instantly.
-  const c: ConstructionInput = { layers: [resistive(0.18), resistive(2.5)], outsideResistance: 0.04, insideResistance: 0.13 };
+  const c: ConstructionInput = {
+    layers: [resistive(0.18), resistive(2.5)],
+    outsideResistance: 0.04,
+    insideResistance: 0.13,
+  };
   const a = analyse(c, 900, true);
   const u = 1 / (0.04 + 0.18 + 2.5 + 0.13);
   for (const key of ["X", "Y", "Z"] as const) {

@@ -30,7 +30,8 @@ Deno.test("findPoles() slab with films matches the Robin eigen-condition", () =>
   // Source: Carslaw & Jaeger (1959) §3.10, slab with radiation at both faces: λ_n solve
   // sin(λL)(λ²k² − h1 h2) − λk(h1 + h2) cos(λL) = 0, β_n = α λ_n². Solved here by bisection on a fine grid.
   const k = 1, l = 0.2, alpha = 5e-7, h1 = 1 / 0.04, h2 = 1 / 0.13;
-  const f = (lam: number) => Math.sin(lam * l) * (lam * lam * k * k - h1 * h2) - lam * k * (h1 + h2) * Math.cos(lam * l);
+  const f = (lam: number) =>
+    Math.sin(lam * l) * (lam * lam * k * k - h1 * h2) - lam * k * (h1 + h2) * Math.cos(lam * l);
   const lamMax = Math.sqrt(40 / 3600 / alpha);
   const expected: number[] = [];
   const steps = 200000;
@@ -77,7 +78,11 @@ Deno.test("findPoles() separates close root pairs of two identical slabs weakly 
   // fixed temperature on one face and nearly insulated on the other: β ≈ α((n − ½)π/L)², Carslaw & Jaeger 1959);
   // a sign-change scan sees no change across such a pair.
   const layer = massive(0.1, 1, 2000, 1000);
-  const chain = chainOf({ layers: [layer, resistive(1000), layer], outsideResistance: 0, insideResistance: 0 });
+  const chain = chainOf({
+    layers: [layer, resistive(1000), layer],
+    outsideResistance: 0,
+    insideResistance: 0,
+  });
   const poles = findPoles(chain, 40 / 3600);
   assertEquals(poles.betas.length, poles.exactCount);
   assertEquals(poles.unresolvedIntervals, 0);

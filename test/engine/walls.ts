@@ -1,7 +1,12 @@
 import type { ConstructionInput, Layer } from "../../src/engine/layer.ts";
 
 /** A massive layer from thickness (m), conductivity (W/(m K)), density (kg/m³) and specific heat (J/(kg K)). */
-export function massive(thicknessM: number, conductivity: number, density: number, specificHeat: number): Layer {
+export function massive(
+  thicknessM: number,
+  conductivity: number,
+  density: number,
+  specificHeat: number,
+): Layer {
   return { kind: "massive", thicknessM, conductivity, density, specificHeat };
 }
 
@@ -51,6 +56,8 @@ export function reversed(c: ConstructionInput): ConstructionInput {
 /** Asserts |actual − expected| ≤ tolerance, with a message naming the quantity. */
 export function assertClose(actual: number, expected: number, tolerance: number, what: string): void {
   if (!(Math.abs(actual - expected) <= tolerance)) {
-    throw new Error(`${what}: expected ${expected} ± ${tolerance}, found ${actual} (diff ${actual - expected})`);
+    throw new Error(
+      `${what}: expected ${expected} ± ${tolerance}, found ${actual} (diff ${actual - expected})`,
+    );
   }
 }

@@ -1,5 +1,5 @@
 /** A small invented project, its results and inputs, for rendering tests. All content is made up. */
-import { steadyState } from "../../src/engine/steady.ts";
+import { engineEntry } from "./dynamicFixture.ts";
 import { wall, WALL_SOURCE } from "./wallFixture.ts";
 import type { Diagnostic } from "../../src/project/diagnostic.ts";
 import type { Construction, Model, ProjectInfo } from "../../src/project/model.ts";
@@ -47,25 +47,9 @@ export const FAILING_CHECK: CheckResult = {
   pass: false,
 };
 
+/** The wall's results.json entry, steady and dynamic parts computed by the real engine. */
 function constructionResults(c: Construction): ConstructionResults {
-  const s = steadyState(c);
-  return {
-    U: s.uValue,
-    R: s.totalResistance,
-    timestep_h: 1,
-    steady: {
-      outsideSurfaceResistance: c.outsideResistance,
-      insideSurfaceResistance: c.insideResistance,
-      surfaceToSurfaceU: s.surfaceToSurfaceU,
-      arealHeatCapacity: s.arealHeatCapacity,
-      layers: c.layers.map((l, i) => ({
-        name: l.name,
-        kind: l.kind,
-        R: s.layerResistances[i] ?? NaN,
-        arealHeatCapacity: s.layerArealHeatCapacities[i] ?? NaN,
-      })),
-    },
-  };
+  return engineEntry(c).results;
 }
 
 /** Bytes of the input files: a text file with BOM and CRLF, and a binary file with every byte value. */

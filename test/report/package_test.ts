@@ -85,8 +85,9 @@ Deno.test("renderPackage() shows a failed check on the cover and beside the numb
   assert.ok(cover !== null);
   assert.match(cover.textContent ?? "", /1 of 2 FAILED/);
   assert.match(cover.textContent ?? "", /energy-balance on construction:EW-9/);
-  const beside = doc.querySelector(".block-output .subject-checks li.fail");
-  assert.match(beside?.textContent ?? "", /^FAIL: energy-balance/);
+  const beside = doc.querySelector(".block-output .subject-checks tr.fail");
+  const cells = Array.from(beside?.querySelectorAll("td") ?? []).map((td) => td.textContent);
+  assert.deepEqual(cells.slice(0, 2), ["FAIL", "energy-balance"]);
 });
 
 Deno.test("renderPackage() says when all checks pass or none apply", () => {
@@ -94,7 +95,7 @@ Deno.test("renderPackage() says when all checks pass or none apply", () => {
   assert.match(text(pass, ".cover"), /all 1 passed/);
   assert.equal(pass.querySelector(".cover .has-failures"), null);
   const none = parseDocument(renderPackage(fixture({ checks: [] })));
-  assert.match(text(none, "#s-3"), /No automated checks apply yet/);
+  assert.match(text(none, "#s-4"), /No automated checks apply yet/);
 });
 
 Deno.test("renderPackage() embeds every input file's exact bytes as base64", () => {
@@ -128,7 +129,7 @@ Deno.test("renderPackage() prints R and U of the wall as computed by hand", () =
 
 Deno.test("renderPackage() orders the sections and ends with the end marker and input hash", () => {
   const out = renderPackage(fixture());
-  const ids = ["s-1", "s-2", "s-3", "s-4", "s-5", "s-6", "s-7", "s-8", "s-9", "s-a", "s-b"];
+  const ids = ["s-1", "s-2", "s-3", "s-4", "s-5", "s-6", "s-7", "s-8", "s-9", "s-10", "s-a", "s-b"];
   const positions = ids.map((id) => out.indexOf(`<section id="${id}"`));
   assert.ok(positions.every((p) => p > 0), "every section present");
   assert.deepEqual([...positions].sort((a, b) => a - b), positions);
@@ -137,7 +138,7 @@ Deno.test("renderPackage() orders the sections and ends with the end marker and 
     text(doc, ".end-marker"),
     new RegExp(`END OF CALCULATION PACKAGE\\s*Input SHA-256 ${"d".repeat(64)}`),
   );
-  assert.ok(out.lastIndexOf("END OF CALCULATION PACKAGE") > positions[10]!);
+  assert.ok(out.lastIndexOf("END OF CALCULATION PACKAGE") > positions[11]!);
 });
 
 Deno.test("renderPackage() follows each block with its output: material, scenario note, unresolved", () => {
@@ -156,10 +157,10 @@ Deno.test("renderPackage() follows each block with its output: material, scenari
 
 Deno.test("renderPackage() lists used materials with origin, and the sources and assumptions", () => {
   const doc = parseDocument(renderPackage(fixture()));
-  const rows = Array.from(doc.querySelectorAll("#s-5 tbody tr"));
+  const rows = Array.from(doc.querySelectorAll("#s-6 tbody tr"));
   const cells = (r: Element) => Array.from(r.querySelectorAll("td")).map((td) => td.textContent?.trim());
   assert.deepEqual(rows.map((r) => cells(r)[0]), ["lime-render", "eps-board", "clay-block"]);
   assert.equal(cells(rows[2]!)[7], "library");
-  assert.match(text(doc, "#s-6"), /ISO 6946:2017/);
-  assert.match(text(doc, "#s-4"), /default:inside-surface-resistance:EW-9/);
+  assert.match(text(doc, "#s-7"), /ISO 6946:2017/);
+  assert.match(text(doc, "#s-5"), /default:inside-surface-resistance:EW-9/);
 });

@@ -1,0 +1,106 @@
+/** The "Dynamic response" part after a construction's steady-state output: tables, CTFs, plots and checks. */
+import type { Construction } from "../project/model.ts";
+import type { CheckResult, ConstructionResults } from "../results/types.ts";
+import { ctfSection } from "./ctfTables.ts";
+import { type DynamicView, readDynamic, seriesSum, stepResponse } from "./dynamicData.ts";
+import {
+  ctsPlot,
+  RESPONSE_FACTOR_WINDOW_H,
+  responseFactorPlot,
+  SERIES_STYLE,
+  stepResponsePlot,
+  symlogConstant,
+} from "./dynamicPlots.ts";
+import { dynamicSummaryTable, periodicTable, responseFactorTable } from "./dynamicTables.ts";
+import { formatFixed, formatSig, formatTrim } from "./format.ts";
+import { html, type Trusted } from "./html.ts";
+
+function key(series: keyof typeof SERIES_STYLE, label: string): Trusted {
+  return html`<span class="key key-${series.toLowerCase()}"></span> ${label}`;
+}
+
+function figure(svg: Trusted, title: string, caption: Trusted): Trusted {
+  return html`<figure class="plot-figure">${svg}<figcaption><strong>${title}</strong> ${caption}</figcaption></figure>`;
+}
+
+function plots(construction: Construction, view: DynamicView, prefix: string): Trusted {
+  const steps = stepResponse(view.responseFactors.Y);
+  const last = steps[steps.length - 1] ?? NaN;
+  return html`
+    ${
+    figure(
+      responseFactorPlot(view, prefix),
+      `Response factors of ${construction.id}, first ${String(RESPONSE_FACTOR_WINDOW_H)} h.`,
+      html`${key("X", "X_j outside")}, ${key("Y", "Y_j cross")}, ${
+        key("Z", "Z_j inside")
+      }. Vertical scale symmetric-logarithmic (linear within ±${
+        formatTrim(symlogConstant(view.U), 1)
+      } W/(m²·K)), because X₀ and Z₀ dwarf the later terms. ${construction.name}.`,
+    )
+  }
+    ${
+    figure(
+      ctsPlot(view, prefix),
+      `Conduction time series of ${construction.id}.`,
+      html`Share of a day's conduction heat gain reaching the inside j hours after it is driven at the outside; the 24 bars sum to ${
+        formatFixed(seriesSum(view.cts) * 100, 2)
+      } %. ${construction.name}.`,
+    )
+  }
+    ${
+    figure(
+      stepResponsePlot(view, prefix),
+      `Step response of ${construction.id}.`,
+      html`Inside heat flux after a 1 K step of outside temperature at t = 0 (running sum of Y_j, inputs linear between samples); dashed line U. Sum of all ${
+        String(steps.length)
+      } terms: ${formatSig(last, 6)} W/(m²·K). ${construction.name}.`,
+    )
+  }
+  `;
+}
+
+function surfaceLine(view: DynamicView): Trusted {
+  const s = view.surfaceToSurface;
+  return html`<p class="muted">Surface to surface (no surface resistances, for heat-balance use): U_s = ${
+    formatSig(s.U, 3)
+  } W/(m²·K), ${String(s.responseFactors.Y.length)} response-factor terms, truncation residual ${
+    formatSig(s.responseFactors.truncationResidual, 2)
+  }, polynomial CTF ${s.ctf === null ? "rejected (see checks ending -surface)" : "accepted"}; series in Appendix B.</p>`;
+}
+
+/**
+ * Renders the dynamic response of one construction from its results.json entry; `anchor` prefixes the
+ * plots' ids, `checksList` is the construction's list of checks, shown at the end.
+ */
+export function renderDynamicResponse(
+  construction: Construction,
+  results: ConstructionResults | undefined,
+  checks: readonly CheckResult[],
+  anchor: string,
+  checksList: Trusted,
+): Trusted {
+  const view = readDynamic(results);
+  const subject = `construction:${construction.id}`;
+  const body = view === undefined
+    ? html`<p class="fail">No dynamic results: results.json holds no complete dynamic entry for ${construction.id}.</p>`
+    : html`
+      ${dynamicSummaryTable(view)}
+      <h5>Response factors</h5>
+      ${responseFactorTable(view)}
+      ${surfaceLine(view)}
+      <h5>Conduction transfer functions</h5>
+      ${ctfSection(view, checks, subject)}
+      <h5>Periodic response factors and conduction time series</h5>
+      ${periodicTable(view)}
+      ${plots(construction, view, `${anchor}-fig`)}
+    `;
+  return html`
+    <div class="dynamic-response">
+      <h4 class="output-heading">Dynamic response of ${construction.id}</h4>
+      <p class="muted">Numbers as in results.json <code>constructions</code> entry for ${construction.id} (Appendix B); method in section 3.</p>
+      ${body}
+      <h5>Checks on ${construction.id}</h5>
+      ${checksList.markup === "" ? html`<p>No automated check is recorded for this construction.</p>` : checksList}
+    </div>
+  `;
+}

@@ -1,0 +1,153 @@
+/** The three plots of a construction's dynamic response, drawn with Observable Plot as inline SVG. */
+import * as Plot from "@observablehq/plot";
+import { stepResponse } from "./dynamicData.ts";
+import type { DynamicView } from "./dynamicData.ts";
+import { formatTrim, THIN_SPACE } from "./format.ts";
+import type { Trusted } from "./html.ts";
+import { renderPlotSvg } from "./plotSvg.ts";
+
+/** Stroke colour and dash of each series, shared with the legend keys in the captions. */
+export const SERIES_STYLE = {
+  X: { stroke: "#1f5fa8", dash: "6 3" },
+  Y: { stroke: "#111111", dash: "none" },
+  Z: { stroke: "#b5470f", dash: "2 2" },
+} as const;
+
+/** Hours of response factors drawn (the table and Appendix B hold the rest). */
+export const RESPONSE_FACTOR_WINDOW_H = 48;
+const STEP_WINDOW_MIN_H = 48;
+const STEP_WINDOW_MAX_H = 720;
+const MAX_POINTS = 400;
+const HEIGHT = 280;
+const FONT_SIZE = "11";
+
+interface Point {
+  readonly t: number;
+  readonly v: number;
+}
+
+const tick = (d: number) => formatTrim(d, 3);
+
+/** Points (jΔ, values[j]) for jΔ ≤ windowH, thinned to at most MAX_POINTS but always keeping the last. */
+function points(values: readonly number[], timestepH: number, windowH: number): Point[] {
+  const last = Math.min(values.length - 1, Math.floor(windowH / timestepH + 1e-9));
+  const stride = Math.max(1, Math.ceil((last + 1) / MAX_POINTS));
+  const out: Point[] = [];
+  for (let j = 0; j <= last; j += stride) out.push({ t: j * timestepH, v: values[j]! });
+  if (out.length > 0 && out[out.length - 1]!.t !== last * timestepH) out.push({ t: last * timestepH, v: values[last]! });
+  return out;
+}
+
+/** Ticks 0, ±10^k for the decades from ten times the linear threshold up to the largest magnitude. */
+function symlogTicks(constant: number, maxAbs: number, hasNegative: boolean): number[] {
+  const ticks = [0];
+  const top = Math.ceil(Math.log10(Math.max(maxAbs, constant)));
+  for (let k = Math.round(Math.log10(constant)) + 1; k <= top; k++) {
+    const v = Number(`1e${k}`);
+    ticks.push(v);
+    if (hasNegative) ticks.push(-v);
+  }
+  return ticks.sort((a, b) => a - b);
+}
+
+function finish(spec: Plot.PlotOptions): Plot.PlotOptions {
+  return { height: HEIGHT, style: { fontSize: `${FONT_SIZE}px` }, marginBottom: 40, ...spec };
+}
+
+/** Half-width of the linear part of the symmetric-log scale: the power of ten at or below U/20. */
+export function symlogConstant(u: number): number {
+  return Number(`1e${Math.floor(Math.log10(u / 20))}`);
+}
+
+/** Response factors X, Y, Z against time jΔ over the first 48 h on a symmetric-log scale. */
+export function responseFactorPlot(view: DynamicView, idPrefix: string): Trusted {
+  const rf = view.responseFactors;
+  const series = (["X", "Y", "Z"] as const).map((key) => ({
+    key,
+    data: points(rf[key], view.timestep_h, RESPONSE_FACTOR_WINDOW_H),
+  }));
+  const all = series.flatMap((s) => s.data.map((p) => p.v));
+  const maxAbs = all.reduce((m, v) => Math.max(m, Math.abs(v)), 0);
+  const constant = symlogConstant(view.U);
+  const dots = series[0]!.data.length <= 60;
+  const marks = series.flatMap(({ key, data }) => [
+    Plot.line(data, {
+      x: "t",
+      y: "v",
+      stroke: SERIES_STYLE[key].stroke,
+      strokeDasharray: SERIES_STYLE[key].dash,
+      strokeWidth: 1.5,
+    }),
+    ...(dots ? [Plot.dot(data, { x: "t", y: "v", r: 1.8, fill: SERIES_STYLE[key].stroke })] : []),
+  ]);
+  return renderPlotSvg(
+    finish({
+      marginLeft: 62,
+      x: { label: "Time after the pulse peak, jΔ (h)", labelAnchor: "center", labelArrow: "none", tickFormat: tick },
+      y: {
+        type: "symlog",
+        constant,
+        ticks: symlogTicks(constant, maxAbs, all.some((v) => v < 0)),
+        tickFormat: tick,
+        grid: true,
+        label: "Response factor, W/(m²·K)",
+        labelArrow: "none",
+      },
+      marks: [Plot.ruleY([0], { stroke: "#777" }), ...marks],
+    }),
+    `${idPrefix}-rf`,
+    "Response factors X, Y and Z against time, symmetric-log vertical scale",
+  );
+}
+
+/** The conduction time series as 24 bars, hour 0 to 23, in percent of the total. */
+export function ctsPlot(view: DynamicView, idPrefix: string): Trusted {
+  const data = view.cts.map((c, j) => ({ j, percent: c * 100 }));
+  return renderPlotSvg(
+    finish({
+      marginLeft: 50,
+      x: { type: "band", label: "Hours after the outside excitation, j (h)", labelAnchor: "center", tickFormat: tick },
+      y: { label: "Share of the daily conduction gain, %", labelArrow: "none", grid: true, tickFormat: tick },
+      marks: [Plot.barY(data, { x: "j", y: "percent", fill: "#4d6f8f" }), Plot.ruleY([0])],
+    }),
+    `${idPrefix}-cts`,
+    "Conduction time series, percent per hour",
+  );
+}
+
+/** How many hours of the step response to draw: until within 0.5 % of U, between 48 h and 720 h. */
+export function stepWindowH(steps: readonly number[], u: number, timestepH: number): number {
+  let j = steps.length - 1;
+  while (j > 0 && Math.abs(steps[j - 1]! - u) <= 0.005 * u) j--;
+  const settled = j * timestepH * 1.2;
+  return Math.min(STEP_WINDOW_MAX_H, Math.max(STEP_WINDOW_MIN_H, Math.ceil(settled / 12) * 12));
+}
+
+/** Inside flux after a 1 K step of outside temperature (running sum of Y_j), with U as a reference line. */
+export function stepResponsePlot(view: DynamicView, idPrefix: string): Trusted {
+  const steps = stepResponse(view.responseFactors.Y);
+  const windowH = stepWindowH(steps, view.U, view.timestep_h);
+  const data = points(steps, view.timestep_h, windowH);
+  const uText = `U = ${formatTrim(view.U, 3)}${THIN_SPACE}W/(m²·K)`;
+  return renderPlotSvg(
+    finish({
+      marginLeft: 62,
+      x: { label: "Time after the step, t (h)", labelAnchor: "center", labelArrow: "none", tickFormat: tick },
+      y: {
+        label: "Inside heat flux per K, W/(m²·K)",
+        labelArrow: "none",
+        grid: true,
+        domain: [0, view.U * 1.12],
+        tickFormat: tick,
+      },
+      marks: [
+        Plot.ruleY([view.U], { stroke: "#a40000", strokeDasharray: "5 4" }),
+        Plot.text([uText], { x: data[data.length - 1]?.t ?? 0, y: view.U, dy: -8, textAnchor: "end", fill: "#a40000" }),
+        Plot.line(data, { x: "t", y: "v", stroke: SERIES_STYLE.Y.stroke, strokeWidth: 1.8, curve: "linear" }),
+        Plot.ruleY([0]),
+      ],
+    }),
+    `${idPrefix}-step`,
+    "Step response of the inside heat flux to a 1 K step of outside temperature",
+  );
+}

@@ -269,5 +269,7 @@ export function describe(value: YamlValue): string {
 /** Prefixes a hint with "did you mean …?" when a close candidate exists. */
 export function withSuggestion(word: string, candidates: readonly string[], rest: string): string {
   const near = closest(word, candidates);
-  return near === undefined ? rest : `did you mean "${near}"? ${rest.charAt(0).toUpperCase()}${rest.slice(1)}`;
+  return near === undefined
+    ? rest
+    : `did you mean "${near}"? ${rest.charAt(0).toUpperCase()}${rest.slice(1)}`;
 }

@@ -37,7 +37,11 @@ export function nearestByPrefix(word: string, candidates: readonly string[], cou
   const lower = word.toLowerCase();
   const allowed = Math.max(2, Math.floor(word.length / 3));
   return candidates
-    .map((c) => ({ c, d: editDistance(lower, c.toLowerCase().slice(0, lower.length)), full: editDistance(lower, c.toLowerCase()) }))
+    .map((c) => ({
+      c,
+      d: editDistance(lower, c.toLowerCase().slice(0, lower.length)),
+      full: editDistance(lower, c.toLowerCase()),
+    }))
     .filter((x) => x.d <= allowed)
     .sort((a, b) => a.d - b.d || a.full - b.full || (a.c < b.c ? -1 : 1))
     .slice(0, count)

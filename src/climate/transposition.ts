@@ -64,7 +64,7 @@ export function transposeToSurface(
       break;
     case "hay-davies": {
       // Anisotropy index A_i = E_bn/E_0 (≤ 1) and beam ratio R_b = max(cos θ, 0)/sin β (Hay & Davies 1980).
-      const anisotropyIndex = Math.min(beamHorizontal / extraterrestrialNormalWPerM2(dayOfYear), 1);
+      const anisotropyIndex = Math.min(beamNormal / extraterrestrialNormalWPerM2(dayOfYear), 1);
       const beamRatio = lowSunGuard ? 0 : Math.max(cosTheta, 0) / sinAltitude;
       skyDiffuse = diffuseHorizontal * anisotropyIndex * beamRatio + (1 - anisotropyIndex) * isotropicSky;
       break;

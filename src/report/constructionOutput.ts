@@ -92,13 +92,27 @@ export function subjectChecks(checks: readonly CheckResult[], subject: string): 
   const mine = checks.filter((c) => c.subject === subject);
   if (mine.length === 0) return html``;
   const rows = mine.map((c) =>
-    html`<tr class="${c.pass ? "pass" : "fail"}"><td class="result">${c.pass ? "PASS" : "FAIL"}</td><td><code>${c.id}</code></td><td>${c.description}</td><td class="num">${
-      formatSig(c.value, 3)
-    }</td><td class="num">${formatSig(c.limit, 3)}</td></tr>`
+    html`
+      <tr class="${c.pass ? "pass" : "fail"}">
+        <td class="result">${c.pass ? "PASS" : "FAIL"}</td>
+        <td><code>${c.id}</code></td>
+        <td>${c.description}</td>
+        <td class="num">${formatSig(c.value, 3)}</td>
+        <td class="num">${formatSig(c.limit, 3)}</td>
+      </tr>
+    `
   );
   return html`
     <table class="subject-checks">
-      <thead><tr><th>Result</th><th>Check</th><th>What is checked</th><th>Value</th><th>Limit</th></tr></thead>
+      <thead>
+        <tr>
+          <th>Result</th>
+          <th>Check</th>
+          <th>What is checked</th>
+          <th>Value</th>
+          <th>Limit</th>
+        </tr>
+      </thead>
       <tbody>${rows}</tbody>
     </table>
   `;
@@ -162,14 +176,12 @@ export function renderConstructionOutput(
     ${uLine}
     <figure>${renderSectionSvg(construction)}<figcaption>Section of ${construction
       .id}, drawn from outside (left) to inside (right); numbers refer to the table above.</figcaption></figure>
-    ${
-    renderDynamicResponse(
+    ${renderDynamicResponse(
       construction,
       results,
       checks,
       anchor,
       subjectChecks(checks, `construction:${construction.id}`),
-    )
-  }
+    )}
   `;
 }

@@ -12,22 +12,38 @@ export const CTF_DIGITS = 6;
 /** Check ids that decide whether the root-method or the state-space CTF is accepted. */
 const ACCEPTANCE_CHECKS = {
   root: ["ctf-resynthesis", "ctf-coefficient-bound", "ctf-identity"],
-  stateSpace: ["ctf-state-space-resynthesis", "ctf-state-space-coefficient-bound", "ctf-state-space-identity"],
+  stateSpace: [
+    "ctf-state-space-resynthesis",
+    "ctf-state-space-coefficient-bound",
+    "ctf-state-space-identity",
+  ],
 } as const;
 
 type Method = keyof typeof ACCEPTANCE_CHECKS;
 
 function coefficientTable(ctf: CtfJson, caption: Trusted): Trusted {
   const rows = Math.max(ctf.X.length, ctf.Y.length, ctf.Z.length, ctf.Phi.length + 1);
-  const cell = (v: number | undefined) => html`<td class="num">${v === undefined ? "—" : formatSig(v, CTF_DIGITS)}</td>`;
-  const body = Array.from({ length: rows }, (_, n) =>
-    html`<tr><td class="num">${String(n)}</td>${cell(ctf.X[n])}${cell(ctf.Y[n])}${cell(ctf.Z[n])}${
-      cell(n === 0 ? undefined : ctf.Phi[n - 1])
-    }</tr>`);
+  const cell = (v: number | undefined) =>
+    html`<td class="num">${v === undefined ? "—" : formatSig(v, CTF_DIGITS)}</td>`;
+  const body = Array.from(
+    { length: rows },
+    (_, n) =>
+      html`<tr><td class="num">${String(n)}</td>${cell(ctf.X[n])}${cell(ctf.Y[n])}${cell(ctf.Z[n])}${
+        cell(n === 0 ? undefined : ctf.Phi[n - 1])
+      }</tr>`,
+  );
   return html`
     <table class="ctf-table">
       <caption>${caption}</caption>
-      <thead><tr><th>n</th><th>X_n</th><th>Y_n</th><th>Z_n</th><th>Φ_n</th></tr></thead>
+      <thead>
+        <tr>
+          <th>n</th>
+          <th>X_n</th>
+          <th>Y_n</th>
+          <th>Z_n</th>
+          <th>Φ_n</th>
+        </tr>
+      </thead>
       <tbody>${body}</tbody>
     </table>
   `;
@@ -82,12 +98,14 @@ function stateSpacePart(view: DynamicView, checks: readonly CheckResult[], subje
 /** Both CTF sets side by side, each replaced by its rejection note and failed checks when null. */
 export function ctfSection(view: DynamicView, checks: readonly CheckResult[], subject: string): Trusted {
   const modal = view.ctf === null
-    ? html`<p>Modal form: ${String(view.modal.ratios.length)} modes, q_t = RF₀ x_t + RF₁ x_(t−1) + Σ_n c_n q_n s_(n,t) with s_(n,t) = q_n s_(n,t−1) + x_(t−2); RF₀, RF₁, q_n = e^(−β_nΔ) and c_n are in Appendix B.</p>`
+    ? html`<p>Modal form: ${
+      String(view.modal.ratios.length)
+    } modes, q_t = RF₀ x_t + RF₁ x_(t−1) + Σ_n c_n q_n s_(n,t) with s_(n,t) = q_n s_(n,t−1) + x_(t−2); RF₀, RF₁, q_n = e^(−β_nΔ) and c_n are in Appendix B.</p>`
     : html``;
   return html`
-    <p>Recurrence for the inside flux: q_i,t = Σ_n Y_n T_o,t−n − Σ_n Z_n T_i,t−n + Σ_(n≥1) Φ_n q_i,t−n (outside flux with X_n and Y_n in the same way). CTF sets are not unique: the two methods give different coefficients for the same response, so compare their response factors (check <code>state-space-agreement</code>), not the coefficients. Coefficients printed to ${
-    String(CTF_DIGITS)
-  } significant figures; full precision in Appendix B.</p>
+    <p>Recurrence for the inside flux: q_i,t = Σ_n Y_n T_o,t−n − Σ_n Z_n T_i,t−n + Σ_(n≥1) Φ_n q_i,t−n (outside flux with X_n and Y_n in the same way). CTF sets are not unique: the two methods give different coefficients for the same response, so compare their response factors (check <code>state-space-agreement</code>), not the coefficients. Coefficients printed to ${String(
+      CTF_DIGITS,
+    )} significant figures; full precision in Appendix B.</p>
     <div class="side-by-side">${rootPart(view, checks, subject)}${stateSpacePart(view, checks, subject)}</div>
     ${modal}
   `;

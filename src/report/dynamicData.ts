@@ -31,7 +31,8 @@ function isResponseFactors(value: unknown): boolean {
 
 function isCtf(value: unknown): boolean {
   return value === null ||
-    (isObject(value) && isNumbers(value.X) && isNumbers(value.Y) && isNumbers(value.Z) && isNumbers(value.Phi));
+    (isObject(value) && isNumbers(value.X) && isNumbers(value.Y) && isNumbers(value.Z) &&
+      isNumbers(value.Phi));
 }
 
 function isPeriodicQuantity(value: unknown): boolean {

@@ -20,15 +20,17 @@ function key(series: keyof typeof SERIES_STYLE, label: string): Trusted {
 }
 
 function figure(svg: Trusted, title: string, caption: Trusted): Trusted {
-  return html`<figure class="plot-figure">${svg}<figcaption><strong>${title}</strong> ${caption}</figcaption></figure>`;
+  return html`
+    <figure
+      class="plot-figure">${svg}<figcaption><strong>${title}</strong> ${caption}</figcaption></figure>
+  `;
 }
 
 function plots(construction: Construction, view: DynamicView, prefix: string): Trusted {
   const steps = stepResponse(view.responseFactors.Y);
   const last = steps[steps.length - 1] ?? NaN;
   return html`
-    ${
-    figure(
+    ${figure(
       responseFactorPlot(view, prefix),
       `Response factors of ${construction.id}, first ${String(RESPONSE_FACTOR_WINDOW_H)} h.`,
       html`${key("X", "X_j outside")}, ${key("Y", "Y_j cross")}, ${
@@ -36,36 +38,40 @@ function plots(construction: Construction, view: DynamicView, prefix: string): T
       }. Vertical scale symmetric-logarithmic (linear within ±${
         formatTrim(symlogConstant(view.U), 1)
       } W/(m²·K)), because X₀ and Z₀ dwarf the later terms. ${construction.name}.`,
-    )
-  }
-    ${
-    figure(
+    )}
+    ${figure(
       ctsPlot(view, prefix),
       `Conduction time series of ${construction.id}.`,
       html`Share of a day's conduction heat gain reaching the inside j hours after it is driven at the outside; the 24 bars sum to ${
         formatFixed(seriesSum(view.cts) * 100, 2)
       } %. ${construction.name}.`,
-    )
-  }
-    ${
-    figure(
+    )}
+    ${figure(
       stepResponsePlot(view, prefix),
       `Step response of ${construction.id}.`,
       html`Inside heat flux after a 1 K step of outside temperature at t = 0 (running sum of Y_j, inputs linear between samples); dashed line U. Sum of all ${
         String(steps.length)
       } terms: ${formatSig(last, 6)} W/(m²·K). ${construction.name}.`,
-    )
-  }
+    )}
   `;
 }
 
 function surfaceLine(view: DynamicView): Trusted {
   const s = view.surfaceToSurface;
-  return html`<p class="muted">Surface to surface (no surface resistances, for heat-balance use): U_s = ${
-    formatSig(s.U, 3)
-  } W/(m²·K), ${String(s.responseFactors.Y.length)} response-factor terms, truncation residual ${
-    formatSig(s.responseFactors.truncationResidual, 2)
-  }, polynomial CTF ${s.ctf === null ? "rejected (see checks ending -surface)" : "accepted"}; series in Appendix B.</p>`;
+  return html`
+    <p
+      class="muted">Surface to surface (no surface resistances, for heat-balance use): U_s = ${formatSig(
+        s.U,
+        3,
+      )} W/(m²·K), ${String(
+        s.responseFactors.Y.length,
+      )} response-factor terms, truncation residual ${formatSig(
+        s.responseFactors.truncationResidual,
+        2,
+      )}, polynomial CTF ${s.ctf === null
+        ? "rejected (see checks ending -surface)"
+        : "accepted"}; series in Appendix B.</p>
+  `;
 }
 
 /**
@@ -97,10 +103,13 @@ export function renderDynamicResponse(
   return html`
     <div class="dynamic-response">
       <h4 class="output-heading">Dynamic response of ${construction.id}</h4>
-      <p class="muted">Numbers as in results.json <code>constructions</code> entry for ${construction.id} (Appendix B); method in section 3.</p>
+      <p class="muted">Numbers as in results.json <code>constructions</code> entry for ${construction
+        .id} (Appendix B); method in section 3.</p>
       ${body}
       <h5>Checks on ${construction.id}</h5>
-      ${checksList.markup === "" ? html`<p>No automated check is recorded for this construction.</p>` : checksList}
+      ${checksList.markup === ""
+        ? html`<p>No automated check is recorded for this construction.</p>`
+        : checksList}
     </div>
   `;
 }

@@ -34,7 +34,9 @@ function points(values: readonly number[], timestepH: number, windowH: number): 
   const stride = Math.max(1, Math.ceil((last + 1) / MAX_POINTS));
   const out: Point[] = [];
   for (let j = 0; j <= last; j += stride) out.push({ t: j * timestepH, v: values[j]! });
-  if (out.length > 0 && out[out.length - 1]!.t !== last * timestepH) out.push({ t: last * timestepH, v: values[last]! });
+  if (out.length > 0 && out[out.length - 1]!.t !== last * timestepH) {
+    out.push({ t: last * timestepH, v: values[last]! });
+  }
   return out;
 }
 
@@ -83,7 +85,12 @@ export function responseFactorPlot(view: DynamicView, idPrefix: string): Trusted
   return renderPlotSvg(
     finish({
       marginLeft: 62,
-      x: { label: "Time after the pulse peak, jΔ (h)", labelAnchor: "center", labelArrow: "none", tickFormat: tick },
+      x: {
+        label: "Time after the pulse peak, jΔ (h)",
+        labelAnchor: "center",
+        labelArrow: "none",
+        tickFormat: tick,
+      },
       y: {
         type: "symlog",
         constant,
@@ -106,7 +113,12 @@ export function ctsPlot(view: DynamicView, idPrefix: string): Trusted {
   return renderPlotSvg(
     finish({
       marginLeft: 50,
-      x: { type: "band", label: "Hours after the outside excitation, j (h)", labelAnchor: "center", tickFormat: tick },
+      x: {
+        type: "band",
+        label: "Hours after the outside excitation, j (h)",
+        labelAnchor: "center",
+        tickFormat: tick,
+      },
       y: { label: "Share of the daily conduction gain, %", labelArrow: "none", grid: true, tickFormat: tick },
       marks: [Plot.barY(data, { x: "j", y: "percent", fill: "#4d6f8f" }), Plot.ruleY([0])],
     }),
@@ -142,7 +154,13 @@ export function stepResponsePlot(view: DynamicView, idPrefix: string): Trusted {
       },
       marks: [
         Plot.ruleY([view.U], { stroke: "#a40000", strokeDasharray: "5 4" }),
-        Plot.text([uText], { x: data[data.length - 1]?.t ?? 0, y: view.U, dy: -8, textAnchor: "end", fill: "#a40000" }),
+        Plot.text([uText], {
+          x: data[data.length - 1]?.t ?? 0,
+          y: view.U,
+          dy: -8,
+          textAnchor: "end",
+          fill: "#a40000",
+        }),
         Plot.line(data, { x: "t", y: "v", stroke: SERIES_STYLE.Y.stroke, strokeWidth: 1.8, curve: "linear" }),
         Plot.ruleY([0]),
       ],

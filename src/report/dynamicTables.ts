@@ -11,16 +11,27 @@ type Row = readonly [quantity: string, symbol: string, value: string, unit: stri
 
 function rowsOf(rows: readonly Row[], cls = ""): Trusted[] {
   return rows.map(([quantity, symbol, value, unit]) =>
-    html`<tr class="${cls}"><td>${quantity}</td><td>${symbol}</td><td class="num">${value}</td><td>${unit}</td></tr>`
+    html`
+      <tr class="${cls}">
+        <td>${quantity}</td>
+        <td>${symbol}</td>
+        <td class="num">${value}</td>
+        <td>${unit}</td>
+      </tr>
+    `
   );
 }
 
 function lagNote(view: DynamicView): Trusted {
   const lag = view.dynamic.timeLag_h;
   if (lag <= 12) return html``;
-  return html`<p class="note">The time lag exceeds 12 h. ISO 13786 takes arg(Y12) as a principal value in (−12 h, 12 h], which for this construction would read +${
-    formatSig(24 - lag, 3)
-  } h; the unwrapped lag of ${formatSig(lag, 3)} h is the physical one and is printed above.</p>`;
+  return html`
+    <p
+      class="note">The time lag exceeds 12 h. ISO 13786 takes arg(Y12) as a principal value in (−12 h, 12 h], which for this construction would read +${formatSig(
+        24 - lag,
+        3,
+      )} h; the unwrapped lag of ${formatSig(lag, 3)} h is the physical one and is printed above.</p>
+  `;
 }
 
 /** Summary: U, τ1, poles, time step, response-factor terms and residual, ISO 13786 characteristics. */
@@ -63,7 +74,14 @@ export function dynamicSummaryTable(view: DynamicView): Trusted {
   return html`
     <table class="dynamic-summary">
       <caption>Dynamic characteristics. Upper part: the response-factor calculation; lower part: ISO 13786:2017 at a period of 24 h, side 1 = inside, surface resistances included.</caption>
-      <thead><tr><th>Quantity</th><th>Symbol</th><th>Value</th><th>Unit / note</th></tr></thead>
+      <thead>
+        <tr>
+          <th>Quantity</th>
+          <th>Symbol</th>
+          <th>Value</th>
+          <th>Unit / note</th>
+        </tr>
+      </thead>
       <tbody>${rowsOf(method)}${rowsOf(iso.slice(0, 1), "group-start")}${rowsOf(iso.slice(1))}</tbody>
     </table>
     ${lagNote(view)}
@@ -75,50 +93,91 @@ export function responseFactorTable(view: DynamicView): Trusted {
   const rf = view.responseFactors;
   const count = Math.min(PRINTED_TERMS, rf.Y.length);
   const rows = Array.from({ length: count }, (_, j) =>
-    html`<tr><td class="num">${String(j)}</td><td class="num">${formatTrim(j * view.timestep_h, 4)}</td><td class="num">${
-      formatSig(rf.X[j] ?? NaN, 4)
-    }</td><td class="num">${formatSig(rf.Y[j] ?? NaN, 4)}</td><td class="num">${
-      formatSig(rf.Z[j] ?? NaN, 4)
-    }</td></tr>`);
-  const more = rf.Y.length > count ? html`<tr><td class="num">…</td><td></td><td></td><td></td><td></td></tr>` : html``;
+    html`
+      <tr>
+        <td class="num">${String(j)}</td>
+        <td class="num">${formatTrim(j * view.timestep_h, 4)}</td>
+        <td class="num">${formatSig(rf.X[j] ?? NaN, 4)}</td>
+        <td class="num">${formatSig(rf.Y[j] ?? NaN, 4)}</td>
+        <td class="num">${formatSig(rf.Z[j] ?? NaN, 4)}</td>
+      </tr>
+    `);
+  const more = rf.Y.length > count
+    ? html`
+      <tr>
+        <td class="num">…</td>
+        <td></td>
+        <td></td>
+        <td></td>
+        <td></td>
+      </tr>
+    `
+    : html``;
   return html`
     <table class="rf-table">
       <caption>Response factors, air to air, for a unit triangular temperature pulse of base 2Δ (W/(m²·K)); index j is the value at jΔ after the pulse peak.</caption>
-      <thead><tr><th>j</th><th>jΔ h</th><th>X_j (outside)</th><th>Y_j (cross)</th><th>Z_j (inside)</th></tr></thead>
+      <thead>
+        <tr>
+          <th>j</th>
+          <th>jΔ h</th>
+          <th>X_j (outside)</th>
+          <th>Y_j (cross)</th>
+          <th>Z_j (inside)</th>
+        </tr>
+      </thead>
       <tbody>${rows}${more}
-        <tr class="total"><td colspan="2">Σ, all ${String(rf.Y.length)} terms</td><td class="num">${
-    formatSig(seriesSum(rf.X), 6)
-  }</td><td class="num">${formatSig(seriesSum(rf.Y), 6)}</td><td class="num">${formatSig(seriesSum(rf.Z), 6)}</td></tr>
+        <tr class="total"><td colspan="2">Σ, all ${String(rf.Y.length)} terms</td><td class="num">${formatSig(
+          seriesSum(rf.X),
+          6,
+        )}</td><td class="num">${formatSig(seriesSum(rf.Y), 6)}</td><td class="num">${formatSig(
+          seriesSum(rf.Z),
+          6,
+        )}</td></tr>
       </tbody>
     </table>
-    <p class="muted">… ${String(rf.Y.length)} terms in all per series; Σ = U = ${
-    formatSig(view.U, 6)
-  } W/(m²·K) within the truncation residual ${
-    formatSig(rf.truncationResidual, 2)
-  } (relative); full series in Appendix B (responseFactors).</p>
+    <p
+      class="muted">… ${String(rf.Y.length)} terms in all per series; Σ = U = ${formatSig(
+        view.U,
+        6,
+      )} W/(m²·K) within the truncation residual ${formatSig(
+        rf.truncationResidual,
+        2,
+      )} (relative); full series in Appendix B (responseFactors).</p>
   `;
 }
 
 /** The 24-hour periodic response factors Y_P, X_P, Z_P and the CTS, hours 0–11 beside 12–23. */
 export function periodicTable(view: DynamicView): Trusted {
   const cell = (j: number) =>
-    html`<td class="num">${String(j)}</td><td class="num">${formatSig(view.periodic[j] ?? NaN, 4)}</td><td class="num">${
-      formatSig(view.periodicX[j] ?? NaN, 4)
-    }</td><td class="num">${formatSig(view.periodicZ[j] ?? NaN, 4)}</td><td class="num">${
-      formatFixed((view.cts[j] ?? NaN) * 100, 2)
-    }</td>`;
+    html`
+      <td class="num">${String(j)}</td>
+      <td class="num">${formatSig(view.periodic[j] ?? NaN, 4)}</td>
+      <td class="num">${formatSig(view.periodicX[j] ?? NaN, 4)}</td>
+      <td class="num">${formatSig(view.periodicZ[j] ?? NaN, 4)}</td>
+      <td class="num">${formatFixed((view.cts[j] ?? NaN) * 100, 2)}</td>
+    `;
   const rows = Array.from({ length: 12 }, (_, j) => html`<tr>${cell(j)}${cell(j + 12)}</tr>`);
-  const head = html`<th>j</th><th>Y_P,j</th><th>X_P,j</th><th>Z_P,j</th><th>CTS %</th>`;
+  const head = html`
+    <th>j</th>
+    <th>Y_P,j</th>
+    <th>X_P,j</th>
+    <th>Z_P,j</th>
+    <th>CTS %</th>
+  `;
   return html`
     <table class="periodic-table">
       <caption>24-hour periodic response factors at 1 h (W/(m²·K)) and conduction time series (CTS = Y_P / U, %); hours 0–11 left, 12–23 right.</caption>
-      <thead><tr>${head}${head}</tr></thead>
+      <thead>
+        <tr>${head}${head}</tr>
+      </thead>
       <tbody>${rows}
-        <tr class="total"><td colspan="5">Σ over 24 h: Y_P ${formatSig(seriesSum(view.periodic), 6)}, CTS ${
-    formatFixed(seriesSum(view.cts) * 100, 2)
-  } %</td><td colspan="5">X_P ${formatSig(seriesSum(view.periodicX), 6)}, Z_P ${
-    formatSig(seriesSum(view.periodicZ), 6)
-  }</td></tr>
+        <tr class="total"><td colspan="5">Σ over 24 h: Y_P ${formatSig(
+          seriesSum(view.periodic),
+          6,
+        )}, CTS ${formatFixed(seriesSum(view.cts) * 100, 2)} %</td><td colspan="5">X_P ${formatSig(
+          seriesSum(view.periodicX),
+          6,
+        )}, Z_P ${formatSig(seriesSum(view.periodicZ), 6)}</td></tr>
       </tbody>
     </table>
   `;

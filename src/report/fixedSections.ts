@@ -5,7 +5,8 @@ import { html, raw, type Trusted } from "./html.ts";
 export function renderScopeSection(): Trusted {
   return html`<section id="s-1"><h2>1 Scope and exclusions</h2>
 ${
-    raw(`<p>This package computes the steady-state thermal resistance and transmittance of plane constructions from the
+    raw(
+      `<p>This package computes the steady-state thermal resistance and transmittance of plane constructions from the
 layers given in the input, and their dynamic response: response factors, conduction transfer functions, periodic
 response factors, the conduction time series and the ISO 13786 characteristics (method in section 3). The calculation
 rests on these simplifications:</p>
@@ -30,7 +31,8 @@ rests on these simplifications:</p>
 <tr><td>Numbers</td><td>Computed values are printed to three significant figures, response factors and periodic factors to four, CTF coefficients to six, sums checked against U to six; inputs as given (up to four). results.json (Appendix B) holds full precision.</td></tr>
 <tr><td>Time shift</td><td>ISO 13786 sign: negative = lag, positive = lead; the time lag is unwrapped and may exceed 12 h.</td></tr>
 </tbody>
-</table>`)
+</table>`,
+    )
   }
 </section>`;
 }

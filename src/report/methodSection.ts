@@ -35,7 +35,8 @@ carried through the layers at s = −β). Each pole is isolated by bisection on 
 method on B(−β), so close pairs of poles cannot be missed. Poles are taken up to β_nΔ = 40; the limit is doubled (at most
 four times) until the first pole left out would add less than 10⁻¹⁰·U to RF_0.</p>`);
 
-const RESPONSE_FACTORS = raw(`<h3 id="s-3-4">3.4 Response factors (Stephenson &amp; Mitalas 1967, 1971; Kusuda 1969; Hittle 1981)</h3>
+const RESPONSE_FACTORS = raw(
+  `<h3 id="s-3-4">3.4 Response factors (Stephenson &amp; Mitalas 1967, 1971; Kusuda 1969; Hittle 1981)</h3>
 <p>Ramp response of G ∈ {X, Y, Z}, whose numerator is N_G ∈ {D, 1, A}:</p>
 <p class="equation">r_G(t) = U·t + G′(0) + Σ_n a_n e^(−β_n t),&emsp; a_n = N_G(−β_n) / (β_n² · B′(−β_n)).</p>
 <p>G′(0) is taken from the exact derivatives of the matrix product at s = 0 (per layer A′ = D′ = R_l C_l/2,
@@ -47,9 +48,11 @@ RF_j = (1/Δ) Σ_n a_n (1 − e^(−β_nΔ))² e^(−β_n(j−1)Δ)&ensp;(j ≥ 
 <p>By superposition, for any sampled temperatures:</p>
 <p class="equation">q_i(t) = Σ_j Y_j T_o(t − jΔ) − Σ_j Z_j T_i(t − jΔ),&emsp; q_o(t) = Σ_j X_j T_o(t − jΔ) − Σ_j Y_j T_i(t − jΔ).</p>
 <p><strong>Truncation</strong>: terms are produced until a bound on the remaining tail is below 10⁻¹⁰·U. Sum rule:
-Σ X_j = Σ Y_j = Σ Z_j = U; the truncation residual r = max |Σ RF_j − U| / U is printed with each construction.</p>`);
+Σ X_j = Σ Y_j = Σ Z_j = U; the truncation residual r = max |Σ RF_j − U| / U is printed with each construction.</p>`,
+);
 
-const CTF = raw(`<h3 id="s-3-5">3.5 Conduction transfer functions from the poles (Stephenson &amp; Mitalas 1971)</h3>
+const CTF = raw(
+  `<h3 id="s-3-5">3.5 Conduction transfer functions from the poles (Stephenson &amp; Mitalas 1971)</h3>
 <p>With q_n = e^(−β_nΔ), the denominator d(z) = Π_n (1 − q_n z⁻¹) = 1 + d_1 z⁻¹ + … + d_N z⁻ᴺ and the numerators
 by convolution with the response factors, b_k = Σ_(j=0…k) RF_j d_(k−j) for k = 0 … N+1 (X_n from X, Y_n from Y, Z_n
 from Z); Φ_n = −d_n. The recurrence is</p>
@@ -59,9 +62,11 @@ from Z); Φ_n = −d_n. The recurrence is</p>
 coefficient-size checks (limits in 3.10); a rejected form is written as <code>null</code> and the modal form is used,
 one first-order recursion per pole with no polynomial expansion and hence no loss of significance:</p>
 <p class="equation">q_t = RF_0 x_t + RF_1 x_(t−1) + Σ_n c_n q_n s_(n,t),&emsp; s_(n,t) = q_n s_(n,t−1) + x_(t−2),&emsp;
-c_n = a_n (1 − q_n)² / Δ.</p>`);
+c_n = a_n (1 − q_n)² / Δ.</p>`,
+);
 
-const STATE_SPACE = raw(`<h3 id="s-3-6">3.6 Conduction transfer functions from a state-space model (Seem 1987; Ouyang &amp; Haghighat 1991)</h3>
+const STATE_SPACE = raw(
+  `<h3 id="s-3-6">3.6 Conduction transfer functions from a state-space model (Seem 1987; Ouyang &amp; Haghighat 1991)</h3>
 <p>Each massive layer is divided into cell-centred finite volumes, graded finer towards the two exposed faces; node
 capacity ρ c Δx, links through half cells, massless layers and films. With u = [T_o, T_i]ᵀ and y = [q_o, q_i]ᵀ:
 dx/dt = A x + B u, y = C x + D u. Discretisation is exact for inputs linear between samples, from one matrix
@@ -70,14 +75,17 @@ exponential of the augmented matrix:</p>
 x_(k+1) = F x_k + Γ_0 u_k + Γ_1 (u_(k+1) − u_k).</p>
 <p>The model's response factors are compared with those of 3.4 and the mesh is refined until they agree (limit in 3.10,
 at most 260 cells); the CTF follows from the eigenvalues of F as in 3.5. The cells per layer are printed with the
-coefficients. CTF coefficient sets are not unique: the two methods are compared by their response factors.</p>`);
+coefficients. CTF coefficient sets are not unique: the two methods are compared by their response factors.</p>`,
+);
 
-const PERIODIC = raw(`<h3 id="s-3-7">3.7 Periodic response factors and conduction time series (Spitler, Fisher &amp; Pedersen 1997; Spitler &amp; Fisher 1999; ASHRAE Handbook—Fundamentals, nonresidential cooling and heating load chapter)</h3>
+const PERIODIC = raw(
+  `<h3 id="s-3-7">3.7 Periodic response factors and conduction time series (Spitler, Fisher &amp; Pedersen 1997; Spitler &amp; Fisher 1999; ASHRAE Handbook—Fundamentals, nonresidential cooling and heating load chapter)</h3>
 <p>For a 24-hour periodic input sampled hourly (Δ = 1 h, whatever the construction's time step):</p>
 <p class="equation">Y_P,j = Σ_(k≥0) Y_(j+24k),&emsp; j = 0 … 23&emsp;(X_P, Z_P likewise);&emsp; CTS c_j = Y_P,j / U,&emsp; Σ c_j = 1.</p>
 <p>The sums are evaluated in closed form from the modal form (geometric series, no truncation) and checked against the
 folded series. Conduction heat gain for a periodic outside temperature T_e (for example sol-air) and a constant room
-temperature T_rc: q_θ = Σ_j Y_P,j (T_e,θ−j − T_rc) = Σ_j c_j U (T_e,θ−j − T_rc).</p>`);
+temperature T_rc: q_θ = Σ_j Y_P,j (T_e,θ−j − T_rc) = Σ_j c_j U (T_e,θ−j − T_rc).</p>`,
+);
 
 const ISO = raw(`<h3 id="s-3-8">3.8 ISO 13786:2017 dynamic thermal characteristics</h3>
 <p>At s = iω with ω = 2π/T, T = 86 400 s, films included and side 1 = inside, the heat transfer matrix follows from

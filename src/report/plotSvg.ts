@@ -66,6 +66,8 @@ export function renderPlotSvg(spec: PlotSpec, idPrefix: string, label: string): 
   }
   renameIds(svg, idPrefix);
   const markup = svg.outerHTML;
-  if (FORBIDDEN.test(markup)) throw new Error(`Cannot inline plot "${label}": it holds live or external content`);
+  if (FORBIDDEN.test(markup)) {
+    throw new Error(`Cannot inline plot "${label}": it holds live or external content`);
+  }
   return raw(markup);
 }

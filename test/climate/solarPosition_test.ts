@@ -6,6 +6,7 @@ import {
   meeusSunDeclinationAndTime,
   solarPosition,
 } from "../../src/climate/solarPosition.ts";
+import { handbookSunDeclinationAndTime } from "../../src/climate/solarPositionHandbook.ts";
 import { angleDiffDeg, assertNear } from "./_assert.ts";
 
 const RAD = Math.PI / 180;
@@ -131,6 +132,14 @@ Deno.test("solarPosition() agrees with suncalc over dates, times and latitudes",
   }
   assertNear(worstAltitudeDeg, 0, 0.25, "worst altitude difference");
   assertNear(worstAzimuthDeg, 0, 0.25, "worst azimuth difference (great-circle)");
+});
+
+Deno.test("handbookSunDeclinationAndTime() reproduces the handbook's 21 July values", () => {
+  // ASHRAE Fundamentals 2013 Ch. 14 Example 1 (from memory), 21 July (n = 202): ET = −6.4 min, δ = 20.4°, printed to
+  // one decimal; the formulas give −6.354 min and 20.442° (worked by hand).
+  const sun = handbookSunDeclinationAndTime(202);
+  assertNear(sun.equationOfTimeMin, -6.4, 0.05, "equation of time");
+  assertNear(sun.declinationDeg, 20.4, 0.05, "declination");
 });
 
 Deno.test("solarPosition() handbook option agrees with suncalc within its looser bound", () => {

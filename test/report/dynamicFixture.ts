@@ -2,7 +2,11 @@
  * Dynamic results for the rendering tests, produced by the real engine (never typed in), and small
  * invented constructions with known closed-form behaviour.
  */
-import { analyseConstruction, constructionChecksJson, constructionDynamicJson } from "../../src/engine/mod.ts";
+import {
+  analyseConstruction,
+  constructionChecksJson,
+  constructionDynamicJson,
+} from "../../src/engine/mod.ts";
 import type { Layer } from "../../src/engine/layer.ts";
 import type { Construction } from "../../src/project/model.ts";
 import { renderConstructionOutput } from "../../src/report/constructionOutput.ts";
@@ -53,7 +57,12 @@ export function construction(
     insideResistanceDefaulted: false,
     timestepS: 3600,
     at: at(1),
-    layers: layers.map((l, i) => ({ ...l, name: `layer ${i + 1}`, source: "invented test value", at: at(i + 2) })),
+    layers: layers.map((l, i) => ({
+      ...l,
+      name: `layer ${i + 1}`,
+      source: "invented test value",
+      at: at(i + 2),
+    })),
   };
 }
 
@@ -81,7 +90,9 @@ export function bareSlab(): Construction {
 }
 
 /** Renders one construction's output (steady and dynamic) with the engine's results and checks. */
-export function renderWithEngine(c: Construction): { markup: string; results: ConstructionResults; checks: CheckResult[] } {
+export function renderWithEngine(
+  c: Construction,
+): { markup: string; results: ConstructionResults; checks: CheckResult[] } {
   const { results, checks } = engineEntry(c);
   const markup = renderConstructionOutput(c, results, checks, `c-${c.id.toLowerCase()}`).markup;
   return { markup, results, checks };

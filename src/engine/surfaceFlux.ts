@@ -1,0 +1,151 @@
+import { periodicFromModes } from "./periodic.ts";
+import type { PulseModes } from "./pulseModes.ts";
+
+/** The modal form of X, Y and Z of one construction at the scenario timestep (air to air). */
+export interface FluxModes {
+  readonly X: PulseModes;
+  readonly Y: PulseModes;
+  readonly Z: PulseModes;
+}
+
+/** Fluxes of one surface at each step, W/m², positive from outside to inside. */
+export interface SurfaceFlux {
+  /** Flux leaving the inside surface into the room. */
+  readonly insideWPerM2: readonly number[];
+  /** Flux entering the outside surface from outside. */
+  readonly outsideWPerM2: readonly number[];
+}
+
+/** Circular convolution Σ_j p_j x((k − j) mod N). */
+function circular(p: readonly number[], x: readonly number[]): number[] {
+  const n = x.length;
+  const out = new Array<number>(n).fill(0);
+  for (let k = 0; k < n; k++) {
+    let sum = 0;
+    for (let j = 0; j < n; j++) sum += p[j]! * x[(k - j + n) % n]!;
+    out[k] = sum;
+  }
+  return out;
+}
+
+/**
+ * Steady-periodic fluxes for one day repeated forever: periodic response factors (each mode summed in
+ * closed form over all past days) applied by circular convolution; exact for temperatures that are
+ * piecewise linear between steps.
+ */
+export function steadyPeriodicFlux(
+  modes: FluxModes,
+  solAirC: readonly number[],
+  indoorC: readonly number[],
+): SurfaceFlux {
+  const n = solAirC.length;
+  const pX = periodicFromModes(modes.X, n);
+  const pY = periodicFromModes(modes.Y, n);
+  const pZ = periodicFromModes(modes.Z, n);
+  const yOut = circular(pY, solAirC);
+  const zIn = circular(pZ, indoorC);
+  const xOut = circular(pX, solAirC);
+  const yIn = circular(pY, indoorC);
+  return {
+    insideWPerM2: yOut.map((v, k) => v - zIn[k]!),
+    outsideWPerM2: xOut.map((v, k) => v - yIn[k]!),
+  };
+}
+
+/** A running modal recursion: one first-order state per pole plus the two leading terms. */
+export class ModalFilter {
+  readonly #modes: PulseModes;
+  readonly #states: Float64Array;
+  #previous1 = 0;
+  #previous2 = 0;
+
+  /** Starts the filter with all past inputs equal to `initial`. */
+  constructor(modes: PulseModes, initial = 0) {
+    this.#modes = modes;
+    this.#states = new Float64Array(modes.ratios.length);
+    this.#previous1 = initial;
+    this.#previous2 = initial;
+    // A constant past input x gives the state x / (1 − q) for each mode.
+    for (let n = 0; n < this.#states.length; n++) this.#states[n] = initial / (1 - modes.ratios[n]!);
+  }
+
+  /** Feeds the next input and returns the response at this step. */
+  step(x: number): number {
+    const m = this.#modes;
+    let value = m.rf0 * x + m.rf1 * this.#previous1;
+    const x2 = this.#previous2;
+    for (let n = 0; n < this.#states.length; n++) {
+      const q = m.ratios[n]!;
+      const state = q * this.#states[n]! + x2;
+      this.#states[n] = state;
+      value += m.coefficients[n]! * q * state;
+    }
+    this.#previous2 = this.#previous1;
+    this.#previous1 = x;
+    return value;
+  }
+}
+
+/** Running inside and outside fluxes of one surface from its modal form. */
+export class SurfaceRecursion {
+  readonly #yOut: ModalFilter;
+  readonly #zIn: ModalFilter;
+  readonly #xOut: ModalFilter;
+  readonly #yIn: ModalFilter;
+
+  /** Starts with a steady past at the given outdoor (sol-air) and indoor temperatures. */
+  constructor(modes: FluxModes, initialOutC: number, initialInC: number) {
+    this.#yOut = new ModalFilter(modes.Y, initialOutC);
+    this.#zIn = new ModalFilter(modes.Z, initialInC);
+    this.#xOut = new ModalFilter(modes.X, initialOutC);
+    this.#yIn = new ModalFilter(modes.Y, initialInC);
+  }
+
+  /** Advances one step; returns [inside flux, outside flux] in W/m². */
+  step(outC: number, inC: number): [number, number] {
+    const inside = this.#yOut.step(outC) - this.#zIn.step(inC);
+    const outside = this.#xOut.step(outC) - this.#yIn.step(inC);
+    return [inside, outside];
+  }
+}
+
+/** Result of repeating a design day until its peak settles. */
+export interface RepeatedDay extends SurfaceFlux {
+  readonly days: number;
+  /** Relative change of the daily peak inside flux between the last two days. */
+  readonly peakChange: number;
+}
+
+/**
+ * Runs the design day again and again through the modal recursion (starting from a steady state at the
+ * daily means) until the daily peak inside flux changes by less than `relativeTolerance`.
+ */
+export function repeatedDayFlux(
+  modes: FluxModes,
+  solAirC: readonly number[],
+  indoorC: readonly number[],
+  relativeTolerance = 1e-4,
+  maxDays = 2000,
+): RepeatedDay {
+  const mean = (xs: readonly number[]) => xs.reduce((a, b) => a + b, 0) / xs.length;
+  const run = new SurfaceRecursion(modes, mean(solAirC), mean(indoorC));
+  let previousPeak = NaN;
+  let inside: number[] = [];
+  let outside: number[] = [];
+  for (let day = 1; day <= maxDays; day++) {
+    inside = [];
+    outside = [];
+    for (let k = 0; k < solAirC.length; k++) {
+      const [qi, qo] = run.step(solAirC[k]!, indoorC[k]!);
+      inside.push(qi);
+      outside.push(qo);
+    }
+    const peak = Math.max(...inside.map(Math.abs));
+    const change = Math.abs(peak - previousPeak) / Math.max(peak, 1e-12);
+    if (day >= 2 && change < relativeTolerance) {
+      return { insideWPerM2: inside, outsideWPerM2: outside, days: day, peakChange: change };
+    }
+    previousPeak = peak;
+  }
+  return { insideWPerM2: inside, outsideWPerM2: outside, days: maxDays, peakChange: NaN };
+}

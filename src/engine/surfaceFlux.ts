@@ -149,3 +149,73 @@ export function repeatedDayFlux(
   }
   return { insideWPerM2: inside, outsideWPerM2: outside, days: maxDays, peakChange: NaN };
 }
+
+/** Polynomial CTF coefficients of one construction: X, Y, Z (n = 0, 1, …) and Φ (n = 1, 2, …). */
+export interface CtfCoefficients {
+  readonly X: readonly number[];
+  readonly Y: readonly number[];
+  readonly Z: readonly number[];
+  readonly Phi: readonly number[];
+}
+
+/**
+ * Runs the design day again and again through the polynomial CTF recursion
+ * q_i,t = Σ Y_n T_o,t−n − Σ Z_n T_i,t−n + Σ Φ_n q_i,t−n (and the same with X, Y for q_o), from a steady start
+ * at the daily means, until the daily peak inside flux changes by less than `relativeTolerance`.
+ */
+export function ctfRepeatedDayFlux(
+  ctf: CtfCoefficients,
+  uValue: number,
+  solAirC: readonly number[],
+  indoorC: readonly number[],
+  relativeTolerance = 1e-4,
+  maxDays = 2000,
+): RepeatedDay {
+  const n = solAirC.length;
+  const mean = (xs: readonly number[]) => xs.reduce((a, b) => a + b, 0) / xs.length;
+  const meanOut = mean(solAirC);
+  const meanIn = mean(indoorC);
+  const history = Math.max(ctf.X.length, ctf.Y.length, ctf.Z.length, ctf.Phi.length + 1) + 1;
+  const tOut: number[] = new Array<number>(history).fill(meanOut);
+  const tIn: number[] = new Array<number>(history).fill(meanIn);
+  const qIn: number[] = new Array<number>(history).fill(uValue * (meanOut - meanIn));
+  const qOut: number[] = qIn.slice();
+  let previousPeak = NaN;
+  let inside: number[] = [];
+  let outside: number[] = [];
+  for (let day = 1; day <= maxDays; day++) {
+    inside = [];
+    outside = [];
+    for (let k = 0; k < n; k++) {
+      tOut.unshift(solAirC[k]!);
+      tIn.unshift(indoorC[k]!);
+      tOut.length = history;
+      tIn.length = history;
+      let qi = 0;
+      let qo = 0;
+      for (let j = 0; j < ctf.Y.length; j++) {
+        qi += ctf.Y[j]! * tOut[j]!;
+        qo -= ctf.Y[j]! * tIn[j]!;
+      }
+      for (let j = 0; j < ctf.Z.length; j++) qi -= ctf.Z[j]! * tIn[j]!;
+      for (let j = 0; j < ctf.X.length; j++) qo += ctf.X[j]! * tOut[j]!;
+      for (let j = 0; j < ctf.Phi.length; j++) {
+        qi += ctf.Phi[j]! * qIn[j]!;
+        qo += ctf.Phi[j]! * qOut[j]!;
+      }
+      qIn.unshift(qi);
+      qOut.unshift(qo);
+      qIn.length = history;
+      qOut.length = history;
+      inside.push(qi);
+      outside.push(qo);
+    }
+    const peak = Math.max(...inside.map(Math.abs));
+    const change = Math.abs(peak - previousPeak) / Math.max(peak, 1e-12);
+    if (day >= 2 && change < relativeTolerance) {
+      return { insideWPerM2: inside, outsideWPerM2: outside, days: day, peakChange: change };
+    }
+    previousPeak = peak;
+  }
+  return { insideWPerM2: inside, outsideWPerM2: outside, days: maxDays, peakChange: NaN };
+}

@@ -80,28 +80,73 @@ export interface Construction {
   readonly at: Position;
 }
 
-/** A scenario block, validated; computed by a later stage. Values in SI. */
-export interface Scenario {
-  readonly id: string;
-  readonly kind: "design-day" | "weather";
-  readonly timestepS: number;
-  readonly at: Position;
-  /** The validated body, SI numbers, kept for the package and later computation. */
-  readonly body: Readonly<Record<string, unknown>>;
-  readonly surfaces: readonly ScenarioSurface[];
+/** A temperature given as one constant or as 24 hourly values (index k = k:00 local standard time), °C. */
+export type TemperatureProfile =
+  | { readonly kind: "constant"; readonly valueC: number }
+  | { readonly kind: "hourly"; readonly hourlyC: readonly number[] };
+
+/** A site: latitude and longitude in degrees (east positive), standard-time offset from UTC in hours (east positive). */
+export interface Site {
+  readonly latitudeDeg: number;
+  readonly longitudeDeg: number;
+  readonly timeZoneH: number;
+  readonly elevationM?: number;
 }
 
+/** The sky of a design day. */
+export type DesignDaySky =
+  | { readonly kind: "clear-sky"; readonly beamOpticalDepth: number; readonly diffuseOpticalDepth: number }
+  | { readonly kind: "none" };
+
+interface ScenarioCommon {
+  readonly id: string;
+  readonly timestepS: number;
+  readonly timestepDefaulted: boolean;
+  readonly indoor: TemperatureProfile;
+  readonly surfaces: readonly ScenarioSurface[];
+  readonly at: Position;
+}
+
+/** A scenario block, validated and in SI. */
+export type Scenario =
+  | (ScenarioCommon & {
+    readonly kind: "design-day";
+    readonly outdoor:
+      | { readonly kind: "daily-range"; readonly maxDryBulbC: number; readonly dailyRangeK: number }
+      | { readonly kind: "hourly"; readonly hourlyC: readonly number[] };
+    readonly site?: Site;
+    readonly month: number;
+    readonly day: number;
+    readonly sky: DesignDaySky;
+  })
+  | (ScenarioCommon & {
+    readonly kind: "weather";
+    /** Path of the weather CSV inside the project (POSIX). */
+    readonly weatherPath: string;
+    readonly weatherAt: Position;
+    readonly site?: Site;
+  });
+
+/** An exposed surface of a scenario. Optional keys stay absent here; defaults are filled (and logged) when computing. */
 export interface ScenarioSurface {
   readonly id: string;
   readonly construction: string;
   /** m^2 */
   readonly areaM2: number;
-  /** degrees clockwise from north, absent for a surface that gives sol-air values */
+  /** degrees clockwise from north */
   readonly azimuthDeg?: number;
-  /** degrees from horizontal */
+  /** degrees from horizontal (0 = facing up) */
   readonly tiltDeg?: number;
   readonly absorptance?: number;
   readonly emittance?: number;
+  readonly groundReflectance?: number;
+  /** W/(m^2 K) */
+  readonly outsideCoefficient?: number;
+  /** K: the long-wave term ε ΔR / h_o */
+  readonly longwaveCorrectionK?: number;
+  readonly radiantFraction?: number;
+  /** 24 sol-air temperatures, °C, bypassing the solar model. */
+  readonly solAirC?: readonly number[];
   readonly at: Position;
 }
 

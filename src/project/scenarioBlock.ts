@@ -10,11 +10,11 @@ import {
   readNumber,
   readQuantity,
   readText,
-  textOf,
+  withSuggestion,
 } from "./fields.ts";
-import type { Scenario, ScenarioSurface } from "./model.ts";
+import type { DesignDaySky, Scenario, ScenarioSurface, Site, TemperatureProfile } from "./model.ts";
+import type { Position } from "./position.ts";
 import type { QuantityKind } from "./quantity.ts";
-import { didYouMean } from "./suggest.ts";
 import type { YamlValue } from "./yamlTree.ts";
 
 export const SCENARIO_KEYS = [
@@ -46,8 +46,9 @@ export const SURFACE_KEYS = [
 const SITE_KEYS = ["latitude", "longitude", "time-zone", "elevation"] as const;
 const SKY_KEYS = ["model", "beam-optical-depth", "diffuse-optical-depth"] as const;
 const MONTH_DAY = /^(0[1-9]|1[0-2])-(0[1-9]|[12]\d|3[01])$/;
+const DAYS_IN_MONTH = [31, 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31];
 
-/** Reads and validates a `scenario` block; constructions are checked against the known ids. */
+/** Reads and validates a `scenario` block; surface constructions are checked against the known ids. */
 export function readScenarioBlock(
   value: YamlValue,
   constructionIds: readonly string[],
@@ -58,7 +59,7 @@ export function readScenarioBlock(
   const before = errorCount(out);
   const id = readId(fields, "id", out);
   const kind = readChoice(fields, "kind", ["design-day", "weather"] as const, out);
-  if (kind === undefined && !fields.entries.has("kind")) {
+  if (!fields.entries.has("kind")) {
     out.push(
       error(
         fields.at,
@@ -68,23 +69,59 @@ export function readScenarioBlock(
       ),
     );
   }
-  const timestepS = readTimestep(fields, out) ?? 3600;
-  const body: Record<string, unknown> = {};
-  body.indoor = readTemperatureSeries(fields, "indoor", out, true);
-  if (kind === "design-day") {
-    body.outdoor = readOutdoor(fields, out);
-    body.site = readSite(fields, out);
-    body.date = readMonthDay(fields, out);
-    body.sky = readSky(fields, out);
-    forbid(fields, ["weather"], "a design-day scenario", out);
-  } else if (kind === "weather") {
-    body.weather = readWeatherPath(fields, out);
-    body.site = readSite(fields, out);
-    forbid(fields, ["outdoor", "date", "sky"], "a weather scenario (the weather file gives them)", out);
-  }
+  const timestepS = readTimestep(fields, out);
+  const indoor = readTemperatureProfile(fields, "indoor", out);
+  const site = readSite(fields, out);
   const surfaces = readSurfaces(fields, constructionIds, out);
-  if (errorCount(out) > before || id === undefined || kind === undefined) return undefined;
-  return { id: id.id, kind, timestepS, at: fields.at, body, surfaces };
+  const common = {
+    id: id?.id ?? "",
+    timestepS: timestepS ?? 3600,
+    timestepDefaulted: !fields.entries.has("timestep"),
+    indoor: indoor ?? { kind: "constant" as const, valueC: NaN },
+    surfaces,
+    at: fields.at,
+    ...(site === undefined ? {} : { site }),
+  };
+  if (kind === "design-day") {
+    forbid(fields, ["weather"], "a design-day scenario", out);
+    const outdoor = readOutdoor(fields, out);
+    const date = readMonthDay(fields, out);
+    const sky = readSky(fields, out);
+    if (sky?.kind === "clear-sky" && site === undefined && !fields.entries.has("site")) {
+      out.push(
+        error(
+          fields.at,
+          "missing-key",
+          'Missing "site" in the scenario block: the clear-sky model needs the sun position',
+          "add e.g. `site: { latitude: 52.4 deg, longitude: -1.9 deg, time-zone: 0 h, elevation: 120 m }`",
+        ),
+      );
+    }
+    if (
+      errorCount(out) > before || id === undefined || indoor === undefined || outdoor === undefined ||
+      date === undefined || sky === undefined
+    ) return undefined;
+    return { ...common, kind, outdoor, month: date.month, day: date.day, sky };
+  }
+  if (kind === "weather") {
+    forbid(fields, ["outdoor", "date", "sky"], "a weather scenario (the weather file gives them)", out);
+    const weather = readWeatherPath(fields, out);
+    if (site === undefined && !fields.entries.has("site")) {
+      out.push(
+        error(
+          fields.at,
+          "missing-key",
+          'Missing "site" in the weather scenario: the sun position is needed to transpose irradiance',
+          "add e.g. `site: { latitude: 52.4 deg, longitude: -1.9 deg, time-zone: 0 h, elevation: 120 m }`",
+        ),
+      );
+    }
+    if (errorCount(out) > before || id === undefined || indoor === undefined || weather === undefined) {
+      return undefined;
+    }
+    return { ...common, kind, weatherPath: weather.path, weatherAt: weather.at };
+  }
+  return undefined;
 }
 
 function forbid(fields: Fields, keys: readonly string[], what: string, out: Diagnostic[]): void {
@@ -104,7 +141,17 @@ function readSeries(
   what: string,
   out: Diagnostic[],
 ): number[] | undefined {
-  if (value.kind !== "list") return undefined;
+  if (value.kind !== "list") {
+    out.push(
+      error(
+        value.at,
+        "expected-list",
+        `Expected a list of 24 hourly values for ${what}`,
+        "write `[16.1 degC, 15.2 degC, …]`, hour 0 first",
+      ),
+    );
+    return undefined;
+  }
   if (value.items.length !== 24) {
     out.push(
       error(
@@ -120,14 +167,23 @@ function readSeries(
   return values.every((v) => v !== undefined) ? values as number[] : undefined;
 }
 
-function readTemperatureSeries(fields: Fields, key: string, out: Diagnostic[], required: boolean): unknown {
+function readTemperatureProfile(
+  fields: Fields,
+  key: string,
+  out: Diagnostic[],
+): TemperatureProfile | undefined {
   const entry = fields.entries.get(key);
-  if (entry === undefined) return required ? readQuantity(fields, key, "temperature", out, true) : undefined;
-  if (entry.value.kind === "list") return readSeries(entry.value, "temperature", `"${key}"`, out);
-  return readQuantity(fields, key, "temperature", out, true);
+  if (entry?.value.kind === "list") {
+    const hourlyC = readSeries(entry.value, "temperature", `"${key}"`, out);
+    return hourlyC === undefined ? undefined : { kind: "hourly", hourlyC };
+  }
+  const valueC = readQuantity(fields, key, "temperature", out, true);
+  return valueC === undefined ? undefined : { kind: "constant", valueC };
 }
 
-function readOutdoor(fields: Fields, out: Diagnostic[]): unknown {
+type Outdoor = Extract<Scenario, { kind: "design-day" }>["outdoor"];
+
+function readOutdoor(fields: Fields, out: Diagnostic[]): Outdoor | undefined {
   const entry = fields.entries.get("outdoor");
   if (entry === undefined) {
     out.push(
@@ -158,98 +214,159 @@ function readOutdoor(fields: Fields, out: Diagnostic[]): unknown {
           "remove one of the two descriptions",
         ),
       );
-    }
-    if (hourly.value.kind !== "list") {
-      out.push(
-        error(
-          hourly.value.at,
-          "expected-list",
-          "Expected a list of 24 temperatures for `hourly`",
-          "write `[16.1 degC, …]`",
-        ),
-      );
       return undefined;
     }
-    return { hourly: readSeries(hourly.value, "temperature", "`hourly` outdoor temperatures", out) };
+    const hourlyC = readSeries(hourly.value, "temperature", "`hourly` outdoor temperatures", out);
+    return hourlyC === undefined ? undefined : { kind: "hourly", hourlyC };
   }
-  const maxDryBulb = readQuantity(outdoor, "max-dry-bulb", "temperature", out, true);
-  const dailyRange = readQuantity(outdoor, "daily-range", "temperatureDifference", out, true);
-  if (dailyRange !== undefined && (dailyRange < 0 || dailyRange > 30)) {
+  const maxDryBulbC = readQuantity(outdoor, "max-dry-bulb", "temperature", out, true);
+  const dailyRangeK = readQuantity(outdoor, "daily-range", "temperatureDifference", out, true);
+  if (maxDryBulbC !== undefined && (maxDryBulbC < -60 || maxDryBulbC > 60)) {
+    out.push(
+      error(
+        outdoor.entries.get("max-dry-bulb")?.value.at ?? outdoor.at,
+        "out-of-range",
+        `Maximum dry bulb ${maxDryBulbC} °C is outside −60 to 60 °C`,
+        "check the value and its unit against the climate data",
+      ),
+    );
+    return undefined;
+  }
+  if (dailyRangeK !== undefined && (dailyRangeK < 0 || dailyRangeK > 30)) {
     out.push(
       error(
         outdoor.entries.get("daily-range")?.value.at ?? outdoor.at,
         "out-of-range",
-        `Daily range ${dailyRange} K is outside 0 to 30 K`,
+        `Daily range ${dailyRangeK} K is outside 0 to 30 K`,
         "check the value against the climate data",
       ),
     );
+    return undefined;
   }
-  return { maxDryBulb, dailyRange };
+  return maxDryBulbC === undefined || dailyRangeK === undefined
+    ? undefined
+    : { kind: "daily-range", maxDryBulbC, dailyRangeK };
 }
 
-function readSite(fields: Fields, out: Diagnostic[]): unknown {
+function readSite(fields: Fields, out: Diagnostic[]): Site | undefined {
   const entry = fields.entries.get("site");
   if (entry === undefined) return undefined;
   const site = readFields(entry.value, SITE_KEYS, "site", out);
   if (site === undefined) return undefined;
-  const latitude = readQuantity(site, "latitude", "angle", out, true);
-  const longitude = readQuantity(site, "longitude", "angle", out, true);
+  const before = errorCount(out);
+  const latitudeDeg = readQuantity(site, "latitude", "angle", out, true);
+  const longitudeDeg = readQuantity(site, "longitude", "angle", out, true);
   const timeZoneS = readQuantity(site, "time-zone", "time", out, true);
-  const elevation = readQuantity(site, "elevation", "length", out);
-  inRange(site, "latitude", latitude, -90, 90, "deg", out);
-  inRange(site, "longitude", longitude, -180, 180, "deg", out);
+  const elevationM = readQuantity(site, "elevation", "length", out);
+  inRange(site, "latitude", latitudeDeg, -90, 90, "deg", out);
+  inRange(site, "longitude", longitudeDeg, -180, 180, "deg", out);
   inRange(site, "time-zone", timeZoneS === undefined ? undefined : timeZoneS / 3600, -12, 14, "h", out);
+  if (
+    errorCount(out) > before || latitudeDeg === undefined || longitudeDeg === undefined ||
+    timeZoneS === undefined
+  ) return undefined;
   return {
-    latitude,
-    longitude,
-    timeZoneH: timeZoneS === undefined ? undefined : timeZoneS / 3600,
-    elevation,
+    latitudeDeg,
+    longitudeDeg,
+    timeZoneH: timeZoneS / 3600,
+    ...(elevationM === undefined ? {} : { elevationM }),
   };
 }
 
-function readSky(fields: Fields, out: Diagnostic[]): unknown {
+function readSky(fields: Fields, out: Diagnostic[]): DesignDaySky | undefined {
   const entry = fields.entries.get("sky");
-  if (entry === undefined) return undefined;
-  if (entry.value.kind === "scalar" && entry.value.value === "none") return "none";
-  const sky = readFields(entry.value, SKY_KEYS, "sky", out);
-  if (sky === undefined) return undefined;
-  const model = readChoice(sky, "model", ["clear-sky"] as const, out);
-  const beam = readNumber(sky, "beam-optical-depth", 0.05, 1.5, out);
-  const diffuse = readNumber(sky, "diffuse-optical-depth", 0.5, 4, out);
-  return { model, beamOpticalDepth: beam, diffuseOpticalDepth: diffuse };
-}
-
-function readMonthDay(fields: Fields, out: Diagnostic[]): string | undefined {
-  const text = readText(fields, "date", out, { example: "07-21" });
-  if (text !== undefined && !MONTH_DAY.test(text)) {
+  if (entry === undefined) {
     out.push(
       error(
-        fields.entries.get("date")?.value.at ?? fields.at,
-        "bad-date",
-        `Cannot read the design date "${text}"`,
-        "write month and day as MM-DD, e.g. `date: 07-21` (quote it if your editor changes it)",
+        fields.at,
+        "missing-key",
+        'Missing required key "sky" in the design-day scenario',
+        "add `sky: { model: clear-sky, beam-optical-depth: 0.45, diffuse-optical-depth: 2.0 }` (depths from the climate data) or `sky: none`",
+      ),
+    );
+    return undefined;
+  }
+  if (entry.value.kind === "scalar" && entry.value.value === "none") return { kind: "none" };
+  const sky = readFields(entry.value, SKY_KEYS, "sky", out);
+  if (sky === undefined) return undefined;
+  const before = errorCount(out);
+  readChoice(sky, "model", ["clear-sky"] as const, out);
+  const beamOpticalDepth = readNumber(sky, "beam-optical-depth", 0.05, 1.5, out);
+  const diffuseOpticalDepth = readNumber(sky, "diffuse-optical-depth", 0.5, 4, out);
+  if (beamOpticalDepth === undefined && !sky.entries.has("beam-optical-depth")) {
+    out.push(
+      error(
+        sky.at,
+        "missing-key",
+        'Missing "beam-optical-depth" in the sky',
+        "add the site's τb from the climate data, e.g. `beam-optical-depth: 0.45`",
       ),
     );
   }
-  return text;
-}
-
-function readWeatherPath(fields: Fields, out: Diagnostic[]): string | undefined {
-  const path = readText(fields, "weather", out, { example: "weather/site-2031.csv" });
-  if (
-    path !== undefined &&
-    (path.startsWith("/") || path.split(/[\\/]/).includes("..") || /^[A-Za-z]:/.test(path))
-  ) {
+  if (diffuseOpticalDepth === undefined && !sky.entries.has("diffuse-optical-depth")) {
     out.push(
       error(
-        fields.entries.get("weather")?.value.at ?? fields.at,
+        sky.at,
+        "missing-key",
+        'Missing "diffuse-optical-depth" in the sky',
+        "add the site's τd from the climate data, e.g. `diffuse-optical-depth: 2.0`",
+      ),
+    );
+  }
+  if (errorCount(out) > before || beamOpticalDepth === undefined || diffuseOpticalDepth === undefined) {
+    return undefined;
+  }
+  return { kind: "clear-sky", beamOpticalDepth, diffuseOpticalDepth };
+}
+
+function readMonthDay(fields: Fields, out: Diagnostic[]): { month: number; day: number } | undefined {
+  const text = readText(fields, "date", out, { example: "07-21" });
+  if (text === undefined) return undefined;
+  const at = fields.entries.get("date")?.value.at ?? fields.at;
+  const match = MONTH_DAY.exec(text);
+  const month = Number(match?.[1]);
+  const day = Number(match?.[2]);
+  if (match === null || day > (DAYS_IN_MONTH[month - 1] ?? 0)) {
+    out.push(
+      error(
+        at,
+        "bad-date",
+        `Cannot read the design date "${text}"`,
+        "write month and day as MM-DD, e.g. `date: 07-21` (29 February is not a design day)",
+      ),
+    );
+    return undefined;
+  }
+  return { month, day };
+}
+
+function readWeatherPath(fields: Fields, out: Diagnostic[]): { path: string; at: Position } | undefined {
+  const path = readText(fields, "weather", out, { example: "weather/site-2031.csv" });
+  if (path === undefined) return undefined;
+  const at = fields.entries.get("weather")?.value.at ?? fields.at;
+  if (path.startsWith("/") || path.split(/[\\/]/).includes("..") || /^[A-Za-z]:/.test(path)) {
+    out.push(
+      error(
+        at,
         "path-outside",
         `Cannot use the weather file "${path}": it points outside the project folder`,
         "copy the file into the project folder and give its path relative to it",
       ),
     );
+    return undefined;
   }
-  return path;
+  if (!path.endsWith(".csv")) {
+    out.push(
+      error(
+        at,
+        "weather-not-csv",
+        `Cannot use the weather file "${path}": expected a .csv file`,
+        "give the path of the CSV file",
+      ),
+    );
+    return undefined;
+  }
+  return { path: path.replaceAll("\\", "/"), at };
 }
 
 function readSurfaces(
@@ -258,97 +375,133 @@ function readSurfaces(
   out: Diagnostic[],
 ): ScenarioSurface[] {
   const items = readList(fields, "surfaces", out, true) ?? [];
+  if (items.length === 0 && fields.entries.has("surfaces")) {
+    out.push(
+      error(
+        fields.entries.get("surfaces")?.value.at ?? fields.at,
+        "no-surfaces",
+        "The scenario has no surfaces",
+        "list at least one surface: `- { id: wall-south, construction: EW-1, azimuth: 180 deg, tilt: 90 deg, area: 42 m^2, absorptance: 0.6 }`",
+      ),
+    );
+  }
   const surfaces: ScenarioSurface[] = [];
   const seen = new Set<string>();
   items.forEach((item, index) => {
-    const surface = readFields(item, SURFACE_KEYS, `surface ${index + 1}`, out);
+    const surface = readSurface(item, index, constructionIds, out);
     if (surface === undefined) return;
-    const before = errorCount(out);
-    const id = readId(surface, "id", out);
-    if (id !== undefined && seen.has(id.id)) {
-      out.push(
-        error(
-          id.at,
-          "duplicate-id",
-          `Duplicate surface id "${id.id}" in the scenario`,
-          "give each surface its own id",
-        ),
-      );
-    }
-    if (id !== undefined) seen.add(id.id);
-    const construction = readText(surface, "construction", out, { example: "EW-1" });
-    if (construction !== undefined && !constructionIds.includes(construction)) {
-      out.push(
-        error(
-          surface.entries.get("construction")?.value.at ?? surface.at,
-          "unknown-construction",
-          `Unknown construction "${construction}" in surface ${id?.id ?? index + 1}`,
-          didYouMean(construction, constructionIds, "constructions"),
-        ),
-      );
-    }
-    const areaM2 = readQuantity(surface, "area", "area", out, true);
-    if (areaM2 !== undefined && !(areaM2 > 0)) {
-      out.push(
-        error(
-          surface.entries.get("area")?.value.at ?? surface.at,
-          "not-positive",
-          `Expected a positive area, found ${areaM2} m^2`,
-          "give the net area of the surface",
-        ),
-      );
-    }
-    const solAir = surface.entries.get("sol-air");
-    if (solAir !== undefined) {
-      if (solAir.value.kind !== "list") {
-        out.push(
-          error(
-            solAir.value.at,
-            "expected-list",
-            "Expected a list of 24 sol-air temperatures",
-            "write `[30 degC, …]`",
-          ),
-        );
-      } else readSeries(solAir.value, "temperature", `"sol-air" of surface ${id?.id ?? index + 1}`, out);
-    }
-    const azimuthDeg = readQuantity(surface, "azimuth", "angle", out, false);
-    const tiltDeg = readQuantity(surface, "tilt", "angle", out, solAir === undefined);
-    inRange(surface, "azimuth", azimuthDeg, 0, 360, "deg", out);
-    inRange(surface, "tilt", tiltDeg, 0, 180, "deg", out);
-    if (
-      solAir === undefined && tiltDeg !== undefined && tiltDeg > 0 && tiltDeg < 180 &&
-      azimuthDeg === undefined
-    ) {
+    if (seen.has(surface.id)) {
       out.push(
         error(
           surface.at,
-          "missing-key",
-          `Missing "azimuth" for the tilted surface ${id?.id ?? index + 1}`,
-          "add e.g. `azimuth: 180 deg` (clockwise from north)",
+          "duplicate-id",
+          `Duplicate surface id "${surface.id}" in the scenario`,
+          "give each surface its own id",
         ),
       );
-    }
-    const absorptance = readNumber(surface, "absorptance", 0, 1, out);
-    const emittance = readNumber(surface, "emittance", 0, 1, out);
-    readNumber(surface, "ground-reflectance", 0, 1, out);
-    readNumber(surface, "radiant-fraction", 0, 1, out);
-    readQuantity(surface, "outside-coefficient", "coefficient", out);
-    readQuantity(surface, "longwave-correction", "temperatureDifference", out);
-    if (errorCount(out) > before || id === undefined || construction === undefined || areaM2 === undefined) {
       return;
     }
-    surfaces.push({
-      id: id.id,
-      construction,
-      areaM2,
-      at: surface.at,
-      ...(azimuthDeg === undefined ? {} : { azimuthDeg }),
-      ...(tiltDeg === undefined ? {} : { tiltDeg }),
-      ...(absorptance === undefined ? {} : { absorptance }),
-      ...(emittance === undefined ? {} : { emittance }),
-    });
+    seen.add(surface.id);
+    surfaces.push(surface);
   });
   return surfaces;
+}
+
+function readSurface(
+  item: YamlValue,
+  index: number,
+  constructionIds: readonly string[],
+  out: Diagnostic[],
+): ScenarioSurface | undefined {
+  const surface = readFields(item, SURFACE_KEYS, `surface ${index + 1}`, out);
+  if (surface === undefined) return undefined;
+  const before = errorCount(out);
+  const id = readId(surface, "id", out);
+  const label = id?.id ?? String(index + 1);
+  const construction = readText(surface, "construction", out, { example: "EW-1" });
+  if (construction !== undefined && !constructionIds.includes(construction)) {
+    out.push(
+      error(
+        surface.entries.get("construction")?.value.at ?? surface.at,
+        "unknown-construction",
+        `Unknown construction "${construction}" in surface ${label}`,
+        withSuggestion(
+          construction,
+          constructionIds,
+          `constructions defined: ${constructionIds.join(", ") || "none"}`,
+        ),
+      ),
+    );
+  }
+  const areaM2 = readQuantity(surface, "area", "area", out, true);
+  if (areaM2 !== undefined && !(areaM2 > 0)) {
+    out.push(
+      error(
+        surface.entries.get("area")?.value.at ?? surface.at,
+        "not-positive",
+        `Expected a positive area, found ${areaM2} m^2`,
+        "give the net area of the surface",
+      ),
+    );
+  }
+  const solAirEntry = surface.entries.get("sol-air");
+  const solAirC = solAirEntry === undefined
+    ? undefined
+    : readSeries(solAirEntry.value, "temperature", `"sol-air" of surface ${label}`, out);
+  const azimuthDeg = readQuantity(surface, "azimuth", "angle", out);
+  const tiltDeg = readQuantity(surface, "tilt", "angle", out, solAirEntry === undefined);
+  inRange(surface, "azimuth", azimuthDeg, 0, 360, "deg", out);
+  inRange(surface, "tilt", tiltDeg, 0, 180, "deg", out);
+  if (
+    solAirEntry === undefined && tiltDeg !== undefined && tiltDeg > 0 && tiltDeg < 180 &&
+    azimuthDeg === undefined
+  ) {
+    out.push(
+      error(
+        surface.at,
+        "missing-key",
+        `Missing "azimuth" for the tilted surface ${label}`,
+        "add e.g. `azimuth: 180 deg` (clockwise from north)",
+      ),
+    );
+  }
+  const absorptance = readNumber(surface, "absorptance", 0, 1, out);
+  if (solAirEntry === undefined && !surface.entries.has("absorptance")) {
+    out.push(
+      error(
+        surface.at,
+        "missing-key",
+        `Missing "absorptance" for surface ${label}: the solar gain depends on it`,
+        "add the outside finish's solar absorptance, e.g. `absorptance: 0.6` (or give `sol-air` values directly)",
+      ),
+    );
+  }
+  const optional = {
+    emittance: readNumber(surface, "emittance", 0, 1, out),
+    groundReflectance: readNumber(surface, "ground-reflectance", 0, 1, out),
+    radiantFraction: readNumber(surface, "radiant-fraction", 0, 1, out),
+    outsideCoefficient: readQuantity(surface, "outside-coefficient", "coefficient", out),
+    longwaveCorrectionK: readQuantity(surface, "longwave-correction", "temperatureDifference", out),
+  };
+  if (optional.outsideCoefficient !== undefined && !(optional.outsideCoefficient > 0)) {
+    out.push(
+      error(
+        surface.entries.get("outside-coefficient")?.value.at ?? surface.at,
+        "not-positive",
+        "Expected a positive outside coefficient",
+        "write e.g. `outside-coefficient: 25 W/(m^2 K)`",
+      ),
+    );
+  }
+  if (errorCount(out) > before || id === undefined || construction === undefined || areaM2 === undefined) {
+    return undefined;
+  }
+  const present = Object.fromEntries(
+    Object.entries({ ...optional, azimuthDeg, tiltDeg, absorptance, solAirC }).filter(([, v]) =>
+      v !== undefined
+    ),
+  );
+  return { id: id.id, construction, areaM2, at: surface.at, ...present };
 }
 
 function inRange(
@@ -365,14 +518,11 @@ function inRange(
       error(
         fields.entries.get(key)?.value.at ?? fields.at,
         "out-of-range",
-        `Value ${value} ${unitName} of "${key}" is outside ${min} to ${max} ${unitName}`,
-        `check "${key}" (${textOfKey(fields, key)})`,
+        `Value ${
+          Number(value.toPrecision(6))
+        } ${unitName} of "${key}" is outside ${min} to ${max} ${unitName}`,
+        `check "${key}" and its unit`,
       ),
     );
   }
-}
-
-function textOfKey(fields: Fields, key: string): string {
-  const v = fields.entries.get(key)?.value;
-  return v === undefined ? "" : textOf(v, key, []) ?? "";
 }

@@ -49,12 +49,11 @@ nav.contents ol { list-style: none; padding-left: 0; }
 .dynamic-response table { font-size: 8.5pt; }
 .dynamic-response th, .dynamic-response td { padding: 0.6mm 1.5mm; }
 tr.group-start td { border-top: 2px solid var(--ink); }
-.side-by-side { display: flex; flex-wrap: wrap; gap: 0 5mm; align-items: flex-start; }
-.side-by-side > * { flex: 1 1 70mm; }
-.ctf-table { width: 100%; table-layout: fixed; }
-.ctf-table th:first-child, .ctf-table td:first-child { width: 8mm; }
+.ctf-table tr.group-start td { border-top: 1.5px solid var(--ink); }
+.ctf-table tr.second-method td { color: var(--muted); }
 table.subject-checks tr.fail td { color: var(--fail); font-weight: bold; }
 table.subject-checks td.result { font-weight: bold; }
+table.subject-checks tr.pass td { color: var(--ink); }
 table.subject-checks tr.pass td.result { color: var(--pass); }
 .ctf-rejected { border: 1px solid var(--fail); padding: 1mm 2mm; margin: 3mm 0; }
 .equation { font-family: "Cambria Math", "STIX Two Math", Georgia, serif; margin: 1.5mm 0 1.5mm 6mm; }

@@ -1,8 +1,8 @@
 /** CTF coefficients of a construction by both methods, or the reason a polynomial form was rejected. */
 import type { CheckResult } from "../results/types.ts";
 import type { DynamicView } from "./dynamicData.ts";
-import { formatSig } from "./format.ts";
-import { html, type Trusted } from "./html.ts";
+import { formatSig, formatTrim } from "./format.ts";
+import { html, joinHtml, raw, type Trusted } from "./html.ts";
 
 type CtfJson = NonNullable<DynamicView["ctf"]>;
 
@@ -21,23 +21,37 @@ const ACCEPTANCE_CHECKS = {
 
 type Method = keyof typeof ACCEPTANCE_CHECKS;
 
-function coefficientTable(ctf: CtfJson, caption: Trusted): Trusted {
-  const rows = Math.max(ctf.X.length, ctf.Y.length, ctf.Z.length, ctf.Phi.length + 1);
+interface MethodCtf {
+  readonly label: string;
+  readonly ctf: CtfJson;
+}
+
+function coefficientRow(n: number, method: MethodCtf, first: boolean, methods: number): Trusted {
+  const { ctf } = method;
   const cell = (v: number | undefined) =>
     html`<td class="num">${v === undefined ? "—" : formatSig(v, CTF_DIGITS)}</td>`;
+  const index = first ? html`<td class="num" rowspan="${String(methods)}">${String(n)}</td>` : html``;
+  return html`<tr class="${first ? "group-start" : "second-method"}">${index}<td>${method.label}</td>${
+    cell(ctf.X[n])
+  }${cell(ctf.Y[n])}${cell(ctf.Z[n])}${cell(n === 0 ? undefined : ctf.Phi[n - 1])}</tr>`;
+}
+
+/** One table with the accepted methods' coefficients on alternate rows, so each n reads side by side. */
+function coefficientTable(methods: readonly MethodCtf[], caption: Trusted): Trusted {
+  const rows = Math.max(
+    ...methods.map(({ ctf }) => Math.max(ctf.X.length, ctf.Y.length, ctf.Z.length, ctf.Phi.length + 1)),
+  );
   const body = Array.from(
     { length: rows },
-    (_, n) =>
-      html`<tr><td class="num">${String(n)}</td>${cell(ctf.X[n])}${cell(ctf.Y[n])}${cell(ctf.Z[n])}${
-        cell(n === 0 ? undefined : ctf.Phi[n - 1])
-      }</tr>`,
-  );
+    (_, n) => methods.map((m, k) => coefficientRow(n, m, k === 0, methods.length)),
+  ).flat();
   return html`
     <table class="ctf-table">
       <caption>${caption}</caption>
       <thead>
         <tr>
           <th>n</th>
+          <th>Method</th>
           <th>X_n</th>
           <th>Y_n</th>
           <th>Z_n</th>
@@ -73,25 +87,34 @@ function rejection(label: string, checks: readonly CheckResult[], subject: strin
   `;
 }
 
-function rootPart(view: DynamicView, checks: readonly CheckResult[], subject: string): Trusted {
-  if (view.ctf === null) return rejection("Root method", checks, subject, "root");
-  return coefficientTable(
-    view.ctf,
-    html`Root method (Stephenson &amp; Mitalas): ${String(view.ctf.Phi.length)} poles, air to air, Δ = ${
-      formatSig(view.timestep_h, 3)
-    } h.`,
-  );
+function rootCaption(ctf: CtfJson): Trusted {
+  return html`Roots: method of Stephenson &amp; Mitalas (1971), ${String(ctf.Phi.length)} poles.`;
 }
 
-function stateSpacePart(view: DynamicView, checks: readonly CheckResult[], subject: string): Trusted {
-  const ss = view.ctfStateSpace;
-  if (ss === null) return rejection("State-space method", checks, subject, "stateSpace");
-  const cells = ss.cellsPerLayer.map((n) => String(n)).join(", ");
+function stateSpaceCaption(ctf: CtfJson & { readonly cellsPerLayer: readonly number[] }): Trusted {
+  const cells = ctf.cellsPerLayer.map((n) => String(n)).join(", ");
+  return html`State space: finite volumes with exact matrix exponential, ${
+    String(ctf.Phi.length)
+  } poles; cells per layer, outside to inside: ${cells} (0 = resistive layer).`;
+}
+
+function coefficients(view: DynamicView): Trusted {
+  const methods: MethodCtf[] = [];
+  const captions: Trusted[] = [];
+  if (view.ctf !== null) {
+    methods.push({ label: "roots", ctf: view.ctf });
+    captions.push(rootCaption(view.ctf));
+  }
+  if (view.ctfStateSpace !== null) {
+    methods.push({ label: "state space", ctf: view.ctfStateSpace });
+    captions.push(stateSpaceCaption(view.ctfStateSpace));
+  }
+  if (methods.length === 0) return html``;
   return coefficientTable(
-    ss,
-    html`State-space method (finite volumes, exact matrix exponential): ${
-      String(ss.Phi.length)
-    } poles; cells per layer, outside to inside: ${cells} (0 = resistive layer).`,
+    methods,
+    html`CTF coefficients, air to air, Δ = ${formatTrim(view.timestep_h, 4)} h. ${
+      joinHtml(captions, raw(" "))
+    }`,
   );
 }
 
@@ -106,7 +129,9 @@ export function ctfSection(view: DynamicView, checks: readonly CheckResult[], su
     <p>Recurrence for the inside flux: q_i,t = Σ_n Y_n T_o,t−n − Σ_n Z_n T_i,t−n + Σ_(n≥1) Φ_n q_i,t−n (outside flux with X_n and Y_n in the same way). CTF sets are not unique: the two methods give different coefficients for the same response, so compare their response factors (check <code>state-space-agreement</code>), not the coefficients. Coefficients printed to ${String(
       CTF_DIGITS,
     )} significant figures; full precision in Appendix B.</p>
-    <div class="side-by-side">${rootPart(view, checks, subject)}${stateSpacePart(view, checks, subject)}</div>
+    ${coefficients(view)}
+    ${view.ctf === null ? rejection("Root method", checks, subject, "root") : html``}
+    ${view.ctfStateSpace === null ? rejection("State-space method", checks, subject, "stateSpace") : html``}
     ${modal}
   `;
 }

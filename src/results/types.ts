@@ -53,8 +53,62 @@ export interface ResultsJson {
   readonly tool: { readonly name: "fluxnote"; readonly version: string };
   readonly inputs: { readonly files: readonly InputFileRecord[]; readonly sha256: string };
   readonly constructions: Readonly<Record<string, ConstructionResults>>;
-  readonly scenarios: Readonly<Record<string, unknown>>;
+  readonly scenarios: Readonly<Record<string, ScenarioResults>>;
   readonly checks: readonly CheckResult[];
   readonly assumptions: readonly { id: string; text: string; source: string; at: string }[];
   readonly warnings: readonly { at: string; message: string }[];
+}
+
+/** One surface of a scenario in results.json (DESIGN.md §4); series have one value per timestep. */
+export interface SurfaceResults {
+  readonly construction: string;
+  /** m^2 */
+  readonly area: number;
+  readonly solAir: readonly number[];
+  /** W/m^2, positive into the room */
+  readonly insideFlux: readonly number[];
+  /** W/m^2, positive from outside into the wall */
+  readonly outsideFlux: readonly number[];
+  /** W */
+  readonly heatGain: readonly number[];
+  readonly radiantGain: readonly number[];
+  readonly convectiveGain: readonly number[];
+  readonly peak: { readonly heatGain: number; readonly time_h: number };
+  /** Extension: total irradiance on the surface, W/m^2 (empty when the surface gives sol-air values). */
+  readonly incident: readonly number[];
+  /** Extension: the values actually used for this surface. */
+  readonly parameters: {
+    readonly absorptance: number | null;
+    readonly emittance: number;
+    readonly outsideCoefficient: number;
+    readonly longwaveCorrection: number;
+    readonly radiantFraction: number;
+    readonly groundReflectance: number;
+  };
+}
+
+export interface EnergyTotals {
+  /** J, sum of positive heat gain over the period */
+  readonly gain_J: number;
+  /** J, sum of heat loss (negative gain, as a positive number) */
+  readonly loss_J: number;
+  readonly monthly?: readonly { readonly gain_J: number; readonly loss_J: number }[];
+}
+
+/** A scenario in results.json (DESIGN.md §4). */
+export interface ScenarioResults {
+  readonly kind: "design-day" | "weather";
+  readonly timestep_h: number;
+  readonly outdoor: readonly number[];
+  readonly indoor: readonly number[];
+  readonly surfaces: Readonly<Record<string, SurfaceResults>>;
+  readonly totalHeatGain: readonly number[];
+  readonly peak: { readonly heatGain: number; readonly time_h: number };
+  readonly totals: EnergyTotals;
+  /** Extension: how the steady-periodic day was confirmed by the recursion. */
+  readonly convergence?: { readonly days: number; readonly peakChange: number };
+  /** Extension: sun position at each step (design day). */
+  readonly sun?: readonly { readonly altitude_deg: number; readonly azimuth_deg: number }[];
+  /** Extension: statements of the conventions and rules applied. */
+  readonly notes: readonly string[];
 }

@@ -1,6 +1,6 @@
 import assert from "node:assert/strict";
 import { analyseConstruction, type DynamicAnalysis } from "../../src/engine/mod.ts";
-import { repeatedDayFlux, steadyPeriodicFlux, SurfaceRecursion } from "../../src/engine/surfaceFlux.ts";
+import { ctfRepeatedDayFlux, repeatedDayFlux, steadyPeriodicFlux, SurfaceRecursion } from "../../src/engine/surfaceFlux.ts";
 import { HEAVY_WALL, LIGHT_WALL } from "./walls.ts";
 import type { ConstructionInput } from "../../src/engine/layer.ts";
 
@@ -68,5 +68,23 @@ Deno.test("SurfaceRecursion() started steady stays at the steady flux U (T_o −
     const [inside, outside] = run.step(35, 24);
     assert.ok(Math.abs(inside - a.steady.uValue * 11) < 1e-9);
     assert.ok(Math.abs(outside - a.steady.uValue * 11) < 1e-9);
+  }
+});
+
+Deno.test("ctfRepeatedDayFlux() with the root CTF converges to the periodic-response-factor day", () => {
+  // Both routes are exact for piecewise-linear temperatures (Stephenson & Mitalas 1971: the CTF is the
+  // z-transform of the response factors), so they must agree once the recursion has settled.
+  for (const wall of [HEAVY_WALL, LIGHT_WALL]) {
+    const a = analyse(wall, 3600);
+    assert.ok(a.airToAir.ctfAccepted);
+    const solAir = solAirDay(24);
+    const indoor = new Array<number>(24).fill(24);
+    const periodic = steadyPeriodicFlux(a.airToAir.modes, solAir, indoor);
+    const ctf = ctfRepeatedDayFlux(a.airToAir.ctfCandidate.ctf, a.steady.uValue, solAir, indoor, 1e-10);
+    const scale = Math.max(...periodic.insideWPerM2.map(Math.abs));
+    for (let k = 0; k < 24; k++) {
+      assert.ok(Math.abs(periodic.insideWPerM2[k]! - ctf.insideWPerM2[k]!) < 1e-6 * scale, `inside ${k}`);
+      assert.ok(Math.abs(periodic.outsideWPerM2[k]! - ctf.outsideWPerM2[k]!) < 1e-6 * scale, `outside ${k}`);
+    }
   }
 });

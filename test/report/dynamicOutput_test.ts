@@ -70,16 +70,26 @@ Deno.test("renderConstructionOutput() notes a time lag beyond 12 h with the wrap
   assert.ok(note.includes(`+${formatSig(24 - lag, 3)} h`), note);
 });
 
-Deno.test("renderConstructionOutput() shows both CTF sets, with the state-space mesh", () => {
+Deno.test("renderConstructionOutput() shows both CTF sets side by side, with the state-space mesh", () => {
   const { markup, results } = renderWithEngine(wall());
   const view = readDynamic(results)!;
   const tables = Array.from(parseFragment(markup).querySelectorAll(".ctf-table"));
-  assert.equal(tables.length, 2);
-  assert.match(tables[0]?.querySelector("caption")?.textContent ?? "", /Root method/);
-  const cells = view.ctfStateSpace!.cellsPerLayer.join(", ");
-  assert.ok((tables[1]?.querySelector("caption")?.textContent ?? "").includes(cells));
-  const phi1 = tables[0]?.querySelectorAll("tbody tr")[1]?.querySelectorAll("td")[4]?.textContent;
-  assert.equal(phi1, formatSig(view.ctf!.Phi[0]!, 6));
+  assert.equal(tables.length, 1);
+  const caption = tables[0]?.querySelector("caption")?.textContent ?? "";
+  assert.match(caption, /Roots: method of Stephenson & Mitalas \(1971\), \d+ poles\. State space:/);
+  assert.ok(
+    caption.includes(`cells per layer, outside to inside: ${view.ctfStateSpace!.cellsPerLayer.join(", ")}`),
+  );
+  const rows = Array.from(tables[0]!.querySelectorAll("tbody tr")).map((r) =>
+    Array.from(r.querySelectorAll("td")).map((td) => td.textContent)
+  );
+  // Rows alternate: n with the root method's coefficients, then the state-space ones for the same n.
+  assert.deepEqual(rows[2]?.slice(0, 2), ["1", "roots"]);
+  assert.equal(rows[2]?.[5], formatSig(view.ctf!.Phi[0]!, 6));
+  assert.equal(rows[3]?.[0], "state space");
+  assert.equal(rows[3]?.[4], formatSig(view.ctfStateSpace!.Phi[0]!, 6));
+  const longest = Math.max(view.ctf!.Y.length, view.ctfStateSpace!.Y.length);
+  assert.equal(rows.length, 2 * longest);
 });
 
 Deno.test("renderConstructionOutput() says why a rejected CTF is null and names the failed check", () => {

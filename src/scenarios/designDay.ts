@@ -1,0 +1,167 @@
+import { type BoundarySurface, designDayBoundary, expandHourlyToSteps } from "../climate/mod.ts";
+import type { DynamicAnalysis } from "../engine/mod.ts";
+import { ctfRepeatedDayFlux, repeatedDayFlux, steadyPeriodicFlux } from "../engine/surfaceFlux.ts";
+import type { Assumption, Construction, Scenario, TemperatureProfile } from "../project/model.ts";
+import type { CheckResult, ScenarioResults, SurfaceResults } from "../results/types.ts";
+import { gainAndLoss, meanOf, peakOf, sumSeries } from "./seriesStats.ts";
+import { type SurfaceParameters, surfaceParameters, type SurfaceWarning } from "./surfaceParameters.ts";
+
+/** What a scenario computation needs: the constructions and their analyses at a timestep (cached by the caller). */
+export interface ScenarioContext {
+  readonly constructions: ReadonlyMap<string, Construction>;
+  analysisAt(constructionId: string, timestepS: number): DynamicAnalysis;
+}
+
+/** A computed scenario with the checks, assumptions and warnings it adds. */
+export interface ScenarioOutcome {
+  readonly results: ScenarioResults;
+  readonly checks: readonly CheckResult[];
+  readonly assumptions: readonly Assumption[];
+  readonly warnings: readonly SurfaceWarning[];
+}
+
+/** Limit of the periodic-convergence check: recursion vs periodic response factors, relative to the peak flux. */
+export const PERIODIC_CONVERGENCE_LIMIT = 1e-3;
+/** Limit of the daily energy balance, relative to U × max(1 K, |mean T_sa − mean T_i|). */
+export const ENERGY_BALANCE_LIMIT = 1e-6;
+
+type DesignDayScenario = Extract<Scenario, { kind: "design-day" }>;
+
+/** Expands a constant or 24-value hourly temperature to one value per step. */
+export function temperatureSteps(profile: TemperatureProfile, timestepS: number): number[] {
+  return profile.kind === "constant"
+    ? new Array<number>(Math.round(86400 / timestepS)).fill(profile.valueC)
+    : expandHourlyToSteps(profile.hourlyC, timestepS);
+}
+
+/** Computes a design day: boundary conditions, steady-periodic fluxes per surface, gains, peaks and cross-checks. */
+export function computeDesignDay(scenario: DesignDayScenario, context: ScenarioContext): ScenarioOutcome {
+  const timestepS = scenario.timestepS;
+  const assumptions: Assumption[] = [];
+  const warnings: SurfaceWarning[] = [];
+  const parameters = new Map<string, SurfaceParameters>();
+  for (const surface of scenario.surfaces) {
+    const construction = context.constructions.get(surface.construction);
+    if (construction === undefined) continue;
+    parameters.set(surface.id, surfaceParameters(scenario.id, surface, construction, assumptions, warnings));
+  }
+  const boundarySurfaces: BoundarySurface[] = scenario.surfaces.map((surface) => {
+    const p = parameters.get(surface.id)!;
+    return surface.solAirC !== undefined
+      ? { kind: "given-sol-air", id: surface.id, hourlyC: surface.solAirC }
+      : {
+        kind: "solar",
+        id: surface.id,
+        azimuthDeg: p.azimuthDeg,
+        tiltDeg: p.tiltDeg,
+        absorptance: p.absorptance ?? 0,
+        outsideCoefficientWPerM2K: p.outsideCoefficient,
+        groundReflectance: p.groundReflectance,
+        longwave: { kind: "given", correctionK: p.longwaveCorrectionK },
+      };
+  });
+  const boundary = designDayBoundary({
+    site: scenario.site ?? { latitudeDeg: 0, longitudeDeg: 0, timeZoneH: 0 },
+    month: scenario.month,
+    day: scenario.day,
+    timestepS,
+    outdoor: scenario.outdoor,
+    sky: scenario.sky.kind === "none"
+      ? { kind: "none" }
+      : { ...scenario.sky, edition: "2013", skyDiffuseModel: "handbook" },
+    surfaces: boundarySurfaces,
+    solarPositionMethod: "meeus",
+  });
+  const indoor = temperatureSteps(scenario.indoor, timestepS);
+  const surfaces: Record<string, SurfaceResults> = {};
+  const checks: CheckResult[] = [];
+  let convergenceDays = 0;
+  let convergenceChange = 0;
+  for (const [index, surface] of scenario.surfaces.entries()) {
+    const analysis = context.analysisAt(surface.construction, timestepS);
+    const p = parameters.get(surface.id)!;
+    const bound = boundary.surfaces[index]!;
+    const solAir = bound.solAirC;
+    const flux = steadyPeriodicFlux(analysis.airToAir.modes, solAir, indoor);
+    const root = analysis.airToAir;
+    const recursion = root.ctfAccepted
+      ? ctfRepeatedDayFlux(root.ctfCandidate.ctf, root.uValue, solAir, indoor)
+      : repeatedDayFlux(root.modes, solAir, indoor);
+    convergenceDays = Math.max(convergenceDays, recursion.days);
+    convergenceChange = Math.max(convergenceChange, recursion.peakChange);
+    const subject = `scenario:${scenario.id}/${surface.id}`;
+    const scale = Math.max(...flux.insideWPerM2.map(Math.abs), root.uValue);
+    const difference = Math.max(...flux.insideWPerM2.map((q, k) =>
+      Math.abs(q - recursion.insideWPerM2[k]!)
+    )) / scale;
+    checks.push(
+      check(
+        "periodic-convergence",
+        subject,
+        `${
+          root.ctfAccepted ? "Polynomial CTF" : "Modal"
+        } recursion repeated ${recursion.days} days (peak change ${
+          recursion.peakChange.toExponential(2)
+        }) versus periodic response factors: max |Δq| / peak`,
+        difference,
+        PERIODIC_CONVERGENCE_LIMIT,
+      ),
+    );
+    const meanDifferenceK = meanOf(solAir) - meanOf(indoor);
+    const balance = Math.abs(meanOf(flux.insideWPerM2) - root.uValue * meanDifferenceK) /
+      (root.uValue * Math.max(1, Math.abs(meanDifferenceK)));
+    checks.push(
+      check(
+        "energy-balance",
+        subject,
+        "Daily mean inside flux versus U × (mean sol-air − mean indoor), relative",
+        balance,
+        ENERGY_BALANCE_LIMIT,
+      ),
+    );
+    const heatGain = flux.insideWPerM2.map((q) => q * surface.areaM2);
+    const peak = peakOf(heatGain);
+    surfaces[surface.id] = {
+      construction: surface.construction,
+      area: surface.areaM2,
+      solAir,
+      insideFlux: flux.insideWPerM2,
+      outsideFlux: flux.outsideWPerM2,
+      heatGain,
+      radiantGain: heatGain.map((g) => g * p.radiantFraction),
+      convectiveGain: heatGain.map((g) => g * (1 - p.radiantFraction)),
+      peak: { heatGain: peak.value, time_h: (peak.index * timestepS) / 3600 },
+      incident: bound.kind === "solar" ? bound.irradiance.map((e) => e.totalWPerM2) : [],
+      parameters: {
+        absorptance: p.absorptance,
+        emittance: p.emittance,
+        outsideCoefficient: p.outsideCoefficient,
+        longwaveCorrection: p.longwaveCorrectionK,
+        radiantFraction: p.radiantFraction,
+        groundReflectance: p.groundReflectance,
+      },
+    };
+  }
+  const totalHeatGain = sumSeries(Object.values(surfaces).map((s) => s.heatGain), indoor.length);
+  const totalPeak = peakOf(totalHeatGain);
+  const results: ScenarioResults = {
+    kind: "design-day",
+    timestep_h: timestepS / 3600,
+    outdoor: boundary.outdoorC,
+    indoor,
+    surfaces,
+    totalHeatGain,
+    peak: { heatGain: totalPeak.value, time_h: (totalPeak.index * timestepS) / 3600 },
+    totals: gainAndLoss(totalHeatGain, timestepS),
+    convergence: { days: convergenceDays, peakChange: convergenceChange },
+    ...(scenario.site === undefined ? {} : {
+      sun: boundary.sunPosition.map((s) => ({ altitude_deg: s.altitudeDeg, azimuth_deg: s.azimuthDeg })),
+    }),
+    notes: boundary.notes,
+  };
+  return { results, checks, assumptions, warnings };
+}
+
+function check(id: string, subject: string, description: string, value: number, limit: number): CheckResult {
+  return { id, subject, description, value, limit, pass: Math.abs(value) <= limit };
+}

@@ -1,0 +1,143 @@
+import type { Assumption, Construction, ScenarioSurface } from "../project/model.ts";
+import { formatPosition } from "../project/position.ts";
+
+/** Default emittance of an outside surface (DESIGN.md §2; typical of non-metallic building surfaces, common practice, no source). */
+export const DEFAULT_EMITTANCE = 0.9;
+/** Default ground reflectance (the usual value for ordinary ground, ASHRAE Handbook—Fundamentals Ch. 14, from memory). */
+export const DEFAULT_GROUND_REFLECTANCE = 0.2;
+/**
+ * Long-wave radiation deficit ΔR for a horizontal surface, W/m²: 3.9 K × 17 W/(m²K), so that ε ΔR / h_o reproduces the
+ * 3.9 K of ASHRAE Handbook—Fundamentals Ch. 18 (sol-air temperature, from memory) for ε = 1 and h_o = 17 W/(m²K).
+ */
+export const HORIZONTAL_LONGWAVE_DEFICIT_W_PER_M2 = 3.9 * 17;
+/** Radiant fractions of conduction heat gain, ASHRAE Handbook—Fundamentals 2009–2021, Ch. 18 Table 14 (from memory). */
+export const RADIANT_FRACTION_WALL = 0.46;
+export const RADIANT_FRACTION_ROOF = 0.60;
+/** Surfaces tilted less than this from the horizontal count as roofs for the radiant fraction (our stated rule). */
+export const ROOF_TILT_LIMIT_DEG = 45;
+
+/** The values used for one surface, with every default logged. */
+export interface SurfaceParameters {
+  readonly absorptance: number | null;
+  readonly emittance: number;
+  readonly groundReflectance: number;
+  /** h_o, W/(m² K) */
+  readonly outsideCoefficient: number;
+  /** ε ΔR / h_o, K */
+  readonly longwaveCorrectionK: number;
+  readonly radiantFraction: number;
+  readonly tiltDeg: number;
+  readonly azimuthDeg: number;
+}
+
+/** A warning about a surface, as position and message. */
+export interface SurfaceWarning {
+  readonly at: string;
+  readonly message: string;
+}
+
+/** Resolves a surface's optional keys to the values used, logging each default as an assumption. */
+export function surfaceParameters(
+  scenarioId: string,
+  surface: ScenarioSurface,
+  construction: Construction,
+  assumptions: Assumption[],
+  warnings: SurfaceWarning[],
+): SurfaceParameters {
+  const at = formatPosition(surface.at);
+  const tag = `${scenarioId}/${surface.id}`;
+  const tiltDeg = surface.tiltDeg ?? 90;
+  const emittance = surface.emittance ?? DEFAULT_EMITTANCE;
+  if (surface.emittance === undefined && surface.solAirC === undefined) {
+    assumptions.push({
+      id: `default:emittance:${tag}`,
+      text: `Long-wave emittance of ${surface.id}: ε = ${DEFAULT_EMITTANCE}`,
+      source: "fluxnote default for non-metallic surfaces (common practice, no source)",
+      at,
+    });
+  }
+  const groundReflectance = surface.groundReflectance ?? DEFAULT_GROUND_REFLECTANCE;
+  if (surface.groundReflectance === undefined && surface.solAirC === undefined) {
+    assumptions.push({
+      id: `default:ground-reflectance:${tag}`,
+      text: `Ground reflectance seen by ${surface.id}: ρg = ${DEFAULT_GROUND_REFLECTANCE}`,
+      source: "ASHRAE Handbook—Fundamentals, climatic design chapter, typical ground (from memory)",
+      at,
+    });
+  }
+  const filmCoefficient = construction.outsideResistance > 0 ? 1 / construction.outsideResistance : Infinity;
+  let outsideCoefficient = filmCoefficient;
+  if (surface.outsideCoefficient !== undefined) {
+    outsideCoefficient = surface.outsideCoefficient;
+    if (Math.abs(outsideCoefficient - filmCoefficient) > 1e-9 * outsideCoefficient) {
+      const message =
+        `Surface ${surface.id} sets h_o = ${
+          round(outsideCoefficient)
+        } W/(m²·K) for its sol-air temperature, ` +
+        `but the response factors of ${construction.id} use R_se = ${construction.outsideResistance} m²·K/W (1/R_se = ${
+          round(filmCoefficient)
+        })`;
+      warnings.push({ at, message });
+      assumptions.push({
+        id: `override:outside-coefficient:${tag}`,
+        text: message,
+        source: "project input",
+        at,
+      });
+    }
+  } else if (surface.solAirC === undefined) {
+    assumptions.push({
+      id: `default:outside-coefficient:${tag}`,
+      text: `Outside coefficient of ${surface.id}: h_o = 1/R_se of ${construction.id} = ${
+        round(filmCoefficient)
+      } W/(m²·K), the same film as in the response factors`,
+      source: "DESIGN rule: sol-air temperature and conduction use one outside film",
+      at,
+    });
+  }
+  let longwaveCorrectionK = surface.longwaveCorrectionK ?? 0;
+  if (surface.longwaveCorrectionK === undefined && surface.solAirC === undefined) {
+    const skyView = tiltDeg < 90 ? Math.cos((tiltDeg * Math.PI) / 180) : 0;
+    longwaveCorrectionK = Number.isFinite(outsideCoefficient)
+      ? (emittance * HORIZONTAL_LONGWAVE_DEFICIT_W_PER_M2 * skyView) / outsideCoefficient
+      : 0;
+    assumptions.push({
+      id: `default:longwave-correction:${tag}`,
+      text: `Long-wave correction of ${surface.id}: ε ΔR cos Σ / h_o = ${
+        round(longwaveCorrectionK)
+      } K with ΔR = ${
+        round(HORIZONTAL_LONGWAVE_DEFICIT_W_PER_M2)
+      } W/m² for a horizontal surface, cos Σ for tilts below 90°, 0 for vertical and downward-facing surfaces (our stated rule for tilted surfaces)`,
+      source:
+        "ASHRAE Handbook—Fundamentals Ch. 18, sol-air temperature: 3.9 K horizontal, 0 vertical (from memory; common practice)",
+      at,
+    });
+  }
+  const isRoof = tiltDeg < ROOF_TILT_LIMIT_DEG;
+  const radiantFraction = surface.radiantFraction ?? (isRoof ? RADIANT_FRACTION_ROOF : RADIANT_FRACTION_WALL);
+  if (surface.radiantFraction === undefined) {
+    assumptions.push({
+      id: `default:radiant-fraction:${tag}`,
+      text: `Radiant part of the conduction heat gain of ${surface.id}: ${radiantFraction} (${
+        isRoof ? "roof" : "wall"
+      }; tilt below ${ROOF_TILT_LIMIT_DEG}° counts as a roof)`,
+      source:
+        "ASHRAE Handbook—Fundamentals 2009–2021, Ch. 18 Table 14, recommended radiative/convective split (from memory)",
+      at,
+    });
+  }
+  return {
+    absorptance: surface.absorptance ?? null,
+    emittance,
+    groundReflectance,
+    outsideCoefficient,
+    longwaveCorrectionK,
+    radiantFraction,
+    tiltDeg,
+    azimuthDeg: surface.azimuthDeg ?? 180,
+  };
+}
+
+function round(value: number): number {
+  return Number(value.toPrecision(4));
+}

@@ -50,6 +50,7 @@ export async function runBuild(options: BuildOptions, io: CommandIo): Promise<nu
       message: d.message,
     })),
   };
+  for (const w of computed.results.warnings) io.stderr(`${w.at}: warning: ${w.message}`);
   const resultsJsonText = `${JSON.stringify(results, null, 2)}\n`;
   const page = renderPackage({
     model: loaded.model,

@@ -47,7 +47,8 @@ The residue series for the constant term converges slowly and is not used. A tri
 RF_j = (1/Δ) Σ_n a_n (1 − e^(−β_nΔ))² e^(−β_n(j−1)Δ)&ensp;(j ≥ 2).</p>
 <p>By superposition, for any sampled temperatures:</p>
 <p class="equation">q_i(t) = Σ_j Y_j T_o(t − jΔ) − Σ_j Z_j T_i(t − jΔ),&emsp; q_o(t) = Σ_j X_j T_o(t − jΔ) − Σ_j Y_j T_i(t − jΔ).</p>
-<p><strong>Truncation</strong>: terms are produced until a bound on the remaining tail is below 10⁻¹⁰·U. Sum rule:
+<p><strong>Truncation</strong>: terms are produced until a bound on the remaining tail is below 10⁻¹⁰·U (at most
+2¹⁹ terms; the residual is printed either way). Sum rule:
 Σ X_j = Σ Y_j = Σ Z_j = U; the truncation residual r = max |Σ RF_j − U| / U is printed with each construction.</p>`,
 );
 
@@ -73,8 +74,8 @@ dx/dt = A x + B u, y = C x + D u. Discretisation is exact for inputs linear betw
 exponential of the augmented matrix:</p>
 <p class="equation">F = e^(AΔ),&emsp; Γ_0 = A⁻¹(F − I)B,&emsp; Γ_1 = A⁻¹(Γ_0/Δ − B),&emsp;
 x_(k+1) = F x_k + Γ_0 u_k + Γ_1 (u_(k+1) − u_k).</p>
-<p>The model's response factors are compared with those of 3.4 and the mesh is refined until they agree (limit in 3.10,
-at most 260 cells); the CTF follows from the eigenvalues of F as in 3.5. The cells per layer are printed with the
+<p>The model's response factors are compared with those of 3.4 and the mesh is refined (at most three times, up to about
+260 cells) until they agree within 60 % of the limit in 3.10; the CTF follows from the eigenvalues of F as in 3.5. The cells per layer are printed with the
 coefficients. CTF coefficient sets are not unique: the two methods are compared by their response factors.</p>`,
 );
 
@@ -103,7 +104,7 @@ function harmonic(): Trusted {
 <p>The first harmonic of the hourly periodic cross factors, H_1 = Σ_j Y_P,j e^(−i2πj/24), must equal Y_12 · sinc²(π/24)
 (sinc x = sin x / x; sinc²(π/24) = ${
     formatSig(sinc2, 6)
-  }) plus the aliased harmonics 24m + 1, which are added exactly. This ties the time-domain results (3.3 to 3.7) to the
+  }) plus the aliased harmonics 24m + 1 (|m| ≤ 60 are added). This ties the time-domain results (3.3 to 3.7) to the
 frequency-domain quantities of 3.8 by an independent route.</p>`;
 }
 

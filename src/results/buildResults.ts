@@ -7,9 +7,18 @@ import {
 } from "../engine/mod.ts";
 import type { SteadyState } from "../engine/steady.ts";
 import { type Diagnostic, error } from "../project/diagnostic.ts";
-import type { Construction, Model } from "../project/model.ts";
+import type { Assumption, Construction, Model } from "../project/model.ts";
+import { formatPosition } from "../project/position.ts";
+import { computeDesignDay, type ScenarioContext } from "../scenarios/designDay.ts";
 import { TOOL_VERSION } from "../version.ts";
-import type { CheckResult, ConstructionResults, InputFileRecord, LayerResult, ResultsJson } from "./types.ts";
+import type {
+  CheckResult,
+  ConstructionResults,
+  InputFileRecord,
+  LayerResult,
+  ResultsJson,
+  ScenarioResults,
+} from "./types.ts";
 
 /** The computed results of a project, before rendering. */
 export interface ComputedProject {
@@ -51,17 +60,87 @@ export function computeProject(model: Model, inputs: readonly InputFileRecord[])
     checks.push(...constructionChecksJson(construction.id, analysis));
   }
   if (problems.length > 0) return { ok: false, diagnostics: problems };
+  const scenarioParts = computeScenarios(model, analyses);
+  checks.push(...scenarioParts.checks);
   const results: ResultsJson = {
     schema: "fluxnote-results/1",
     tool: { name: "fluxnote", version: TOOL_VERSION },
     inputs: { files: inputs, sha256: inputsHash(inputs) },
     constructions,
-    scenarios: {},
+    scenarios: scenarioParts.scenarios,
     checks,
-    assumptions: model.assumptions.map((a) => ({ id: a.id, text: a.text, source: a.source, at: a.at })),
-    warnings: [],
+    assumptions: [...model.assumptions, ...scenarioParts.assumptions].map((a) => ({
+      id: a.id,
+      text: a.text,
+      source: a.source,
+      at: a.at,
+    })),
+    warnings: scenarioParts.warnings,
   };
   return { ok: true, computed: { results, steady, analyses } };
+}
+
+interface ScenarioParts {
+  readonly scenarios: Record<string, ScenarioResults>;
+  readonly checks: CheckResult[];
+  readonly assumptions: Assumption[];
+  readonly warnings: { at: string; message: string }[];
+}
+
+function computeScenarios(model: Model, analyses: Readonly<Record<string, DynamicAnalysis>>): ScenarioParts {
+  const constructions = new Map(model.constructions.map((c) => [c.id, c]));
+  const cache = new Map<string, DynamicAnalysis>();
+  const parts: ScenarioParts = { scenarios: {}, checks: [], assumptions: [], warnings: [] };
+  const context: ScenarioContext = {
+    constructions,
+    analysisAt(constructionId, timestepS) {
+      const own = analyses[constructionId];
+      if (own !== undefined && own.timestepS === timestepS) return own;
+      const key = `${constructionId}@${timestepS}`;
+      const cached = cache.get(key);
+      if (cached !== undefined) return cached;
+      const construction = constructions.get(constructionId)!;
+      const analysis = analyseConstruction(construction, timestepS);
+      if (analysis.kind === "unresolvable") {
+        throw new Error(`construction ${constructionId} at ${timestepS} s: ${analysis.message}`);
+      }
+      cache.set(key, analysis);
+      parts.checks.push(
+        ...constructionChecksJson(constructionId, analysis).map((c) => ({
+          ...c,
+          description: `At the scenario time step ${timestepS / 60} min: ${c.description}`,
+        })),
+      );
+      return analysis;
+    },
+  };
+  for (const scenario of model.scenarios) {
+    if (scenario.timestepDefaulted) {
+      parts.assumptions.push({
+        id: `default:timestep:${scenario.id}`,
+        text: `Time step of scenario ${scenario.id} not given: 1 h`,
+        source: "fluxnote default",
+        at: formatPosition(scenario.at),
+      });
+    }
+    switch (scenario.kind) {
+      case "design-day": {
+        const outcome = computeDesignDay(scenario, context);
+        parts.scenarios[scenario.id] = outcome.results;
+        parts.checks.push(...outcome.checks);
+        parts.assumptions.push(...outcome.assumptions);
+        parts.warnings.push(...outcome.warnings);
+        break;
+      }
+      case "weather":
+        parts.warnings.push({
+          at: formatPosition(scenario.at),
+          message: `Weather scenario ${scenario.id} is validated but not computed in this version`,
+        });
+        break;
+    }
+  }
+  return parts;
 }
 
 function constructionResults(construction: Construction, steady: SteadyState): ConstructionResults {

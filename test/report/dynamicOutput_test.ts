@@ -149,3 +149,14 @@ Deno.test("renderPackage() escapes a hostile construction name in the figure cap
   assert.equal(captions.length, 3);
   for (const c of captions) assert.ok((c.textContent ?? "").includes(`Rendered block wall${all}`));
 });
+
+Deno.test("renderConstructionOutput() prints times jΔ in hours at a 15-minute step", () => {
+  const { markup, results } = renderWithEngine({ ...wall(), timestepS: 900 });
+  const root = parseFragment(markup);
+  const row = root.querySelectorAll(".rf-table tbody tr")[1]?.querySelectorAll("td");
+  assert.equal(row?.[1]?.textContent, "0.25"); // j = 1 at Δ = 900 s = 0.25 h
+  assert.equal(summaryValue(root, "Δ"), "0.25");
+  assert.equal(readDynamic(results)?.timestep_h, 0.25);
+  // Periodic factors stay hourly whatever the step (24 values, results contract).
+  assert.equal(root.querySelectorAll(".periodic-table tbody tr").length, 13);
+});

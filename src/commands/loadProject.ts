@@ -1,7 +1,7 @@
 import { sha256Hex } from "../archive/hash.ts";
 import { type Diagnostic, hasErrors, sortDiagnostics } from "../project/diagnostic.ts";
 import type { Model } from "../project/model.ts";
-import { type InputFile, readProject } from "../project/readProject.ts";
+import { type InputFile, MAX_WEATHER_BYTES, readDataFile, readProject } from "../project/readProject.ts";
 import { type LibraryUse, resolveProject } from "../project/resolveProject.ts";
 import type { InputFileRecord } from "../results/types.ts";
 
@@ -13,6 +13,8 @@ export interface LoadedProject {
   /** Input records in build order: the files, then the library entries used. */
   readonly inputRecords: readonly InputFileRecord[];
   readonly diagnostics: readonly Diagnostic[];
+  /** Texts of the data files the scenarios name (weather CSVs), by project path, LF line ends. */
+  readonly dataTexts: ReadonlyMap<string, string>;
 }
 
 /** Reads and resolves a project folder; every diagnostic of both stages is collected and sorted. */
@@ -24,15 +26,32 @@ export async function loadProject(folder: string): Promise<LoadedProject> {
       library: [],
       inputRecords: [],
       diagnostics: sortDiagnostics(read.diagnostics),
+      dataTexts: new Map(),
     };
   }
   const resolved = resolveProject(read.sources);
-  const diagnostics = sortDiagnostics([...read.diagnostics, ...resolved.diagnostics]);
+  const dataProblems: Diagnostic[] = [];
+  const dataFiles: InputFile[] = [];
+  const dataTexts = new Map<string, string>();
+  for (const scenario of resolved.model?.scenarios ?? []) {
+    if (scenario.kind !== "weather" || dataTexts.has(scenario.weatherPath)) continue;
+    const data = await readDataFile(
+      folder,
+      scenario.weatherPath,
+      scenario.weatherAt,
+      MAX_WEATHER_BYTES,
+      dataProblems,
+    );
+    if (data === undefined) continue;
+    dataFiles.push(data.file);
+    dataTexts.set(scenario.weatherPath, data.text);
+  }
+  const diagnostics = sortDiagnostics([...read.diagnostics, ...resolved.diagnostics, ...dataProblems]);
   const library = resolved.libraryUsed.map((entry) => ({ ...entry, sha256: sha256Hex(entry.canonical) }));
   const inputRecords: InputFileRecord[] = [
-    ...read.files.map((f) => ({ path: f.path, sha256: f.sha256 })),
+    ...[...read.files, ...dataFiles].map((f) => ({ path: f.path, sha256: f.sha256 })),
     ...library.map((entry) => ({ path: `builtin-library/${entry.id}`, sha256: entry.sha256 })),
   ];
-  const base = { files: read.files, library, inputRecords, diagnostics };
+  const base = { files: [...read.files, ...dataFiles], library, inputRecords, diagnostics, dataTexts };
   return resolved.model === undefined || hasErrors(diagnostics) ? base : { ...base, model: resolved.model };
 }

@@ -19,6 +19,69 @@ export interface ReadResult {
   readonly diagnostics: readonly Diagnostic[];
 }
 
+/** Largest weather file accepted, bytes. */
+export const MAX_WEATHER_BYTES = 64 * 1024 * 1024;
+
+/** Reads a data file (a weather CSV) of the project, with the same containment rules, as exact bytes and text. */
+export async function readDataFile(
+  folder: string,
+  path: string,
+  at: Position,
+  maxBytes: number,
+  out: Diagnostic[],
+): Promise<{ file: InputFile; text: string } | undefined> {
+  let root: string;
+  try {
+    root = await Deno.realPath(folder);
+  } catch {
+    return undefined;
+  }
+  const place = await containedPath(root, path);
+  if (!place.ok) {
+    out.push(
+      error(
+        at,
+        "file-not-readable",
+        `Cannot read "${path}": ${place.reason}`,
+        "give the path of a file inside the project folder",
+      ),
+    );
+    return undefined;
+  }
+  const info = await Deno.stat(place.full);
+  if (!info.isFile) {
+    out.push(
+      error(
+        at,
+        "not-a-file",
+        `Cannot read "${path}": it is not a regular file`,
+        "give the path of a regular file",
+      ),
+    );
+    return undefined;
+  }
+  if (info.size > maxBytes) {
+    out.push(
+      error(
+        at,
+        "file-too-large",
+        `Cannot read "${path}": ${info.size} bytes is more than the limit of ${maxBytes} bytes (${
+          maxBytes / 1048576
+        } MiB)`,
+        "shorten the file (one year of hourly rows is well under 1 MiB)",
+      ),
+    );
+    return undefined;
+  }
+  const bytes = await Deno.readFile(place.full);
+  const decoded = decodeSource(path, bytes);
+  if (!decoded.ok) {
+    out.push(error({ file: path, line: decoded.line, col: 1 }, "not-text", decoded.message, decoded.hint));
+    return undefined;
+  }
+  return { file: { path, bytes, sha256: sha256Hex(bytes) }, text: decoded.source.text };
+}
+
 /** Largest Markdown file accepted, bytes. */
 export const MAX_MARKDOWN_BYTES = 1024 * 1024;
 const MAX_FILES = 200;

@@ -40,14 +40,14 @@ function points(values: readonly number[], timestepH: number, windowH: number): 
   return out;
 }
 
-/** Ticks 0, ±10^k for the decades from ten times the linear threshold up to the largest magnitude. */
-function symlogTicks(constant: number, maxAbs: number, hasNegative: boolean): number[] {
+/** Ticks 0 and ±10^k from ten times the linear threshold, within the data range [min, max]. */
+function symlogTicks(constant: number, min: number, max: number): number[] {
   const ticks = [0];
-  const top = Math.ceil(Math.log10(Math.max(maxAbs, constant)));
+  const top = Math.floor(Math.log10(Math.max(-min, max, constant)));
   for (let k = Math.round(Math.log10(constant)) + 1; k <= top; k++) {
     const v = Number(`1e${k}`);
-    ticks.push(v);
-    if (hasNegative) ticks.push(-v);
+    if (v <= max) ticks.push(v);
+    if (-v >= min) ticks.push(-v);
   }
   return ticks.sort((a, b) => a - b);
 }
@@ -69,7 +69,8 @@ export function responseFactorPlot(view: DynamicView, idPrefix: string): Trusted
     data: points(rf[key], view.timestep_h, RESPONSE_FACTOR_WINDOW_H),
   }));
   const all = series.flatMap((s) => s.data.map((p) => p.v));
-  const maxAbs = all.reduce((m, v) => Math.max(m, Math.abs(v)), 0);
+  const min = all.reduce((m, v) => Math.min(m, v), 0);
+  const max = all.reduce((m, v) => Math.max(m, v), 0);
   const constant = symlogConstant(view.U);
   const dots = series[0]!.data.length <= 60;
   const marks = series.flatMap(({ key, data }) => [
@@ -85,6 +86,7 @@ export function responseFactorPlot(view: DynamicView, idPrefix: string): Trusted
   return renderPlotSvg(
     finish({
       marginLeft: 62,
+      marginTop: 30,
       x: {
         label: "Time after the pulse peak, jΔ (h)",
         labelAnchor: "center",
@@ -94,7 +96,8 @@ export function responseFactorPlot(view: DynamicView, idPrefix: string): Trusted
       y: {
         type: "symlog",
         constant,
-        ticks: symlogTicks(constant, maxAbs, all.some((v) => v < 0)),
+        domain: [min, max],
+        ticks: symlogTicks(constant, min, max),
         tickFormat: tick,
         grid: true,
         label: "Response factor, W/(m²·K)",

@@ -1,0 +1,321 @@
+/**
+ * Reader for the weather CSV of a `weather` scenario (DESIGN.md §2): a header of column names, then one row per time
+ * step with `time` (local standard time), `dry-bulb` (°C at `time`), `global-horizontal` and `diffuse-horizontal`
+ * (W/m², mean over the interval ending at `time`) and optional `direct-normal`. Strict: every problem is an error
+ * naming its line and column.
+ */
+import { type Diagnostic, error, warning } from "../project/diagnostic.ts";
+import {
+  civilFromDays,
+  formatDurationS,
+  formatLocalTime,
+  type LocalTime,
+  localTimeAt,
+  parseLocalTime,
+  secondsOf,
+} from "./weatherTime.ts";
+
+/** A series of numbers, one per step. */
+export type StepSeries = Float64Array | readonly number[];
+
+/** A validated weather series at a constant step; row k is at `startTime` + k·Δ. */
+export interface WeatherSeries {
+  /** Time of the first row, local standard time. */
+  readonly startTime: LocalTime;
+  /** Δ, s */
+  readonly timestepS: number;
+  readonly count: number;
+  /** Dry bulb at each row time, °C. */
+  readonly dryBulbC: StepSeries;
+  /** Mean over the interval ending at each row time, W/m². */
+  readonly globalHorizontalWPerM2: StepSeries;
+  readonly diffuseHorizontalWPerM2: StepSeries;
+  readonly directNormalWPerM2?: StepSeries;
+  /** Month (1…12) of the interval that ends at each row time, i.e. of time − Δ/2. */
+  readonly monthOfStep: Uint8Array;
+}
+
+/** Result of reading a weather CSV: the series (with any warnings) or the errors. */
+export type WeatherParseResult =
+  | { ok: true; weather: WeatherSeries; diagnostics: Diagnostic[] }
+  | { ok: false; diagnostics: Diagnostic[] };
+
+/** Column names of the weather CSV, required first. */
+export const WEATHER_COLUMNS = [
+  "time",
+  "dry-bulb",
+  "global-horizontal",
+  "diffuse-horizontal",
+  "direct-normal",
+] as const;
+/** Columns every weather CSV must have. */
+export const REQUIRED_WEATHER_COLUMNS = WEATHER_COLUMNS.slice(0, 4);
+/** Plausible dry bulb, °C: just beyond the recorded extremes −89.2 °C (Vostok, 1983) and 56.7 °C (Death Valley, 1913) (from memory). */
+export const DRY_BULB_RANGE_C = { min: -90, max: 60 } as const;
+/** Largest irradiance accepted, W/m² (our stated limit: the top-of-atmosphere normal value is 1367 × (1 ± 0.033)). */
+export const MAX_IRRADIANCE_W_PER_M2 = 1400;
+/** Negative irradiance down to this magnitude is instrument night offset and is set to 0 with a warning, W/m² (common practice, no source). */
+export const NEGATIVE_IRRADIANCE_TOLERANCE_W_PER_M2 = 10;
+/** Diffuse may exceed global by this much (separately rounded values), W/m² (our stated rule). */
+export const DIFFUSE_EXCESS_TOLERANCE_W_PER_M2 = 5;
+/** Errors collected before reading stops. */
+export const MAX_WEATHER_ERRORS = 20;
+
+type Column = (typeof WEATHER_COLUMNS)[number];
+type ValueColumn = Exclude<Column, "time">;
+
+const NUMBER = /^[+-]?(\d+(\.\d*)?|\.\d+)([eE][+-]?\d+)?$/;
+const LIST = WEATHER_COLUMNS.join(", ");
+
+/** Reads a weather CSV whose header is at `firstLine` of `path`, for a scenario with time step `timestepS`. */
+export function parseWeatherCsv(
+  text: string,
+  path: string,
+  firstLine: number,
+  timestepS: number,
+): WeatherParseResult {
+  const errors: Diagnostic[] = [];
+  const warnings: Diagnostic[] = [];
+  const at = (line: number, col: number) => ({ file: path, line, col });
+  const full = () => errors.length >= MAX_WEATHER_ERRORS;
+  const fail = (): WeatherParseResult => ({ ok: false, diagnostics: errors });
+  const lines = (text.startsWith("\uFEFF") ? text.slice(1) : text).split(/\r?\n/);
+  let index = lines.findIndex((l) => l.trim() !== "");
+  if (index < 0) {
+    errors.push(
+      error(at(firstLine, 1), "weather-empty", `The weather file is empty: expected a header line "${LIST}"`),
+    );
+    return fail();
+  }
+  const header = readHeader(lines[index]!, firstLine + index, at, errors);
+  if (!(timestepS > 0 && timestepS % 60 === 0)) {
+    errors.push(error(
+      at(firstLine + index, 1),
+      "weather-timestep",
+      `The scenario time step ${timestepS} s is not a whole number of minutes, but weather times are HH:MM`,
+    ));
+  }
+  if (header === undefined || errors.length > 0) return fail();
+  const values = new Map<ValueColumn, number[]>();
+  for (const name of header.names) if (name !== "time") values.set(name, []);
+  const times: number[] = [];
+  let negatives = 0;
+  let firstNegative = "";
+  let previous: number | undefined;
+  for (index++; index < lines.length && !full(); index++) {
+    const line = lines[index]!;
+    if (line.trim() === "") continue;
+    const lineNo = firstLine + index;
+    const cells = splitCells(line);
+    const timeCell = cells[header.names.indexOf("time")];
+    const parsedTime = timeCell === undefined ? undefined : parseLocalTime(timeCell.text);
+    if (cells.length !== header.names.length) {
+      const more = cells.length > header.names.length;
+      errors.push(error(
+        at(lineNo, 1),
+        "weather-row-length",
+        `Expected ${header.names.length} values (${header.names.join(", ")}), found ${cells.length}`,
+        more
+          ? "a decimal comma (21,5) or a thousands separator (1,020) splits a number in two: write 21.5 or 1020"
+          : "every row needs a value in every column",
+      ));
+      previous = parsedTime?.ok === true ? secondsOf(parsedTime.time) : advance(previous, timestepS);
+      continue;
+    }
+    if (parsedTime === undefined || !parsedTime.ok) {
+      errors.push(error(
+        at(lineNo, timeCell?.col ?? 1),
+        "weather-time",
+        `Cannot read time "${timeCell?.text ?? ""}": ${
+          parsedTime?.ok === false ? parsedTime.reason : "missing"
+        }`,
+        "write local standard time as YYYY-MM-DDTHH:MM, e.g. 2031-07-21T14:00",
+      ));
+      previous = advance(previous, timestepS);
+    } else {
+      const seconds = secondsOf(parsedTime.time);
+      const problem = previous === undefined ? undefined : stepProblem(previous, seconds, timestepS);
+      if (problem !== undefined) {
+        errors.push(error(at(lineNo, timeCell!.col), "weather-step", problem));
+      }
+      previous = seconds;
+      times.push(seconds);
+    }
+    const row = new Map<ValueColumn, number>();
+    for (const [c, name] of header.names.entries()) {
+      if (name === "time" || full()) continue;
+      const cell = cells[c]!;
+      const place = at(lineNo, cell.col);
+      if (cell.text === "") {
+        errors.push(error(place, "weather-number", `Missing value in column ${name}`, numberHint));
+        continue;
+      }
+      if (!NUMBER.test(cell.text)) {
+        errors.push(
+          error(
+            place,
+            "weather-number",
+            `Cannot read "${cell.text}" in column ${name} as a number`,
+            numberHint,
+          ),
+        );
+        continue;
+      }
+      let value = Number(cell.text);
+      if (name === "dry-bulb") {
+        if (value < DRY_BULB_RANGE_C.min || value > DRY_BULB_RANGE_C.max) {
+          errors.push(error(
+            place,
+            "weather-range",
+            `dry-bulb ${cell.text} °C is outside the plausible range ${DRY_BULB_RANGE_C.min}…${DRY_BULB_RANGE_C.max} °C`,
+            "the column is °C (not °F or K)",
+          ));
+        }
+      } else if (value > MAX_IRRADIANCE_W_PER_M2) {
+        errors.push(error(
+          place,
+          "weather-range",
+          `${name} ${cell.text} W/m² is above the plausible limit of ${MAX_IRRADIANCE_W_PER_M2} W/m²`,
+          "irradiance is in W/m², the mean over the step (not Wh/m² or kJ/m² totals)",
+        ));
+      } else if (value < -NEGATIVE_IRRADIANCE_TOLERANCE_W_PER_M2) {
+        errors.push(error(place, "weather-range", `${name} ${cell.text} W/m² is negative`));
+      } else if (value < 0) {
+        if (negatives++ === 0) firstNegative = `line ${lineNo}, ${name} ${cell.text}`;
+        value = 0;
+      }
+      row.set(name, value);
+    }
+    const global = row.get("global-horizontal");
+    const diffuse = row.get("diffuse-horizontal");
+    if (
+      global !== undefined && diffuse !== undefined && diffuse > global + DIFFUSE_EXCESS_TOLERANCE_W_PER_M2
+    ) {
+      errors.push(error(
+        at(lineNo, cells[header.names.indexOf("diffuse-horizontal")]!.col),
+        "weather-range",
+        `diffuse-horizontal ${diffuse} W/m² exceeds global-horizontal ${global} W/m² by more than ${DIFFUSE_EXCESS_TOLERANCE_W_PER_M2} W/m²`,
+        "diffuse is part of global: check that the two columns are not swapped",
+      ));
+    }
+    for (const [name, list] of values) list.push(row.get(name) ?? NaN);
+  }
+  if (full()) {
+    const lineNo = errors[errors.length - 1]!.at.line;
+    errors.push({
+      severity: "note",
+      at: at(lineNo, 1),
+      rule: "weather-too-many-errors",
+      message: `Stopped reading the weather file after ${MAX_WEATHER_ERRORS} errors`,
+    });
+  }
+  if (errors.length === 0 && times.length === 0) {
+    errors.push(error(at(firstLine, 1), "weather-empty", "The weather file has a header but no data rows"));
+  }
+  if (errors.length > 0) return fail();
+  if (negatives > 0) {
+    warnings.push(warning(
+      at(firstLine, 1),
+      "weather-negative-irradiance",
+      `${negatives} small negative irradiance value${
+        negatives === 1 ? "" : "s"
+      } (down to −${NEGATIVE_IRRADIANCE_TOLERANCE_W_PER_M2} W/m²) set to 0; the first at ${firstNegative}`,
+    ));
+  }
+  const series = (name: ValueColumn) => Float64Array.from(values.get(name) ?? []);
+  const weather: WeatherSeries = {
+    startTime: localTimeAt(times[0]!),
+    timestepS,
+    count: times.length,
+    dryBulbC: series("dry-bulb"),
+    globalHorizontalWPerM2: series("global-horizontal"),
+    diffuseHorizontalWPerM2: series("diffuse-horizontal"),
+    ...(values.has("direct-normal") ? { directNormalWPerM2: series("direct-normal") } : {}),
+    monthOfStep: Uint8Array.from(times, (s) => civilFromDays(Math.floor((s - timestepS / 2) / 86400)).month),
+  };
+  return { ok: true, weather, diagnostics: warnings };
+}
+
+const numberHint =
+  "write a plain number with a '.' decimal point, e.g. 21.5 (no unit, no thousands separator)";
+
+function splitCells(line: string): { text: string; col: number }[] {
+  const cells: { text: string; col: number }[] = [];
+  let start = 0;
+  for (const raw of line.split(",")) {
+    const lead = raw.length - raw.trimStart().length;
+    cells.push({ text: raw.trim(), col: start + lead + 1 });
+    start += raw.length + 1;
+  }
+  return cells;
+}
+
+function readHeader(
+  line: string,
+  lineNo: number,
+  at: (line: number, col: number) => Diagnostic["at"],
+  errors: Diagnostic[],
+): { names: Column[] } | undefined {
+  const cells = splitCells(line);
+  if (cells.length === 1 && /[;\t]/.test(line)) {
+    errors.push(error(
+      at(lineNo, 1),
+      "weather-header",
+      `The header "${line.trim()}" has one column: columns are separated by commas`,
+      `write the header as ${WEATHER_COLUMNS.slice(0, 4).join(",")}`,
+    ));
+    return undefined;
+  }
+  const names: Column[] = [];
+  for (const cell of cells) {
+    const known = (WEATHER_COLUMNS as readonly string[]).includes(cell.text);
+    if (!known) {
+      errors.push(error(
+        at(lineNo, cell.col),
+        "weather-unknown-column",
+        `Unknown column "${cell.text}" in the weather file; allowed columns: ${LIST}`,
+      ));
+    } else if (names.includes(cell.text as Column)) {
+      errors.push(
+        error(at(lineNo, cell.col), "weather-duplicate-column", `Column "${cell.text}" appears twice`),
+      );
+    } else names.push(cell.text as Column);
+  }
+  for (const required of REQUIRED_WEATHER_COLUMNS) {
+    if (!names.includes(required)) {
+      errors.push(error(
+        at(lineNo, 1),
+        "weather-missing-column",
+        `Missing column "${required}" in the weather file header`,
+        `the header needs ${REQUIRED_WEATHER_COLUMNS.join(", ")} (direct-normal is optional), in any order`,
+      ));
+    }
+  }
+  return { names };
+}
+
+/** The time the next row should have, so that one bad row does not make the next look like a gap. */
+function advance(previousS: number | undefined, timestepS: number): number | undefined {
+  return previousS === undefined ? undefined : previousS + timestepS;
+}
+
+function stepProblem(previousS: number, seconds: number, timestepS: number): string | undefined {
+  const expectedS = previousS + timestepS;
+  if (seconds === expectedS) return undefined;
+  const t = formatLocalTime(localTimeAt(seconds));
+  const expected = `expected ${formatLocalTime(localTimeAt(expectedS))}`;
+  const step = formatDurationS(timestepS);
+  if (seconds === previousS) return `Time ${t} repeats the previous row; ${expected} (step ${step})`;
+  if (seconds < previousS) {
+    return `Time ${t} goes back from the previous row ${
+      formatLocalTime(localTimeAt(previousS))
+    }; ${expected} (step ${step})`;
+  }
+  const missing = (seconds - previousS) / timestepS - 1;
+  if (Number.isInteger(missing)) {
+    return `Time ${t} leaves a gap of ${missing} row${missing === 1 ? "" : "s"}; ${expected} (step ${step})`;
+  }
+  return `Time ${t} is ${
+    formatDurationS(seconds - previousS)
+  } after the previous row; ${expected} (the scenario's time step is ${step})`;
+}

@@ -26,9 +26,9 @@ export async function runCheck(options: CheckOptions, io: CommandIo): Promise<nu
       rule: d.rule,
       at: formatPosition(d.at),
       message: d.message,
-      value: null,
-      expected: null,
-      source: null,
+      value: d.value ?? null,
+      expected: d.expected ?? null,
+      source: d.source ?? null,
       hint: d.hint ?? null,
     }));
     io.stdout(JSON.stringify({ schema: "fluxnote-check/1", findings }, null, 2));

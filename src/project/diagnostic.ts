@@ -10,6 +10,12 @@ export interface Diagnostic {
   readonly rule: string;
   readonly message: string;
   readonly hint?: string;
+  /** For plausibility findings: the value found, with its unit. */
+  readonly value?: string;
+  /** For plausibility findings: the expected range or rule, with its unit. */
+  readonly expected?: string;
+  /** For plausibility findings: where the expected range comes from. */
+  readonly source?: string;
 }
 
 /** Creates an error diagnostic. */

@@ -5,8 +5,7 @@
  * naming its line and column.
  */
 import { type Diagnostic, error, warning } from "../project/diagnostic.ts";
-import { type LocalTime, localTimeAt, parseLocalTime, secondsOf } from "./weatherTime.ts";
-import { civilFromDays } from "./weatherTime.ts";
+import { civilFromDays, type LocalTime, localTimeAt, parseLocalTime, secondsOf } from "./weatherTime.ts";
 import {
   advance,
   type Column,
@@ -231,4 +230,3 @@ export function parseWeatherCsv(
 
 const numberHint =
   "write a plain number with a '.' decimal point, e.g. 21.5 (no unit, no thousands separator)";
-

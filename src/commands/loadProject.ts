@@ -1,5 +1,6 @@
 import { sha256Hex } from "../archive/hash.ts";
-import { type Diagnostic, hasErrors, sortDiagnostics } from "../project/diagnostic.ts";
+import { type Diagnostic, error, hasErrors, sortDiagnostics } from "../project/diagnostic.ts";
+import { diskProjectFs, type ProjectFs } from "../project/projectFs.ts";
 import type { Model } from "../project/model.ts";
 import { type InputFile, MAX_WEATHER_BYTES, readDataFile, readProject } from "../project/readProject.ts";
 import { type LibraryUse, resolveProject } from "../project/resolveProject.ts";
@@ -18,8 +19,22 @@ export interface LoadedProject {
 }
 
 /** Reads and resolves a project folder; every diagnostic of both stages is collected and sorted. */
-export async function loadProject(folder: string): Promise<LoadedProject> {
-  const read = await readProject(folder);
+export async function loadProject(folder: string | ProjectFs): Promise<LoadedProject> {
+  const fs = typeof folder === "string" ? await diskProjectFs(folder) : folder;
+  if (fs === undefined) {
+    const at = { file: "project.md", line: 1, col: 1 };
+    const message = `Cannot open the project folder "${
+      String(folder)
+    }": it does not exist or is not a folder`;
+    return {
+      files: [],
+      library: [],
+      inputRecords: [],
+      diagnostics: [error(at, "no-project", message, "give the path of a folder that holds project.md")],
+      dataTexts: new Map(),
+    };
+  }
+  const read = await readProject(fs);
   if (hasErrors(read.diagnostics) || read.sources.length === 0) {
     return {
       files: read.files,
@@ -36,7 +51,7 @@ export async function loadProject(folder: string): Promise<LoadedProject> {
   for (const scenario of resolved.model?.scenarios ?? []) {
     if (scenario.kind !== "weather" || dataTexts.has(scenario.weatherPath)) continue;
     const data = await readDataFile(
-      folder,
+      fs,
       scenario.weatherPath,
       scenario.weatherAt,
       MAX_WEATHER_BYTES,

@@ -1,0 +1,137 @@
+import type { EnergyTotals } from "../results/types.ts";
+
+/** Gain and loss energy of one month, J. */
+export interface MonthTotals {
+  readonly gain_J: number;
+  readonly loss_J: number;
+}
+
+/** A peak: value, hours since the first row, and the row time. */
+export interface TimedPeak {
+  /** W */
+  readonly heatGain: number;
+  readonly time_h: number;
+  /** ISO `YYYY-MM-DDTHH:MM`, local standard time. */
+  readonly time: string;
+}
+
+/** Daily largest, smallest and mean heat gain, W, one value per calendar day. */
+export interface DailySummary {
+  readonly max: number[];
+  readonly min: number[];
+  readonly mean: number[];
+}
+
+/** Energy totals of a power series, J: gain (positive part) and loss (negative part, as a positive number), per month too. */
+export function energyTotals(
+  powerW: ArrayLike<number>,
+  monthOfStep: ArrayLike<number>,
+  timestepS: number,
+): Required<EnergyTotals> {
+  const gain = new Array<number>(12).fill(0);
+  const loss = new Array<number>(12).fill(0);
+  for (let k = 0; k < powerW.length; k++) {
+    const p = powerW[k]!;
+    const m = monthOfStep[k]! - 1;
+    if (p > 0) gain[m] = gain[m]! + p * timestepS;
+    else loss[m] = loss[m]! - p * timestepS;
+  }
+  return {
+    gain_J: gain.reduce((a, b) => a + b, 0),
+    loss_J: loss.reduce((a, b) => a + b, 0),
+    monthly: gain.map((g, m) => ({ gain_J: g, loss_J: loss[m]! })),
+  };
+}
+
+/** Largest (`sign` +1) or most negative (`sign` −1) value of a power series with its time (first on ties). */
+export function timedPeak(
+  powerW: ArrayLike<number>,
+  timeLabels: readonly string[],
+  timestepS: number,
+  sign: 1 | -1,
+): TimedPeak {
+  let index = 0;
+  for (let k = 1; k < powerW.length; k++) if (sign * powerW[k]! > sign * powerW[index]!) index = k;
+  return {
+    heatGain: powerW[index] ?? NaN,
+    time_h: (index * timestepS) / 3600,
+    time: timeLabels[index] ?? "",
+  };
+}
+
+/** Daily max, min and mean of a power series by the day index of each step, rounded to 0.01 W. */
+export function dailySummary(
+  powerW: ArrayLike<number>,
+  dayIndexOfStep: ArrayLike<number>,
+  days: number,
+): DailySummary {
+  const max = new Array<number>(days).fill(-Infinity);
+  const min = new Array<number>(days).fill(Infinity);
+  const sum = new Array<number>(days).fill(0);
+  const count = new Array<number>(days).fill(0);
+  for (let k = 0; k < powerW.length; k++) {
+    const d = dayIndexOfStep[k]!;
+    const p = powerW[k]!;
+    max[d] = Math.max(max[d]!, p);
+    min[d] = Math.min(min[d]!, p);
+    sum[d] = sum[d]! + p;
+    count[d] = count[d]! + 1;
+  }
+  const round = (v: number) => Math.round(v * 100) / 100;
+  return { max: max.map(round), min: min.map(round), mean: sum.map((s, d) => round(s / count[d]!)) };
+}
+
+/** A number as plain decimal text with `decimals` places (no exponent, no "-0"); empty for a non-finite value. */
+export function plainNumber(value: number, decimals: number): string {
+  if (!Number.isFinite(value)) return "";
+  const text = value.toFixed(decimals);
+  return /^-0(\.0*)?$/.test(text) ? text.slice(1) : text;
+}
+
+/** One surface's columns in the hourly CSV. */
+export interface CsvSurface {
+  readonly id: string;
+  readonly incidentWPerM2: Float64Array | null;
+  readonly solAirC: ArrayLike<number>;
+  readonly insideWPerM2: ArrayLike<number>;
+  readonly heatGainW: ArrayLike<number>;
+}
+
+/**
+ * The hourly CSV of a weather scenario: `time`, `outdoor_degC`, `indoor_degC`, then per surface
+ * `<id>:incident_W_per_m2`, `<id>:sol_air_degC`, `<id>:inside_flux_W_per_m2`, `<id>:heat_gain_W`, and
+ * `total_heat_gain_W`; one row per step, LF line ends.
+ */
+export function weatherCsvText(
+  timeLabels: readonly string[],
+  outdoorC: ArrayLike<number>,
+  indoorC: ArrayLike<number>,
+  surfaces: readonly CsvSurface[],
+  totalW: ArrayLike<number>,
+): string {
+  const quote = (name: string) => (/[",\n\r]/.test(name) ? `"${name.replaceAll('"', '""')}"` : name);
+  const header = ["time", "outdoor_degC", "indoor_degC"];
+  for (const s of surfaces) {
+    header.push(
+      ...["incident_W_per_m2", "sol_air_degC", "inside_flux_W_per_m2", "heat_gain_W"].map((c) =>
+        quote(`${s.id}:${c}`)
+      ),
+    );
+  }
+  header.push("total_heat_gain_W");
+  const rows = [header.join(",")];
+  for (let k = 0; k < timeLabels.length; k++) {
+    const cells = [timeLabels[k]!, plainNumber(outdoorC[k]!, 3), plainNumber(indoorC[k]!, 3)];
+    for (const s of surfaces) {
+      cells.push(
+        s.incidentWPerM2 === null ? "" : plainNumber(s.incidentWPerM2[k]!, 2),
+        plainNumber(s.solAirC[k]!, 3),
+        plainNumber(s.insideWPerM2[k]!, 4),
+        plainNumber(s.heatGainW[k]!, 2),
+      );
+    }
+    cells.push(plainNumber(totalW[k]!, 2));
+    rows.push(cells.join(","));
+  }
+  return `${rows.join("\n")}\n`;
+}

@@ -1,0 +1,319 @@
+/**
+ * A weather year: hourly (or sub-hourly) weather rows → sol-air temperature per surface → inside and outside fluxes
+ * by the modal recursion after a periodic-year warm-up → heat gains, peaks, monthly and daily summaries, and one CSV
+ * of the step series (results.json keeps only the summaries, DESIGN.md §4).
+ */
+import type { WeatherSeries } from "../climate/weatherCsv.ts";
+import { formatDurationS } from "../climate/weatherTime.ts";
+import type { Assumption, Scenario } from "../project/model.ts";
+import { formatPosition } from "../project/position.ts";
+import type { CheckResult, EnergyTotals, ScenarioResults, SurfaceResults } from "../results/types.ts";
+import type { ScenarioContext, ScenarioOutcome } from "./designDay.ts";
+import { surfaceParameters, type SurfaceWarning } from "./surfaceParameters.ts";
+import { weatherBoundary, type WeatherSurfaceInput } from "./weatherBoundary.ts";
+import {
+  fluxesAfterWarmUp,
+  MIN_WARM_UP_DAYS,
+  WARM_UP_TIME_CONSTANTS,
+  warmUpDays,
+} from "./weatherRecursion.ts";
+import {
+  type CsvSurface,
+  type DailySummary,
+  dailySummary,
+  energyTotals,
+  type TimedPeak,
+  timedPeak,
+  weatherCsvText,
+} from "./weatherSummary.ts";
+
+/**
+ * Limit of the annual energy-balance check |Σq − U Σ(T_sa − T_i)| / (U N max(1 K, mean|T_sa − T_i|)). The recursion
+ * keeps ΣY = ΣZ = U exactly and the periodic warm-up makes the history before the first row equal to the end of the
+ * series, so the only residual is the steady start before the warm-up, of relative order
+ * e^(−W/τ1) · τ1/(N Δ) · max|T − mean| / mean|ΔT| — below 1e-5 for a year with W ≥ 5 τ1; 1e-4 leaves room for short series.
+ */
+export const WEATHER_ENERGY_BALANCE_LIMIT = 1e-4;
+/** Limit of the warm-up check: first-day inside flux with W versus 2W warm-up days, relative to max(peak, U × 1 K). */
+export const WARM_UP_LIMIT = 1e-3;
+
+type WeatherScenario = Extract<Scenario, { kind: "weather" }>;
+
+/** A surface of a weather year in results.json: empty step series (they are in the CSV) plus the summaries. */
+export interface WeatherSurfaceResults extends SurfaceResults {
+  readonly peakTime: string;
+  /** Most negative heat gain (largest loss), W, with its time. */
+  readonly peakLoss: TimedPeak;
+  readonly totals: Required<EnergyTotals>;
+  /** Daily max, min and mean heat gain, W, one value per calendar day from `daily.firstDate` of the scenario. */
+  readonly daily: DailySummary;
+}
+
+/** A weather-year scenario in results.json (DESIGN.md §4 plus extension keys). */
+export interface WeatherScenarioResults extends ScenarioResults {
+  readonly surfaces: Readonly<Record<string, WeatherSurfaceResults>>;
+  /** Path of the step CSV inside the output folder, e.g. `csv/<id>.csv`. */
+  readonly csv: string;
+  readonly peakTime: string;
+  readonly peakLoss: TimedPeak;
+  readonly weather: {
+    readonly path: string;
+    readonly firstTime: string;
+    readonly lastTime: string;
+    readonly steps: number;
+    readonly dryBulbMean_C: number;
+    readonly dryBulbMin_C: number;
+    readonly dryBulbMax_C: number;
+    /** Annual global horizontal irradiation, J/m². */
+    readonly globalHorizontal_J_per_m2: number;
+  };
+  readonly warmUp: { readonly days: number; readonly tau1_h: number };
+  readonly daily: { readonly firstDate: string; readonly days: number } & DailySummary;
+}
+
+/** A computed weather year with the CSV files to write under the output folder. */
+export interface WeatherOutcome extends ScenarioOutcome {
+  readonly results: WeatherScenarioResults;
+  readonly csv: { path: string; text: string }[];
+}
+
+/** Computes a weather year: sol-air per surface, fluxes after a periodic warm-up, gains, summaries, checks and CSV. */
+export function computeWeatherYear(
+  scenario: WeatherScenario,
+  weather: WeatherSeries,
+  context: ScenarioContext,
+): WeatherOutcome {
+  if (scenario.site === undefined) {
+    throw new RangeError(`Cannot compute weather scenario ${scenario.id}: it has no site to place the sun`);
+  }
+  const dt = weather.timestepS;
+  const n = weather.count;
+  const assumptions: Assumption[] = [];
+  const warnings: SurfaceWarning[] = [];
+  const inputs: (WeatherSurfaceInput & { uValue: number; tau1H: number })[] = [];
+  for (const surface of scenario.surfaces) {
+    const construction = context.constructions.get(surface.construction);
+    if (construction === undefined) continue;
+    const root = context.analysisAt(surface.construction, dt).airToAir;
+    const parameters = surfaceParameters(scenario.id, surface, construction, assumptions, warnings);
+    inputs.push({ surface, parameters, uValue: root.uValue, tau1H: root.tau1H });
+  }
+  const boundary = weatherBoundary(weather, scenario.site, scenario.indoor, inputs);
+  const tau1H = Math.max(0, ...inputs.map((i) => i.tau1H));
+  const days = warmUpDays(tau1H);
+  const stepsPerDay = Math.round(86400 / dt);
+  const warmUpSteps = days * stepsPerDay;
+  const at = formatPosition(scenario.at);
+  assumptions.push(warmUpAssumption(scenario.id, days, tau1H, at), ...methodAssumptions(scenario.id, at));
+  const surfaces: Record<string, WeatherSurfaceResults> = {};
+  const checks: CheckResult[] = [];
+  const csvSurfaces: CsvSurface[] = [];
+  const total = new Float64Array(n);
+  for (const [s, input] of inputs.entries()) {
+    const { surface, parameters: p, uValue } = input;
+    const modes = context.analysisAt(surface.construction, dt).airToAir.modes;
+    const solAirC = boundary.surfaces[s]!.solAirC;
+    const flux = fluxesAfterWarmUp(modes, solAirC, boundary.indoorC, warmUpSteps, n);
+    const heatGain = Float64Array.from(flux.insideWPerM2, (q) => q * surface.areaM2);
+    for (let k = 0; k < n; k++) total[k] = total[k]! + heatGain[k]!;
+    const subject = `scenario:${scenario.id}/${surface.id}`;
+    checks.push(
+      energyBalanceCheck(subject, flux.insideWPerM2, solAirC, boundary.indoorC, uValue),
+      warmUpCheck(
+        subject,
+        modes,
+        solAirC,
+        boundary.indoorC,
+        warmUpSteps,
+        flux.insideWPerM2,
+        uValue,
+        stepsPerDay,
+      ),
+    );
+    const peak = timedPeak(heatGain, boundary.timeLabels, dt, 1);
+    surfaces[surface.id] = {
+      construction: surface.construction,
+      area: surface.areaM2,
+      solAir: [],
+      insideFlux: [],
+      outsideFlux: [],
+      heatGain: [],
+      radiantGain: [],
+      convectiveGain: [],
+      peak: { heatGain: peak.heatGain, time_h: peak.time_h },
+      incident: [],
+      parameters: {
+        absorptance: p.absorptance,
+        emittance: p.emittance,
+        outsideCoefficient: p.outsideCoefficient,
+        longwaveCorrection: p.longwaveCorrectionK,
+        radiantFraction: p.radiantFraction,
+        groundReflectance: p.groundReflectance,
+      },
+      peakTime: peak.time,
+      peakLoss: timedPeak(heatGain, boundary.timeLabels, dt, -1),
+      totals: energyTotals(heatGain, weather.monthOfStep, dt),
+      daily: dailySummary(heatGain, boundary.dayIndexOfStep, boundary.dayCount),
+    };
+    csvSurfaces.push({
+      id: surface.id,
+      incidentWPerM2: boundary.surfaces[s]!.incidentWPerM2,
+      solAirC,
+      insideWPerM2: flux.insideWPerM2,
+      heatGainW: heatGain,
+    });
+  }
+  const csvPath = `csv/${scenario.id}.csv`;
+  const peak = timedPeak(total, boundary.timeLabels, dt, 1);
+  const results: WeatherScenarioResults = {
+    kind: "weather",
+    timestep_h: dt / 3600,
+    outdoor: [],
+    indoor: [],
+    surfaces,
+    totalHeatGain: [],
+    peak: { heatGain: peak.heatGain, time_h: peak.time_h },
+    totals: energyTotals(total, weather.monthOfStep, dt),
+    notes: notes(scenario.id, csvPath, dt),
+    csv: csvPath,
+    peakTime: peak.time,
+    peakLoss: timedPeak(total, boundary.timeLabels, dt, -1),
+    weather: weatherSummary(scenario.weatherPath, weather, boundary.timeLabels),
+    warmUp: { days, tau1_h: tau1H },
+    daily: {
+      firstDate: boundary.firstDate,
+      days: boundary.dayCount,
+      ...dailySummary(total, boundary.dayIndexOfStep, boundary.dayCount),
+    },
+  };
+  const text = weatherCsvText(boundary.timeLabels, boundary.outdoorC, boundary.indoorC, csvSurfaces, total);
+  return { results, checks, assumptions, warnings, csv: [{ path: csvPath, text }] };
+}
+
+function energyBalanceCheck(
+  subject: string,
+  insideWPerM2: Float64Array,
+  solAirC: Float64Array,
+  indoorC: Float64Array,
+  uValue: number,
+): CheckResult {
+  let sumFlux = 0;
+  let sumDifference = 0;
+  let sumAbsDifference = 0;
+  for (let k = 0; k < insideWPerM2.length; k++) {
+    const difference = solAirC[k]! - indoorC[k]!;
+    sumFlux += insideWPerM2[k]!;
+    sumDifference += difference;
+    sumAbsDifference += Math.abs(difference);
+  }
+  const n = insideWPerM2.length;
+  const value = Math.abs(sumFlux - uValue * sumDifference) / (uValue * n * Math.max(1, sumAbsDifference / n));
+  return check(
+    "energy-balance",
+    subject,
+    "Whole series: Σ inside flux versus U × Σ(sol-air − indoor), relative to U × N × max(1 K, mean |sol-air − indoor|)",
+    value,
+    WEATHER_ENERGY_BALANCE_LIMIT,
+  );
+}
+
+function warmUpCheck(
+  subject: string,
+  modes: Parameters<typeof fluxesAfterWarmUp>[0],
+  solAirC: Float64Array,
+  indoorC: Float64Array,
+  warmUpSteps: number,
+  insideWPerM2: Float64Array,
+  uValue: number,
+  stepsPerDay: number,
+): CheckResult {
+  const length = Math.min(stepsPerDay, insideWPerM2.length);
+  const doubled = fluxesAfterWarmUp(modes, solAirC, indoorC, 2 * warmUpSteps, length).insideWPerM2;
+  let difference = 0;
+  let scale = uValue;
+  for (let k = 0; k < length; k++) {
+    difference = Math.max(difference, Math.abs(insideWPerM2[k]! - doubled[k]!));
+    scale = Math.max(scale, Math.abs(doubled[k]!));
+  }
+  return check(
+    "warm-up",
+    subject,
+    "First day's inside flux after the warm-up versus after twice the warm-up: max |Δq| / max(peak |q|, U × 1 K)",
+    difference / scale,
+    WARM_UP_LIMIT,
+  );
+}
+
+function check(id: string, subject: string, description: string, value: number, limit: number): CheckResult {
+  return { id, subject, description, value, limit, pass: Math.abs(value) <= limit };
+}
+
+function warmUpAssumption(id: string, days: number, tau1H: number, at: string): Assumption {
+  return {
+    id: `rule:weather-warm-up:${id}`,
+    text:
+      `Warm-up: the last ${days} days of the weather file are run first, from a steady state at their mean ` +
+      `temperatures, so the first row follows the end of the file as if the year repeated (periodic-year assumption); ` +
+      `${days} days = max(${MIN_WARM_UP_DAYS}, ⌈${WARM_UP_TIME_CONSTANTS} τ1 / 24 h⌉) with the slowest τ1 = ${
+        tau1H.toFixed(1)
+      } h of the scenario's constructions`,
+    source: "fluxnote rule (start-up error decays as e^(−t/τ1); checked by the warm-up check)",
+    at,
+  };
+}
+
+function methodAssumptions(id: string, at: string): Assumption[] {
+  return [{
+    id: `rule:weather-transposition:${id}`,
+    text: "Irradiance on each surface from the file's global and diffuse horizontal values: isotropic sky " +
+      "(Liu & Jordan), beam = global − diffuse (all diffuse with the sun below 2°), ground reflection ρg (1 − cos Σ)/2, " +
+      "sun position at the middle of each interval; direct-normal, when given, is not used",
+    source: "Liu & Jordan (1963), Solar Energy 7(2) (from memory); fluxnote transposition rules",
+    at,
+  }];
+}
+
+function notes(id: string, csvPath: string, dt: number): string[] {
+  return [
+    "Time base: local standard time as written in the weather file; row k is at the first row's time + k·Δ.",
+    "Irradiance in the file is the mean over the interval ending at each row's time; transposition uses the sun at " +
+    "the interval's midpoint.",
+    "Irradiance at a row's time is the mean of the interval ending and the interval starting there (the last row " +
+    "uses the first interval: periodic year), so a peak is not shifted by half a step; the sol-air temperature " +
+    "combines it with the dry bulb at that time and is taken as linear between rows.",
+    "Sky model for the transposition: isotropic (Liu & Jordan).",
+    `Fluxes: modal recursion at Δ = ${formatDurationS(dt)} after a periodic-year warm-up (see assumptions).`,
+    "Monthly totals: each step counts for the month of the interval ending at its time (time − Δ/2).",
+    `Step series of scenario ${id} are in ${csvPath}, not in results.json: columns time, outdoor_degC, indoor_degC, ` +
+    "then per surface <id>:incident_W_per_m2, <id>:sol_air_degC, <id>:inside_flux_W_per_m2 (positive into the " +
+    "room), <id>:heat_gain_W, and total_heat_gain_W.",
+  ];
+}
+
+function weatherSummary(
+  path: string,
+  weather: WeatherSeries,
+  timeLabels: readonly string[],
+): WeatherScenarioResults["weather"] {
+  let sum = 0;
+  let min = Infinity;
+  let max = -Infinity;
+  let global = 0;
+  for (let k = 0; k < weather.count; k++) {
+    const t = weather.dryBulbC[k]!;
+    sum += t;
+    min = Math.min(min, t);
+    max = Math.max(max, t);
+    global += weather.globalHorizontalWPerM2[k]! * weather.timestepS;
+  }
+  return {
+    path,
+    firstTime: timeLabels[0] ?? "",
+    lastTime: timeLabels[timeLabels.length - 1] ?? "",
+    steps: weather.count,
+    dryBulbMean_C: sum / weather.count,
+    dryBulbMin_C: min,
+    dryBulbMax_C: max,
+    globalHorizontal_J_per_m2: global,
+  };
+}

@@ -1,6 +1,11 @@
 import assert from "node:assert/strict";
 import { analyseConstruction, type DynamicAnalysis } from "../../src/engine/mod.ts";
-import { ctfRepeatedDayFlux, repeatedDayFlux, steadyPeriodicFlux, SurfaceRecursion } from "../../src/engine/surfaceFlux.ts";
+import {
+  ctfRepeatedDayFlux,
+  repeatedDayFlux,
+  steadyPeriodicFlux,
+  SurfaceRecursion,
+} from "../../src/engine/surfaceFlux.ts";
 import { HEAVY_WALL, LIGHT_WALL } from "./walls.ts";
 import type { ConstructionInput } from "../../src/engine/layer.ts";
 
@@ -14,7 +19,8 @@ function analyse(input: ConstructionInput, timestepS: number): DynamicAnalysis {
 function solAirDay(n: number): number[] {
   return Array.from({ length: n }, (_, k) => {
     const h = (24 * k) / n;
-    return 26 + 8 * Math.cos((2 * Math.PI * (h - 15)) / 24) + (h > 12 && h < 17 ? 12 * Math.sin((Math.PI * (h - 12)) / 5) : 0);
+    return 26 + 8 * Math.cos((2 * Math.PI * (h - 15)) / 24) +
+      (h > 12 && h < 17 ? 12 * Math.sin((Math.PI * (h - 12)) / 5) : 0);
   });
 }
 
@@ -29,8 +35,14 @@ for (const [name, wall] of [["heavy", HEAVY_WALL], ["light", LIGHT_WALL]] as con
       const repeated = repeatedDayFlux(a.airToAir.modes, solAir, indoor, 1e-10);
       const scale = Math.max(...periodic.insideWPerM2.map(Math.abs));
       for (let k = 0; k < n; k++) {
-        assert.ok(Math.abs(periodic.insideWPerM2[k]! - repeated.insideWPerM2[k]!) < 1e-6 * scale, `inside step ${k}`);
-        assert.ok(Math.abs(periodic.outsideWPerM2[k]! - repeated.outsideWPerM2[k]!) < 1e-6 * scale + 1e-9, `outside step ${k}`);
+        assert.ok(
+          Math.abs(periodic.insideWPerM2[k]! - repeated.insideWPerM2[k]!) < 1e-6 * scale,
+          `inside step ${k}`,
+        );
+        assert.ok(
+          Math.abs(periodic.outsideWPerM2[k]! - repeated.outsideWPerM2[k]!) < 1e-6 * scale + 1e-9,
+          `outside step ${k}`,
+        );
       }
       // Daily energy balance (identity: Σ Y_P = U, Σ Z_P = U): mean inside flux = U (mean T_sa − mean T_i).
       const mean = (xs: readonly number[]) => xs.reduce((s, v) => s + v, 0) / xs.length;

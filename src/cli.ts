@@ -1,6 +1,7 @@
 import { parseArgs } from "node:util";
 import { type CommandIo, runBuild } from "./commands/build.ts";
 import { runCheck } from "./commands/check.ts";
+import { runInit } from "./commands/init.ts";
 import { TOOL_VERSION } from "./version.ts";
 
 const USAGE =
@@ -12,6 +13,7 @@ commands:
   build <project> [--out <dir>]            write package.html, results.json and csv/
   check <project> [--format text|json] [--strict]
                                            validate the project, write nothing
+  init <dir>                               start a new project from the template
   help [command]                           show help
 
 Run "fluxnote <command> --help" for a command's options.`;
@@ -26,6 +28,10 @@ Reads the project folder, computes every construction and writes one output set:
 --out defaults to <project>/out. The set is replaced as a whole; on an input error nothing is written.
 Exit codes: 0 success; 1 input errors or a failed computed check (the package is still written then);
 2 usage error or internal fault.`,
+  init: `usage: fluxnote init <dir>
+
+Creates <dir> with a starter project (project.md, materials, constructions, a design day) to edit.
+Refuses a folder that already holds files. Exit codes: 0 created; 2 usage error or folder not empty.`,
   check: `usage: fluxnote check <project> [--format text|json] [--strict]
 
 Runs all validation of a build and reports every finding as path:line:col: severity: message.
@@ -34,7 +40,7 @@ Runs all validation of a build and reports every finding as path:line:col: sever
 Exit codes: 0 no errors; 1 errors (or warnings with --strict); 2 usage error.`,
 };
 
-const LATER = ["diff", "verify", "init", "serve"];
+const LATER = ["diff", "verify", "serve"];
 
 /** Runs the command line; returns the process exit code. */
 export async function main(args: readonly string[], io: CommandIo): Promise<number> {
@@ -51,6 +57,17 @@ export async function main(args: readonly string[], io: CommandIo): Promise<numb
   if (LATER.includes(command)) {
     io.stderr(`fluxnote: the "${command}" command is not available in version ${TOOL_VERSION}`);
     return 2;
+  }
+  if (command === "init") {
+    if (rest.length !== 1 || rest[0]?.startsWith("-")) {
+      if (rest[0] === "--help" || rest[0] === "-h") {
+        io.stdout(HELP.init ?? USAGE);
+        return 0;
+      }
+      io.stderr(`fluxnote init: expected one folder name\n\n${HELP.init}`);
+      return 2;
+    }
+    return await runInit(rest[0] ?? "", io);
   }
   if (command !== "build" && command !== "check") {
     io.stderr(`fluxnote: unknown command "${command}"\n\n${USAGE}`);

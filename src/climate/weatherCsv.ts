@@ -75,7 +75,11 @@ export function parseWeatherCsv(
   let index = lines.findIndex((l) => l.trim() !== "");
   if (index < 0) {
     errors.push(
-      error(at(firstLine, 1), "weather-empty", `The weather file is empty: expected a header line "${LIST}"`),
+      error(
+        at(firstLine, 1),
+        "weather-empty",
+        `The weather file is empty: expected a header line such as ${REQUIRED_WEATHER_COLUMNS.join(",")}`,
+      ),
     );
     return fail();
   }
@@ -137,46 +141,10 @@ export function parseWeatherCsv(
     for (const [c, name] of header.names.entries()) {
       if (name === "time" || full()) continue;
       const cell = cells[c]!;
-      const place = at(lineNo, cell.col);
-      if (cell.text === "") {
-        errors.push(error(place, "weather-number", `Missing value in column ${name}`, numberHint));
-        continue;
-      }
-      if (!NUMBER.test(cell.text)) {
-        errors.push(
-          error(
-            place,
-            "weather-number",
-            `Cannot read "${cell.text}" in column ${name} as a number`,
-            numberHint,
-          ),
-        );
-        continue;
-      }
-      let value = Number(cell.text);
-      if (name === "dry-bulb") {
-        if (value < DRY_BULB_RANGE_C.min || value > DRY_BULB_RANGE_C.max) {
-          errors.push(error(
-            place,
-            "weather-range",
-            `dry-bulb ${cell.text} °C is outside the plausible range ${DRY_BULB_RANGE_C.min}…${DRY_BULB_RANGE_C.max} °C`,
-            "the column is °C (not °F or K)",
-          ));
-        }
-      } else if (value > MAX_IRRADIANCE_W_PER_M2) {
-        errors.push(error(
-          place,
-          "weather-range",
-          `${name} ${cell.text} W/m² is above the plausible limit of ${MAX_IRRADIANCE_W_PER_M2} W/m²`,
-          "irradiance is in W/m², the mean over the step (not Wh/m² or kJ/m² totals)",
-        ));
-      } else if (value < -NEGATIVE_IRRADIANCE_TOLERANCE_W_PER_M2) {
-        errors.push(error(place, "weather-range", `${name} ${cell.text} W/m² is negative`));
-      } else if (value < 0) {
-        if (negatives++ === 0) firstNegative = `line ${lineNo}, ${name} ${cell.text}`;
-        value = 0;
-      }
-      row.set(name, value);
+      const read = readValueCell(name, cell.text, at(lineNo, cell.col), errors);
+      if (read === undefined) continue;
+      if (read.clipped && negatives++ === 0) firstNegative = `line ${lineNo}, ${name} ${cell.text}`;
+      row.set(name, read.value);
     }
     const global = row.get("global-horizontal");
     const diffuse = row.get("diffuse-horizontal");

@@ -31,3 +31,83 @@ export function smallestEigenvalues(
   }
   return out;
 }
+
+/** Eigenvalues (ascending) and the requested rows of the orthonormal eigenvector matrix V (S = V Λ Vᵀ). */
+export interface TridiagonalEigen {
+  readonly values: Float64Array;
+  /** rows[r][k] = V[rowIndices[r], k]: component `rowIndices[r]` of the eigenvector of values[k]. */
+  readonly rows: readonly Float64Array[];
+}
+
+const MAX_SWEEPS_PER_VALUE = 60;
+
+/**
+ * Eigen-decomposition of a symmetric tridiagonal matrix by the implicit QL algorithm with Wilkinson shifts
+ * (Golub & Van Loan, Matrix Computations, §8.3). Every QL sweep is a chain of plane rotations V ← V·G, so
+ * any subset of rows of V can be accumulated alone: `rowIndices` = all rows gives the full V (O(n³)), the two
+ * end rows give what a chain's boundary responses need in O(n²). Throws if a value fails to converge.
+ */
+export function tridiagonalEigen(
+  diag: readonly number[],
+  off: readonly number[],
+  rowIndices: readonly number[],
+): TridiagonalEigen {
+  const n = diag.length;
+  const d = Float64Array.from(diag);
+  const e = new Float64Array(n); // e[i] couples i and i + 1; e[n − 1] = 0
+  for (let i = 0; i < n - 1; i++) e[i] = off[i]!;
+  const rows = rowIndices.map((r) => {
+    const v = new Float64Array(n);
+    v[r] = 1;
+    return v;
+  });
+  for (let l = 0; l < n; l++) {
+    for (let sweep = 0;; sweep++) {
+      // Split point: the first negligible coupling at or below l.
+      let m = l;
+      while (m < n - 1 && Math.abs(e[m]!) > Number.EPSILON * (Math.abs(d[m]!) + Math.abs(d[m + 1]!))) m++;
+      if (m === l) break;
+      if (sweep >= MAX_SWEEPS_PER_VALUE) throw new Error(`tridiagonalEigen: no convergence for value ${l}`);
+      // Wilkinson shift from the leading 2 × 2 block of the unreduced block l … m.
+      const theta = (d[l + 1]! - d[l]!) / (2 * e[l]!);
+      const rho = Math.hypot(theta, 1);
+      let g = d[m]! - d[l]! + e[l]! / (theta + (theta >= 0 ? rho : -rho));
+      let s = 1, c = 1, p = 0;
+      let i = m - 1;
+      for (; i >= l; i--) {
+        const f = s * e[i]!;
+        const b = c * e[i]!;
+        const r = Math.hypot(f, g);
+        e[i + 1] = r;
+        if (r === 0) {
+          // Underflow: the block splits at i + 1; undo the pending shift and restart.
+          d[i + 1] = d[i + 1]! - p;
+          e[m] = 0;
+          break;
+        }
+        s = f / r;
+        c = g / r;
+        const h = d[i + 1]! - p;
+        const t = (d[i]! - h) * s + 2 * c * b;
+        p = s * t;
+        d[i + 1] = h + p;
+        g = c * t - b;
+        for (const v of rows) {
+          const vi = v[i]!, vj = v[i + 1]!;
+          v[i + 1] = s * vi + c * vj;
+          v[i] = c * vi - s * vj;
+        }
+      }
+      if (i >= l) continue;
+      d[l] = d[l]! - p;
+      e[l] = g;
+      e[m] = 0;
+    }
+  }
+  // Ascending order, eigenvector columns permuted alike.
+  const order = Array.from({ length: n }, (_, k) => k).sort((a, b) => d[a]! - d[b]!);
+  return {
+    values: Float64Array.from(order, (k) => d[k]!),
+    rows: rows.map((v) => Float64Array.from(order, (k) => v[k]!)),
+  };
+}

@@ -13,7 +13,7 @@ export interface CheckOptions {
 /** Validates a project without writing anything; returns the exit code. */
 export async function runCheck(options: CheckOptions, io: CommandIo): Promise<number> {
   const loaded = await loadProject(options.project);
-  const computed = loaded.model === undefined ? undefined : computeProject(loaded.model, loaded.inputRecords);
+  const computed = loaded.model === undefined ? undefined : computeProject(loaded.model, loaded.inputRecords, loaded.dataTexts);
   const diagnostics = computed === undefined || computed.ok
     ? loaded.diagnostics
     : sortDiagnostics([...loaded.diagnostics, ...computed.diagnostics]);

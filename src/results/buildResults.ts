@@ -25,6 +25,8 @@ export interface ComputedProject {
   readonly results: ResultsJson;
   readonly steady: Readonly<Record<string, SteadyState>>;
   readonly analyses: Readonly<Record<string, DynamicAnalysis>>;
+  /** Extra CSV files to write under csv/ (hourly series of weather years). */
+  readonly csvFiles: readonly { readonly path: string; readonly text: string }[];
 }
 
 export type ComputeOutcome =
@@ -32,7 +34,11 @@ export type ComputeOutcome =
   | { readonly ok: false; readonly diagnostics: readonly Diagnostic[] };
 
 /** Computes every construction (steady state and dynamic response) and assembles results.json. */
-export function computeProject(model: Model, inputs: readonly InputFileRecord[]): ComputeOutcome {
+export function computeProject(
+  model: Model,
+  inputs: readonly InputFileRecord[],
+  dataTexts: ReadonlyMap<string, string> = new Map(),
+): ComputeOutcome {
   const steady: Record<string, SteadyState> = {};
   const analyses: Record<string, DynamicAnalysis> = {};
   const constructions: Record<string, ConstructionResults> = {};
@@ -77,7 +83,7 @@ export function computeProject(model: Model, inputs: readonly InputFileRecord[])
     })),
     warnings: scenarioParts.warnings,
   };
-  return { ok: true, computed: { results, steady, analyses } };
+  return { ok: true, computed: { results, steady, analyses, csvFiles: scenarioParts.csvFiles } };
 }
 
 interface ScenarioParts {
@@ -85,12 +91,13 @@ interface ScenarioParts {
   readonly checks: CheckResult[];
   readonly assumptions: Assumption[];
   readonly warnings: { at: string; message: string }[];
+  readonly csvFiles: { path: string; text: string }[];
 }
 
 function computeScenarios(model: Model, analyses: Readonly<Record<string, DynamicAnalysis>>): ScenarioParts {
   const constructions = new Map(model.constructions.map((c) => [c.id, c]));
   const cache = new Map<string, DynamicAnalysis>();
-  const parts: ScenarioParts = { scenarios: {}, checks: [], assumptions: [], warnings: [] };
+  const parts: ScenarioParts = { scenarios: {}, checks: [], assumptions: [], warnings: [], csvFiles: [] };
   const context: ScenarioContext = {
     constructions,
     analysisAt(constructionId, timestepS) {

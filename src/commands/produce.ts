@@ -1,0 +1,69 @@
+import { type Diagnostic, formatDiagnostic } from "../project/diagnostic.ts";
+import { formatPosition } from "../project/position.ts";
+import { renderPackage } from "../report/package.ts";
+import { computeProject } from "../results/buildResults.ts";
+import type { ResultsJson } from "../results/types.ts";
+import { TOOL_VERSION } from "../version.ts";
+import { constructionsCsv } from "./csv.ts";
+import type { LoadedProject } from "./loadProject.ts";
+import type { OutputFile } from "./writeOutput.ts";
+
+/** Everything a build produces, in memory. */
+export interface ProducedOutputs {
+  readonly results: ResultsJson;
+  readonly resultsJsonText: string;
+  readonly page: string;
+  /** package.html, results.json and the CSV files, ready to write. */
+  readonly files: readonly OutputFile[];
+}
+
+export type ProduceOutcome =
+  | { readonly ok: true; readonly outputs: ProducedOutputs }
+  | { readonly ok: false; readonly diagnostics: readonly Diagnostic[] };
+
+/** The runtime named in the package (reproducibility section). */
+export function runtimeVersion(): string {
+  return `Deno ${Deno.version.deno}`;
+}
+
+/** Computes and renders a loaded project; pure apart from reading the runtime version. */
+export function produceOutputs(loaded: LoadedProject): ProduceOutcome {
+  if (loaded.model === undefined) return { ok: false, diagnostics: loaded.diagnostics };
+  const outcome = computeProject(loaded.model, loaded.inputRecords, loaded.dataTexts);
+  if (!outcome.ok) return { ok: false, diagnostics: outcome.diagnostics };
+  const computed = outcome.computed;
+  const results: ResultsJson = {
+    ...computed.results,
+    warnings: [
+      ...loaded.diagnostics.filter((d) => d.severity !== "error").map((d) => ({
+        at: formatPosition(d.at),
+        message: d.message,
+      })),
+      ...computed.results.warnings,
+    ],
+  };
+  const resultsJsonText = `${JSON.stringify(results, null, 2)}\n`;
+  const page = renderPackage({
+    model: loaded.model,
+    results,
+    inputFiles: loaded.files,
+    libraryEntries: loaded.library,
+    findings: loaded.diagnostics,
+    toolVersion: TOOL_VERSION,
+    runtimeVersion: runtimeVersion(),
+    resultsJsonText,
+  });
+  const encoder = new TextEncoder();
+  const files: OutputFile[] = [
+    { path: "package.html", bytes: encoder.encode(page) },
+    { path: "results.json", bytes: encoder.encode(resultsJsonText) },
+    { path: "csv/constructions.csv", bytes: encoder.encode(constructionsCsv(loaded.model, results)) },
+    ...computed.csvFiles.map((f) => ({ path: f.path, bytes: encoder.encode(f.text) })),
+  ];
+  return { ok: true, outputs: { results, resultsJsonText, page, files } };
+}
+
+/** Prints diagnostics, one per line, as the CLI contract says. */
+export function printDiagnostics(list: readonly Diagnostic[], stderr: (line: string) => void): void {
+  for (const d of list) stderr(formatDiagnostic(d));
+}

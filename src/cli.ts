@@ -2,6 +2,7 @@ import { parseArgs } from "node:util";
 import { type CommandIo, runBuild } from "./commands/build.ts";
 import { runCheck } from "./commands/check.ts";
 import { runInit } from "./commands/init.ts";
+import { runVerify } from "./commands/verify.ts";
 import { TOOL_VERSION } from "./version.ts";
 
 const USAGE =
@@ -13,6 +14,7 @@ commands:
   build <project> [--out <dir>]            write package.html, results.json and csv/
   check <project> [--format text|json] [--strict]
                                            validate the project, write nothing
+  verify <package.html>                    re-run the embedded inputs and compare
   init <dir>                               start a new project from the template
   help [command]                           show help
 
@@ -28,6 +30,12 @@ Reads the project folder, computes every construction and writes one output set:
 --out defaults to <project>/out. The set is replaced as a whole; on an input error nothing is written.
 Exit codes: 0 success; 1 input errors or a failed computed check (the package is still written then);
 2 usage error or internal fault.`,
+  verify: `usage: fluxnote verify <package.html>
+
+Extracts the inputs and results embedded in a package, checks their hashes, re-runs the inputs with this
+version and compares. Same version: results and package must be byte-identical (an edited table cell is
+caught). Another version: every number must agree within 1e-9 relative; each difference is listed with its
+JSON Pointer. Exit codes: 0 reproduced; 1 not reproduced or tampered; 2 not a package or usage error.`,
   init: `usage: fluxnote init <dir>
 
 Creates <dir> with a starter project (project.md, materials, constructions, a design day) to edit.
@@ -40,7 +48,7 @@ Runs all validation of a build and reports every finding as path:line:col: sever
 Exit codes: 0 no errors; 1 errors (or warnings with --strict); 2 usage error.`,
 };
 
-const LATER = ["diff", "verify", "serve"];
+const LATER = ["diff", "serve"];
 
 /** Runs the command line; returns the process exit code. */
 export async function main(args: readonly string[], io: CommandIo): Promise<number> {
@@ -57,6 +65,17 @@ export async function main(args: readonly string[], io: CommandIo): Promise<numb
   if (LATER.includes(command)) {
     io.stderr(`fluxnote: the "${command}" command is not available in version ${TOOL_VERSION}`);
     return 2;
+  }
+  if (command === "verify") {
+    if (rest[0] === "--help" || rest[0] === "-h") {
+      io.stdout(HELP.verify ?? USAGE);
+      return 0;
+    }
+    if (rest.length !== 1 || rest[0]?.startsWith("-")) {
+      io.stderr(`fluxnote verify: expected one package file\n\n${HELP.verify}`);
+      return 2;
+    }
+    return await runVerify(rest[0] ?? "", io);
   }
   if (command === "init") {
     if (rest.length !== 1 || rest[0]?.startsWith("-")) {

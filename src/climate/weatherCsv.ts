@@ -9,14 +9,24 @@ import { civilFromDays, type LocalTime, localTimeAt, parseLocalTime, secondsOf }
 import {
   advance,
   type Column,
+  DRY_BULB_RANGE_C,
+  MAX_IRRADIANCE_W_PER_M2,
+  NEGATIVE_IRRADIANCE_TOLERANCE_W_PER_M2,
   readHeader,
+  readValueCell,
   REQUIRED_WEATHER_COLUMNS,
   splitCells,
   stepProblem,
   WEATHER_COLUMNS,
 } from "./weatherCsvSyntax.ts";
 
-export { REQUIRED_WEATHER_COLUMNS, WEATHER_COLUMNS };
+export {
+  DRY_BULB_RANGE_C,
+  MAX_IRRADIANCE_W_PER_M2,
+  NEGATIVE_IRRADIANCE_TOLERANCE_W_PER_M2,
+  REQUIRED_WEATHER_COLUMNS,
+  WEATHER_COLUMNS,
+};
 
 /** A series of numbers, one per step. */
 export type StepSeries = Float64Array | readonly number[];
@@ -43,21 +53,12 @@ export type WeatherParseResult =
   | { ok: true; weather: WeatherSeries; diagnostics: Diagnostic[] }
   | { ok: false; diagnostics: Diagnostic[] };
 
-/** Plausible dry bulb, °C: just beyond the recorded extremes −89.2 °C (Vostok, 1983) and 56.7 °C (Death Valley, 1913) (from memory). */
-export const DRY_BULB_RANGE_C = { min: -90, max: 60 } as const;
-/** Largest irradiance accepted, W/m² (our stated limit: the top-of-atmosphere normal value is 1367 × (1 ± 0.033)). */
-export const MAX_IRRADIANCE_W_PER_M2 = 1400;
-/** Negative irradiance down to this magnitude is instrument night offset and is set to 0 with a warning, W/m² (common practice, no source). */
-export const NEGATIVE_IRRADIANCE_TOLERANCE_W_PER_M2 = 10;
 /** Diffuse may exceed global by this much (separately rounded values), W/m² (our stated rule). */
 export const DIFFUSE_EXCESS_TOLERANCE_W_PER_M2 = 5;
 /** Errors collected before reading stops. */
 export const MAX_WEATHER_ERRORS = 20;
 
 type ValueColumn = Exclude<Column, "time">;
-
-const NUMBER = /^[+-]?(\d+(\.\d*)?|\.\d+)([eE][+-]?\d+)?$/;
-const LIST = WEATHER_COLUMNS.join(", ");
 
 /** Reads a weather CSV whose header is at `firstLine` of `path`, for a scenario with time step `timestepS`. */
 export function parseWeatherCsv(
@@ -195,6 +196,3 @@ export function parseWeatherCsv(
   };
   return { ok: true, weather, diagnostics: warnings };
 }
-
-const numberHint =
-  "write a plain number with a '.' decimal point, e.g. 21.5 (no unit, no thousands separator)";

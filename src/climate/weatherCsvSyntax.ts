@@ -17,6 +17,16 @@ export const REQUIRED_WEATHER_COLUMNS = WEATHER_COLUMNS.slice(0, 4);
 export type Column = (typeof WEATHER_COLUMNS)[number];
 
 const LIST = WEATHER_COLUMNS.join(", ");
+const NUMBER = /^[+-]?(\d+(\.\d*)?|\.\d+)([eE][+-]?\d+)?$/;
+const NUMBER_HINT =
+  "write a plain number with a '.' decimal point, e.g. 21.5 (no unit, no thousands separator)";
+
+/** Plausible dry bulb, °C: just beyond the recorded extremes −89.2 °C (Vostok, 1983) and 56.7 °C (Death Valley, 1913) (from memory). */
+export const DRY_BULB_RANGE_C = { min: -90, max: 60 } as const;
+/** Largest irradiance accepted, W/m² (our stated limit: the top-of-atmosphere normal value is 1367 × (1 ± 0.033)). */
+export const MAX_IRRADIANCE_W_PER_M2 = 1400;
+/** Negative irradiance down to this magnitude is instrument night offset, set to 0 with a warning, W/m² (common practice, no source). */
+export const NEGATIVE_IRRADIANCE_TOLERANCE_W_PER_M2 = 10;
 
 /** Splits a line at commas into trimmed cells with their 1-based columns. */
 export function splitCells(line: string): { text: string; col: number }[] {
@@ -100,4 +110,48 @@ export function stepProblem(previousS: number, seconds: number, timestepS: numbe
   return `Time ${t} is ${
     formatDurationS(seconds - previousS)
   } after the previous row; ${expected} (the scenario's time step is ${step})`;
+}
+
+/**
+ * Reads one value cell as a strict number ('.' decimal, optional exponent) and checks its plausible range; returns
+ * undefined after reporting an error, and `clipped` when a small negative irradiance was set to 0.
+ */
+export function readValueCell(
+  name: Exclude<Column, "time">,
+  text: string,
+  place: Diagnostic["at"],
+  errors: Diagnostic[],
+): { value: number; clipped: boolean } | undefined {
+  if (text === "") {
+    errors.push(error(place, "weather-number", `Missing value in column ${name}`, NUMBER_HINT));
+    return undefined;
+  }
+  if (!NUMBER.test(text)) {
+    errors.push(
+      error(place, "weather-number", `Cannot read "${text}" in column ${name} as a number`, NUMBER_HINT),
+    );
+    return undefined;
+  }
+  const value = Number(text);
+  let problem: string | undefined;
+  let hint: string | undefined;
+  if (name === "dry-bulb") {
+    if (value < DRY_BULB_RANGE_C.min || value > DRY_BULB_RANGE_C.max) {
+      problem =
+        `dry-bulb ${text} °C is outside the plausible range ${DRY_BULB_RANGE_C.min}…${DRY_BULB_RANGE_C.max} °C`;
+      hint = "the column is °C (not °F or K)";
+    }
+  } else if (value > MAX_IRRADIANCE_W_PER_M2) {
+    problem = `${name} ${text} W/m² is above the plausible limit of ${MAX_IRRADIANCE_W_PER_M2} W/m²`;
+    hint = "irradiance is in W/m², the mean over the step (not Wh/m² or kJ/m² totals)";
+  } else if (value < -NEGATIVE_IRRADIANCE_TOLERANCE_W_PER_M2) {
+    problem = `${name} ${text} W/m² is negative`;
+  } else if (value < 0) {
+    return { value: 0, clipped: true };
+  }
+  if (problem !== undefined) {
+    errors.push(error(place, "weather-range", problem, hint));
+    return undefined;
+  }
+  return { value, clipped: false };
 }

@@ -1,6 +1,7 @@
-import { formatDiagnostic, sortDiagnostics } from "../project/diagnostic.ts";
+import { sortDiagnostics } from "../project/diagnostic.ts";
 import { computeProject } from "../results/buildResults.ts";
 import { formatPosition } from "../project/position.ts";
+import { formatFinding, reviewProject } from "../review/mod.ts";
 import type { CommandIo } from "./build.ts";
 import { loadProject } from "./loadProject.ts";
 
@@ -13,13 +14,21 @@ export interface CheckOptions {
 /** Validates a project without writing anything; returns the exit code. */
 export async function runCheck(options: CheckOptions, io: CommandIo): Promise<number> {
   const loaded = await loadProject(options.project);
-  const computed = loaded.model === undefined ? undefined : computeProject(loaded.model, loaded.inputRecords, loaded.dataTexts);
-  const diagnostics = computed === undefined || computed.ok
-    ? loaded.diagnostics
-    : sortDiagnostics([...loaded.diagnostics, ...computed.diagnostics]);
+  const computed = loaded.model === undefined
+    ? undefined
+    : computeProject(loaded.model, loaded.inputRecords, loaded.dataTexts);
+  const review = loaded.model === undefined
+    ? []
+    : reviewProject(loaded.model, computed?.ok ? computed.computed.results : undefined);
+  const diagnostics = sortDiagnostics([
+    ...loaded.diagnostics,
+    ...(computed === undefined || computed.ok ? [] : computed.diagnostics),
+    ...review,
+  ]);
   const failedChecks = computed?.ok ? computed.computed.results.checks.filter((c) => !c.pass) : [];
   const errors = diagnostics.filter((d) => d.severity === "error").length + failedChecks.length;
   const warnings = diagnostics.filter((d) => d.severity === "warning").length;
+  const notes = diagnostics.filter((d) => d.severity === "note").length;
   if (options.format === "json") {
     const findings = diagnostics.map((d) => ({
       severity: d.severity,
@@ -33,14 +42,14 @@ export async function runCheck(options: CheckOptions, io: CommandIo): Promise<nu
     }));
     io.stdout(JSON.stringify({ schema: "fluxnote-check/1", findings }, null, 2));
   } else {
-    for (const d of diagnostics) io.stderr(formatDiagnostic(d));
+    for (const d of diagnostics) io.stderr(formatFinding(d));
     for (const c of failedChecks) {
       io.stderr(
         `${c.subject}: error: computed check ${c.id} failed: ${c.value} > ${c.limit} (${c.description})`,
       );
     }
     io.stdout(
-      `${errors} error(s), ${warnings} warning(s)${
+      `${errors} error(s), ${warnings} warning(s), ${notes} note(s)${
         loaded.model === undefined ? "" : `, ${loaded.model.constructions.length} constructions read`
       }`,
     );

@@ -3,7 +3,12 @@ import { type Diagnostic, error, hasErrors, sortDiagnostics } from "../project/d
 import { diskProjectFs, type ProjectFs } from "../project/projectFs.ts";
 import type { Model } from "../project/model.ts";
 import { type InputFile, MAX_WEATHER_BYTES, readDataFile, readProject } from "../project/readProject.ts";
-import { type LibraryUse, resolveProject } from "../project/resolveProject.ts";
+import {
+  BUILT_IN_LIBRARY,
+  type LibrarySource,
+  type LibraryUse,
+  resolveProject,
+} from "../project/resolveProject.ts";
 import type { InputFileRecord } from "../results/types.ts";
 
 /** A project read and resolved, ready to compute, or the diagnostics that stopped it. */
@@ -19,7 +24,10 @@ export interface LoadedProject {
 }
 
 /** Reads and resolves a project folder; every diagnostic of both stages is collected and sorted. */
-export async function loadProject(folder: string | ProjectFs): Promise<LoadedProject> {
+export async function loadProject(
+  folder: string | ProjectFs,
+  librarySource: LibrarySource = BUILT_IN_LIBRARY,
+): Promise<LoadedProject> {
   const fs = typeof folder === "string" ? await diskProjectFs(folder) : folder;
   if (fs === undefined) {
     const at = { file: "project.md", line: 1, col: 1 };
@@ -44,7 +52,7 @@ export async function loadProject(folder: string | ProjectFs): Promise<LoadedPro
       dataTexts: new Map(),
     };
   }
-  const resolved = resolveProject(read.sources);
+  const resolved = resolveProject(read.sources, librarySource);
   const dataProblems: Diagnostic[] = [];
   const dataFiles: InputFile[] = [];
   const dataTexts = new Map<string, string>();

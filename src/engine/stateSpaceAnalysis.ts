@@ -23,7 +23,6 @@ export interface StateSpaceAnalysis {
 export const STATE_SPACE_AGREEMENT_LIMIT = 5e-3;
 const MESH_TARGET = 0.6 * STATE_SPACE_AGREEMENT_LIMIT;
 const MAX_CELLS = 260;
-const MAX_PROPAGATION_WORK = 4e7;
 
 function agreementOf(ss: ResponseFactors, root: ResponseFactors, u: number) {
   const one = (a: readonly number[], b: readonly number[]) => {
@@ -50,11 +49,7 @@ export function stateSpaceAnalysis(
   for (let attempt = 0;; attempt++) {
     const widths = gradedCellWidths(chain, timestepS, refinement);
     const cells = widths.reduce((s, w) => s + w.length, 0);
-    const terms = Math.max(
-      3,
-      Math.min(root.termCount, Math.floor(MAX_PROPAGATION_WORK / Math.max(1, cells * cells))),
-    );
-    const response = stateSpaceResponse(chain, widths, timestepS, terms);
+    const response = stateSpaceResponse(chain, widths, timestepS, Math.max(3, root.termCount));
     const agreement = agreementOf(response.responseFactors, root, uValue);
     result = { widths, response, agreement };
     if (agreement.max <= MESH_TARGET || attempt >= 3 || cells >= MAX_CELLS) break;

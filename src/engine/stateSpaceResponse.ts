@@ -1,82 +1,56 @@
 import type { ConductionChain } from "./elements.ts";
 import type { ResponseFactors } from "./responseFactors.ts";
 import { sumRuleResidual } from "./responseFactors.ts";
-import {
-  type DiscreteModel,
-  discretise,
-  type FiniteVolumeModel,
-  finiteVolumeModel,
-} from "./stateSpaceModel.ts";
-import { smallestEigenvalues } from "./tridiagonalEigen.ts";
+import { modalPulseSeries, type ModelModes, modelModes } from "./stateSpaceModal.ts";
+import { type FiniteVolumeModel, finiteVolumeModel } from "./stateSpaceModel.ts";
 
 /** Response factors of the discrete state-space model, with the reciprocity residual of its cross terms. */
 export interface StateSpaceResponse {
   readonly model: FiniteVolumeModel;
   readonly responseFactors: ResponseFactors;
-  /** max_j |h_j[1,0] + h_j[0,1]| / U: the cross response both ways (reciprocity). */
+  /**
+   * max_j |q_i per T_o pulse − q_o per T_i pulse| / U (reciprocity): the first from the model as built, the
+   * second from the same model with its nodes in reverse order (own eigen-decomposition).
+   */
   readonly reciprocityError: number;
   /** e^(λ_k Δ) of the model's slow modes (> 1e-12), descending. */
   readonly ratios: readonly number[];
 }
 
-/** Eigenvalue ratios e^(λΔ) > 1e-12 of the model's system matrix (symmetrised tridiagonal form). */
-export function modelRatios(model: FiniteVolumeModel, timestepS: number): number[] {
-  const n = model.capacities.length;
-  const c = model.capacities;
-  const diag: number[] = [];
-  const off: number[] = [];
-  for (let i = 0; i < n; i++) {
-    const left = i === 0 ? model.outsideConductance : model.links[i - 1]!;
-    const right = i === n - 1 ? model.insideConductance : model.links[i]!;
-    diag.push((left + right) / c[i]!);
-    if (i < n - 1) off.push(-model.links[i]! / Math.sqrt(c[i]! * c[i + 1]!));
-  }
-  const rateMax = -Math.log(1e-12) / timestepS;
-  return smallestEigenvalues(diag, off, rateMax).map((rate) => Math.exp(-rate * timestepS));
-}
-
-function impulseResponse(model: FiniteVolumeModel, discrete: DiscreteModel, terms: number) {
-  const n = discrete.n;
-  const go = model.outsideConductance;
-  const gi = model.insideConductance;
-  const h00: number[] = [], h10: number[] = [], h01: number[] = [], h11: number[] = [];
-  const record = (x: Float64Array, first: boolean) => {
-    h00.push(-go * x[0]! + (first ? go : 0));
-    h01.push(-go * x[1]!);
-    h10.push(gi * x[(n - 1) * 2]!);
-    h11.push(gi * x[(n - 1) * 2 + 1]! - (first ? gi : 0));
+/** The same model with its nodes numbered from the inside: T_i becomes its first input. */
+export function reversedModel(model: FiniteVolumeModel): FiniteVolumeModel {
+  return {
+    cellsPerElement: [...model.cellsPerElement].reverse(),
+    capacities: [...model.capacities].reverse(),
+    links: [...model.links].reverse(),
+    outsideConductance: model.insideConductance,
+    insideConductance: model.outsideConductance,
   };
-  const { f, gamma0, gammaB } = discrete;
-  record(gammaB, true);
-  // x_1 = Γ0 − Γb + F Γb
-  let x = new Float64Array(n * 2);
-  for (let i = 0; i < n; i++) {
-    for (let k = 0; k < 2; k++) {
-      let v = gamma0[i * 2 + k]! - gammaB[i * 2 + k]!;
-      for (let j = 0; j < n; j++) v += f.data[i * n + j]! * gammaB[j * 2 + k]!;
-      x[i * 2 + k] = v;
-    }
-  }
-  for (let step = 1; step < terms; step++) {
-    record(x, false);
-    const next = new Float64Array(n * 2);
-    for (let i = 0; i < n; i++) {
-      let v0 = 0, v1 = 0;
-      const row = i * n;
-      for (let j = 0; j < n; j++) {
-        const fij = f.data[row + j]!;
-        v0 += fij * x[j * 2]!;
-        v1 += fij * x[j * 2 + 1]!;
-      }
-      next[i * 2] = v0;
-      next[i * 2 + 1] = v1;
-    }
-    x = next;
-  }
-  return { h00, h01, h10, h11 };
 }
 
-/** Builds, discretises and runs the finite-volume state-space model for `terms` response factors. */
+/** Magnitude below which a mode's remaining geometric tail is dropped, relative to U. */
+const TAIL_FLOOR = 1e-17;
+
+/** Outside-pulse (X, Y) and inside-pulse (Z) response factors of the model from its modes. */
+function modalResponseFactors(
+  modes: ModelModes,
+  model: FiniteVolumeModel,
+  timestepS: number,
+  terms: number,
+  floor: number,
+) {
+  const { rates, outside, inside } = modes;
+  const xo = modalPulseSeries(rates, outside, outside, timestepS, terms, floor);
+  const y = modalPulseSeries(rates, inside, outside, timestepS, terms, floor);
+  const zi = modalPulseSeries(rates, inside, inside, timestepS, terms, floor);
+  const X = Array.from(xo, (v) => -v);
+  const Z = Array.from(zi, (v) => -v);
+  X[0] = X[0]! + model.outsideConductance;
+  Z[0] = Z[0]! + model.insideConductance;
+  return { X, Y: Array.from(y), Z };
+}
+
+/** Builds the finite-volume model, takes its modes and sums the exact discrete response mode by mode. */
 export function stateSpaceResponse(
   chain: ConductionChain,
   cellWidths: readonly (readonly number[])[],
@@ -94,24 +68,33 @@ export function stateSpaceResponse(
       ratios: [],
     };
   }
-  const discrete = discretise(model, timestepS);
-  const { h00, h01, h10, h11 } = impulseResponse(model, discrete, terms);
-  const Z = h11.map((v) => -v);
+  const modes = modelModes(model);
+  const floor = TAIL_FLOOR * u;
+  const { X, Y, Z } = modalResponseFactors(modes, model, timestepS, terms, floor);
+  const reversed = reversedModel(model);
+  const back = modelModes(reversed);
+  const yBack = modalPulseSeries(back.rates, back.inside, back.outside, timestepS, terms, floor);
   let reciprocityError = 0;
   for (let j = 0; j < terms; j++) {
-    reciprocityError = Math.max(reciprocityError, Math.abs(h10[j]! + h01[j]!) / u);
+    const e = Math.abs(Y[j]! - yBack[j]!) / u;
+    if (!(e <= reciprocityError)) reciprocityError = Number.isNaN(e) ? Infinity : e;
+  }
+  const ratios: number[] = [];
+  for (const rate of modes.rates) {
+    const q = Math.exp(-rate * timestepS);
+    if (q > 1e-12) ratios.push(q);
   }
   return {
     model,
     responseFactors: {
       timestepS,
-      X: h00,
-      Y: h10,
+      X,
+      Y,
       Z,
-      truncationResidual: Math.max(sumRuleResidual(h00, u), sumRuleResidual(h10, u), sumRuleResidual(Z, u)),
+      truncationResidual: Math.max(sumRuleResidual(X, u), sumRuleResidual(Y, u), sumRuleResidual(Z, u)),
       termCount: terms,
     },
     reciprocityError,
-    ratios: modelRatios(model, timestepS),
+    ratios,
   };
 }

@@ -41,6 +41,18 @@ export interface TridiagonalEigen {
 
 const MAX_SWEEPS_PER_VALUE = 60;
 
+/** √(a² + b²) without overflow; much cheaper than Math.hypot in the rotation loop. */
+function pythag(a: number, b: number): number {
+  const x = Math.abs(a), y = Math.abs(b);
+  if (x > y) {
+    const t = y / x;
+    return x * Math.sqrt(1 + t * t);
+  }
+  if (y === 0) return 0;
+  const t = x / y;
+  return y * Math.sqrt(1 + t * t);
+}
+
 /**
  * Eigen-decomposition of a symmetric tridiagonal matrix by the implicit QL algorithm with Wilkinson shifts
  * (Golub & Van Loan, Matrix Computations, §8.3). Every QL sweep is a chain of plane rotations V ← V·G, so
@@ -56,11 +68,10 @@ export function tridiagonalEigen(
   const d = Float64Array.from(diag);
   const e = new Float64Array(n); // e[i] couples i and i + 1; e[n − 1] = 0
   for (let i = 0; i < n - 1; i++) e[i] = off[i]!;
-  const rows = rowIndices.map((r) => {
-    const v = new Float64Array(n);
-    v[r] = 1;
-    return v;
-  });
+  // The requested rows of V, row-major in one array (starting as rows of the identity).
+  const r = rowIndices.length;
+  const v = new Float64Array(r * n);
+  rowIndices.forEach((row, k) => (v[k * n + row] = 1));
   for (let l = 0; l < n; l++) {
     for (let sweep = 0;; sweep++) {
       // Split point: the first negligible coupling at or below l.
@@ -70,32 +81,32 @@ export function tridiagonalEigen(
       if (sweep >= MAX_SWEEPS_PER_VALUE) throw new Error(`tridiagonalEigen: no convergence for value ${l}`);
       // Wilkinson shift from the leading 2 × 2 block of the unreduced block l … m.
       const theta = (d[l + 1]! - d[l]!) / (2 * e[l]!);
-      const rho = Math.hypot(theta, 1);
+      const rho = pythag(theta, 1);
       let g = d[m]! - d[l]! + e[l]! / (theta + (theta >= 0 ? rho : -rho));
       let s = 1, c = 1, p = 0;
       let i = m - 1;
       for (; i >= l; i--) {
         const f = s * e[i]!;
         const b = c * e[i]!;
-        const r = Math.hypot(f, g);
-        e[i + 1] = r;
-        if (r === 0) {
+        const radius = pythag(f, g);
+        e[i + 1] = radius;
+        if (radius === 0) {
           // Underflow: the block splits at i + 1; undo the pending shift and restart.
           d[i + 1] = d[i + 1]! - p;
           e[m] = 0;
           break;
         }
-        s = f / r;
-        c = g / r;
+        s = f / radius;
+        c = g / radius;
         const h = d[i + 1]! - p;
         const t = (d[i]! - h) * s + 2 * c * b;
         p = s * t;
         d[i + 1] = h + p;
         g = c * t - b;
-        for (const v of rows) {
-          const vi = v[i]!, vj = v[i + 1]!;
-          v[i + 1] = s * vi + c * vj;
-          v[i] = c * vi - s * vj;
+        for (let k = i; k < r * n; k += n) {
+          const vi = v[k]!, vj = v[k + 1]!;
+          v[k + 1] = s * vi + c * vj;
+          v[k] = c * vi - s * vj;
         }
       }
       if (i >= l) continue;
@@ -104,10 +115,22 @@ export function tridiagonalEigen(
       e[m] = 0;
     }
   }
-  // Ascending order, eigenvector columns permuted alike.
-  const order = Array.from({ length: n }, (_, k) => k).sort((a, b) => d[a]! - d[b]!);
-  return {
-    values: Float64Array.from(order, (k) => d[k]!),
-    rows: rows.map((v) => Float64Array.from(order, (k) => v[k]!)),
-  };
+  // Ascending order by insertion sort of an index (QL leaves the values nearly ordered), columns alike.
+  const order = new Int32Array(n);
+  for (let k = 0; k < n; k++) {
+    let j = k;
+    while (j > 0 && d[order[j - 1]!]! > d[k]!) {
+      order[j] = order[j - 1]!;
+      j--;
+    }
+    order[j] = k;
+  }
+  const values = new Float64Array(n);
+  const rows = rowIndices.map(() => new Float64Array(n));
+  for (let k = 0; k < n; k++) {
+    const from = order[k]!;
+    values[k] = d[from]!;
+    rows.forEach((row, q) => (row[k] = v[q * n + from]!));
+  }
+  return { values, rows };
 }

@@ -33,6 +33,24 @@ export interface ResolveResult {
 
 const DEFAULT_TIMESTEP_S = 3600;
 
+/** Where library materials are looked up: the built-in library, or the entries embedded in a package. */
+export interface LibrarySource {
+  find(id: string): LibraryMaterial | undefined;
+  ids(): readonly string[];
+}
+
+/** The library shipped with this version. */
+export const BUILT_IN_LIBRARY: LibrarySource = { find: findLibraryMaterial, ids: libraryIds };
+
+/** A library made of given entries first (e.g. embedded in a package), then the built-in ones. */
+export function libraryWith(entries: readonly LibraryMaterial[]): LibrarySource {
+  const byId = new Map(entries.map((e) => [e.id, e]));
+  return {
+    find: (id) => byId.get(id) ?? findLibraryMaterial(id),
+    ids: () => [...new Set([...byId.keys(), ...libraryIds()])],
+  };
+}
+
 /** Reads the front matter of `project.md` only (to learn the file list before the other files are read). */
 export function readProjectFrontMatter(source: SourceText, out: Diagnostic[]): FrontMatter | undefined {
   const split = splitFile(source, true, []);
@@ -41,7 +59,10 @@ export function readProjectFrontMatter(source: SourceText, out: Diagnostic[]): F
 }
 
 /** Resolves a project's decoded files (project.md first, then in reading order) into a model. */
-export function resolveProject(sources: readonly SourceText[]): ResolveResult {
+export function resolveProject(
+  sources: readonly SourceText[],
+  library: LibrarySource = BUILT_IN_LIBRARY,
+): ResolveResult {
   const out: Diagnostic[] = [];
   const files = sources.map((s, i) => splitFile(s, i === 0, out));
   const projectFile = files[0];
@@ -59,18 +80,18 @@ export function resolveProject(sources: readonly SourceText[]): ResolveResult {
     frontMatter = readFrontMatter(projectFile.frontMatter, out);
   }
   const assumptions: Assumption[] = [];
-  const materials = readMaterials(files, out, assumptions);
+  const materials = readMaterials(files, out, assumptions, library);
   const libraryUsed = new Map<string, LibraryMaterial>();
   const lookup: MaterialLookup = {
     find(id) {
       const own = materials.get(id);
       if (own !== undefined) return own;
-      const entry = findLibraryMaterial(id);
+      const entry = library.find(id);
       if (entry === undefined) return undefined;
       libraryUsed.set(id, entry);
       return fromLibrary(entry);
     },
-    ids: () => [...materials.keys(), ...libraryIds()],
+    ids: () => [...materials.keys(), ...library.ids()],
   };
   const constructions = readConstructions(files, lookup, out, assumptions);
   const scenarios = readScenarios(files, constructions.map((c) => c.id), out);
@@ -106,6 +127,7 @@ function readMaterials(
   files: readonly SplitFile[],
   out: Diagnostic[],
   assumptions: Assumption[],
+  library: LibrarySource,
 ): Map<string, MaterialDef> {
   const materials = new Map<string, MaterialDef>();
   for (const piece of inputs(files, "material")) {
@@ -116,12 +138,12 @@ function readMaterials(
       out.push(duplicate("material", material.id, material.at, earlier.at));
       continue;
     }
-    const library = findLibraryMaterial(material.id);
-    if (library !== undefined) {
+    const libraryEntry = library.find(material.id);
+    if (libraryEntry !== undefined) {
       assumptions.push({
         id: `override:library-material:${material.id}`,
         text:
-          `The project's material "${material.id}" replaces the built-in library entry of the same id (${library.name})`,
+          `The project's material "${material.id}" replaces the built-in library entry of the same id (${libraryEntry.name})`,
         source: material.source === "" ? "project block (no source given)" : material.source,
         at: formatPosition(material.at),
       });

@@ -12,10 +12,17 @@ function asText(bytes: Uint8Array): string | undefined {
   }
 }
 
+/** Readable views are given for files up to this size; larger data files are only embedded. */
+const READABLE_VIEW_MAX_BYTES = 128 * 1024;
+
 function embeddedFile(file: InputFile, index: number): Trusted {
-  const text = asText(file.bytes);
+  const text = file.bytes.length <= READABLE_VIEW_MAX_BYTES ? asText(file.bytes) : undefined;
   const readable = text === undefined
-    ? html`<p class="muted">Not valid UTF-8 text: only the base64 form is given.</p>`
+    ? html`<p class="muted">${
+      file.bytes.length > READABLE_VIEW_MAX_BYTES
+        ? "A large data file: only the base64 form is given (the CSV files in the output hold the same data)."
+        : "Not valid UTF-8 text: only the base64 form is given."
+    }</p>`
     : html`
       <details>
         <summary>Readable view of ${file.path}</summary>
@@ -36,6 +43,15 @@ export function renderInputsAppendix(ctx: RenderContext): Trusted {
   return html`<section id="s-a"><h2>Appendix A Embedded inputs</h2>
 <p>Each input file's exact bytes, base64-encoded (RFC 4648), so the package alone can regenerate its results. The base64 blocks are hidden when printed.</p>
 ${ctx.input.inputFiles.map(embeddedFile)}
+${
+    ctx.input.libraryEntries.length === 0 ? "" : html`<h3 id="s-a-lib">Built-in library entries used</h3>
+<p>The canonical text of each library entry the project used; these are hashed with the inputs.</p>
+${
+      ctx.input.libraryEntries.map((entry) =>
+        html`<pre class="embedded-library" data-id="${entry.id}" data-sha256="${entry.sha256}">${entry.canonical}</pre>`
+      )
+    }`
+  }
 </section>`;
 }
 

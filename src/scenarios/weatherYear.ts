@@ -50,6 +50,7 @@ export interface WeatherSurfaceResults extends SurfaceResults {
 /** A weather-year scenario in results.json (DESIGN.md §4 plus extension keys). */
 export interface WeatherScenarioResults extends ScenarioResults {
   readonly surfaces: Readonly<Record<string, WeatherSurfaceResults>>;
+  readonly totals: Required<EnergyTotals>;
   /** Path of the step CSV inside the output folder, e.g. `csv/<id>.csv`. */
   readonly csv: string;
   readonly peakTime: string;

@@ -1,0 +1,63 @@
+/** The catalogue of review rules: stable id, severity and what each looks for. */
+
+import type { Severity } from "../project/diagnostic.ts";
+
+/** One review rule as listed in the catalogue. */
+export interface ReviewRule {
+  readonly id: string;
+  /** The usual severity; `density-in-lb-per-ft3` is an error with a class and a warning without. */
+  readonly severity: Severity;
+  readonly description: string;
+}
+
+function rule(id: string, severity: Severity, description: string): ReviewRule {
+  return { id, severity, description };
+}
+
+/** Every rule `reviewProject` can report, in reading order of the checks. */
+export const REVIEW_RULES: readonly ReviewRule[] = [
+  rule("unknown-material-class", "warning", "a project material names a class the library does not know"),
+  rule("conductivity-hard-limit", "error", "λ ≤ 0 or above any building material"),
+  rule("density-hard-limit", "error", "ρ ≤ 0 or above lead"),
+  rule("specific-heat-in-kj", "error", "c so low that it is a kJ/(kg·K) value written as J/(kg·K)"),
+  rule("specific-heat-hard-limit", "error", "c below lead"),
+  rule("specific-heat-high", "warning", "c above water"),
+  rule("density-in-lb-per-ft3", "error", "ρ about 16 times too low: a lb/ft³ value written as kg/m³"),
+  rule("conductivity-below-insulation-limit", "warning", "λ below any gas-filled insulation"),
+  rule("conductivity-outside-class", "warning", "λ outside the envelope of the material's class"),
+  rule("density-outside-class", "warning", "ρ outside the envelope of the material's class"),
+  rule("specific-heat-outside-class", "warning", "c outside the envelope of the material's class"),
+  rule("conductivity-density-mismatch", "warning", "λ and ρ of a mineral material do not fit together"),
+  rule(
+    "diffusivity-implausible",
+    "warning",
+    "λ/(ρc) outside the band of building materials (no class given)",
+  ),
+  rule("volumetric-heat-capacity-high", "warning", "ρc above any non-metallic solid (no class given)"),
+  rule("effusivity-implausible", "warning", "√(λρc) outside the band of building materials (no class given)"),
+  rule("masonry-layer-thin", "warning", "a masonry or concrete layer thinner than 5 mm"),
+  rule("layer-resistance-large", "warning", "one layer with R above 10 m²·K/W"),
+  rule("surface-resistance-twice", "warning", "a layer named like a surface film while R_si/R_se also apply"),
+  rule("resistance-outside-class", "warning", "an air layer's R outside the ISO 6946 air-layer envelope"),
+  rule(
+    "layer-order-reversed",
+    "warning",
+    "insulation on the wrong side of the mass for the described system",
+  ),
+  rule("insulation-exposed-inside", "note", "a wall whose inside layer is insulation with no lining"),
+  rule("source-missing", "warning", "a project material or inline layer with no source"),
+  rule("source-in-prose-only", "note", "an inline layer whose source is cited only in the prose"),
+  rule("default-used", "note", "a value the tool filled in by default"),
+  rule(
+    "surface-orientation-name",
+    "note",
+    "a vertical surface named as a roof, or a horizontal one named as a wall",
+  ),
+  rule("absorptance-extreme", "note", "solar absorptance below 0.2 or above 0.95"),
+  rule("sol-air-below-outdoor", "warning", "given sol-air more than 10 K below the coldest outdoor air"),
+  rule("sol-air-too-high", "warning", "given sol-air above 90 °C"),
+  rule("sol-air-range-large", "warning", "given sol-air swinging more than 60 K in a day"),
+  rule("u-value-high", "warning", "U above 6 W/(m²·K) for an opaque element"),
+  rule("kappa-high", "warning", "κ1 above 400 kJ/(m²·K)"),
+  rule("time-lag-long", "note", "time lag above 24 h"),
+];

@@ -3,6 +3,7 @@ import { type CommandIo, runBuild } from "./commands/build.ts";
 import { runCheck } from "./commands/check.ts";
 import { runInit } from "./commands/init.ts";
 import { runVerify } from "./commands/verify.ts";
+import { runServe } from "./commands/serve.ts";
 import { TOOL_VERSION } from "./version.ts";
 
 const USAGE =
@@ -16,6 +17,7 @@ commands:
                                            validate the project, write nothing
   verify <package.html>                    re-run the embedded inputs and compare
   init <dir>                               start a new project from the template
+  serve <project> [--port N]               live preview on 127.0.0.1, rebuilt on every change
   help [command]                           show help
 
 Run "fluxnote <command> --help" for a command's options.`;
@@ -36,6 +38,11 @@ Extracts the inputs and results embedded in a package, checks their hashes, re-r
 version and compares. Same version: results and package must be byte-identical (an edited table cell is
 caught). Another version: every number must agree within 1e-9 relative; each difference is listed with its
 JSON Pointer. Exit codes: 0 reproduced; 1 not reproduced or tampered; 2 not a package or usage error.`,
+  serve: `usage: fluxnote serve <project> [--port N]
+
+Builds the project in memory and serves the package at http://127.0.0.1:N/ (default port 8470), rebuilding
+when a file of the project changes; the page reloads by itself every 2 s. Nothing is written to disk.
+Only the loopback address is used. Exit codes: 0 stopped; 2 usage error.`,
   init: `usage: fluxnote init <dir>
 
 Creates <dir> with a starter project (project.md, materials, constructions, a design day) to edit.
@@ -48,7 +55,7 @@ Runs all validation of a build and reports every finding as path:line:col: sever
 Exit codes: 0 no errors; 1 errors (or warnings with --strict); 2 usage error.`,
 };
 
-const LATER = ["diff", "serve"];
+const LATER = ["diff"];
 
 /** Runs the command line; returns the process exit code. */
 export async function main(args: readonly string[], io: CommandIo): Promise<number> {
@@ -65,6 +72,30 @@ export async function main(args: readonly string[], io: CommandIo): Promise<numb
   if (LATER.includes(command)) {
     io.stderr(`fluxnote: the "${command}" command is not available in version ${TOOL_VERSION}`);
     return 2;
+  }
+  if (command === "serve") {
+    let parsedServe;
+    try {
+      parsedServe = parseArgs({
+        args: [...rest],
+        allowPositionals: true,
+        strict: true,
+        options: { port: { type: "string", default: "8470" }, help: { type: "boolean", short: "h" } },
+      });
+    } catch (cause) {
+      io.stderr(`fluxnote serve: ${cause instanceof Error ? cause.message : String(cause)}\n\n${HELP.serve}`);
+      return 2;
+    }
+    if (parsedServe.values.help === true) {
+      io.stdout(HELP.serve ?? USAGE);
+      return 0;
+    }
+    const port = Number(parsedServe.values.port);
+    if (parsedServe.positionals.length !== 1 || !Number.isInteger(port) || port < 0 || port > 65535) {
+      io.stderr(`fluxnote serve: expected one project folder and a port 0–65535\n\n${HELP.serve}`);
+      return 2;
+    }
+    return await runServe({ project: parsedServe.positionals[0] ?? "", port }, io);
   }
   if (command === "verify") {
     if (rest[0] === "--help" || rest[0] === "-h") {

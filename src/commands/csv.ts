@@ -18,3 +18,41 @@ export function constructionsCsv(model: Model, results: ResultsJson): string {
   });
   return `${[header, ...rows].join("\n")}\n`;
 }
+
+/** Response factors of one construction, one row per term: j, time (h), X, Y, Z (W/(m²K)), air to air. */
+export function factorsCsv(id: string, results: ResultsJson): string {
+  const c = results.constructions[id] as {
+    responseFactors?: { X: number[]; Y: number[]; Z: number[] };
+    timestep_h: number;
+  } | undefined;
+  const rf = c?.responseFactors;
+  if (rf === undefined || c === undefined) return "j,time_h,X_W_per_m2K,Y_W_per_m2K,Z_W_per_m2K\n";
+  const rows = rf.X.map((x, j) =>
+    [j, j * c.timestep_h, x, rf.Y[j] ?? 0, rf.Z[j] ?? 0].map(csvCell).join(",")
+  );
+  return `${["j,time_h,X_W_per_m2K,Y_W_per_m2K,Z_W_per_m2K", ...rows].join("\n")}\n`;
+}
+
+/** Design-day series of one scenario, one row per step, SI units; per surface sol-air, inside flux and heat gain. */
+export function designDayCsv(id: string, results: ResultsJson): string {
+  const s = results.scenarios[id];
+  if (s === undefined) return "";
+  const surfaces = Object.entries(s.surfaces);
+  const header = [
+    "time_h",
+    "outdoor_C",
+    "indoor_C",
+    ...surfaces.flatMap(([sid]) => [`${sid}_sol_air_C`, `${sid}_inside_flux_W_per_m2`, `${sid}_heat_gain_W`]),
+    "total_heat_gain_W",
+  ].map(csvCell).join(",");
+  const rows = s.outdoor.map((outdoor, k) =>
+    [
+      k * s.timestep_h,
+      outdoor,
+      s.indoor[k] ?? NaN,
+      ...surfaces.flatMap(([, v]) => [v.solAir[k] ?? NaN, v.insideFlux[k] ?? NaN, v.heatGain[k] ?? NaN]),
+      s.totalHeatGain[k] ?? NaN,
+    ].map(csvCell).join(",")
+  );
+  return `${[header, ...rows].join("\n")}\n`;
+}

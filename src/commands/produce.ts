@@ -4,7 +4,7 @@ import { renderPackage } from "../report/package.ts";
 import { computeProject } from "../results/buildResults.ts";
 import type { ResultsJson } from "../results/types.ts";
 import { TOOL_VERSION } from "../version.ts";
-import { constructionsCsv } from "./csv.ts";
+import { constructionsCsv, designDayCsv, factorsCsv } from "./csv.ts";
 import type { LoadedProject } from "./loadProject.ts";
 import type { OutputFile } from "./writeOutput.ts";
 
@@ -58,6 +58,14 @@ export function produceOutputs(loaded: LoadedProject): ProduceOutcome {
     { path: "package.html", bytes: encoder.encode(page) },
     { path: "results.json", bytes: encoder.encode(resultsJsonText) },
     { path: "csv/constructions.csv", bytes: encoder.encode(constructionsCsv(loaded.model, results)) },
+    ...loaded.model.constructions.map((c) => ({
+      path: `csv/factors-${c.id}.csv`,
+      bytes: encoder.encode(factorsCsv(c.id, results)),
+    })),
+    ...loaded.model.scenarios.filter((s) => s.kind === "design-day").map((s) => ({
+      path: `csv/scenario-${s.id}.csv`,
+      bytes: encoder.encode(designDayCsv(s.id, results)),
+    })),
     ...computed.csvFiles.map((f) => ({ path: f.path, bytes: encoder.encode(f.text) })),
   ];
   return { ok: true, outputs: { results, resultsJsonText, page, files } };

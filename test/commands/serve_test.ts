@@ -11,16 +11,24 @@ Deno.test("runServe() answers on loopback and rebuilds after a file change (boun
   let port = 0;
   const listening = Promise.withResolvers<void>();
   const quiet = { stdout: () => {}, stderr: () => {} };
-  const done = runServe({ project, port: 0, signal: controller.signal, onListen: (p) => {
-    port = p;
-    listening.resolve();
-  } }, quiet);
+  const done = runServe({
+    project,
+    port: 0,
+    signal: controller.signal,
+    onListen: (p) => {
+      port = p;
+      listening.resolve();
+    },
+  }, quiet);
   try {
     await listening.promise;
     const first = await (await fetch(`http://127.0.0.1:${port}/`)).text();
     assert.ok(first.includes("Fixture project"));
     assert.ok(!/<script\b/i.test(first));
-    Deno.writeTextFileSync(join(project, "project.md"), Deno.readTextFileSync(join(project, "project.md")).replace("Fixture project", "Renamed fixture"));
+    Deno.writeTextFileSync(
+      join(project, "project.md"),
+      Deno.readTextFileSync(join(project, "project.md")).replace("Fixture project", "Renamed fixture"),
+    );
     let changed = false;
     for (let attempt = 0; attempt < 50 && !changed; attempt++) {
       await new Promise((r) => setTimeout(r, 100));

@@ -79,7 +79,9 @@ Deno.test("runVerify() compares numbers within 1e-9 when the package comes from 
   const same = await verifyText(older);
   assert.equal(same.code, 0);
   assert.ok(same.lines.some((l) => l.includes("agrees within 1e-9")));
-  const drifted = await verifyText(older.replace(/&quot;U&quot;: 0\.2949626508/, "&quot;U&quot;: 0.2949626518"));
+  const drifted = await verifyText(
+    older.replace(/&quot;U&quot;: 0\.2949626508/, "&quot;U&quot;: 0.2949626518"),
+  );
   assert.equal(drifted.code, 1);
   assert.ok(drifted.lines.some((l) => l.includes("/constructions/EW-1/U:") && l.includes("fluxnote 0.0.9")));
 });

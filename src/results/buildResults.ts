@@ -10,6 +10,8 @@ import { type Diagnostic, error } from "../project/diagnostic.ts";
 import type { Assumption, Construction, Model } from "../project/model.ts";
 import { formatPosition } from "../project/position.ts";
 import { computeDesignDay, type ScenarioContext } from "../scenarios/designDay.ts";
+import { computeWeatherYear } from "../scenarios/weatherYear.ts";
+import { parseWeatherCsv } from "../climate/weatherCsv.ts";
 import { TOOL_VERSION } from "../version.ts";
 import type {
   CheckResult,
@@ -66,7 +68,8 @@ export function computeProject(
     checks.push(...constructionChecksJson(construction.id, analysis));
   }
   if (problems.length > 0) return { ok: false, diagnostics: problems };
-  const scenarioParts = computeScenarios(model, analyses);
+  const scenarioParts = computeScenarios(model, analyses, dataTexts);
+  if (scenarioParts.problems.length > 0) return { ok: false, diagnostics: scenarioParts.problems };
   checks.push(...scenarioParts.checks);
   const results: ResultsJson = {
     schema: "fluxnote-results/1",
@@ -92,12 +95,24 @@ interface ScenarioParts {
   readonly assumptions: Assumption[];
   readonly warnings: { at: string; message: string }[];
   readonly csvFiles: { path: string; text: string }[];
+  readonly problems: Diagnostic[];
 }
 
-function computeScenarios(model: Model, analyses: Readonly<Record<string, DynamicAnalysis>>): ScenarioParts {
+function computeScenarios(
+  model: Model,
+  analyses: Readonly<Record<string, DynamicAnalysis>>,
+  dataTexts: ReadonlyMap<string, string>,
+): ScenarioParts {
   const constructions = new Map(model.constructions.map((c) => [c.id, c]));
   const cache = new Map<string, DynamicAnalysis>();
-  const parts: ScenarioParts = { scenarios: {}, checks: [], assumptions: [], warnings: [], csvFiles: [] };
+  const parts: ScenarioParts = {
+    scenarios: {},
+    checks: [],
+    assumptions: [],
+    warnings: [],
+    csvFiles: [],
+    problems: [],
+  };
   const context: ScenarioContext = {
     constructions,
     analysisAt(constructionId, timestepS) {
@@ -139,12 +154,38 @@ function computeScenarios(model: Model, analyses: Readonly<Record<string, Dynami
         parts.warnings.push(...outcome.warnings);
         break;
       }
-      case "weather":
-        parts.warnings.push({
-          at: formatPosition(scenario.at),
-          message: `Weather scenario ${scenario.id} is validated but not computed in this version`,
-        });
+      case "weather": {
+        const text = dataTexts.get(scenario.weatherPath);
+        if (text === undefined) {
+          parts.problems.push(
+            error(
+              scenario.weatherAt,
+              "weather-missing",
+              `Cannot compute scenario "${scenario.id}": its weather file was not read`,
+              "check the `weather` path",
+            ),
+          );
+          break;
+        }
+        const parsed = parseWeatherCsv(text, scenario.weatherPath, 1, scenario.timestepS);
+        if (!parsed.ok) {
+          parts.problems.push(...parsed.diagnostics.filter((d) => d.severity === "error"));
+          break;
+        }
+        const outcome = computeWeatherYear(scenario, parsed.weather, context);
+        parts.scenarios[scenario.id] = outcome.results;
+        parts.checks.push(...outcome.checks);
+        parts.assumptions.push(...outcome.assumptions);
+        parts.warnings.push(...outcome.warnings);
+        parts.warnings.push(
+          ...parsed.diagnostics.filter((d) => d.severity !== "error").map((d) => ({
+            at: formatPosition(d.at),
+            message: d.message,
+          })),
+        );
+        parts.csvFiles.push(...outcome.csv);
         break;
+      }
     }
   }
   return parts;

@@ -51,7 +51,7 @@ export interface WeatherSurfaceResults extends SurfaceResults {
 export interface WeatherScenarioResults extends ScenarioResults {
   readonly surfaces: Readonly<Record<string, WeatherSurfaceResults>>;
   readonly totals: Required<EnergyTotals>;
-  /** Path of the step CSV inside the output folder, e.g. `csv/<id>.csv`. */
+  /** Path of the step CSV inside the output folder, `csv/scenario-<id>.csv` (the design-day CSV naming). */
   readonly csv: string;
   readonly peakTime: string;
   readonly peakLoss: TimedPeak;
@@ -162,7 +162,7 @@ export function computeWeatherYear(
       heatGainW: heatGain,
     });
   }
-  const csvPath = `csv/${scenario.id}.csv`;
+  const csvPath = `csv/scenario-${scenario.id}.csv`;
   const peak = timedPeak(total, boundary.timeLabels, dt, 1);
   const results: WeatherScenarioResults = {
     kind: "weather",

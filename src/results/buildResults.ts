@@ -169,7 +169,7 @@ function computeScenarios(
         }
         const parsed = parseWeatherCsv(text, scenario.weatherPath, 1, scenario.timestepS);
         if (!parsed.ok) {
-          parts.problems.push(...parsed.diagnostics.filter((d) => d.severity === "error"));
+          parts.problems.push(...parsed.diagnostics);
           break;
         }
         const outcome = computeWeatherYear(scenario, parsed.weather, context);

@@ -11,8 +11,9 @@ import { finding, num, range } from "./finding.ts";
 import { AIR_LAYER_NAME, SLIP } from "./limits.ts";
 import { layerClassId, layerLabel, MASONRY_CLASSES } from "./subjects.ts";
 
-/** Names that say a layer is a surface resistance. */
-export const SURFACE_FILM_NAME = /surface|film|\br[_ ]?s[ie]\b/i;
+/** Names that say a layer is a surface resistance (a membrane named "film" alone does not count). */
+export const SURFACE_FILM_NAME =
+  /surface|\br[_ ]?s[ie]\b|\b(inside|outside|internal|external|interior|exterior|air)[\s-]+films?\b/i;
 const MASONRY_NAME = /concrete|brick|block|masonry|stone/i;
 const M2K_W = "m²·K/W";
 

@@ -21,7 +21,8 @@ export function reviewMaterials(model: Model): Diagnostic[] {
   for (const s of propertySubjects(model)) {
     const own = [...classProblems(s), ...conductivity(s), ...density(s), ...specificHeat(s)];
     if (own.length === 0) own.push(...mineralConsistency(s));
-    if (own.length === 0 && s.materialClass === undefined) own.push(...derived(s));
+    const special = SUPER_INSULATION.test(s.name);
+    if (own.length === 0 && s.materialClass === undefined && !special) own.push(...derived(s));
     out.push(...own);
   }
   return out;

@@ -10,6 +10,9 @@ import { finding, parsePosition } from "./finding.ts";
 import { proseBefore } from "./orderRules.ts";
 import { layerLabel } from "./subjects.ts";
 
+const PROVENANCE_SOURCE =
+  "common practice, no source: a reviewable calculation names the reference of every input value";
+
 /** Words that make a sentence a citation: a standard, a handbook, a table, a survey or a product document. */
 const CITATION =
   /\b(ISO|EN|BS|DIN|ASTM|CIBSE|ASHRAE|table|survey|report|datasheet|data sheet|declaration)\b/i;
@@ -28,6 +31,7 @@ export function reviewProvenance(model: Model, results?: ResultsJson): Diagnosti
         "add `source:` naming the document, edition and table, or the product declaration; mark values from memory as such",
       value: "source: (none)",
       expected: 'a document, edition and table, a product declaration, or "from memory"',
+      source: PROVENANCE_SOURCE,
     }));
   }
   for (const c of model.constructions) {
@@ -47,6 +51,7 @@ export function reviewProvenance(model: Model, results?: ResultsJson): Diagnosti
         hint: "add `source:` to the layer so the package's sources table lists it",
         value: "source: (none)",
         expected: 'a document, edition and table, a product declaration, or "from memory"',
+        source: PROVENANCE_SOURCE,
       }));
     });
   }

@@ -36,7 +36,9 @@ Deno.test("the demo package opens in Chromium with no request beyond itself, no 
     assert.deepStrictEqual(problems, []);
     const sections = await page.locator("section[id^='s-']").all();
     assert.ok(sections.length >= 10, `${sections.length} sections`);
-    for (const section of sections) assert.ok(await section.isVisible(), await section.getAttribute("id") ?? "section");
+    for (const section of sections) {
+      assert.ok(await section.isVisible(), await section.getAttribute("id") ?? "section");
+    }
     const figures = await page.locator("figure svg").all();
     assert.ok(figures.length >= 10, `${figures.length} plots and drawings`);
     for (const svg of figures) {

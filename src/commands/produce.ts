@@ -1,4 +1,5 @@
-import { type Diagnostic, formatDiagnostic } from "../project/diagnostic.ts";
+import { type Diagnostic, formatDiagnostic, sortDiagnostics } from "../project/diagnostic.ts";
+import { reviewProject } from "../review/mod.ts";
 import { formatPosition } from "../project/position.ts";
 import { renderPackage } from "../report/package.ts";
 import { computeProject } from "../results/buildResults.ts";
@@ -48,7 +49,7 @@ export function produceOutputs(loaded: LoadedProject): ProduceOutcome {
     results,
     inputFiles: loaded.files,
     libraryEntries: loaded.library,
-    findings: loaded.diagnostics,
+    findings: sortDiagnostics([...loaded.diagnostics, ...reviewProject(loaded.model, results)]),
     toolVersion: TOOL_VERSION,
     runtimeVersion: runtimeVersion(),
     resultsJsonText,

@@ -11,6 +11,7 @@ import type { Assumption, Construction, Model } from "../project/model.ts";
 import { formatPosition } from "../project/position.ts";
 import { computeDesignDay, type ScenarioContext } from "../scenarios/designDay.ts";
 import { computeWeatherYear } from "../scenarios/weatherYear.ts";
+import { sensitivityStudy } from "../sensitivity/study.ts";
 import { parseWeatherCsv } from "../climate/weatherCsv.ts";
 import { TOOL_VERSION } from "../version.ts";
 import type {
@@ -85,6 +86,13 @@ export function computeProject(
       at: a.at,
     })),
     warnings: scenarioParts.warnings,
+    ...(model.info.sensitivityVariation === undefined ? {} : {
+      sensitivity: sensitivityStudy(
+        model,
+        model.info.sensitivityVariation,
+        new Map(Object.entries(analyses)),
+      ),
+    }),
   };
   return { ok: true, computed: { results, steady, analyses, csvFiles: scenarioParts.csvFiles } };
 }

@@ -1,3 +1,4 @@
+import type { SensitivityResults } from "../sensitivity/study.ts";
 /** The machine-readable results (results.json), contract `fluxnote-results/1` (DESIGN.md §4). */
 
 export interface InputFileRecord {
@@ -57,6 +58,8 @@ export interface ResultsJson {
   readonly checks: readonly CheckResult[];
   readonly assumptions: readonly { id: string; text: string; source: string; at: string }[];
   readonly warnings: readonly { at: string; message: string }[];
+  /** Extension: the optional sensitivity study (front matter `sensitivity: { variation }`). */
+  readonly sensitivity?: SensitivityResults;
 }
 
 /** One surface of a scenario in results.json (DESIGN.md §4); series have one value per timestep. */

@@ -20,7 +20,9 @@ export interface BuildOptions {
 export async function runBuild(options: BuildOptions, io: CommandIo): Promise<number> {
   const loaded = await loadProject(options.project);
   printDiagnostics(loaded.diagnostics, io.stderr);
-  const produced = produceOutputs(loaded);
+  // Progress goes to stderr only when a person watches it (a terminal), never into logs or pipes.
+  const progress = Deno.stderr.isTerminal() ? (message: string) => io.stderr(`… ${message}`) : undefined;
+  const produced = produceOutputs(loaded, progress);
   if (!produced.ok) {
     if (loaded.model !== undefined) printDiagnostics(produced.diagnostics, io.stderr);
     const count = produced.diagnostics.filter((d) => d.severity === "error").length;

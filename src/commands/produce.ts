@@ -28,9 +28,9 @@ export function runtimeVersion(): string {
 }
 
 /** Computes and renders a loaded project; pure apart from reading the runtime version. */
-export function produceOutputs(loaded: LoadedProject): ProduceOutcome {
+export function produceOutputs(loaded: LoadedProject, progress?: (message: string) => void): ProduceOutcome {
   if (loaded.model === undefined) return { ok: false, diagnostics: loaded.diagnostics };
-  const outcome = computeProject(loaded.model, loaded.inputRecords, loaded.dataTexts);
+  const outcome = computeProject(loaded.model, loaded.inputRecords, loaded.dataTexts, progress);
   if (!outcome.ok) return { ok: false, diagnostics: outcome.diagnostics };
   const computed = outcome.computed;
   const results: ResultsJson = {
@@ -43,6 +43,7 @@ export function produceOutputs(loaded: LoadedProject): ProduceOutcome {
       ...computed.results.warnings,
     ],
   };
+  progress?.("rendering the package");
   const resultsJsonText = `${JSON.stringify(results, null, 2)}\n`;
   const page = renderPackage({
     model: loaded.model,

@@ -41,13 +41,15 @@ export function computeProject(
   model: Model,
   inputs: readonly InputFileRecord[],
   dataTexts: ReadonlyMap<string, string> = new Map(),
+  progress: (message: string) => void = () => {},
 ): ComputeOutcome {
   const steady: Record<string, SteadyState> = {};
   const analyses: Record<string, DynamicAnalysis> = {};
   const constructions: Record<string, ConstructionResults> = {};
   const checks: CheckResult[] = [];
   const problems: Diagnostic[] = [];
-  for (const construction of model.constructions) {
+  for (const [index, construction] of model.constructions.entries()) {
+    progress(`construction ${index + 1}/${model.constructions.length}: ${construction.id}`);
     const analysis = analyseConstruction(construction, construction.timestepS);
     if (analysis.kind === "unresolvable") {
       problems.push(
@@ -69,9 +71,14 @@ export function computeProject(
     checks.push(...constructionChecksJson(construction.id, analysis));
   }
   if (problems.length > 0) return { ok: false, diagnostics: problems };
-  const scenarioParts = computeScenarios(model, analyses, dataTexts);
+  const scenarioParts = computeScenarios(model, analyses, dataTexts, progress);
   if (scenarioParts.problems.length > 0) return { ok: false, diagnostics: scenarioParts.problems };
   checks.push(...scenarioParts.checks);
+  const variation = model.info.sensitivityVariation;
+  if (variation !== undefined) progress("sensitivity study");
+  const sensitivity = variation === undefined
+    ? undefined
+    : sensitivityStudy(model, variation, new Map(Object.entries(analyses)));
   const results: ResultsJson = {
     schema: "fluxnote-results/1",
     tool: { name: "fluxnote", version: TOOL_VERSION },
@@ -86,13 +93,7 @@ export function computeProject(
       at: a.at,
     })),
     warnings: scenarioParts.warnings,
-    ...(model.info.sensitivityVariation === undefined ? {} : {
-      sensitivity: sensitivityStudy(
-        model,
-        model.info.sensitivityVariation,
-        new Map(Object.entries(analyses)),
-      ),
-    }),
+    ...(sensitivity === undefined ? {} : { sensitivity }),
   };
   return { ok: true, computed: { results, steady, analyses, csvFiles: scenarioParts.csvFiles } };
 }
@@ -110,6 +111,7 @@ function computeScenarios(
   model: Model,
   analyses: Readonly<Record<string, DynamicAnalysis>>,
   dataTexts: ReadonlyMap<string, string>,
+  progress: (message: string) => void,
 ): ScenarioParts {
   const constructions = new Map(model.constructions.map((c) => [c.id, c]));
   const cache = new Map<string, DynamicAnalysis>();
@@ -145,6 +147,7 @@ function computeScenarios(
     },
   };
   for (const scenario of model.scenarios) {
+    progress(`scenario ${scenario.id} (${scenario.kind}, ${scenario.surfaces.length} surfaces)`);
     if (scenario.timestepDefaulted) {
       parts.assumptions.push({
         id: `default:timestep:${scenario.id}`,

@@ -1,5 +1,5 @@
 import { type Diagnostic, error, errorCount } from "./diagnostic.ts";
-import { type Fields, readChoice, readFields, readList, readText, textOf } from "./fields.ts";
+import { type Fields, readChoice, readFields, readList, readNumber, readText, textOf } from "./fields.ts";
 import type { ProjectInfo, ProjectStatus, RevisionEntry } from "./model.ts";
 import type { Position } from "./position.ts";
 import type { YamlValue } from "./yamlTree.ts";
@@ -16,6 +16,7 @@ export const FRONT_MATTER_KEYS = [
   "units",
   "revisions",
   "files",
+  "sensitivity",
 ] as const;
 
 const STATUSES: readonly ProjectStatus[] = ["draft", "for-review", "issued"];
@@ -43,6 +44,7 @@ export function readFrontMatter(value: YamlValue, out: Diagnostic[]): FrontMatte
   const units = readChoice(fields, "units", ["SI", "IP"] as const, out) ?? "SI";
   const revisions = readRevisions(fields, out);
   const files = readFileList(fields, out);
+  const sensitivityVariation = readSensitivity(fields, out);
   if (
     errorCount(out) > before || title === undefined || reference === undefined || revision === undefined ||
     status === undefined || preparedBy === undefined || checkedBy === undefined || date === undefined
@@ -60,6 +62,7 @@ export function readFrontMatter(value: YamlValue, out: Diagnostic[]): FrontMatte
     units,
     revisions,
     ...(approvedBy === undefined ? {} : { approvedBy }),
+    ...(sensitivityVariation === undefined ? {} : { sensitivityVariation }),
   };
   return files === undefined ? { info } : { info, files };
 }
@@ -121,4 +124,23 @@ function readFileList(fields: Fields, out: Diagnostic[]): { path: string; at: Po
     if (path !== undefined) files.push({ path, at: item.at });
   }
   return files;
+}
+
+function readSensitivity(fields: Fields, out: Diagnostic[]): number | undefined {
+  const entry = fields.entries.get("sensitivity");
+  if (entry === undefined) return undefined;
+  const study = readFields(entry.value, ["variation"], "sensitivity setting", out);
+  if (study === undefined) return undefined;
+  const variation = readNumber(study, "variation", 0.01, 0.9, out);
+  if (variation === undefined && !study.entries.has("variation")) {
+    out.push(
+      error(
+        study.at,
+        "missing-key",
+        'Missing "variation" in the sensitivity setting',
+        "write e.g. `sensitivity: { variation: 0.2 }` for ±20 %",
+      ),
+    );
+  }
+  return variation;
 }

@@ -23,6 +23,8 @@ export interface ProjectInfo {
   readonly date: string;
   readonly units: "SI" | "IP";
   readonly revisions: readonly RevisionEntry[];
+  /** Optional sensitivity study: each material property varied by ± this fraction (e.g. 0.2). */
+  readonly sensitivityVariation?: number;
 }
 
 /** A material as defined in a project block or taken from the built-in library. */

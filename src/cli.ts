@@ -1,6 +1,7 @@
 import { parseArgs } from "node:util";
 import { type CommandIo, runBuild } from "./commands/build.ts";
 import { runCheck } from "./commands/check.ts";
+import { runDiff } from "./commands/diff.ts";
 import { runInit } from "./commands/init.ts";
 import { runVerify } from "./commands/verify.ts";
 import { runServe } from "./commands/serve.ts";
@@ -15,6 +16,8 @@ commands:
   build <project> [--out <dir>]            write package.html, results.json and csv/
   check <project> [--format text|json] [--strict]
                                            validate the project, write nothing
+  diff <a> <b> [--format text|json|html] [--out <file>]
+                                           compare two revisions (folders or package.html files)
   verify <package.html>                    re-run the embedded inputs and compare
   init <dir>                               start a new project from the template
   serve <project> [--port N]               live preview on 127.0.0.1, rebuilt on every change
@@ -43,6 +46,15 @@ JSON Pointer. Exit codes: 0 reproduced; 1 not reproduced or tampered; 2 not a pa
 Builds the project in memory and serves the package at http://127.0.0.1:N/ (default port 8470), rebuilding
 when a file of the project changes; the page reloads by itself every 2 s. Nothing is written to disk.
 Only the loopback address is used. Exit codes: 0 stopped; 2 usage error.`,
+  diff: `usage: fluxnote diff <a> <b> [--format text|json|html] [--out <file>]
+
+Compares revision a with revision b; each is a project folder or an issued package.html (its embedded
+inputs are re-run). Lists the changed files, every changed input key (old → new, with file:line:col on each
+side) and the effect on the results (U, decrement factor, time lag, peaks and totals), largest first.
+--format json   print {"schema": "fluxnote-diff/1", ...}; --format html   a self-contained page
+--out <file>    write the output to <file> (replaced atomically) instead of stdout
+Exit codes: 0 compared (whether or not anything differs); 1 input errors on either side;
+2 usage error or a file that is not a package.`,
   init: `usage: fluxnote init <dir>
 
 Creates <dir> with a starter project (project.md, materials, constructions, a design day) to edit.
@@ -55,7 +67,7 @@ Runs all validation of a build and reports every finding as path:line:col: sever
 Exit codes: 0 no errors; 1 errors (or warnings with --strict); 2 usage error.`,
 };
 
-const LATER = ["diff"];
+const LATER: readonly string[] = [];
 
 /** Runs the command line; returns the process exit code. */
 export async function main(args: readonly string[], io: CommandIo): Promise<number> {
@@ -108,6 +120,7 @@ export async function main(args: readonly string[], io: CommandIo): Promise<numb
     }
     return await runVerify(rest[0] ?? "", io);
   }
+  if (command === "diff") return await dispatchDiff(rest, io);
   if (command === "init") {
     if (rest.length !== 1 || rest[0]?.startsWith("-")) {
       if (rest[0] === "--help" || rest[0] === "-h") {
@@ -165,6 +178,43 @@ export async function main(args: readonly string[], io: CommandIo): Promise<numb
     return 2;
   }
   return await runCheck({ project, format, strict: values.strict === true }, io);
+}
+
+async function dispatchDiff(rest: readonly string[], io: CommandIo): Promise<number> {
+  let parsed;
+  try {
+    parsed = parseArgs({
+      args: [...rest],
+      allowPositionals: true,
+      strict: true,
+      options: {
+        format: { type: "string", default: "text" },
+        out: { type: "string" },
+        help: { type: "boolean", short: "h" },
+      },
+    });
+  } catch (cause) {
+    io.stderr(`fluxnote diff: ${cause instanceof Error ? cause.message : String(cause)}\n\n${HELP.diff}`);
+    return 2;
+  }
+  if (parsed.values.help === true) {
+    io.stdout(HELP.diff ?? USAGE);
+    return 0;
+  }
+  const [a, b] = parsed.positionals;
+  if (parsed.positionals.length !== 2 || a === undefined || b === undefined) {
+    io.stderr(
+      `fluxnote diff: expected two projects or packages, found ${parsed.positionals.length}\n\n${HELP.diff}`,
+    );
+    return 2;
+  }
+  const format = parsed.values.format;
+  if (format !== "text" && format !== "json" && format !== "html") {
+    io.stderr(`fluxnote diff: --format must be text, json or html, found "${String(format)}"`);
+    return 2;
+  }
+  const out = parsed.values.out;
+  return await runDiff(out === undefined ? { a, b, format } : { a, b, format, out }, io);
 }
 
 if (import.meta.main) {

@@ -1,0 +1,104 @@
+import assert from "node:assert/strict";
+import { join } from "node:path";
+import { main } from "../../src/cli.ts";
+import { runBuild } from "../../src/commands/build.ts";
+import { runDiff } from "../../src/commands/diff.ts";
+import type { ProjectDiff } from "../../src/diff/types.ts";
+
+const FIXTURES = new URL("../fixtures/diff/", import.meta.url).pathname;
+const REV_B = join(FIXTURES, "rev-b");
+const REV_C = join(FIXTURES, "rev-c");
+
+function capture() {
+  const out: string[] = [];
+  const err: string[] = [];
+  return { out, err, io: { stdout: (l: string) => out.push(l), stderr: (l: string) => err.push(l) } };
+}
+
+async function diffJson(a: string, b: string): Promise<ProjectDiff> {
+  const { out, io } = capture();
+  assert.equal(await runDiff({ a, b, format: "json" }, io), 0);
+  return JSON.parse(out.join("\n")) as ProjectDiff;
+}
+
+Deno.test("runDiff() on the two fixture folders prints the changes and exits 0", async () => {
+  const { out, err, io } = capture();
+  assert.equal(await runDiff({ a: REV_B, b: REV_C, format: "text" }, io), 0);
+  const text = out.join("\n");
+  assert.deepEqual(err, []);
+  assert.ok(text.includes("project.md · revision: B → C"));
+  assert.ok(text.includes("W-1 · layer 2 · thickness: 100 → 120\u2009mm"));
+  assert.ok(text.includes("a 20-constructions.md:10:25, b 20-constructions.md:10:25"));
+});
+
+Deno.test("runDiff() of an issued package against a folder gives the same changes as folder against folder", async () => {
+  const outDir = join(await Deno.makeTempDir(), "out");
+  assert.equal(await runBuild({ project: REV_B, out: outDir }, capture().io), 0);
+  const fromPackage = await diffJson(join(outDir, "package.html"), REV_C);
+  const fromFolder = await diffJson(REV_B, REV_C);
+  assert.equal(fromPackage.a.kind, "package");
+  assert.equal(fromFolder.a.kind, "folder");
+  assert.equal(fromPackage.a.inputsSha256, fromFolder.a.inputsSha256);
+  assert.deepEqual(fromPackage.changes, fromFolder.changes);
+  assert.deepEqual(fromPackage.files, fromFolder.files);
+  assert.deepEqual(fromPackage.effects, fromFolder.effects);
+  assert.equal(fromFolder.changes.length, 8);
+});
+
+Deno.test("runDiff() of identical inputs says so and exits 0", async () => {
+  const { out, io } = capture();
+  assert.equal(await runDiff({ a: REV_B, b: REV_B, format: "text" }, io), 0);
+  assert.ok(out.join("\n").includes("no differences"));
+  const json = await diffJson(REV_C, REV_C);
+  assert.equal(json.identical, true);
+  assert.deepEqual(json.changes, []);
+});
+
+Deno.test("runDiff() refuses a file that is not a package with exit 2", async () => {
+  const dir = await Deno.makeTempDir();
+  const notPackage = join(dir, "notes.html");
+  Deno.writeTextFileSync(notPackage, "<html><body>not a package</body></html>");
+  const { err, io } = capture();
+  assert.equal(await runDiff({ a: notPackage, b: REV_C, format: "text" }, io), 2);
+  assert.ok(err.some((l) => l.startsWith("fluxnote diff: a: ") && l.includes("not a fluxnote package")));
+  assert.equal(await runDiff({ a: REV_B, b: join(dir, "missing"), format: "text" }, capture().io), 2);
+});
+
+Deno.test("runDiff() prints input errors of a side prefixed with that side and exits 1", async () => {
+  const dir = await Deno.makeTempDir();
+  for (const entry of Deno.readDirSync(REV_C)) {
+    Deno.copyFileSync(join(REV_C, entry.name), join(dir, entry.name));
+  }
+  const materials = join(dir, "10-materials.md");
+  Deno.writeTextFileSync(materials, Deno.readTextFileSync(materials).replace("0.032 W/(m K)", "0.032"));
+  const { out, err, io } = capture();
+  assert.equal(await runDiff({ a: REV_B, b: dir, format: "text" }, io), 1);
+  assert.deepEqual(out, []);
+  // line 17 of 10-materials.md is `conductivity: 0.032 W/(m K)` in rev-c
+  assert.ok(err.some((l) => /^b: 10-materials\.md:17:\d+: error: /.test(l)), err.join("\n"));
+});
+
+Deno.test("runDiff() --out writes the chosen format to the file, and nothing else beside it", async () => {
+  const dir = await Deno.makeTempDir();
+  const target = join(dir, "b-to-c.html");
+  Deno.writeTextFileSync(target, "old contents");
+  const { out, io } = capture();
+  assert.equal(await runDiff({ a: REV_B, b: REV_C, format: "html", out: target }, io), 0);
+  const page = Deno.readTextFileSync(target);
+  assert.ok(page.startsWith("<!DOCTYPE html>"));
+  assert.ok(!/<script/i.test(page));
+  assert.deepEqual([...Deno.readDirSync(dir)].map((e) => e.name), ["b-to-c.html"]);
+  assert.ok(out[0]?.startsWith("wrote "));
+});
+
+Deno.test("fluxnote diff: usage errors exit 2, --help exits 0", async () => {
+  assert.equal(await main(["diff", REV_B], capture().io), 2);
+  assert.equal(await main(["diff", REV_B, REV_C, "--format", "xml"], capture().io), 2);
+  assert.equal(await main(["diff", REV_B, REV_C, "--colour"], capture().io), 2);
+  const help = capture();
+  assert.equal(await main(["diff", "--help"], help.io), 0);
+  assert.ok(help.out.join("\n").includes("fluxnote diff <a> <b>"));
+  const json = capture();
+  assert.equal(await main(["diff", REV_B, REV_C, "--format", "json"], json.io), 0);
+  assert.equal(JSON.parse(json.out.join("\n")).schema, "fluxnote-diff/1");
+});

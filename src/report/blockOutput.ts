@@ -2,10 +2,10 @@
 import type { Segment } from "../project/model.ts";
 import { formatPosition } from "../project/position.ts";
 import { renderConstructionOutput } from "./constructionOutput.ts";
-import { formatSig, formatTrim } from "./format.ts";
 import { html, PRE_LEAD, type Trusted } from "./html.ts";
 import type { RenderContext } from "./packageInput.ts";
 import { MATERIAL_TABLE_HEAD, materialTableRow } from "./materialRows.ts";
+import { renderScenarioOutput } from "./scenarioOutput.ts";
 
 type BlockSegment = Extract<Segment, { kind: "block" }>;
 
@@ -32,37 +32,24 @@ function materialOutput(block: BlockSegment, ctx: RenderContext): Trusted {
 function scenarioOutput(block: BlockSegment, ctx: RenderContext): Trusted {
   const scenario = ctx.input.model.scenarios.find((s) => s.id === block.id);
   if (scenario === undefined) return unresolved(block);
-  const rows = scenario.surfaces.map((s) =>
-    html`
-      <tr>
-        <td>${s.id}</td>
-        <td>${s.construction}</td>
-        <td class="num">${formatTrim(s.areaM2, 4)}</td>
-        <td class="num">${s.azimuthDeg === undefined ? "—" : formatTrim(s.azimuthDeg, 4)}</td>
-        <td class="num">${s.tiltDeg === undefined ? "—" : formatTrim(s.tiltDeg, 4)}</td>
-      </tr>
-    `
-  );
-  return html`
-    <p
-      class="note">Scenario ${scenario.id} (${scenario.kind}, time step ${formatSig(
-        scenario.timestepS / 3600,
-        3,
-      )} h) was read and validated only: hourly heat flows for scenarios are not computed in this version of the tool.</p>
-    <table>
-      <caption>Surfaces of scenario ${scenario.id}</caption>
-      <thead>
-        <tr>
-          <th>Surface</th>
-          <th>Construction</th>
-          <th>Area m²</th>
-          <th>Azimuth ° (from north, clockwise)</th>
-          <th>Tilt ° (from horizontal)</th>
-        </tr>
-      </thead>
-      <tbody>${rows}</tbody>
-    </table>
-  `;
+  const anchor = ctx.scenarioAnchors.get(scenario.id) ?? "sc-scenario";
+  if (ctx.placedScenarios.has(scenario.id)) {
+    return html`
+      <p
+        class="fail">No computed output here: scenario id ${scenario
+          .id} is used by an earlier block, whose output is <a href="#${anchor}">above</a> (see the findings in section 4).</p>
+    `;
+  }
+  ctx.placedScenarios.add(scenario.id);
+  const scenarios = ctx.input.results.scenarios;
+  return renderScenarioOutput({
+    scenario,
+    results: Object.hasOwn(scenarios, scenario.id) ? scenarios[scenario.id] : undefined,
+    checks: ctx.input.results.checks,
+    assumptions: ctx.input.results.assumptions,
+    constructionAnchors: ctx.constructionAnchors,
+    anchor,
+  });
 }
 
 function constructionOutput(block: BlockSegment, ctx: RenderContext): Trusted {

@@ -5,9 +5,18 @@ import { formatSig } from "./format.ts";
 import { html, type Trusted } from "./html.ts";
 import type { RenderContext } from "./packageInput.ts";
 
+function subjectAnchor(subject: string, ctx: RenderContext): string | undefined {
+  if (subject.startsWith("construction:")) {
+    return ctx.constructionAnchors.get(subject.slice("construction:".length));
+  }
+  if (!subject.startsWith("scenario:")) return undefined;
+  const rest = subject.slice("scenario:".length);
+  const scenario = ctx.input.model.scenarios.find((s) => rest === s.id || rest.startsWith(`${s.id}/`));
+  return scenario === undefined ? undefined : ctx.scenarioAnchors.get(scenario.id);
+}
+
 function subjectCell(subject: string, ctx: RenderContext): Trusted {
-  const id = subject.startsWith("construction:") ? subject.slice("construction:".length) : undefined;
-  const anchor = id === undefined ? undefined : ctx.constructionAnchors.get(id);
+  const anchor = subjectAnchor(subject, ctx);
   return anchor === undefined
     ? html`<td>${subject}</td>`
     : html`<td><a href="#${anchor}">${subject}</a></td>`;

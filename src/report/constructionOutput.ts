@@ -89,12 +89,24 @@ function totalRows(results: ConstructionResults | undefined): Trusted {
 
 /** Tables the automated checks on one subject: id, what is checked, value, limit and PASS/FAIL. */
 export function subjectChecks(checks: readonly CheckResult[], subject: string): Trusted {
-  const mine = checks.filter((c) => c.subject === subject);
+  return checksTable(checks.filter((c) => c.subject === subject));
+}
+
+/**
+ * Tables the given checks (nothing when the list is empty); with `subjectLabel`, a first column names each
+ * check's subject under the heading `subjectHeading`.
+ */
+export function checksTable(
+  mine: readonly CheckResult[],
+  subjectLabel?: (check: CheckResult) => string,
+  subjectHeading = "Subject",
+): Trusted {
   if (mine.length === 0) return html``;
   const rows = mine.map((c) =>
     html`
       <tr class="${c.pass ? "pass" : "fail"}">
         <td class="result">${c.pass ? "PASS" : "FAIL"}</td>
+        ${subjectLabel === undefined ? html`` : html`<td>${subjectLabel(c)}</td>`}
         <td><code>${c.id}</code></td>
         <td>${c.description}</td>
         <td class="num">${formatSig(c.value, 3)}</td>
@@ -107,6 +119,7 @@ export function subjectChecks(checks: readonly CheckResult[], subject: string): 
       <thead>
         <tr>
           <th>Result</th>
+          ${subjectLabel === undefined ? html`` : html`<th>${subjectHeading}</th>`}
           <th>Check</th>
           <th>What is checked</th>
           <th>Value</th>

@@ -62,6 +62,29 @@ figure.plot-figure svg text { white-space: pre; }
 .key { display: inline-block; width: 7mm; height: 0; vertical-align: middle; border-top: 2px solid #111; }
 .key-x { border-top: 2px dashed #1f5fa8; }
 .key-z { border-top: 2px dotted #b5470f; }
+.scenario-output { margin-top: 4mm; }
+.scenario-output h4 { font-size: 11pt; margin: 4mm 0 1mm; }
+.scenario-output h5 { font-size: 10pt; margin: 4mm 0 1mm; border-top: 1px solid var(--rule); padding-top: 2mm; }
+.peak-summary { border: 2px solid var(--ink); padding: 2mm 3mm; margin: 2mm 0 4mm; break-inside: avoid; }
+.peak-summary p { margin: 1mm 0; }
+.peak-line { font-family: system-ui, -apple-system, "Segoe UI", Arial, sans-serif; font-size: 12pt; }
+table.compact { font-size: 8pt; }
+td.when { white-space: nowrap; }
+table.compact th, table.compact td { padding: 0.4mm 1.2mm; }
+table.hourly { break-inside: auto; }
+table.hourly th .unit { font-weight: normal; }
+table.hourly td.total-col { font-weight: bold; }
+table.conditions th { width: 32mm; }
+table.conditions td, .scenario-notes { font-size: 9pt; }
+.scenario-notes { margin: 1mm 0 3mm; padding-left: 5mm; }
+.legend { display: inline; }
+.legend-entry { white-space: nowrap; margin-right: 3mm; }
+figure.plot-figure svg.swatch, svg.swatch { display: inline-block; vertical-align: middle; max-width: none;
+  width: 28px; height: 10px; }
+figure.plot-figure svg.swatch-fill, svg.swatch-fill { width: 12px; }
+.caution-box { border: 1px solid var(--ink); background: #f7f7f7; padding: 2mm 3mm; margin: 4mm 0; break-inside: avoid; }
+.caution-box p { margin: 1mm 0; }
+nav.contents ol.contents-outputs { padding-left: 6mm; }
 @media print {
   html { background: none; }
   body { max-width: none; margin: 0; padding: 0; font-size: 10pt; }
@@ -71,6 +94,7 @@ figure.plot-figure svg text { white-space: pre; }
   a { color: inherit; text-decoration: none; }
   h2, h3 { break-after: avoid; }
   tr, figure, table, .input-block { break-inside: avoid; }
+  table.hourly { break-inside: auto; }
 }
 `);
 

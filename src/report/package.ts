@@ -37,9 +37,18 @@ const CONTENTS: readonly (readonly [string, string])[] = [
 ];
 
 function renderContents(ctx: RenderContext): Trusted {
-  const docs = ctx.input.model.documents.map((d, i) =>
-    html`<li><a href="#s-2-${String(i + 1)}">2.${String(i + 1)} ${d.path}</a></li>`
-  );
+  const listed = new Set<string>();
+  const docs = ctx.input.model.documents.map((d, i) => {
+    const outputs = d.segments.flatMap((segment) => {
+      if (segment.kind !== "block" || segment.blockKind !== "scenario" || segment.id === undefined) return [];
+      const anchor = ctx.scenarioAnchors.get(segment.id);
+      if (anchor === undefined || listed.has(anchor)) return [];
+      listed.add(anchor);
+      return [html`<li><a href="#${anchor}">Results of scenario ${segment.id}</a></li>`];
+    });
+    const nested = outputs.length === 0 ? html`` : html`<ol class="contents-outputs">${outputs}</ol>`;
+    return html`<li><a href="#s-2-${String(i + 1)}">2.${String(i + 1)} ${d.path}</a>${nested}</li>`;
+  });
   const items = CONTENTS.map(([id, title]) =>
     id === "s-2"
       ? html`<li><a href="#${id}">${title}</a><ol>${docs}</ol></li>`

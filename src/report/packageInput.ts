@@ -40,20 +40,34 @@ export interface RenderContext {
   readonly proseIds: Set<string>;
   /** Fragment id of each construction's output, `c-` prefix. */
   readonly constructionAnchors: ReadonlyMap<string, string>;
+  /** Fragment id of each scenario's computed output, `sc-` prefix. */
+  readonly scenarioAnchors: ReadonlyMap<string, string>;
+  /** Scenario ids whose output is already placed (a repeated block id then points back to it). */
+  readonly placedScenarios: Set<string>;
 }
 
-/** Builds the rendering context: deterministic, collision-free anchors for constructions. */
-export function makeRenderContext(input: PackageInput): RenderContext {
+function anchorsFor(ids: readonly string[], prefix: string, fallback: string): Map<string, string> {
   const anchors = new Map<string, string>();
   const used = new Set<string>();
-  for (const c of input.model.constructions) {
-    const slug = c.id.toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-+|-+$/g, "") || "construction";
-    let id = `c-${slug}`;
-    for (let n = 2; used.has(id); n++) id = `c-${slug}-${n}`;
+  for (const rawId of ids) {
+    const slug = rawId.toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-+|-+$/g, "") || fallback;
+    let id = `${prefix}-${slug}`;
+    for (let n = 2; used.has(id); n++) id = `${prefix}-${slug}-${n}`;
     used.add(id);
-    if (!anchors.has(c.id)) anchors.set(c.id, id);
+    if (!anchors.has(rawId)) anchors.set(rawId, id);
   }
-  return { input, proseIds: new Set<string>(), constructionAnchors: anchors };
+  return anchors;
+}
+
+/** Builds the rendering context: deterministic, collision-free anchors for constructions and scenarios. */
+export function makeRenderContext(input: PackageInput): RenderContext {
+  return {
+    input,
+    proseIds: new Set<string>(),
+    constructionAnchors: anchorsFor(input.model.constructions.map((c) => c.id), "c", "construction"),
+    scenarioAnchors: anchorsFor(input.model.scenarios.map((s) => s.id), "sc", "scenario"),
+    placedScenarios: new Set<string>(),
+  };
 }
 
 /** True when every computed check passed. */

@@ -141,14 +141,14 @@ Deno.test("renderPackage() orders the sections and ends with the end marker and 
   assert.ok(out.lastIndexOf("END OF CALCULATION PACKAGE") > positions[11]!);
 });
 
-Deno.test("renderPackage() follows each block with its output: material, scenario note, unresolved", () => {
+Deno.test("renderPackage() follows each block with its output: material, missing scenario results, unresolved", () => {
   const doc = parseDocument(renderPackage(fixture()));
   const outputs = Array.from(doc.querySelectorAll(".block-output")).map((o) => o.textContent ?? "");
   assert.equal(outputs.length, 4);
   assert.match(outputs[1] ?? "", /Material lime-render as resolved/);
   assert.match(
     outputs[2] ?? "",
-    /hourly heat flows for scenarios are not computed in this version of the tool/,
+    /Not computed: results\.json holds no entry for scenario july-day/,
   );
   assert.match(outputs[3] ?? "", /did not resolve/);
   const labels = Array.from(doc.querySelectorAll(".input-label")).map((l) => l.textContent ?? "");

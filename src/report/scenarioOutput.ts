@@ -1,0 +1,165 @@
+/** The computed output shown after a scenario block: peak summary, conditions, step tables, plots, checks, caution. */
+import type { Assumption, Scenario } from "../project/model.ts";
+import type { CheckResult, ScenarioResults } from "../results/types.ts";
+import { checksTable } from "./constructionOutput.ts";
+import { html, type Trusted } from "./html.ts";
+import { renderConditions } from "./scenarioConditions.ts";
+import {
+  hasStepSeries,
+  monthlyTotals,
+  objectKey,
+  scenarioChecks,
+  stringKey,
+  surfaceOfSubject,
+} from "./scenarioData.ts";
+import { insideFluxPlot, monthlyPlot, solAirPlot, stackedGainPlot } from "./scenarioPlots.ts";
+import {
+  fillSwatch,
+  GAIN_STYLE,
+  INDOOR_STYLE,
+  legendEntry,
+  lineSwatch,
+  LOSS_STYLE,
+  OUTDOOR_STYLE,
+  surfaceStyle,
+} from "./scenarioStyle.ts";
+import { renderPeakSummary } from "./scenarioSummary.ts";
+import { renderMonthlyTable, renderStepTables } from "./scenarioTables.ts";
+
+/** What the scenario output reads: the block's scenario, its results entry, the register, checks and anchors. */
+export interface ScenarioOutputInput {
+  readonly scenario: Scenario;
+  readonly results: ScenarioResults | undefined;
+  readonly checks: readonly CheckResult[];
+  readonly assumptions: readonly Pick<Assumption, "id">[];
+  readonly constructionAnchors: ReadonlyMap<string, string>;
+  /** Fragment id of the output, also the prefix of the plots' ids. */
+  readonly anchor: string;
+}
+
+function figure(svg: Trusted, title: Trusted, caption: Trusted): Trusted {
+  return html`
+    <figure
+      class="plot-figure">${svg}<figcaption><strong>${title}</strong> ${caption}</figcaption></figure>
+  `;
+}
+
+function surfaceLegend(results: ScenarioResults): Trusted[] {
+  return Object.keys(results.surfaces).map((id, i) => legendEntry(lineSwatch(surfaceStyle(i)), id));
+}
+
+function designDayPlots(id: string, results: ScenarioResults, prefix: string): Trusted {
+  const barLegend = Object.keys(results.surfaces).map((sid, i) =>
+    legendEntry(fillSwatch(surfaceStyle(i)), sid)
+  );
+  return html`
+    ${figure(
+      solAirPlot(results, prefix),
+      html`Outdoor air and sol-air temperatures, scenario ${id}.`,
+      html`<span class="legend">${legendEntry(lineSwatch(OUTDOOR_STYLE, 2.4), "outdoor air")}${
+        legendEntry(lineSwatch(INDOOR_STYLE), "indoor air")
+      }${surfaceLegend(results)}</span> The 24:00 point repeats 00:00 (the day repeats).`,
+    )}
+    ${figure(
+      insideFluxPlot(results, prefix),
+      html`Inside heat flux by surface, scenario ${id}.`,
+      html`<span class="legend">${surfaceLegend(results)}</span> W/m² of surface, positive into the room.`,
+    )}
+    ${figure(
+      stackedGainPlot(results, prefix),
+      html`Heat gain stacked by surface, scenario ${id}.`,
+      html`
+        <span
+          class="legend">${barLegend}${legendEntry(
+            lineSwatch(OUTDOOR_STYLE),
+            "total (line with dots)",
+          )}</span> Bars stack from zero in the order listed; gains above zero, losses below.
+      `,
+    )}
+  `;
+}
+
+function designDayBody(id: string, results: ScenarioResults, prefix: string): Trusted {
+  return html`
+    <h5>Values at every step</h5>
+    ${renderStepTables(id, results)}
+    <h5>Plots</h5>
+    ${designDayPlots(id, results, prefix)}
+  `;
+}
+
+function summaryBody(id: string, results: ScenarioResults, prefix: string): Trusted {
+  const months = monthlyTotals(results.totals);
+  const csv = stringKey(results, "csv");
+  const csvLine = csv === undefined
+    ? html`<p class="muted">The step series of ${id} are not in results.json; only the summaries are shown.</p>`
+    : html`
+      <p
+        class="muted">The step series of ${id} are in <code>${csv}</code> beside the package, not in results.json; the summaries below are.</p>
+    `;
+  const daily = objectKey(results, "daily");
+  const dailyLine = daily === undefined ? html`` : html`
+    <p
+      class="muted">Daily largest, smallest and mean heat gain per surface are in results.json (Appendix B), key <code>daily</code>.</p>
+  `;
+  const monthly = months === undefined
+    ? html`<p class="muted">No monthly totals in results.json for ${id}.</p>`
+    : html`
+      <h5>Monthly totals</h5>
+      ${renderMonthlyTable(id, months, results.totals)}
+      ${figure(
+        monthlyPlot(months, prefix),
+        html`Monthly heat gain and heat loss, scenario ${id}.`,
+        html`<span class="legend">${legendEntry(fillSwatch(GAIN_STYLE), "heat gain (above zero)")}${
+          legendEntry(fillSwatch(LOSS_STYLE), "heat loss (below zero)")
+        }</span> All surfaces together, kWh per month.`,
+      )}
+    `;
+  return html`${csvLine}${monthly}${dailyLine}`;
+}
+
+function caution(results: ScenarioResults): Trusted {
+  const basis = results.kind === "design-day"
+    ? "these figures assume a steady-periodic day (the same day repeated, continuous operation at the stated indoor temperature)"
+    : "these figures assume the stated indoor temperature at every step (continuous operation) and a year that repeats for the warm-up";
+  return html`
+    <div class="caution-box" role="note">
+      <p><strong>Heat gain is not cooling load:</strong> the radiant part reaches the room air later, after the room's surfaces absorb and release it, so the load on the plant peaks later and lower than the heat gain shown; ${basis}. Set-back, intermittent plant, glazing, ventilation and internal gains are outside these figures.</p>
+      <p>The results support, and do not replace, the professional judgment of the engineer responsible.</p>
+    </div>
+  `;
+}
+
+/** Renders a scenario's computed output from its results.json entry; missing results give a plain failure note. */
+export function renderScenarioOutput(input: ScenarioOutputInput): Trusted {
+  const { scenario, results, anchor } = input;
+  const id = scenario.id;
+  if (results === undefined) {
+    return html`
+      <div class="scenario-output" id="${anchor}">
+        <p
+          class="fail">Not computed: results.json holds no entry for scenario ${id} (see the warnings and section 4).</p>
+      </div>
+    `;
+  }
+  const prefix = `${anchor}-fig`;
+  const body = hasStepSeries(results) ? designDayBody(id, results, prefix) : summaryBody(id, results, prefix);
+  const checks = checksTable(
+    scenarioChecks(input.checks, id),
+    (c) => surfaceOfSubject(c.subject, id),
+    "Surface",
+  );
+  return html`
+    <div class="scenario-output" id="${anchor}">
+      <h4 class="output-heading">Results of scenario ${id}</h4>
+      <p class="muted">Numbers as in results.json <code>scenarios</code> entry for ${id} (Appendix B); times are local standard time.</p>
+      ${renderPeakSummary(id, results)}
+      <h5>Conditions</h5>
+      ${renderConditions({ ...input, results })}
+      ${body}
+      <h5>Checks on ${id}</h5>
+      ${checks.markup === "" ? html`<p>No automated check is recorded for this scenario.</p>` : checks}
+      ${caution(results)}
+    </div>
+  `;
+}

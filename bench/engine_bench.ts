@@ -1,8 +1,11 @@
 /**
  * Engine benchmark: `npx -y deno@2.9.6 bench bench/engine_bench.ts`.
- * Parts of the analysis of an invented six-layer heavy wall at 1 h, 1000 random constructions (root route),
- * and the fine-grid finite-difference reference (test/engine/fdReference.ts) at the accuracy its test demands
- * (response factors within 0.1 % of U), for the speed ratio.
+ * Parts of the analysis of an invented six-layer heavy wall at 1 h, 1000 random constructions (root route alone
+ * and with the state-space route), and the fine-grid finite-difference reference (test/engine/fdReference.ts) at
+ * the accuracy its test demands (response factors within 0.1 % of U), for the speed ratio.
+ * Targets: whole analysis of one construction with state space < 5 ms; 1000 constructions with it < 3 s.
+ * Group "state space" sets the modal (implicit QL) discretisation of the heavy-wall model beside the former
+ * matrix-exponential route of the same mesh (kept as a test reference, test/engine/stateSpaceExpmRoute.ts).
  */
 import { analyseConstruction } from "../src/engine/mod.ts";
 import { conductionChain } from "../src/engine/elements.ts";
@@ -15,7 +18,10 @@ import { periodicFromModes } from "../src/engine/periodic.ts";
 import { pulseModes } from "../src/engine/pulseModes.ts";
 import { iso13786 } from "../src/engine/iso13786.ts";
 import { stateSpaceAnalysis } from "../src/engine/stateSpaceAnalysis.ts";
+import { stateSpaceResponse } from "../src/engine/stateSpaceResponse.ts";
+import { finiteVolumeModel } from "../src/engine/stateSpaceModel.ts";
 import { fdResponseFactors } from "../test/engine/fdReference.ts";
+import { expmPulseResponses } from "../test/engine/stateSpaceExpmRoute.ts";
 import { HEAVY_WALL } from "../test/engine/walls.ts";
 
 const chain = conductionChain(HEAVY_WALL, "air-to-air");
@@ -39,8 +45,25 @@ Deno.bench("heavy wall: periodic factors + ISO 13786 (unwrapped lag)", { group: 
   for (const key of ["X", "Y", "Z"] as const) periodicFromModes(pulseModes(ramp, key, 3600), 24);
   iso13786(chain);
 });
-Deno.bench("heavy wall: state space (graded mesh, expm, RFs, CTF)", { group: "parts" }, () => {
+const ss = stateSpaceAnalysis(chain, dt, rf, ramp.uValue);
+const cells = ss.response.model.capacities.length;
+Deno.bench(`heavy wall: state space whole (mesh, modes, RFs, reciprocity, CTF), ${cells} cells`, {
+  group: "parts",
+}, () => {
   stateSpaceAnalysis(chain, dt, rf, ramp.uValue);
+});
+Deno.bench(`heavy wall: state-space RFs, modal route (QL, both orientations), ${cells} cells`, {
+  group: "state space",
+  baseline: true,
+}, () => {
+  stateSpaceResponse(chain, ss.cellWidths, dt, rf.termCount);
+});
+Deno.bench(`heavy wall: state-space RFs, former expm route (test reference), ${cells} cells`, {
+  group: "state space",
+  n: 3,
+  warmup: 1,
+}, () => {
+  expmPulseResponses(finiteVolumeModel(chain, ss.cellWidths), dt, rf.termCount);
 });
 Deno.bench("heavy wall: analyseConstruction, root route only", { group: "whole", baseline: true }, () => {
   analyseConstruction(HEAVY_WALL, dt, { stateSpace: false });
@@ -74,6 +97,14 @@ function randomConstructions(count: number): ConstructionInput[] {
   });
 }
 const random = randomConstructions(1000);
-Deno.bench("1000 random constructions, root route, 1 h", { group: "batch", n: 3, warmup: 1 }, () => {
+Deno.bench("1000 random constructions, root route only, 1 h", {
+  group: "batch",
+  n: 3,
+  warmup: 1,
+  baseline: true,
+}, () => {
   for (const c of random) analyseConstruction(c, 3600, { stateSpace: false });
+});
+Deno.bench("1000 random constructions, with state space, 1 h", { group: "batch", n: 3, warmup: 1 }, () => {
+  for (const c of random) analyseConstruction(c, 3600);
 });

@@ -50,7 +50,12 @@ function modalResponseFactors(
   return { X, Y: Array.from(y), Z };
 }
 
-/** Builds the finite-volume model, takes its modes and sums the exact discrete response mode by mode. */
+/**
+ * Builds the finite-volume model, takes its modes and sums the exact discrete response mode by mode. The modal
+ * form is the same exact discretisation as one exponential of the augmented matrix (agreement 1e-10 of U in the
+ * tests) at O(n²) for the QL sweeps plus O(modes × terms) for the series, instead of O(n³) for the exponential
+ * and O(n² × terms) for stepping the dense F.
+ */
 export function stateSpaceResponse(
   chain: ConductionChain,
   cellWidths: readonly (readonly number[])[],

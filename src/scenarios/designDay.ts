@@ -157,7 +157,20 @@ export function computeDesignDay(scenario: DesignDayScenario, context: ScenarioC
     ...(scenario.site === undefined ? {} : {
       sun: boundary.sunPosition.map((s) => ({ altitude_deg: s.altitudeDeg, azimuth_deg: s.azimuthDeg })),
     }),
-    notes: boundary.notes,
+    notes: [
+      ...boundary.notes.filter((note) => !note.startsWith('Surface "')),
+      ...scenario.surfaces.filter((surface) => surface.solAirC === undefined).map((surface) => {
+        const correction = parameters.get(surface.id)?.longwaveCorrectionK ?? 0;
+        return `Surface "${surface.id}": long-wave correction ${correction.toFixed(2)} K (${
+          surface.longwaveCorrectionK === undefined
+            ? "default rule ε·ΔR·cos(tilt)/h_o, 0 from vertical down"
+            : "given in the input"
+        }).`;
+      }),
+      ...scenario.surfaces.filter((surface) => surface.solAirC !== undefined).map((surface) =>
+        `Surface "${surface.id}": sol-air temperatures given in the input; the solar model is not used for it.`
+      ),
+    ],
   };
   return { results, checks, assumptions, warnings };
 }

@@ -39,7 +39,7 @@ Deno.test("the demo package opens in Chromium with no request beyond itself, no 
     for (const section of sections) {
       assert.ok(await section.isVisible(), await section.getAttribute("id") ?? "section");
     }
-    const figures = await page.locator("figure svg").all();
+    const figures = await page.locator("figure > svg").all();
     assert.ok(figures.length >= 10, `${figures.length} plots and drawings`);
     for (const svg of figures) {
       const box = await svg.boundingBox();

@@ -101,3 +101,20 @@ Deno.test("runBuild() writes the package with no script element and with the CSP
   assert.ok(!/<script\b/i.test(page));
   assert.match(page, /<meta http-equiv="Content-Security-Policy" content="default-src &#39;none&#39;/);
 });
+
+Deno.test("runBuild() three times at once on one project leaves one complete, uncorrupted output set", async () => {
+  const base = await Deno.makeTempDir();
+  const out = join(base, "out");
+  const codes = await Promise.all([build(MINIMAL, out), build(MINIMAL, out), build(MINIMAL, out)]);
+  assert.deepStrictEqual(codes, [0, 0, 0]);
+  const reference = join(base, "reference");
+  assert.equal(await build(MINIMAL, reference), 0);
+  for (const file of ["package.html", "results.json", "csv/constructions.csv"]) {
+    assert.deepStrictEqual(
+      Deno.readFileSync(join(out, file)),
+      Deno.readFileSync(join(reference, file)),
+      file,
+    );
+  }
+  assert.deepStrictEqual([...Deno.readDirSync(base)].map((e) => e.name).sort(), ["out", "reference"]);
+});

@@ -3,6 +3,7 @@ import { reviewProject } from "../review/mod.ts";
 import { formatPosition } from "../project/position.ts";
 import { renderPackage } from "../report/package.ts";
 import { computeProject } from "../results/buildResults.ts";
+import { resultsJsonText } from "../results/jsonText.ts";
 import type { ResultsJson } from "../results/types.ts";
 import { TOOL_VERSION } from "../version.ts";
 import { constructionsCsv, designDayCsv, factorsCsv } from "./csv.ts";
@@ -44,7 +45,7 @@ export function produceOutputs(loaded: LoadedProject, progress?: (message: strin
     ],
   };
   progress?.("rendering the package");
-  const resultsJsonText = `${JSON.stringify(results, null, 2)}\n`;
+  const resultsText = resultsJsonText(results);
   const page = renderPackage({
     model: loaded.model,
     results,
@@ -53,12 +54,12 @@ export function produceOutputs(loaded: LoadedProject, progress?: (message: strin
     findings: sortDiagnostics([...loaded.diagnostics, ...reviewProject(loaded.model, results)]),
     toolVersion: TOOL_VERSION,
     runtimeVersion: runtimeVersion(),
-    resultsJsonText,
+    resultsJsonText: resultsText,
   });
   const encoder = new TextEncoder();
   const files: OutputFile[] = [
     { path: "package.html", bytes: encoder.encode(page) },
-    { path: "results.json", bytes: encoder.encode(resultsJsonText) },
+    { path: "results.json", bytes: encoder.encode(resultsText) },
     { path: "csv/constructions.csv", bytes: encoder.encode(constructionsCsv(loaded.model, results)) },
     ...loaded.model.constructions.map((c) => ({
       path: `csv/factors-${c.id}.csv`,
@@ -70,7 +71,7 @@ export function produceOutputs(loaded: LoadedProject, progress?: (message: strin
     })),
     ...computed.csvFiles.map((f) => ({ path: f.path, bytes: encoder.encode(f.text) })),
   ];
-  return { ok: true, outputs: { results, resultsJsonText, page, files } };
+  return { ok: true, outputs: { results, resultsJsonText: resultsText, page, files } };
 }
 
 /** Prints diagnostics, one per line, as the CLI contract says. */

@@ -67,7 +67,76 @@ Runs all validation of a build and reports every finding as path:line:col: sever
 Exit codes: 0 no errors; 1 errors (or warnings with --strict); 2 usage error.`,
 };
 
-const LATER: readonly string[] = [];
+/** One command: its options, how many positional arguments it takes, and how it runs once parsed. */
+interface CommandSpec {
+  readonly options: Record<string, { type: "string" | "boolean"; default?: string }>;
+  /** Number of positional arguments and what they are, for messages. */
+  readonly positionals: { readonly count: number; readonly what: string };
+  run(
+    positionals: readonly string[],
+    values: Readonly<Record<string, string | boolean | undefined>>,
+    io: CommandIo,
+  ): Promise<number>;
+}
+
+/** A usage error: the message is printed with the command's help and the exit code is 2. */
+class UsageError extends Error {}
+
+function choice<T extends string>(option: string, value: unknown, allowed: readonly T[]): T {
+  if (typeof value === "string" && (allowed as readonly string[]).includes(value)) return value as T;
+  throw new UsageError(`--${option} must be one of ${allowed.join(", ")}, found "${String(value)}"`);
+}
+
+const COMMANDS: Record<string, CommandSpec> = {
+  build: {
+    options: { out: { type: "string" } },
+    positionals: { count: 1, what: "one project folder" },
+    run: ([project = ""], values, io) =>
+      runBuild(typeof values.out === "string" ? { project, out: values.out } : { project }, io),
+  },
+  check: {
+    options: { format: { type: "string", default: "text" }, strict: { type: "boolean" } },
+    positionals: { count: 1, what: "one project folder" },
+    run: ([project = ""], values, io) =>
+      runCheck({
+        project,
+        format: choice("format", values.format, ["text", "json"] as const),
+        strict: values.strict === true,
+      }, io),
+  },
+  diff: {
+    options: { format: { type: "string", default: "text" }, out: { type: "string" } },
+    positionals: { count: 2, what: "two projects or packages" },
+    run: ([a = "", b = ""], values, io) => {
+      const format = choice("format", values.format, ["text", "json", "html"] as const);
+      return runDiff(
+        typeof values.out === "string" ? { a, b, format, out: values.out } : { a, b, format },
+        io,
+      );
+    },
+  },
+  verify: {
+    options: {},
+    positionals: { count: 1, what: "one package file" },
+    run: ([path = ""], _values, io) => runVerify(path, io),
+  },
+  init: {
+    options: {},
+    positionals: { count: 1, what: "one folder name" },
+    run: ([target = ""], _values, io) => runInit(target, io),
+  },
+  serve: {
+    options: { port: { type: "string", default: "8470" } },
+    positionals: { count: 1, what: "one project folder" },
+    run: ([project = ""], values, io) => {
+      const port = Number(values.port);
+      if (!Number.isInteger(port) || port < 0 || port > 65535) {
+        throw new UsageError(`--port must be 0–65535, found "${String(values.port)}"`);
+      }
+      return runServe({ project, port }, io);
+    },
+  },
+};
 
 /** Runs the command line; returns the process exit code. */
 export async function main(args: readonly string[], io: CommandIo): Promise<number> {
@@ -81,140 +150,34 @@ export async function main(args: readonly string[], io: CommandIo): Promise<numb
     io.stdout(`fluxnote ${TOOL_VERSION}`);
     return 0;
   }
-  if (LATER.includes(command)) {
-    io.stderr(`fluxnote: the "${command}" command is not available in version ${TOOL_VERSION}`);
-    return 2;
-  }
-  if (command === "serve") {
-    let parsedServe;
-    try {
-      parsedServe = parseArgs({
-        args: [...rest],
-        allowPositionals: true,
-        strict: true,
-        options: { port: { type: "string", default: "8470" }, help: { type: "boolean", short: "h" } },
-      });
-    } catch (cause) {
-      io.stderr(`fluxnote serve: ${cause instanceof Error ? cause.message : String(cause)}\n\n${HELP.serve}`);
-      return 2;
-    }
-    if (parsedServe.values.help === true) {
-      io.stdout(HELP.serve ?? USAGE);
-      return 0;
-    }
-    const port = Number(parsedServe.values.port);
-    if (parsedServe.positionals.length !== 1 || !Number.isInteger(port) || port < 0 || port > 65535) {
-      io.stderr(`fluxnote serve: expected one project folder and a port 0–65535\n\n${HELP.serve}`);
-      return 2;
-    }
-    return await runServe({ project: parsedServe.positionals[0] ?? "", port }, io);
-  }
-  if (command === "verify") {
-    if (rest[0] === "--help" || rest[0] === "-h") {
-      io.stdout(HELP.verify ?? USAGE);
-      return 0;
-    }
-    if (rest.length !== 1 || rest[0]?.startsWith("-")) {
-      io.stderr(`fluxnote verify: expected one package file\n\n${HELP.verify}`);
-      return 2;
-    }
-    return await runVerify(rest[0] ?? "", io);
-  }
-  if (command === "diff") return await dispatchDiff(rest, io);
-  if (command === "init") {
-    if (rest.length !== 1 || rest[0]?.startsWith("-")) {
-      if (rest[0] === "--help" || rest[0] === "-h") {
-        io.stdout(HELP.init ?? USAGE);
-        return 0;
-      }
-      io.stderr(`fluxnote init: expected one folder name\n\n${HELP.init}`);
-      return 2;
-    }
-    return await runInit(rest[0] ?? "", io);
-  }
-  if (command !== "build" && command !== "check") {
+  const spec = COMMANDS[command];
+  if (spec === undefined) {
     io.stderr(`fluxnote: unknown command "${command}"\n\n${USAGE}`);
     return 2;
   }
-  let parsed;
   try {
-    parsed = parseArgs({
+    const parsed = parseArgs({
       args: [...rest],
       allowPositionals: true,
       strict: true,
-      options: command === "build" ? { out: { type: "string" }, help: { type: "boolean", short: "h" } } : {
-        format: { type: "string", default: "text" },
-        strict: { type: "boolean" },
-        help: { type: "boolean", short: "h" },
-      },
+      options: { ...spec.options, help: { type: "boolean", short: "h" } },
     });
+    const values = parsed.values as Record<string, string | boolean | undefined>;
+    if (values.help === true) {
+      io.stdout(HELP[command] ?? USAGE);
+      return 0;
+    }
+    if (parsed.positionals.length !== spec.positionals.count) {
+      throw new UsageError(`expected ${spec.positionals.what}, found ${parsed.positionals.length}`);
+    }
+    return await spec.run(parsed.positionals, values, io);
   } catch (cause) {
-    io.stderr(
-      `fluxnote ${command}: ${cause instanceof Error ? cause.message : String(cause)}\n\n${HELP[command]}`,
-    );
+    const isUsage = cause instanceof UsageError || (cause instanceof TypeError && "code" in cause &&
+      String((cause as { code: unknown }).code).startsWith("ERR_PARSE_ARGS"));
+    if (!isUsage) throw cause;
+    io.stderr(`fluxnote ${command}: ${cause.message}\n\n${HELP[command] ?? USAGE}`);
     return 2;
   }
-  const values = parsed.values as Record<string, string | boolean | undefined>;
-  if (values.help === true) {
-    io.stdout(HELP[command] ?? USAGE);
-    return 0;
-  }
-  if (parsed.positionals.length !== 1) {
-    io.stderr(
-      `fluxnote ${command}: expected one project folder, found ${parsed.positionals.length}\n\n${
-        HELP[command]
-      }`,
-    );
-    return 2;
-  }
-  const project = parsed.positionals[0] ?? "";
-  if (command === "build") {
-    const out = values.out;
-    return await runBuild(typeof out === "string" ? { project, out } : { project }, io);
-  }
-  const format = values.format;
-  if (format !== "text" && format !== "json") {
-    io.stderr(`fluxnote check: --format must be text or json, found "${String(format)}"`);
-    return 2;
-  }
-  return await runCheck({ project, format, strict: values.strict === true }, io);
-}
-
-async function dispatchDiff(rest: readonly string[], io: CommandIo): Promise<number> {
-  let parsed;
-  try {
-    parsed = parseArgs({
-      args: [...rest],
-      allowPositionals: true,
-      strict: true,
-      options: {
-        format: { type: "string", default: "text" },
-        out: { type: "string" },
-        help: { type: "boolean", short: "h" },
-      },
-    });
-  } catch (cause) {
-    io.stderr(`fluxnote diff: ${cause instanceof Error ? cause.message : String(cause)}\n\n${HELP.diff}`);
-    return 2;
-  }
-  if (parsed.values.help === true) {
-    io.stdout(HELP.diff ?? USAGE);
-    return 0;
-  }
-  const [a, b] = parsed.positionals;
-  if (parsed.positionals.length !== 2 || a === undefined || b === undefined) {
-    io.stderr(
-      `fluxnote diff: expected two projects or packages, found ${parsed.positionals.length}\n\n${HELP.diff}`,
-    );
-    return 2;
-  }
-  const format = parsed.values.format;
-  if (format !== "text" && format !== "json" && format !== "html") {
-    io.stderr(`fluxnote diff: --format must be text, json or html, found "${String(format)}"`);
-    return 2;
-  }
-  const out = parsed.values.out;
-  return await runDiff(out === undefined ? { a, b, format } : { a, b, format, out }, io);
 }
 
 if (import.meta.main) {

@@ -3,6 +3,7 @@ import { CTF_MAX_COEFFICIENT, CTF_MAX_IDENTITY_ERROR, CTF_MAX_RESYNTHESIS_ERROR 
 import { transmissionDeterminantError } from "./determinantCheck.ts";
 import { type ConductionChain, conductionChain } from "./elements.ts";
 import { type Unresolvable, unresolvable } from "./engineError.ts";
+import { estimatedPoles, MAX_POLES } from "./poleBudget.ts";
 import { harmonicErrors } from "./harmonicCheck.ts";
 import { iso13786, type Iso13786Characteristics } from "./iso13786.ts";
 import type { ConstructionInput } from "./layer.ts";
@@ -176,6 +177,16 @@ export function analyseConstruction(
   }
   const air = conductionChain(input, "air-to-air");
   if (air.kind === "unresolvable") return air;
+  const poles = estimatedPoles(input, timestepS);
+  if (poles.count > MAX_POLES) {
+    return unresolvable(
+      "too-many-poles",
+      `Cannot analyse: about ${poles.count} poles would be needed at a ${timestepS} s step (the limit is ${MAX_POLES}); ` +
+        `layer ${
+          poles.worstLayer + 1
+        } is far thicker or less conductive than any real building layer — check its thickness and conductivity`,
+    );
+  }
   const surface = conductionChain(input, "surface-to-surface");
   if (surface.kind === "unresolvable") return surface;
   const airToAir = rootAnalysis(air, timestepS);

@@ -4,7 +4,8 @@ export type UnresolvableReason =
   | "invalid-layer"
   | "invalid-surface-resistance"
   | "zero-resistance"
-  | "invalid-timestep";
+  | "invalid-timestep"
+  | "too-many-poles";
 
 /** A construction the engine cannot resolve, with the reason and a message a user can act on. */
 export interface Unresolvable {

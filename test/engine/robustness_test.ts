@@ -191,3 +191,17 @@ Deno.test("analyseConstruction() returns a named error value for constructions i
     }
   }
 });
+
+Deno.test("analyseConstruction() refuses, quickly and by name, a layer that would need thousands of poles", () => {
+  // 3 m at λ = 1e-7 W/(m K), ρc = 2e6 J/(m³K): α = 5e-14 m²/s; poles below β = 40/Δ ≈ L·√(β/α)/π ≈ 5e5
+  // (slab eigenvalues α(nπ/L)², Carslaw & Jaeger) — far over the budget, so no attempt is made.
+  const started = performance.now();
+  const result = analyseConstruction({
+    layers: [{ kind: "massive", thicknessM: 3, conductivity: 1e-7, density: 2000, specificHeat: 1000 }],
+    outsideResistance: 0.04,
+    insideResistance: 0.13,
+  }, 3600);
+  assert.equal(result.kind, "unresolvable");
+  assert.equal(result.kind === "unresolvable" ? result.reason : "", "too-many-poles");
+  assert.ok(performance.now() - started < 1000);
+});

@@ -3,6 +3,7 @@ import type { ProjectDocument } from "../project/model.ts";
 import { renderBlock } from "./blockOutput.ts";
 import { html, type Trusted } from "./html.ts";
 import { renderMarkdown } from "./markdown.ts";
+import { renderSensitivity } from "./sensitivityOutput.ts";
 import type { RenderContext } from "./packageInput.ts";
 
 function renderDocument(doc: ProjectDocument, index: number, ctx: RenderContext): Trusted {
@@ -27,5 +28,6 @@ export function renderCalculationSection(ctx: RenderContext): Trusted {
   return html`<section id="s-2"><h2>2 Calculation</h2>
 <p>The project's own text follows, file by file. After each input block the tool's computed output is shown, so that every figure sits beside the input it comes from. Headings inside the project text are the consultant's.</p>
 ${docs}
+${renderSensitivity(ctx, `s-2-${String(docs.length + 1)}`, `2.${String(docs.length + 1)}`)}
 </section>`;
 }

@@ -1,5 +1,6 @@
 import type { Model } from "../project/model.ts";
 import type { ResultsJson } from "../results/types.ts";
+import { coolingLoadCells, coolingLoadHeader } from "./csvCoolingLoad.ts";
 
 /** Quotes a CSV cell; a cell that a spreadsheet would read as a formula gets a leading apostrophe. */
 export function csvCell(value: string | number): string {
@@ -44,6 +45,7 @@ export function designDayCsv(id: string, results: ResultsJson): string {
     "indoor_C",
     ...surfaces.flatMap(([sid]) => [`${sid}_sol_air_C`, `${sid}_inside_flux_W_per_m2`, `${sid}_heat_gain_W`]),
     "total_heat_gain_W",
+    ...coolingLoadHeader(s),
   ].map(csvCell).join(",");
   const rows = s.outdoor.map((outdoor, k) =>
     [
@@ -52,7 +54,7 @@ export function designDayCsv(id: string, results: ResultsJson): string {
       s.indoor[k] ?? NaN,
       ...surfaces.flatMap(([, v]) => [v.solAir[k] ?? NaN, v.insideFlux[k] ?? NaN, v.heatGain[k] ?? NaN]),
       s.totalHeatGain[k] ?? NaN,
-    ].map(csvCell).join(",")
+    ].map(csvCell).concat(coolingLoadCells(s, k)).join(",")
   );
   return `${[header, ...rows].join("\n")}\n`;
 }

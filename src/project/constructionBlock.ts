@@ -10,7 +10,12 @@ import {
   textOf,
 } from "./fields.ts";
 import { positive } from "./materialBlock.ts";
-import type { HeatFlowDirection, MaterialDef, ResolvedLayer } from "./model.ts";
+import { describeCodePoints } from "./quantity.ts";
+import type { HeatFlowDirection, LimitSpec, MaterialDef, ResolvedLayer } from "./model.ts";
+import { defaultSurfaceResistances } from "../materials/surfaceResistance.ts";
+import { attachLayerExtras } from "./bridgeSyntax.ts";
+import { applyBridges } from "./bridgedLayers.ts";
+import { readLimits } from "./limitsSyntax.ts";
 import type { Position } from "./position.ts";
 import { didYouMean } from "./suggest.ts";
 import type { YamlValue } from "./yamlTree.ts";
@@ -23,6 +28,7 @@ export const CONSTRUCTION_KEYS = [
   "inside-surface-resistance",
   "heat-flow",
   "timestep",
+  "limits",
 ] as const;
 
 export const LAYER_KEYS = [
@@ -34,6 +40,8 @@ export const LAYER_KEYS = [
   "specific-heat",
   "resistance",
   "source",
+  "bridge",
+  "corrections",
 ] as const;
 
 export const HEAT_FLOWS: readonly HeatFlowDirection[] = ["horizontal", "upward", "downward"];
@@ -47,6 +55,8 @@ export interface ConstructionDraft {
   readonly outsideResistance?: number;
   readonly insideResistance?: number;
   readonly timestepS?: number;
+  /** Code limits written on this construction (they override project-wide ones of the same key). */
+  readonly limits?: readonly LimitSpec[];
   readonly at: Position;
 }
 
@@ -101,14 +111,29 @@ export function readConstructionBlock(
     );
   }
   items?.slice(0, MAX_LAYERS).forEach((item, index) => {
-    const layer = readLayer(item, `layer ${index + 1} of ${label}`, materials, out);
+    const what = `layer ${index + 1} of ${label}`;
+    const layer = attachLayerExtras(item, readLayer(item, what, materials, out), what, materials, out);
     if (layer !== undefined) layers.push(layer);
   });
+  const limitsEntry = fields.entries.get("limits");
+  const limits = limitsEntry === undefined
+    ? undefined
+    : readLimits(limitsEntry.value, label, "construction", out);
   if (errorCount(out) > before || id === undefined) return undefined;
+  const surfaces = defaultSurfaceResistances(heatFlow ?? "horizontal");
+  const resolvedLayers = applyBridges(
+    layers,
+    outsideResistance ?? surfaces.outsideM2KPerW,
+    insideResistance ?? surfaces.insideM2KPerW,
+    label,
+    out,
+  );
+  if (errorCount(out) > before) return undefined;
   return {
     id: id.id,
     name,
-    layers,
+    layers: resolvedLayers,
+    ...(limits === undefined ? {} : { limits }),
     at: fields.at,
     ...(heatFlow === undefined ? {} : { heatFlow }),
     ...(outsideResistance === undefined ? {} : { outsideResistance }),
@@ -186,7 +211,7 @@ function readLayer(
         error(
           materialEntry.value.at,
           "unknown-material",
-          `Unknown material "${materialId}" in the ${what}`,
+          `Unknown material "${describeCodePoints(materialId)}" in the ${what}`,
           `${
             didYouMean(materialId, materials.ids(), "materials")
           } Otherwise define it in a \`material\` block or use a built-in id`,

@@ -100,3 +100,58 @@ function countNewlines(text: string): number {
   for (let i = 0; i < text.length; i++) if (text.charCodeAt(i) === 10) n++;
   return n;
 }
+
+/** An input fence the splitter cannot read: never closed, or not at the top level of the file. */
+export interface FenceProblem {
+  readonly kind: "unterminated" | "nested";
+  /** First word of the info string. */
+  readonly info: string;
+  /** The fence characters as written, e.g. "```". */
+  readonly fence: string;
+  readonly line: number;
+  readonly col: number;
+}
+
+const NESTED_OPENER = /^((?:[ \t]*(?:>|[-*+]|\d{1,9}[.)]))*[ \t]*)(`{3,}|~{3,})[ \t]*([^\s`]+)/;
+
+/**
+ * Finds fenced blocks whose first info word is one of `infos` but that `splitMarkdown` does not
+ * read as input: a top-level fence with no closing line (it would silently run to the end of the
+ * file), and fences inside lists, block quotes or indented code (they would silently become prose).
+ */
+export function findFenceProblems(body: string, firstLine: number, infos: readonly string[]): FenceProblem[] {
+  const problems: FenceProblem[] = [];
+  let line = firstLine;
+  for (const token of new Lexer({ gfm: true }).lex(body)) {
+    const raw = token.raw;
+    const lines = raw.split("\n");
+    const leading = /^\n*/.exec(raw)?.[0].length ?? 0;
+    const opener = token.type === "code" ? /^ {0,3}(`{3,}|~{3,})(.*)$/.exec(lines[leading] ?? "") : null;
+    if (opener !== null) {
+      const fence = opener[1] ?? "```";
+      const info = (opener[2] ?? "").trim().split(/\s+/, 1)[0] ?? "";
+      const body = lines.slice(leading + 1);
+      while (body.length > 0 && (body[body.length - 1] ?? "").trim() === "") body.pop();
+      const close = new RegExp(`^ {0,3}${fence[0] === "`" ? "`" : "~"}{${fence.length},}[ \\t]*$`);
+      if (infos.includes(info) && (body.length === 0 || !close.test(body[body.length - 1] ?? ""))) {
+        problems.push({ kind: "unterminated", info, fence, line: line + leading, col: 1 });
+      }
+    } else {
+      lines.forEach((text, i) => {
+        const nested = NESTED_OPENER.exec(text);
+        if (nested !== null && infos.includes(nested[3] ?? "")) {
+          const fence = nested[2] ?? "```";
+          problems.push({
+            kind: "nested",
+            info: nested[3] ?? "",
+            fence,
+            line: line + i,
+            col: (nested[1] ?? "").length + 1,
+          });
+        }
+      });
+    }
+    line += countNewlines(raw);
+  }
+  return problems;
+}

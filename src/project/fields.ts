@@ -38,7 +38,9 @@ export function readFields(
           entry.keyAt,
           "unknown-key",
           `Unknown key "${describeCodePoints(entry.key)}" in the ${what}`,
-          withSuggestion(entry.key, allowed, `allowed keys: ${allowed.join(", ")}`),
+          /^\d/.test(entry.key)
+            ? "this looks like the digits after a decimal comma: inside `{ … }` a comma separates entries; use a point as the decimal mark, e.g. `33.5 degC`"
+            : withSuggestion(entry.key, allowed, `allowed keys: ${allowed.join(", ")}`),
         ),
       );
       continue;

@@ -2,6 +2,7 @@ import { type Diagnostic, error, errorCount } from "./diagnostic.ts";
 import { type Fields, readChoice, readFields, readList, readNumber, readText, textOf } from "./fields.ts";
 import type { ProjectInfo, ProjectStatus, RevisionEntry } from "./model.ts";
 import type { Position } from "./position.ts";
+import { readLimits } from "./limitsSyntax.ts";
 import type { YamlValue } from "./yamlTree.ts";
 
 export const FRONT_MATTER_KEYS = [
@@ -17,6 +18,7 @@ export const FRONT_MATTER_KEYS = [
   "revisions",
   "files",
   "sensitivity",
+  "limits",
 ] as const;
 
 const STATUSES: readonly ProjectStatus[] = ["draft", "for-review", "issued"];
@@ -45,6 +47,10 @@ export function readFrontMatter(value: YamlValue, out: Diagnostic[]): FrontMatte
   const revisions = readRevisions(fields, out);
   const files = readFileList(fields, out);
   const sensitivityVariation = readSensitivity(fields, out);
+  const limitsEntry = fields.entries.get("limits");
+  const limits = limitsEntry === undefined
+    ? undefined
+    : readLimits(limitsEntry.value, "front matter of project.md", "project", out);
   if (
     errorCount(out) > before || title === undefined || reference === undefined || revision === undefined ||
     status === undefined || preparedBy === undefined || checkedBy === undefined || date === undefined
@@ -63,6 +69,7 @@ export function readFrontMatter(value: YamlValue, out: Diagnostic[]): FrontMatte
     revisions,
     ...(approvedBy === undefined ? {} : { approvedBy }),
     ...(sensitivityVariation === undefined ? {} : { sensitivityVariation }),
+    ...(limits === undefined ? {} : { limits }),
   };
   return files === undefined ? { info } : { info, files };
 }

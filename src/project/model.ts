@@ -25,6 +25,8 @@ export interface ProjectInfo {
   readonly revisions: readonly RevisionEntry[];
   /** Optional sensitivity study: each material property varied by ± this fraction (e.g. 0.2). */
   readonly sensitivityVariation?: number;
+  /** Optional project-wide code limits, applied to every construction unless it gives its own. */
+  readonly limits?: readonly LimitSpec[];
 }
 
 /** A material as defined in a project block or taken from the built-in library. */
@@ -54,7 +56,62 @@ export type ResolvedLayer = Layer & {
   readonly materialId?: string;
   readonly source: string;
   readonly at: Position;
+  /** Present on a bridged (framed) layer: the layer's own values are then the equivalent homogeneous layer. */
+  readonly bridge?: LayerBridge;
+  /** Optional ISO 6946 Annex F corrections the user gives for this layer. */
+  readonly corrections?: LayerCorrections;
 };
+
+/** One material of a bridged layer as written, SI units. */
+export interface BridgeComponent {
+  readonly name: string;
+  readonly materialId?: string;
+  /** W/(m K) */
+  readonly conductivity: number;
+  /** kg/m^3 */
+  readonly density: number;
+  /** J/(kg K) */
+  readonly specificHeat: number;
+  readonly source: string;
+}
+
+/** A layer bridged by a second material (studs, joists) over an area fraction, as written by the user. */
+export interface LayerBridge {
+  /** The material that fills the rest of the layer (e.g. insulation between studs). */
+  readonly base: BridgeComponent;
+  /** The bridging material (e.g. timber studs). */
+  readonly bridge: BridgeComponent;
+  /** Area fraction of the bridging material, 0 < f < 1. */
+  readonly fraction: number;
+  readonly at: Position;
+}
+
+/** User-given ISO 6946 Annex F corrections on one layer (the tool ships no values of its own). */
+export interface LayerCorrections {
+  /** ΔU_f for mechanical fasteners, W/(m^2 K), as the user computed it. */
+  readonly fastenersDeltaU?: number;
+  /** Air gaps: the level (0, 1, 2) and its ΔU'' in W/(m^2 K); ΔU_g = ΔU''·(R_1/R_T)^2 is computed. */
+  readonly airGaps?: { readonly level: 0 | 1 | 2; readonly deltaU2: number };
+  readonly source: string;
+  readonly at: Position;
+}
+
+/** The quantity a code limit bounds; `max-` limits pass when value ≤ limit, `min-` when value ≥ limit. */
+export type LimitQuantity =
+  | "max-u"
+  | "max-periodic-transmittance"
+  | "min-time-lag"
+  | "min-temperature-factor";
+
+/** A code limit written by the user with its clause (W/(m^2 K), h, or a pure number). */
+export interface LimitSpec {
+  readonly quantity: LimitQuantity;
+  /** The limit in the unit results.json compares in: W/(m^2 K), h, or a pure number. */
+  readonly limit: number;
+  readonly clause: string;
+  readonly scope: "project" | "construction";
+  readonly at: Position;
+}
 
 /** A value the tool filled in or chose, with its basis and the line it applies to. */
 export interface Assumption {
@@ -120,6 +177,8 @@ export type Scenario =
     readonly month: number;
     readonly day: number;
     readonly sky: DesignDaySky;
+    /** The user's radiant time series, when given: cooling load is computed from it. */
+    readonly radiantTimeSeries?: RadiantTimeSeries;
   })
   | (ScenarioCommon & {
     readonly kind: "weather";
@@ -128,6 +187,32 @@ export type Scenario =
     readonly weatherAt: Position;
     readonly site?: Site;
   });
+
+/** A radiant time series given by the user: 24 hourly fractions r_0…r_23 (Σ = 1) and where they come from. */
+export interface RadiantTimeSeries {
+  readonly values: readonly number[];
+  readonly source: string;
+  readonly at: Position;
+}
+
+/**
+ * A `kind: heating` scenario block: steady winter design heat loss and ISO 13788 surface checks. Kept apart from
+ * the `Scenario` union (which is hourly) so code that walks hourly scenarios is unchanged.
+ */
+export interface HeatingScenario {
+  readonly kind: "heating";
+  readonly id: string;
+  /** θ_i, °C */
+  readonly indoorC: number;
+  /** θ_e, design outdoor temperature, °C */
+  readonly outdoorC: number;
+  /** φ_i, indoor relative humidity as a fraction (0.5 = 50 %) */
+  readonly indoorRelativeHumidity: number;
+  /** R_si for the surface-temperature checks, m² K/W; absent = the ISO 13788 default (logged). */
+  readonly moistureSurfaceResistance?: number;
+  readonly surfaces: readonly ScenarioSurface[];
+  readonly at: Position;
+}
 
 /** An exposed surface of a scenario. Optional keys stay absent here; defaults are filled (and logged) when computing. */
 export interface ScenarioSurface {
@@ -178,4 +263,6 @@ export interface Model {
   readonly constructions: readonly Construction[];
   readonly scenarios: readonly Scenario[];
   readonly assumptions: readonly Assumption[];
+  /** `kind: heating` scenario blocks, in reading order (absent when there are none). */
+  readonly heatingScenarios?: readonly HeatingScenario[];
 }

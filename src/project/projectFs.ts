@@ -36,7 +36,14 @@ export async function diskProjectFs(folder: string): Promise<ProjectFs | undefin
       try {
         real = await Deno.realPath(join(root, path));
       } catch {
-        return { ok: false, reason: "it does not exist" };
+        // The name may exist as a link whose target is missing or loops back: say so, not "does not exist".
+        const isLink = await Deno.lstat(join(root, path)).then((i) => i.isSymlink, () => false);
+        return {
+          ok: false,
+          reason: isLink
+            ? "it is a link that cannot be followed (a loop, or a link to nothing)"
+            : "it does not exist",
+        };
       }
       const rel = relative(root, real);
       if (rel === "" || rel.split(sep)[0] === ".." || isAbsolute(rel)) {

@@ -53,7 +53,7 @@ export function parseQuantity(text: string, kind: QuantityKind): QuantityResult 
   const numberMatch = NUMBER.exec(trimmed);
   if (numberMatch === null) {
     return fail(
-      `Cannot read ${spec.label} "${trimmed}": it does not start with a number`,
+      `Cannot read ${spec.label} "${describeCodePoints(trimmed)}": it does not start with a number`,
       `write e.g. "${spec.example}"`,
     );
   }

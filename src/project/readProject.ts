@@ -37,11 +37,28 @@ export async function readProject(fs: ProjectFs): Promise<ReadResult> {
   const listed = frontMatter?.files ??
     (await fs.listMarkdown()).filter((name) => name !== "project.md" && !name.startsWith("."))
       .sort((a, b) => (a < b ? -1 : a > b ? 1 : 0)).map((path) => ({ path, at: projectAt }));
-  const seen = new Set(["project.md"]);
+  // Files already read, by located key (the real path on disk), so `./a.md` or a link to a.md is not read twice.
+  const seen = new Map<string, string>();
+  const projectPlace = await fs.locate("project.md");
+  if (projectPlace.ok) seen.set(projectPlace.key, "project.md");
   for (const entry of listed.slice(0, MAX_FILES)) {
     const path = entry.path.replaceAll("\\", "/");
-    if (seen.has(path)) continue;
-    seen.add(path);
+    const place = await fs.locate(path);
+    const earlier = place.ok ? seen.get(place.key) : undefined;
+    if (earlier !== undefined) {
+      out.push(
+        error(
+          entry.at,
+          "file-listed-twice",
+          earlier === "project.md"
+            ? `Cannot read "${path}" again: it is project.md, which is always read first`
+            : `Cannot read "${path}" again: it is the same file as "${earlier}"`,
+          "list each file once (a link to a file counts as that file)",
+        ),
+      );
+      continue;
+    }
+    if (place.ok) seen.set(place.key, path);
     const read = await readOne(fs, path, entry.at, MAX_MARKDOWN_BYTES, out);
     if (read !== undefined) {
       sources.push(read.source);
@@ -127,7 +144,10 @@ async function readOne(
   const bytes = await fs.read(place.key);
   const decoded = decodeSource(path, bytes);
   if (!decoded.ok) {
-    out.push(error({ file: path, line: decoded.line, col: 1 }, "not-text", decoded.message, decoded.hint));
+    const hint = path.endsWith(".md")
+      ? decoded.hint
+      : "save the file as UTF-8 CSV text, e.g. exported as 'CSV UTF-8'";
+    out.push(error({ file: path, line: decoded.line, col: 1 }, "not-text", decoded.message, hint));
     return undefined;
   }
   return { source: decoded.source, file: { path, bytes, sha256: sha256Hex(bytes) } };

@@ -4,11 +4,13 @@ import { defaultSurfaceResistances } from "../materials/surfaceResistance.ts";
 import { type SplitFile, splitFile } from "./blocks.ts";
 import { type ConstructionDraft, type MaterialLookup, readConstructionBlock } from "./constructionBlock.ts";
 import { type Diagnostic, error, errorCount } from "./diagnostic.ts";
+import { findFenceProblems, splitFrontMatter } from "./fences.ts";
 import { type FrontMatter, readFrontMatter } from "./frontMatter.ts";
 import { readMaterialBlock } from "./materialBlock.ts";
 import type {
   Assumption,
   Construction,
+  HeatingScenario,
   MaterialDef,
   Model,
   ProjectDocument,
@@ -65,9 +67,10 @@ export function resolveProject(
 ): ResolveResult {
   const out: Diagnostic[] = [];
   const files = sources.map((s, i) => splitFile(s, i === 0, out));
+  for (const source of sources) out.push(...fenceProblems(source));
   const projectFile = files[0];
   let frontMatter: FrontMatter | undefined;
-  if (projectFile?.frontMatter === undefined) {
+  if (projectFile?.frontMatter === undefined && splitFrontMatter(sources[0]?.text ?? "").yaml === undefined) {
     out.push(
       error(
         { file: "project.md", line: 1, col: 1 },
@@ -76,7 +79,7 @@ export function resolveProject(
         "start project.md with `---`, the keys title, reference, revision, status, prepared-by, checked-by, date, units, then `---`",
       ),
     );
-  } else {
+  } else if (projectFile?.frontMatter !== undefined) {
     frontMatter = readFrontMatter(projectFile.frontMatter, out);
   }
   const assumptions: Assumption[] = [];
@@ -94,7 +97,8 @@ export function resolveProject(
     ids: () => [...materials.keys(), ...library.ids()],
   };
   const constructions = readConstructions(files, lookup, out, assumptions);
-  const scenarios = readScenarios(files, constructions.map((c) => c.id), out);
+  const heatingScenarios: HeatingScenario[] = [];
+  const scenarios = readScenarios(files, constructions.map((c) => c.id), out, heatingScenarios);
   for (const entry of [...libraryUsed.values()].sort((a, b) => a.id < b.id ? -1 : 1)) {
     assumptions.push({
       id: `library:material:${entry.id}`,
@@ -119,8 +123,29 @@ export function resolveProject(
     constructions,
     scenarios,
     assumptions,
+    ...(heatingScenarios.length === 0 ? {} : { heatingScenarios }),
   };
   return { model, diagnostics: out, libraryUsed: libraryList };
+}
+
+/** Input fences that would otherwise be misread in silence: never closed, or nested in a list, quote or indented code. */
+function fenceProblems(source: SourceText): Diagnostic[] {
+  const split = splitFrontMatter(source.text);
+  return findFenceProblems(split.body, split.bodyLine, ["material", "construction", "scenario"]).map((p) =>
+    p.kind === "unterminated"
+      ? error(
+        { file: source.path, line: p.line, col: p.col },
+        "fence-unterminated",
+        `The ${p.info} block opened here with ${p.fence} is never closed, so it would run to the end of the file`,
+        `end the block with a line ${p.fence} right after its last key`,
+      )
+      : error(
+        { file: source.path, line: p.line, col: p.col },
+        "fence-nested",
+        `The ${p.info} block here is inside a list, a quote or indented text, so it would not be read as input`,
+        "start the fence line at the left margin, with a blank line before it (or use another info word if it is only an example)",
+      )
+  );
 }
 
 function readMaterials(
@@ -229,13 +254,15 @@ function readScenarios(
   files: readonly SplitFile[],
   constructionIds: readonly string[],
   out: Diagnostic[],
+  heating: HeatingScenario[] = [],
 ): Scenario[] {
   const scenarios: Scenario[] = [];
   for (const piece of inputs(files, "scenario")) {
     const scenario = readScenarioBlock(piece.value, constructionIds, out);
     if (scenario === undefined) continue;
-    const earlier = scenarios.find((s) => s.id === scenario.id);
+    const earlier = [...scenarios, ...heating].find((s) => s.id === scenario.id);
     if (earlier !== undefined) out.push(duplicate("scenario", scenario.id, scenario.at, earlier.at));
+    else if (scenario.kind === "heating") heating.push(scenario);
     else scenarios.push(scenario);
   }
   return scenarios;

@@ -12,9 +12,18 @@ import {
   readText,
   withSuggestion,
 } from "./fields.ts";
-import type { DesignDaySky, Scenario, ScenarioSurface, Site, TemperatureProfile } from "./model.ts";
+import { isHeatingBlock, readHeatingScenario } from "./heatingBlock.ts";
+import type {
+  DesignDaySky,
+  HeatingScenario,
+  Scenario,
+  ScenarioSurface,
+  Site,
+  TemperatureProfile,
+} from "./model.ts";
 import type { Position } from "./position.ts";
-import type { QuantityKind } from "./quantity.ts";
+import { describeCodePoints, type QuantityKind } from "./quantity.ts";
+import { readRadiantTimeSeries } from "./radiantTimeSeriesBlock.ts";
 import type { YamlValue } from "./yamlTree.ts";
 
 export const SCENARIO_KEYS = [
@@ -28,6 +37,7 @@ export const SCENARIO_KEYS = [
   "sky",
   "surfaces",
   "weather",
+  "radiant-time-series",
 ] as const;
 export const SURFACE_KEYS = [
   "id",
@@ -48,24 +58,25 @@ const SKY_KEYS = ["model", "beam-optical-depth", "diffuse-optical-depth"] as con
 const MONTH_DAY = /^(0[1-9]|1[0-2])-(0[1-9]|[12]\d|3[01])$/;
 const DAYS_IN_MONTH = [31, 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31];
 
-/** Reads and validates a `scenario` block; surface constructions are checked against the known ids. */
+/** Reads and validates a `scenario` block (a heating block goes to its own reader); constructions checked by id. */
 export function readScenarioBlock(
   value: YamlValue,
   constructionIds: readonly string[],
   out: Diagnostic[],
-): Scenario | undefined {
+): Scenario | HeatingScenario | undefined {
+  if (isHeatingBlock(value)) return readHeatingScenario(value, constructionIds, out);
   const fields = readFields(value, SCENARIO_KEYS, "scenario block", out);
   if (fields === undefined) return undefined;
   const before = errorCount(out);
   const id = readId(fields, "id", out);
-  const kind = readChoice(fields, "kind", ["design-day", "weather"] as const, out);
+  const kind = readChoice(fields, "kind", ["design-day", "weather", "heating"] as const, out);
   if (!fields.entries.has("kind")) {
     out.push(
       error(
         fields.at,
         "missing-key",
         'Missing required key "kind" in the scenario block',
-        "add `kind: design-day` or `kind: weather`",
+        "add `kind: design-day`, `kind: weather` or `kind: heating`",
       ),
     );
   }
@@ -84,6 +95,7 @@ export function readScenarioBlock(
   };
   if (kind === "design-day") {
     forbid(fields, ["weather"], "a design-day scenario", out);
+    const radiantTimeSeries = readRadiantTimeSeries(fields, out);
     const outdoor = readOutdoor(fields, out);
     const date = readMonthDay(fields, out);
     const sky = readSky(fields, out);
@@ -101,10 +113,24 @@ export function readScenarioBlock(
       errorCount(out) > before || id === undefined || indoor === undefined || outdoor === undefined ||
       date === undefined || sky === undefined
     ) return undefined;
-    return { ...common, kind, outdoor, month: date.month, day: date.day, sky };
+    return {
+      ...common,
+      kind,
+      outdoor,
+      month: date.month,
+      day: date.day,
+      sky,
+      ...(radiantTimeSeries === undefined ? {} : { radiantTimeSeries }),
+    };
   }
   if (kind === "weather") {
     forbid(fields, ["outdoor", "date", "sky"], "a weather scenario (the weather file gives them)", out);
+    forbid(
+      fields,
+      ["radiant-time-series"],
+      "a weather scenario (cooling load is computed for design days)",
+      out,
+    );
     const weather = readWeatherPath(fields, out);
     if (site === undefined && !fields.entries.has("site")) {
       out.push(
@@ -331,7 +357,7 @@ function readMonthDay(fields: Fields, out: Diagnostic[]): { month: number; day: 
       error(
         at,
         "bad-date",
-        `Cannot read the design date "${text}"`,
+        `Cannot read the design date "${describeCodePoints(text)}"`,
         "write month and day as MM-DD, e.g. `date: 07-21` (29 February is not a design day)",
       ),
     );
@@ -349,7 +375,7 @@ function readWeatherPath(fields: Fields, out: Diagnostic[]): { path: string; at:
       error(
         at,
         "path-outside",
-        `Cannot use the weather file "${path}": it points outside the project folder`,
+        `Cannot use the weather file "${describeCodePoints(path)}": it points outside the project folder`,
         "copy the file into the project folder and give its path relative to it",
       ),
     );
@@ -360,7 +386,7 @@ function readWeatherPath(fields: Fields, out: Diagnostic[]): { path: string; at:
       error(
         at,
         "weather-not-csv",
-        `Cannot use the weather file "${path}": expected a .csv file`,
+        `Cannot use the weather file "${describeCodePoints(path)}": expected a .csv file`,
         "give the path of the CSV file",
       ),
     );
@@ -424,7 +450,7 @@ function readSurface(
       error(
         surface.entries.get("construction")?.value.at ?? surface.at,
         "unknown-construction",
-        `Unknown construction "${construction}" in surface ${label}`,
+        `Unknown construction "${describeCodePoints(construction)}" in surface ${label}`,
         withSuggestion(
           construction,
           constructionIds,

@@ -57,6 +57,7 @@ export function parseYamlAt(text: string, file: string, firstLine: number, first
     };
   }
   const diagnostics: Diagnostic[] = [];
+  const aliases: Position[] = [];
   const convert = (node: unknown, depth: number): YamlValue | undefined => {
     const n = node as Node | null;
     const at = place(n?.range?.[0] ?? 0);
@@ -68,14 +69,7 @@ export function parseYamlAt(text: string, file: string, firstLine: number, first
     }
     if (n === null || n === undefined) return { kind: "scalar", value: null, text: "", at };
     if (isAlias(n)) {
-      diagnostics.push(
-        error(
-          at,
-          "yaml-alias",
-          "Cannot use YAML aliases (*name) in input blocks",
-          "write the value out in full",
-        ),
-      );
+      aliases.push(at);
       return undefined;
     }
     if (n.tag !== undefined && !n.tag.startsWith("tag:yaml.org,2002:")) {
@@ -125,10 +119,26 @@ export function parseYamlAt(text: string, file: string, firstLine: number, first
     return undefined;
   };
   const value = convert(doc.contents, 0);
+  const firstAlias = aliases[0];
+  if (firstAlias !== undefined) {
+    // One finding per block: an alias bomb repeats `*name` many times, and one line says it all.
+    const count = aliases.length > 1 ? ` (${aliases.length} aliases in this block)` : "";
+    diagnostics.push(
+      error(
+        firstAlias,
+        "yaml-alias",
+        `Cannot use YAML aliases (*name) in input blocks${count}`,
+        "write the value out in full",
+      ),
+    );
+  }
   if (diagnostics.length > 0 || value === undefined) return { ok: false, diagnostics };
   return { ok: true, value };
 }
 
 function firstSentence(message: string): string {
+  if (message.startsWith("Source contains multiple documents")) {
+    return "a line `---` starts a second YAML document; a block holds one mapping";
+  }
   return (message.split("\n", 1)[0] ?? message).replace(/ at line \d+, column \d+:?$/, "").replace(/\.$/, "");
 }

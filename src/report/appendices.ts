@@ -55,11 +55,17 @@ ${
 </section>`;
 }
 
-/** Renders Appendix B: the results JSON as escaped text. */
+function siNote(ctx: RenderContext): Trusted {
+  return ctx.display.system === "SI"
+    ? html``
+    : html`<p class="muted">In SI units, whatever the display units of the package.</p>`;
+}
+
+/** Renders Appendix B: the results JSON as escaped text (always SI). */
 export function renderResultsAppendix(ctx: RenderContext): Trusted {
   return html`
     <section id="s-b">
-      <h2>Appendix B Results (results.json)</h2>
+      <h2>Appendix B Results (results.json)</h2>${siNote(ctx)}
       <details>
         <summary>Machine-readable results, schema ${ctx.input.results.schema}</summary>
         <pre data-embedded="results-json">${PRE_LEAD}${ctx.input.resultsJsonText}</pre>

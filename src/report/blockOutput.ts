@@ -4,8 +4,9 @@ import { formatPosition } from "../project/position.ts";
 import { renderConstructionOutput } from "./constructionOutput.ts";
 import { html, PRE_LEAD, type Trusted } from "./html.ts";
 import type { RenderContext } from "./packageInput.ts";
-import { MATERIAL_TABLE_HEAD, materialTableRow } from "./materialRows.ts";
+import { materialTableHead, materialTableRow } from "./materialRows.ts";
 import { renderScenarioOutput } from "./scenarioOutput.ts";
+import { renderHeatingBlock } from "./heatingOutput.ts";
 
 type BlockSegment = Extract<Segment, { kind: "block" }>;
 
@@ -20,16 +21,20 @@ function unresolved(block: BlockSegment): Trusted {
 function materialOutput(block: BlockSegment, ctx: RenderContext): Trusted {
   const material = ctx.input.model.materials.find((m) => m.id === block.id && m.origin === "project");
   if (material === undefined) return unresolved(block);
+  const system = ctx.display.system === "SI" ? "SI units" : "IP units; results.json holds SI";
   return html`
     <table
       class="material-table"><caption>Material ${material
-        .id} as resolved (SI units)</caption>${MATERIAL_TABLE_HEAD}<tbody>${materialTableRow(
+        .id} as resolved (${system})</caption>${materialTableHead(ctx.display)}<tbody>${materialTableRow(
           material,
+          ctx.display,
         )}</tbody></table>
   `;
 }
 
 function scenarioOutput(block: BlockSegment, ctx: RenderContext): Trusted {
+  const heating = ctx.input.model.heatingScenarios?.find((s) => s.id === block.id);
+  if (heating !== undefined) return renderHeatingBlock(heating, ctx);
   const scenario = ctx.input.model.scenarios.find((s) => s.id === block.id);
   if (scenario === undefined) return unresolved(block);
   const anchor = ctx.scenarioAnchors.get(scenario.id) ?? "sc-scenario";
@@ -49,6 +54,7 @@ function scenarioOutput(block: BlockSegment, ctx: RenderContext): Trusted {
     assumptions: ctx.input.results.assumptions,
     constructionAnchors: ctx.constructionAnchors,
     anchor,
+    display: ctx.display,
   });
 }
 
@@ -59,7 +65,7 @@ function constructionOutput(block: BlockSegment, ctx: RenderContext): Trusted {
     ? ctx.input.results.constructions[construction.id]
     : undefined;
   const anchor = ctx.constructionAnchors.get(construction.id) ?? "c-construction";
-  return renderConstructionOutput(construction, results, ctx.input.results.checks, anchor);
+  return renderConstructionOutput(construction, results, ctx.input.results.checks, anchor, ctx.display);
 }
 
 function outputFor(block: BlockSegment, ctx: RenderContext): Trusted {

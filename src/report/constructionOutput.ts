@@ -1,14 +1,17 @@
 /** The computed output shown after a construction block: layer table, R and U, checks, section drawing. */
 import type { Construction, ResolvedLayer } from "../project/model.ts";
 import type { CheckResult, ConstructionResults } from "../results/types.ts";
+import { type DisplayUnits, siEquivalent, toDisplay, unitLabel } from "./displayUnits.ts";
 import { formatSig, formatTrim } from "./format.ts";
 import { html, type Trusted } from "./html.ts";
 import { renderDynamicResponse } from "./dynamicOutput.ts";
 import { renderSectionSvg } from "./sectionSvg.ts";
+import { bridgedLayerLabel, renderBridgedOutput } from "./bridgedOutput.ts";
+import { renderLimitsOutput } from "./limitsOutput.ts";
 
 const DASH = "—";
 
-function layerCells(layer: ResolvedLayer): Trusted {
+function layerCells(layer: ResolvedLayer, d: DisplayUnits): Trusted {
   if (layer.kind === "resistive") {
     return html`
       <td class="num">${DASH}</td>
@@ -18,34 +21,39 @@ function layerCells(layer: ResolvedLayer): Trusted {
     `;
   }
   return html`
-    <td class="num">${formatTrim(layer.thicknessM * 1000, 4)}</td>
-    <td class="num">${formatTrim(layer.conductivity, 4)}</td>
-    <td class="num">${formatTrim(layer.density, 4)}</td>
-    <td class="num">${formatTrim(layer.specificHeat, 4)}</td>
+    <td class="num">${formatTrim(toDisplay(d, "thickness", layer.thicknessM), 4)}</td>
+    <td class="num">${formatTrim(toDisplay(d, "conductivity", layer.conductivity), 4)}</td>
+    <td class="num">${formatTrim(toDisplay(d, "density", layer.density), 4)}</td>
+    <td class="num">${formatTrim(toDisplay(d, "specificHeat", layer.specificHeat), 4)}</td>
   `;
 }
 
-function layerRow(layer: ResolvedLayer, index: number, results: ConstructionResults | undefined): Trusted {
+function layerRow(
+  layer: ResolvedLayer,
+  index: number,
+  results: ConstructionResults | undefined,
+  d: DisplayUnits,
+): Trusted {
   const computed = results?.steady.layers[index];
-  const r = computed === undefined ? DASH : formatSig(computed.R, 3);
+  const r = computed === undefined ? DASH : formatSig(toDisplay(d, "resistance", computed.R), 3);
   const kappa = computed === undefined
     ? DASH
     : computed.arealHeatCapacity === 0
     ? "0"
-    : formatSig(computed.arealHeatCapacity / 1000, 3);
-  const material = layer.materialId === undefined
+    : formatSig(toDisplay(d, "arealHeatCapacity", computed.arealHeatCapacity), 3);
+  const material = bridgedLayerLabel(layer) ?? (layer.materialId === undefined
     ? html`
       <span class="muted">(inline)</span>
     `
     : html`
       <span class="muted">(${layer.materialId})</span>
-    `;
+    `);
   return html`<tr><td class="num">${String(index + 1)}</td><td>${layer.name}${material}</td>${
-    layerCells(layer)
+    layerCells(layer, d)
   }<td class="num">${r}</td><td class="num">${kappa}</td></tr>`;
 }
 
-function surfaceRow(label: string, value: number, defaulted: boolean): Trusted {
+function surfaceRow(label: string, value: number, defaulted: boolean, d: DisplayUnits): Trusted {
   const basis = defaulted ? "(default, ISO 6946)" : "(given in the input)";
   return html`
     <tr>
@@ -55,13 +63,13 @@ function surfaceRow(label: string, value: number, defaulted: boolean): Trusted {
       <td class="num">${DASH}</td>
       <td class="num">${DASH}</td>
       <td class="num">${DASH}</td>
-      <td class="num">${formatTrim(value, 4)}</td>
+      <td class="num">${formatTrim(toDisplay(d, "resistance", value), 4)}</td>
       <td class="num">0</td>
     </tr>
   `;
 }
 
-function totalRows(results: ConstructionResults | undefined): Trusted {
+function totalRows(results: ConstructionResults | undefined, d: DisplayUnits): Trusted {
   if (results === undefined) {
     return html`
       <tr class="total">
@@ -72,16 +80,31 @@ function totalRows(results: ConstructionResults | undefined): Trusted {
   return html`
     <tr class="total">
       <td></td>
-      <td>Total resistance R, air to air (m²·K/W)</td>
+      <td>Total resistance R, air to air (${unitLabel(d, "resistance")})</td>
       <td colspan="4"></td>
-      <td class="num">${formatSig(results.R, 3)}</td>
-      <td class="num">${formatSig(results.steady.arealHeatCapacity / 1000, 3)}</td>
+      <td class="num">${formatSig(toDisplay(d, "resistance", results.R), 3)}${siEquivalent(
+        d,
+        "resistance",
+        results.R,
+        (v) => formatSig(v, 3),
+        true,
+      )}</td>
+      <td class="num">${formatSig(
+        toDisplay(d, "arealHeatCapacity", results.steady.arealHeatCapacity),
+        3,
+      )}</td>
     </tr>
     <tr class="total">
       <td></td>
-      <td>Thermal transmittance U = 1/R (W/(m²·K))</td>
+      <td>Thermal transmittance U = 1/R (${unitLabel(d, "transmittance")})</td>
       <td colspan="4"></td>
-      <td class="num">${formatSig(results.U, 3)}</td>
+      <td class="num">${formatSig(toDisplay(d, "transmittance", results.U), 3)}${siEquivalent(
+        d,
+        "transmittance",
+        results.U,
+        (v) => formatSig(v, 3),
+        true,
+      )}</td>
       <td></td>
     </tr>
   `;
@@ -131,15 +154,32 @@ export function checksTable(
   `;
 }
 
+function uLine(
+  construction: Construction,
+  results: ConstructionResults | undefined,
+  d: DisplayUnits,
+): Trusted {
+  if (results === undefined) return html``;
+  const sig3 = (v: number) => formatSig(v, 3);
+  return html`<p><strong>U = ${formatSig(toDisplay(d, "transmittance", results.U), 3)} ${
+    unitLabel(d, "transmittance")
+  }</strong>${siEquivalent(d, "transmittance", results.U, sig3)} (R = ${
+    formatSig(toDisplay(d, "resistance", results.R), 3)
+  } ${unitLabel(d, "resistance")}${
+    siEquivalent(d, "resistance", results.R, sig3)
+  }, heat flow ${construction.heatFlow})</p>`;
+}
+
 /**
  * Renders the output of a construction block, reading R, U and the dynamic response from its results
- * entry; `anchor` is the block's fragment id, used to keep the plots' ids unique.
+ * entry, in the display units `d`; `anchor` is the block's fragment id, used to keep the plots' ids unique.
  */
 export function renderConstructionOutput(
   construction: Construction,
   results: ConstructionResults | undefined,
   checks: readonly CheckResult[],
-  anchor = "c-construction",
+  anchor: string,
+  d: DisplayUnits,
 ): Trusted {
   const countMismatch = results !== undefined && results.steady.layers.length !== construction.layers.length
     ? html`
@@ -149,11 +189,6 @@ export function renderConstructionOutput(
         )} layers but the input has ${String(construction.layers.length)}: the table cannot be trusted.</p>
     `
     : html``;
-  const uLine = results === undefined
-    ? html``
-    : html`<p><strong>U = ${formatSig(results.U, 3)} W/(m²·K)</strong> (R = ${
-      formatSig(results.R, 3)
-    } m²·K/W, heat flow ${construction.heatFlow})</p>`;
   return html`
     <table class="layer-table">
       <caption>Construction ${construction.id}: ${construction
@@ -162,12 +197,12 @@ export function renderConstructionOutput(
         <tr>
           <th>No.</th>
           <th>Layer</th>
-          <th>Thickness mm</th>
-          <th>λ W/(m·K)</th>
-          <th>ρ kg/m³</th>
-          <th>c J/(kg·K)</th>
-          <th>R m²·K/W</th>
-          <th>Areal heat capacity kJ/(m²·K)</th>
+          <th>Thickness ${unitLabel(d, "thickness")}</th>
+          <th>λ ${unitLabel(d, "conductivity")}</th>
+          <th>ρ ${unitLabel(d, "density")}</th>
+          <th>c ${unitLabel(d, "specificHeat")}</th>
+          <th>R ${unitLabel(d, "resistance")}</th>
+          <th>Areal heat capacity ${unitLabel(d, "arealHeatCapacity")}</th>
         </tr>
       </thead>
       <tbody>
@@ -175,19 +210,21 @@ export function renderConstructionOutput(
       "Outside surface resistance R_se",
       results?.steady.outsideSurfaceResistance ?? construction.outsideResistance,
       construction.outsideResistanceDefaulted,
+      d,
     )}
-    ${construction.layers.map((layer, i) => layerRow(layer, i, results))}
+    ${construction.layers.map((layer, i) => layerRow(layer, i, results, d))}
     ${surfaceRow(
       "Inside surface resistance R_si",
       results?.steady.insideSurfaceResistance ?? construction.insideResistance,
       construction.insideResistanceDefaulted,
+      d,
     )}
-    ${totalRows(results)}
+    ${totalRows(results, d)}
       </tbody>
     </table>
-    ${countMismatch}
-    ${uLine}
-    <figure>${renderSectionSvg(construction)}<figcaption>Section of ${construction
+    ${countMismatch}${renderBridgedOutput(results, d)}
+    ${uLine(construction, results, d)}${renderLimitsOutput(results)}
+    <figure>${renderSectionSvg(construction, d)}<figcaption>Section of ${construction
       .id}, drawn from outside (left) to inside (right); numbers refer to the table above.</figcaption></figure>
     ${renderDynamicResponse(
       construction,
@@ -195,6 +232,7 @@ export function renderConstructionOutput(
       checks,
       anchor,
       subjectChecks(checks, `construction:${construction.id}`),
+      d,
     )}
   `;
 }

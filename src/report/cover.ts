@@ -2,6 +2,7 @@
 import type { ProjectStatus } from "../project/model.ts";
 import { html, type Trusted } from "./html.ts";
 import type { PackageInput } from "./packageInput.ts";
+import { limitsCoverLine } from "./limitsOutput.ts";
 
 /** Printed status word of each project status. */
 export const STATUS_LABEL: Readonly<Record<ProjectStatus, string>> = {
@@ -93,7 +94,7 @@ ${signOffRow("Approved by", info.approvedBy)}
 <tr><th scope="row">Tool</th><td>fluxnote ${input.toolVersion}</td></tr>
 </table>
 ${independence}
-${checkSummary(input)}
+${checkSummary(input)}${limitsCoverLine(input)}
 ${findingSummary(input)}
 </section>`;
 }

@@ -1,6 +1,7 @@
 /** CTF coefficients of a construction by both methods, or the reason a polynomial form was rejected. */
 import type { CheckResult } from "../results/types.ts";
 import type { DynamicView } from "./dynamicData.ts";
+import { type DisplayUnits, toDisplay, unitLabel } from "./displayUnits.ts";
 import { formatSig, formatTrim } from "./format.ts";
 import { html, joinHtml, raw, type Trusted } from "./html.ts";
 
@@ -26,24 +27,31 @@ interface MethodCtf {
   readonly ctf: CtfJson;
 }
 
-function coefficientRow(n: number, method: MethodCtf, first: boolean, methods: number): Trusted {
+function coefficientRow(
+  n: number,
+  method: MethodCtf,
+  first: boolean,
+  methods: number,
+  d: DisplayUnits,
+): Trusted {
   const { ctf } = method;
   const cell = (v: number | undefined) =>
     html`<td class="num">${v === undefined ? "—" : formatSig(v, CTF_DIGITS)}</td>`;
+  const scaled = (v: number | undefined) => v === undefined ? undefined : toDisplay(d, "transmittance", v);
   const index = first ? html`<td class="num" rowspan="${String(methods)}">${String(n)}</td>` : html``;
   return html`<tr class="${first ? "group-start" : "second-method"}">${index}<td>${method.label}</td>${
-    cell(ctf.X[n])
-  }${cell(ctf.Y[n])}${cell(ctf.Z[n])}${cell(n === 0 ? undefined : ctf.Phi[n - 1])}</tr>`;
+    cell(scaled(ctf.X[n]))
+  }${cell(scaled(ctf.Y[n]))}${cell(scaled(ctf.Z[n]))}${cell(n === 0 ? undefined : ctf.Phi[n - 1])}</tr>`;
 }
 
 /** One table with the accepted methods' coefficients on alternate rows, so each n reads side by side. */
-function coefficientTable(methods: readonly MethodCtf[], caption: Trusted): Trusted {
+function coefficientTable(methods: readonly MethodCtf[], caption: Trusted, d: DisplayUnits): Trusted {
   const rows = Math.max(
     ...methods.map(({ ctf }) => Math.max(ctf.X.length, ctf.Y.length, ctf.Z.length, ctf.Phi.length + 1)),
   );
   const body = Array.from(
     { length: rows },
-    (_, n) => methods.map((m, k) => coefficientRow(n, m, k === 0, methods.length)),
+    (_, n) => methods.map((m, k) => coefficientRow(n, m, k === 0, methods.length, d)),
   ).flat();
   return html`
     <table class="ctf-table">
@@ -98,7 +106,14 @@ function stateSpaceCaption(ctf: CtfJson & { readonly cellsPerLayer: readonly num
   } poles; cells per layer, outside to inside: ${cells} (0 = resistive layer).`;
 }
 
-function coefficients(view: DynamicView): Trusted {
+/** In IP only, the units of the coefficients (the SI caption has always left them to section 1). */
+function coefficientUnits(d: DisplayUnits): string {
+  return d.system === "SI"
+    ? ""
+    : ` X_n, Y_n and Z_n in ${unitLabel(d, "transmittance")} (converted like U); Φ_n has no unit.`;
+}
+
+function coefficients(view: DynamicView, d: DisplayUnits): Trusted {
   const methods: MethodCtf[] = [];
   const captions: Trusted[] = [];
   if (view.ctf !== null) {
@@ -114,12 +129,21 @@ function coefficients(view: DynamicView): Trusted {
     methods,
     html`CTF coefficients, air to air, Δ = ${formatTrim(view.timestep_h, 4)} h. ${
       joinHtml(captions, raw(" "))
-    }`,
+    }${coefficientUnits(d)}`,
+    d,
   );
 }
 
-/** Both CTF sets side by side, each replaced by its rejection note and failed checks when null. */
-export function ctfSection(view: DynamicView, checks: readonly CheckResult[], subject: string): Trusted {
+/**
+ * Both CTF sets side by side (X, Y, Z in the display unit of U, Φ without unit), each replaced by its
+ * rejection note and failed checks when null.
+ */
+export function ctfSection(
+  view: DynamicView,
+  checks: readonly CheckResult[],
+  subject: string,
+  d: DisplayUnits,
+): Trusted {
   const modal = view.ctf === null
     ? html`<p>Modal form: ${
       String(view.modal.ratios.length)
@@ -129,7 +153,7 @@ export function ctfSection(view: DynamicView, checks: readonly CheckResult[], su
     <p>Recurrence for the inside flux: q_i,t = Σ_n Y_n T_o,t−n − Σ_n Z_n T_i,t−n + Σ_(n≥1) Φ_n q_i,t−n (outside flux with X_n and Y_n in the same way). CTF sets are not unique: the two methods give different coefficients for the same response, so compare their response factors (check <code>state-space-agreement</code>), not the coefficients. Coefficients printed to ${String(
       CTF_DIGITS,
     )} significant figures; full precision in Appendix B.</p>
-    ${coefficients(view)}
+    ${coefficients(view, d)}
     ${view.ctf === null ? rejection("Root method", checks, subject, "root") : html``}
     ${view.ctfStateSpace === null ? rejection("State-space method", checks, subject, "stateSpace") : html``}
     ${modal}

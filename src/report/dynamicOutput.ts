@@ -12,6 +12,7 @@ import {
   symlogConstant,
 } from "./dynamicPlots.ts";
 import { dynamicSummaryTable, periodicTable, responseFactorTable } from "./dynamicTables.ts";
+import { type DisplayUnits, toDisplay, unitLabel } from "./displayUnits.ts";
 import { formatFixed, formatSig, formatTrim } from "./format.ts";
 import { html, type Trusted } from "./html.ts";
 
@@ -26,18 +27,19 @@ function figure(svg: Trusted, title: string, caption: Trusted): Trusted {
   `;
 }
 
-function plots(construction: Construction, view: DynamicView, prefix: string): Trusted {
+function plots(construction: Construction, view: DynamicView, prefix: string, d: DisplayUnits): Trusted {
   const steps = stepResponse(view.responseFactors.Y);
-  const last = steps[steps.length - 1] ?? NaN;
+  const last = toDisplay(d, "transmittance", steps[steps.length - 1] ?? NaN);
+  const perDegree = unitLabel(d, "transmittance");
   return html`
     ${figure(
-      responseFactorPlot(view, prefix),
+      responseFactorPlot(view, prefix, d),
       `Response factors of ${construction.id}, first ${String(RESPONSE_FACTOR_WINDOW_H)} h.`,
       html`${key("X", "X_j outside")}, ${key("Y", "Y_j cross")}, ${
         key("Z", "Z_j inside")
       }. Vertical scale symmetric-logarithmic (linear within ±${
-        formatTrim(symlogConstant(view.U), 1)
-      } W/(m²·K)), because X₀ and Z₀ dwarf the later terms. ${construction.name}.`,
+        formatTrim(symlogConstant(toDisplay(d, "transmittance", view.U)), 1)
+      } ${perDegree}), because X₀ and Z₀ dwarf the later terms. ${construction.name}.`,
     )}
     ${figure(
       ctsPlot(view, prefix),
@@ -47,23 +49,25 @@ function plots(construction: Construction, view: DynamicView, prefix: string): T
       } %. ${construction.name}.`,
     )}
     ${figure(
-      stepResponsePlot(view, prefix),
+      stepResponsePlot(view, prefix, d),
       `Step response of ${construction.id}.`,
-      html`Inside heat flux after a 1 K step of outside temperature at t = 0 (running sum of Y_j, inputs linear between samples); dashed line U. Sum of all ${
+      html`Inside heat flux after a 1 ${
+        unitLabel(d, "temperatureDifference")
+      } step of outside temperature at t = 0 (running sum of Y_j, inputs linear between samples); dashed line U. Sum of all ${
         String(steps.length)
-      } terms: ${formatSig(last, 6)} W/(m²·K). ${construction.name}.`,
+      } terms: ${formatSig(last, 6)} ${perDegree}. ${construction.name}.`,
     )}
   `;
 }
 
-function surfaceLine(view: DynamicView): Trusted {
+function surfaceLine(view: DynamicView, d: DisplayUnits): Trusted {
   const s = view.surfaceToSurface;
   return html`
     <p
       class="muted">Surface to surface (no surface resistances, for heat-balance use): U_s = ${formatSig(
-        s.U,
+        toDisplay(d, "transmittance", s.U),
         3,
-      )} W/(m²·K), ${String(
+      )} ${unitLabel(d, "transmittance")}, ${String(
         s.responseFactors.Y.length,
       )} response-factor terms, truncation residual ${formatSig(
         s.responseFactors.truncationResidual,
@@ -75,8 +79,8 @@ function surfaceLine(view: DynamicView): Trusted {
 }
 
 /**
- * Renders the dynamic response of one construction from its results.json entry; `anchor` prefixes the
- * plots' ids, `checksList` is the construction's list of checks, shown at the end.
+ * Renders the dynamic response of one construction from its results.json entry in the display units `d`;
+ * `anchor` prefixes the plots' ids, `checksList` is the construction's list of checks, shown at the end.
  */
 export function renderDynamicResponse(
   construction: Construction,
@@ -84,21 +88,22 @@ export function renderDynamicResponse(
   checks: readonly CheckResult[],
   anchor: string,
   checksList: Trusted,
+  d: DisplayUnits,
 ): Trusted {
   const view = readDynamic(results);
   const subject = `construction:${construction.id}`;
   const body = view === undefined
     ? html`<p class="fail">No dynamic results: results.json holds no complete dynamic entry for ${construction.id}.</p>`
     : html`
-      ${dynamicSummaryTable(view)}
+      ${dynamicSummaryTable(view, d)}
       <h5>Response factors</h5>
-      ${responseFactorTable(view)}
-      ${surfaceLine(view)}
+      ${responseFactorTable(view, d)}
+      ${surfaceLine(view, d)}
       <h5>Conduction transfer functions</h5>
-      ${ctfSection(view, checks, subject)}
+      ${ctfSection(view, checks, subject, d)}
       <h5>Periodic response factors and conduction time series</h5>
-      ${periodicTable(view)}
-      ${plots(construction, view, `${anchor}-fig`)}
+      ${periodicTable(view, d)}
+      ${plots(construction, view, `${anchor}-fig`, d)}
     `;
   return html`
     <div class="dynamic-response">

@@ -2,6 +2,7 @@
 import * as Plot from "@observablehq/plot";
 import { stepResponse } from "./dynamicData.ts";
 import type { DynamicView } from "./dynamicData.ts";
+import { type DisplayUnits, toDisplay, unitLabel } from "./displayUnits.ts";
 import { formatTrim, THIN_SPACE } from "./format.ts";
 import type { Trusted } from "./html.ts";
 import { renderPlotSvg } from "./plotSvg.ts";
@@ -28,14 +29,22 @@ interface Point {
 
 const tick = (d: number) => formatTrim(d, 3);
 
-/** Points (jΔ, values[j]) for jΔ ≤ windowH, thinned to at most MAX_POINTS but always keeping the last. */
-function points(values: readonly number[], timestepH: number, windowH: number): Point[] {
+/**
+ * Points (jΔ, scale(values[j])) for jΔ ≤ windowH, thinned to at most MAX_POINTS but always keeping the last;
+ * `scale` converts to the display unit.
+ */
+function points(
+  values: readonly number[],
+  timestepH: number,
+  windowH: number,
+  scale: (si: number) => number,
+): Point[] {
   const last = Math.min(values.length - 1, Math.floor(windowH / timestepH + 1e-9));
   const stride = Math.max(1, Math.ceil((last + 1) / MAX_POINTS));
   const out: Point[] = [];
-  for (let j = 0; j <= last; j += stride) out.push({ t: j * timestepH, v: values[j]! });
+  for (let j = 0; j <= last; j += stride) out.push({ t: j * timestepH, v: scale(values[j]!) });
   if (out.length > 0 && out[out.length - 1]!.t !== last * timestepH) {
-    out.push({ t: last * timestepH, v: values[last]! });
+    out.push({ t: last * timestepH, v: scale(values[last]!) });
   }
   return out;
 }
@@ -61,17 +70,18 @@ export function symlogConstant(u: number): number {
   return Number(`1e${Math.floor(Math.log10(u / 20))}`);
 }
 
-/** Response factors X, Y, Z against time jΔ over the first 48 h on a symmetric-log scale. */
-export function responseFactorPlot(view: DynamicView, idPrefix: string): Trusted {
+/** Response factors X, Y, Z (display unit of U) against time jΔ over the first 48 h on a symmetric-log scale. */
+export function responseFactorPlot(view: DynamicView, idPrefix: string, d: DisplayUnits): Trusted {
   const rf = view.responseFactors;
+  const scale = (si: number) => toDisplay(d, "transmittance", si);
   const series = (["X", "Y", "Z"] as const).map((key) => ({
     key,
-    data: points(rf[key], view.timestep_h, RESPONSE_FACTOR_WINDOW_H),
+    data: points(rf[key], view.timestep_h, RESPONSE_FACTOR_WINDOW_H, scale),
   }));
   const all = series.flatMap((s) => s.data.map((p) => p.v));
   const min = all.reduce((m, v) => Math.min(m, v), 0);
   const max = all.reduce((m, v) => Math.max(m, v), 0);
-  const constant = symlogConstant(view.U);
+  const constant = symlogConstant(scale(view.U));
   const dots = series[0]!.data.length <= 60;
   const marks = series.flatMap(({ key, data }) => [
     Plot.line(data, {
@@ -100,7 +110,7 @@ export function responseFactorPlot(view: DynamicView, idPrefix: string): Trusted
         ticks: symlogTicks(constant, min, max),
         tickFormat: tick,
         grid: true,
-        label: "Response factor, W/(m²·K)",
+        label: `Response factor, ${unitLabel(d, "transmittance")}`,
         labelArrow: "none",
       },
       marks: [Plot.ruleY([0], { stroke: "#777" }), ...marks],
@@ -110,7 +120,7 @@ export function responseFactorPlot(view: DynamicView, idPrefix: string): Trusted
   );
 }
 
-/** The conduction time series as 24 bars, hour 0 to 23, in percent of the total. */
+/** The conduction time series as 24 bars, hour 0 to 23, in percent of the total (the same in every unit system). */
 export function ctsPlot(view: DynamicView, idPrefix: string): Trusted {
   const data = view.cts.map((c, j) => ({ j, percent: c * 100 }));
   return renderPlotSvg(
@@ -138,28 +148,35 @@ export function stepWindowH(steps: readonly number[], u: number, timestepH: numb
   return Math.min(STEP_WINDOW_MAX_H, Math.max(STEP_WINDOW_MIN_H, Math.ceil(settled / 12) * 12));
 }
 
-/** Inside flux after a 1 K step of outside temperature (running sum of Y_j), with U as a reference line. */
-export function stepResponsePlot(view: DynamicView, idPrefix: string): Trusted {
+/**
+ * Inside flux after a unit step of outside temperature (running sum of Y_j), with U as a reference line, in
+ * the display unit of U.
+ */
+export function stepResponsePlot(view: DynamicView, idPrefix: string, d: DisplayUnits): Trusted {
   const steps = stepResponse(view.responseFactors.Y);
   const windowH = stepWindowH(steps, view.U, view.timestep_h);
-  const data = points(steps, view.timestep_h, windowH);
-  const uText = `U = ${formatTrim(view.U, 3)}${THIN_SPACE}W/(m²·K)`;
+  const scale = (si: number) => toDisplay(d, "transmittance", si);
+  const data = points(steps, view.timestep_h, windowH, scale);
+  const u = scale(view.U);
+  const perDegree = unitLabel(d, "transmittance");
+  const step = unitLabel(d, "temperatureDifference");
+  const uText = `U = ${formatTrim(u, 3)}${THIN_SPACE}${perDegree}`;
   return renderPlotSvg(
     finish({
       marginLeft: 62,
       x: { label: "Time after the step, t (h)", labelAnchor: "center", labelArrow: "none", tickFormat: tick },
       y: {
-        label: "Inside heat flux per K, W/(m²·K)",
+        label: `Inside heat flux per ${step}, ${perDegree}`,
         labelArrow: "none",
         grid: true,
-        domain: [0, view.U * 1.12],
+        domain: [0, u * 1.12],
         tickFormat: tick,
       },
       marks: [
-        Plot.ruleY([view.U], { stroke: "#a40000", strokeDasharray: "5 4" }),
+        Plot.ruleY([u], { stroke: "#a40000", strokeDasharray: "5 4" }),
         Plot.text([uText], {
           x: data[data.length - 1]?.t ?? 0,
-          y: view.U,
+          y: u,
           dy: -8,
           textAnchor: "end",
           fill: "#a40000",
@@ -169,6 +186,6 @@ export function stepResponsePlot(view: DynamicView, idPrefix: string): Trusted {
       ],
     }),
     `${idPrefix}-step`,
-    "Step response of the inside heat flux to a 1 K step of outside temperature",
+    `Step response of the inside heat flux to a 1 ${step} step of outside temperature`,
   );
 }

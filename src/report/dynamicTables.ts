@@ -1,6 +1,7 @@
 /** Tables of a construction's dynamic response: summary, response factors, periodic factors and CTS. */
 import type { DynamicView } from "./dynamicData.ts";
 import { seriesSum } from "./dynamicData.ts";
+import { type DisplayUnits, toDisplay, unitLabel } from "./displayUnits.ts";
 import { formatFixed, formatSig, formatTrim } from "./format.ts";
 import { html, type Trusted } from "./html.ts";
 
@@ -34,15 +35,18 @@ function lagNote(view: DynamicView): Trusted {
   `;
 }
 
-/** Summary: U, τ1, poles, time step, response-factor terms and residual, ISO 13786 characteristics. */
-export function dynamicSummaryTable(view: DynamicView): Trusted {
+/** Summary in the display units: U, τ1, poles, time step, response-factor terms and residual, ISO 13786 characteristics. */
+export function dynamicSummaryTable(view: DynamicView, d: DisplayUnits): Trusted {
+  const perDegree = unitLabel(d, "transmittance");
+  const u = (si: number) => formatSig(toDisplay(d, "transmittance", si), 3);
+  const kappa = (si: number) => formatSig(toDisplay(d, "arealHeatCapacity", si), 3);
   const betas = view.poles.betas_per_h;
   const range = betas.length === 0
     ? "none (no heat storage)"
     : `${formatSig(betas[0]!, 3)} to ${formatSig(betas[betas.length - 1]!, 3)} 1/h`;
-  const d = view.dynamic;
+  const iso13786 = view.dynamic;
   const method: Row[] = [
-    ["Thermal transmittance, air to air", "U", formatSig(view.U, 3), "W/(m²·K)"],
+    ["Thermal transmittance, air to air", "U", u(view.U), perDegree],
     ["First time constant, 1/β₁", "τ₁", formatSig(view.tau1_h, 3), "h"],
     ["Poles used (zeros of B(s) at s = −β)", "N", String(view.poles.count), `β from ${range}`],
     ["Time step", "Δ", formatTrim(view.timestep_h, 4), "h"],
@@ -55,21 +59,36 @@ export function dynamicSummaryTable(view: DynamicView): Trusted {
     ],
   ];
   const iso: Row[] = [
-    ["Periodic thermal transmittance", "|Y₁₂|", formatSig(d.periodicTransmittance.amplitude, 3), "W/(m²·K)"],
+    ["Periodic thermal transmittance", "|Y₁₂|", u(iso13786.periodicTransmittance.amplitude), perDegree],
     [
       "Time shift of Y₁₂ (negative = lag, unwrapped)",
       "Δt₁₂",
-      formatSig(d.periodicTransmittance.timeShift_h, 3),
+      formatSig(iso13786.periodicTransmittance.timeShift_h, 3),
       "h",
     ],
-    ["Decrement factor |Y₁₂| / U", "f", formatSig(d.decrementFactor, 3), "–"],
-    ["Time lag, unwrapped from ω → 0", "φ", formatSig(d.timeLag_h, 3), "h"],
-    ["Inside admittance", "|Y₁₁|", formatSig(d.admittanceInside.amplitude, 3), "W/(m²·K)"],
-    ["Time shift of Y₁₁ (positive = lead)", "Δt₁₁", formatSig(d.admittanceInside.timeShift_h, 3), "h"],
-    ["Outside admittance", "|Y₂₂|", formatSig(d.admittanceOutside.amplitude, 3), "W/(m²·K)"],
-    ["Time shift of Y₂₂ (positive = lead)", "Δt₂₂", formatSig(d.admittanceOutside.timeShift_h, 3), "h"],
-    ["Areal heat capacity, inside", "κ₁", formatSig(d.arealHeatCapacityInside / 1000, 3), "kJ/(m²·K)"],
-    ["Areal heat capacity, outside", "κ₂", formatSig(d.arealHeatCapacityOutside / 1000, 3), "kJ/(m²·K)"],
+    ["Decrement factor |Y₁₂| / U", "f", formatSig(iso13786.decrementFactor, 3), "–"],
+    ["Time lag, unwrapped from ω → 0", "φ", formatSig(iso13786.timeLag_h, 3), "h"],
+    ["Inside admittance", "|Y₁₁|", u(iso13786.admittanceInside.amplitude), perDegree],
+    ["Time shift of Y₁₁ (positive = lead)", "Δt₁₁", formatSig(iso13786.admittanceInside.timeShift_h, 3), "h"],
+    ["Outside admittance", "|Y₂₂|", u(iso13786.admittanceOutside.amplitude), perDegree],
+    [
+      "Time shift of Y₂₂ (positive = lead)",
+      "Δt₂₂",
+      formatSig(iso13786.admittanceOutside.timeShift_h, 3),
+      "h",
+    ],
+    [
+      "Areal heat capacity, inside",
+      "κ₁",
+      kappa(iso13786.arealHeatCapacityInside),
+      unitLabel(d, "arealHeatCapacity"),
+    ],
+    [
+      "Areal heat capacity, outside",
+      "κ₂",
+      kappa(iso13786.arealHeatCapacityOutside),
+      unitLabel(d, "arealHeatCapacity"),
+    ],
   ];
   return html`
     <table class="dynamic-summary">
@@ -88,18 +107,19 @@ export function dynamicSummaryTable(view: DynamicView): Trusted {
   `;
 }
 
-/** The first twelve response factors X_j, Y_j, Z_j with time jΔ, their sums over all terms and U. */
-export function responseFactorTable(view: DynamicView): Trusted {
+/** The first twelve response factors X_j, Y_j, Z_j with time jΔ, their sums over all terms and U, in display units. */
+export function responseFactorTable(view: DynamicView, d: DisplayUnits): Trusted {
   const rf = view.responseFactors;
+  const u = (si: number, digits: number) => formatSig(toDisplay(d, "transmittance", si), digits);
   const count = Math.min(PRINTED_TERMS, rf.Y.length);
   const rows = Array.from({ length: count }, (_, j) =>
     html`
       <tr>
         <td class="num">${String(j)}</td>
         <td class="num">${formatTrim(j * view.timestep_h, 4)}</td>
-        <td class="num">${formatSig(rf.X[j] ?? NaN, 4)}</td>
-        <td class="num">${formatSig(rf.Y[j] ?? NaN, 4)}</td>
-        <td class="num">${formatSig(rf.Z[j] ?? NaN, 4)}</td>
+        <td class="num">${u(rf.X[j] ?? NaN, 4)}</td>
+        <td class="num">${u(rf.Y[j] ?? NaN, 4)}</td>
+        <td class="num">${u(rf.Z[j] ?? NaN, 4)}</td>
       </tr>
     `);
   const more = rf.Y.length > count
@@ -115,7 +135,10 @@ export function responseFactorTable(view: DynamicView): Trusted {
     : html``;
   return html`
     <table class="rf-table">
-      <caption>Response factors, air to air, for a unit triangular temperature pulse of base 2Δ (W/(m²·K)); index j is the value at jΔ after the pulse peak.</caption>
+      <caption>Response factors, air to air, for a unit triangular temperature pulse of base 2Δ (${unitLabel(
+        d,
+        "transmittance",
+      )}); index j is the value at jΔ after the pulse peak.</caption>
       <thead>
         <tr>
           <th>j</th>
@@ -126,34 +149,35 @@ export function responseFactorTable(view: DynamicView): Trusted {
         </tr>
       </thead>
       <tbody>${rows}${more}
-        <tr class="total"><td colspan="2">Σ, all ${String(rf.Y.length)} terms</td><td class="num">${formatSig(
+        <tr class="total"><td colspan="2">Σ, all ${String(rf.Y.length)} terms</td><td class="num">${u(
           seriesSum(rf.X),
           6,
-        )}</td><td class="num">${formatSig(seriesSum(rf.Y), 6)}</td><td class="num">${formatSig(
+        )}</td><td class="num">${u(seriesSum(rf.Y), 6)}</td><td class="num">${u(
           seriesSum(rf.Z),
           6,
         )}</td></tr>
       </tbody>
     </table>
     <p
-      class="muted">… ${String(rf.Y.length)} terms in all per series; Σ = U = ${formatSig(
+      class="muted">… ${String(rf.Y.length)} terms in all per series; Σ = U = ${u(
         view.U,
         6,
-      )} W/(m²·K) within the truncation residual ${formatSig(
+      )} ${unitLabel(d, "transmittance")} within the truncation residual ${formatSig(
         rf.truncationResidual,
         2,
       )} (relative); full series in Appendix B (responseFactors).</p>
   `;
 }
 
-/** The 24-hour periodic response factors Y_P, X_P, Z_P and the CTS, hours 0–11 beside 12–23. */
-export function periodicTable(view: DynamicView): Trusted {
+/** The 24-hour periodic response factors Y_P, X_P, Z_P (display units) and the CTS, hours 0–11 beside 12–23. */
+export function periodicTable(view: DynamicView, d: DisplayUnits): Trusted {
+  const u = (si: number, digits: number) => formatSig(toDisplay(d, "transmittance", si), digits);
   const cell = (j: number) =>
     html`
       <td class="num">${String(j)}</td>
-      <td class="num">${formatSig(view.periodic[j] ?? NaN, 4)}</td>
-      <td class="num">${formatSig(view.periodicX[j] ?? NaN, 4)}</td>
-      <td class="num">${formatSig(view.periodicZ[j] ?? NaN, 4)}</td>
+      <td class="num">${u(view.periodic[j] ?? NaN, 4)}</td>
+      <td class="num">${u(view.periodicX[j] ?? NaN, 4)}</td>
+      <td class="num">${u(view.periodicZ[j] ?? NaN, 4)}</td>
       <td class="num">${formatFixed((view.cts[j] ?? NaN) * 100, 2)}</td>
     `;
   const rows = Array.from({ length: 12 }, (_, j) => html`<tr>${cell(j)}${cell(j + 12)}</tr>`);
@@ -166,18 +190,21 @@ export function periodicTable(view: DynamicView): Trusted {
   `;
   return html`
     <table class="periodic-table">
-      <caption>24-hour periodic response factors at 1 h (W/(m²·K)) and conduction time series (CTS = Y_P / U, %); hours 0–11 left, 12–23 right.</caption>
+      <caption>24-hour periodic response factors at 1 h (${unitLabel(
+        d,
+        "transmittance",
+      )}) and conduction time series (CTS = Y_P / U, %); hours 0–11 left, 12–23 right.</caption>
       <thead>
         <tr>${head}${head}</tr>
       </thead>
       <tbody>${rows}
-        <tr class="total"><td colspan="5">Σ over 24 h: Y_P ${formatSig(
+        <tr class="total"><td colspan="5">Σ over 24 h: Y_P ${u(
           seriesSum(view.periodic),
           6,
-        )}, CTS ${formatFixed(seriesSum(view.cts) * 100, 2)} %</td><td colspan="5">X_P ${formatSig(
+        )}, CTS ${formatFixed(seriesSum(view.cts) * 100, 2)} %</td><td colspan="5">X_P ${u(
           seriesSum(view.periodicX),
           6,
-        )}, Z_P ${formatSig(seriesSum(view.periodicZ), 6)}</td></tr>
+        )}, Z_P ${u(seriesSum(view.periodicZ), 6)}</td></tr>
       </tbody>
     </table>
   `;

@@ -1,25 +1,36 @@
-/** Table rows describing materials: properties in SI, source and origin. */
+/** Table rows describing materials: properties in the display units, source and origin. */
 import type { MaterialDef } from "../project/model.ts";
+import { type DisplayUnits, type QuantityKind, toDisplay, unitLabel } from "./displayUnits.ts";
 import { formatTrim } from "./format.ts";
-import { html, raw, type Trusted } from "./html.ts";
+import { escapeHtml, html, raw, type Trusted } from "./html.ts";
 
-/** Header row of a material table. */
-export const MATERIAL_TABLE_HEAD: Trusted = raw(
-  "<thead><tr><th>Id</th><th>Name</th><th>λ W/(m·K)</th><th>ρ kg/m³</th><th>c J/(kg·K)</th><th>R m²·K/W</th><th>Source</th><th>Origin</th></tr></thead>",
-);
-
-function cell(value: number | undefined): Trusted {
-  return html`<td class="num">${value === undefined ? "—" : formatTrim(value, 4)}</td>`;
+/** Header row of a material table, with the display units of λ, ρ, c and R. */
+export function materialTableHead(d: DisplayUnits): Trusted {
+  const heads = [
+    "Id",
+    "Name",
+    `λ ${unitLabel(d, "conductivity")}`,
+    `ρ ${unitLabel(d, "density")}`,
+    `c ${unitLabel(d, "specificHeat")}`,
+    `R ${unitLabel(d, "resistance")}`,
+    "Source",
+    "Origin",
+  ];
+  return raw(`<thead><tr>${heads.map((h) => `<th>${escapeHtml(h)}</th>`).join("")}</tr></thead>`);
 }
 
-/** One material as a table row; a missing source is shown as a visible gap. */
-export function materialTableRow(material: MaterialDef): Trusted {
+function cell(value: number | undefined, kind: QuantityKind, d: DisplayUnits): Trusted {
+  return html`<td class="num">${value === undefined ? "—" : formatTrim(toDisplay(d, kind, value), 4)}</td>`;
+}
+
+/** One material as a table row in the display units; a missing source is shown as a visible gap. */
+export function materialTableRow(material: MaterialDef, d: DisplayUnits): Trusted {
   const source = material.source.trim() === ""
     ? html`<span class="fail">no source given</span>`
     : html`${material.source}`;
-  return html`<tr><td>${material.id}</td><td>${material.name}</td>${cell(material.conductivity)}${
-    cell(material.density)
-  }${cell(material.specificHeat)}${
-    cell(material.resistance)
+  return html`<tr><td>${material.id}</td><td>${material.name}</td>${
+    cell(material.conductivity, "conductivity", d)
+  }${cell(material.density, "density", d)}${cell(material.specificHeat, "specificHeat", d)}${
+    cell(material.resistance, "resistance", d)
   }<td>${source}</td><td>${material.origin}</td></tr>`;
 }

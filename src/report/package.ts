@@ -88,7 +88,7 @@ export function renderPackage(input: PackageInput): string {
     ${renderCover(input)}
     ${renderContents(ctx)}
     <main>
-    ${renderScopeSection()}
+    ${renderScopeSection(ctx.display)}
     ${renderCalculationSection(ctx)}
     ${renderMethodSection(ctx)}
     ${renderChecksSection(ctx)}

@@ -2,6 +2,7 @@
 import type { Diagnostic } from "../project/diagnostic.ts";
 import type { Model } from "../project/model.ts";
 import type { ResultsJson } from "../results/types.ts";
+import { type DisplayUnits, displayUnitsFor } from "./displayUnits.ts";
 
 /** One input file of the project with its exact bytes and SHA-256 (hex). */
 export interface InputFile {
@@ -36,6 +37,8 @@ export interface PackageInput {
 /** Ids and anchors shared by the sections of one rendering. */
 export interface RenderContext {
   readonly input: PackageInput;
+  /** Display units chosen from the front matter's `units:`; results.json stays SI. */
+  readonly display: DisplayUnits;
   /** Ids used by prose headings (`u-` prefix). */
   readonly proseIds: Set<string>;
   /** Fragment id of each construction's output, `c-` prefix. */
@@ -63,6 +66,7 @@ function anchorsFor(ids: readonly string[], prefix: string, fallback: string): M
 export function makeRenderContext(input: PackageInput): RenderContext {
   return {
     input,
+    display: displayUnitsFor(input.model.info.units),
     proseIds: new Set<string>(),
     constructionAnchors: anchorsFor(input.model.constructions.map((c) => c.id), "c", "construction"),
     scenarioAnchors: anchorsFor(input.model.scenarios.map((s) => s.id), "sc", "scenario"),

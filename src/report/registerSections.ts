@@ -1,7 +1,7 @@
 /** Sections 5 to 7: the assumptions register, the materials used with their sources, and the sources. */
 import type { MaterialDef } from "../project/model.ts";
 import { html, type Trusted } from "./html.ts";
-import { MATERIAL_TABLE_HEAD, materialTableRow } from "./materialRows.ts";
+import { materialTableHead, materialTableRow } from "./materialRows.ts";
 import type { RenderContext } from "./packageInput.ts";
 
 /** Renders section 5, one row per assumption. */
@@ -29,9 +29,12 @@ export function renderAssumptionsSection(ctx: RenderContext): Trusted {
       )}</tbody>
     </table>
   `;
+  const siNote = ctx.display.system === "SI" ? html`` : html`
+    <p class="muted">The statements are quoted as recorded in results.json, so their values are in SI units.</p>
+  `;
   return html`<section id="s-5"><h2>5 Assumptions register</h2>
 <p>Every value the tool filled in or chose, with its basis and the input line it applies to.</p>
-${body}
+${siNote}${body}
 </section>`;
 }
 
@@ -53,7 +56,9 @@ export function renderMaterialsSection(ctx: RenderContext): Trusted {
   const unused = ctx.input.model.materials.filter((m) => m.origin === "project" && !used.includes(m));
   const table = used.length === 0
     ? html`<p>No named material is used by a construction.</p>`
-    : html`<table>${MATERIAL_TABLE_HEAD}<tbody>${used.map(materialTableRow)}</tbody></table>`;
+    : html`<table>${materialTableHead(ctx.display)}<tbody>${
+      used.map((m) => materialTableRow(m, ctx.display))
+    }</tbody></table>`;
   const unusedNote = unused.length === 0
     ? html``
     : html`<p class="muted">Defined in the project but not used by any construction: ${

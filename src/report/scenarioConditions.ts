@@ -1,10 +1,10 @@
 /** The conditions of a scenario as the computation used them: the day or year, the site, the sky, and each surface. */
 import type { Assumption, Scenario, ScenarioSurface, Site, TemperatureProfile } from "../project/model.ts";
 import type { ScenarioResults, SurfaceResults } from "../results/types.ts";
+import { type DisplayUnits, toDisplay, unitLabel } from "./displayUnits.ts";
 import { formatFixed, formatSig, formatTrim, MINUS } from "./format.ts";
 import { html, type Trusted } from "./html.ts";
 import {
-  J_PER_KWH,
   MONTH_NAMES,
   numberKey,
   objectKey,
@@ -30,23 +30,25 @@ export function stepText(timestepH: number): string {
   return timestepH < 1 ? `${formatTrim(timestepH * 60, 4)} min` : `${formatTrim(timestepH, 4)} h`;
 }
 
-function siteText(site: Site | undefined): string {
+function siteText(site: Site | undefined, d: DisplayUnits): string {
   if (site === undefined) return "Not given (no sun position is needed without a sky model).";
   const elevation = site.elevationM === undefined
     ? "elevation not given"
-    : `elevation ${formatTrim(site.elevationM, 5)} m`;
+    : `elevation ${formatTrim(toDisplay(d, "length", site.elevationM), 5)} ${unitLabel(d, "length")}`;
   return `Latitude ${signedDeg(site.latitudeDeg, "N", "S")}, longitude ${
     signedDeg(site.longitudeDeg, "E", "W")
   }, time zone ${utcOffset(site.timeZoneH)}, ${elevation}.`;
 }
 
-function temperatureText(profile: TemperatureProfile): string {
-  if (profile.kind === "constant") return `${formatTrim(profile.valueC, 4)} °C at every step.`;
+function temperatureText(profile: TemperatureProfile, d: DisplayUnits): string {
+  const t = (c: number) => toDisplay(d, "temperature", c);
+  const unit = unitLabel(d, "temperature");
+  if (profile.kind === "constant") return `${formatTrim(t(profile.valueC), 4)} ${unit} at every step.`;
   const min = Math.min(...profile.hourlyC);
   const max = Math.max(...profile.hourlyC);
-  return `24 hourly values given in the input (${formatFixed(min, 1)} to ${
-    formatFixed(max, 1)
-  } °C), linear between hours.`;
+  return `24 hourly values given in the input (${formatFixed(t(min), 1)} to ${
+    formatFixed(t(max), 1)
+  } ${unit}), linear between hours.`;
 }
 
 function noteStarting(notes: readonly string[], start: string): string {
@@ -65,11 +67,14 @@ function row(label: string, value: Trusted | string): Trusted {
 function designDayRows(
   scenario: Extract<Scenario, { kind: "design-day" }>,
   results: ScenarioResults,
+  d: DisplayUnits,
 ): Trusted[] {
   const outdoor = scenario.outdoor.kind === "daily-range"
-    ? `Maximum dry bulb ${formatTrim(scenario.outdoor.maxDryBulbC, 4)} °C, daily range ${
-      formatTrim(scenario.outdoor.dailyRangeK, 4)
-    } K. ${noteStarting(results.notes, "Outdoor dry bulb:")}`
+    ? `Maximum dry bulb ${formatTrim(toDisplay(d, "temperature", scenario.outdoor.maxDryBulbC), 4)} ${
+      unitLabel(d, "temperature")
+    }, daily range ${formatTrim(toDisplay(d, "temperatureDifference", scenario.outdoor.dailyRangeK), 4)} ${
+      unitLabel(d, "temperatureDifference")
+    }. ${noteStarting(results.notes, "Outdoor dry bulb:")}`
     : `24 hourly dry-bulb values given in the input, linear between hours.`;
   const sky = scenario.sky.kind === "none"
     ? "None: no solar irradiance; sol-air temperature = outdoor air − long-wave correction."
@@ -92,7 +97,9 @@ function designDayRows(
   ];
 }
 
-function weatherRows(path: string, results: ScenarioResults): Trusted[] {
+function weatherRows(path: string, results: ScenarioResults, d: DisplayUnits): Trusted[] {
+  const t = (c: number) => formatFixed(toDisplay(d, "temperature", c), 1);
+  const unit = unitLabel(d, "temperature");
   const w = objectKey(results, "weather");
   const first = stringKey(w, "firstTime");
   const last = stringKey(w, "lastTime");
@@ -108,9 +115,7 @@ function weatherRows(path: string, results: ScenarioResults): Trusted[] {
     : `${String(steps)} rows, ${weatherTime(first)} to ${weatherTime(last)}.`;
   const air = mean === undefined || min === undefined || max === undefined
     ? "Not recorded in results.json."
-    : `Dry bulb from the file: mean ${formatFixed(mean, 1)} °C, lowest ${formatFixed(min, 1)} °C, highest ${
-      formatFixed(max, 1)
-    } °C.`;
+    : `Dry bulb from the file: mean ${t(mean)} ${unit}, lowest ${t(min)} ${unit}, highest ${t(max)} ${unit}.`;
   const rows = [
     row("Kind", "Weather year: the file's rows in sequence after a warm-up (see the assumptions register)."),
     row("Weather file", html`<code>${path}</code> ${span}`),
@@ -120,8 +125,8 @@ function weatherRows(path: string, results: ScenarioResults): Trusted[] {
       global === undefined
         ? "Irradiance from the weather file (see the notes)."
         : `Irradiance from the weather file; global horizontal ${
-          formatTrim(global / J_PER_KWH, 4)
-        } kWh/m² over the file (see the notes for the transposition).`,
+          formatTrim(toDisplay(d, "irradiation", global), 4)
+        } ${unitLabel(d, "irradiation")} over the file (see the notes for the transposition).`,
     ),
   ];
   if (days !== undefined && tau !== undefined) {
@@ -136,22 +141,22 @@ function weatherRows(path: string, results: ScenarioResults): Trusted[] {
 }
 
 /** Rows of the conditions table: kind, step and time base, site, date, outdoor, sky, indoor. */
-function conditionRows(scenario: Scenario, results: ScenarioResults): Trusted[] {
+function conditionRows(scenario: Scenario, results: ScenarioResults, d: DisplayUnits): Trusted[] {
   const timeBase = scenario.kind === "design-day"
     ? "Local standard time (no daylight saving); value k is at k·Δ from 00:00. Solar time is derived from it as local standard time + equation of time + (longitude − 15° × time zone)/15° h."
     : "Local standard time as written in the weather file; row k is at the first row's time + k·Δ.";
   const kindRows = scenario.kind === "design-day"
-    ? designDayRows(scenario, results)
-    : weatherRows(scenario.weatherPath, results);
+    ? designDayRows(scenario, results, d)
+    : weatherRows(scenario.weatherPath, results, d);
   const [kindRow, ...otherRows] = kindRows;
   return [
     row("Scenario", scenario.id),
     ...(kindRow === undefined ? [] : [kindRow]),
     row("Time step Δ", `${stepText(results.timestep_h)}${scenario.timestepDefaulted ? " (default)" : ""}.`),
     row("Time base", timeBase),
-    row("Site", siteText(scenario.site)),
+    row("Site", siteText(scenario.site, d)),
     ...otherRows,
-    row("Indoor air", temperatureText(scenario.indoor)),
+    row("Indoor air", temperatureText(scenario.indoor, d)),
   ];
 }
 
@@ -175,16 +180,17 @@ function orientationCell(surface: ScenarioSurface | undefined, computed: Surface
   }<br><span class="muted">azimuth ${azimuthText}, tilt ${tiltText}</span></td>`;
 }
 
-/** Input to the surface table: the scenario, its results and the register that marks defaults. */
+/** Input to the surface table: the scenario, its results, the register that marks defaults and the display units. */
 export interface SurfaceTableInput {
   readonly scenario: Scenario;
   readonly results: ScenarioResults;
   readonly assumptions: readonly Pick<Assumption, "id">[];
   readonly constructionAnchors: ReadonlyMap<string, string>;
+  readonly display: DisplayUnits;
 }
 
 function surfaceRow(input: SurfaceTableInput, id: string, computed: SurfaceResults): Trusted {
-  const { scenario, assumptions } = input;
+  const { scenario, assumptions, display: d } = input;
   const surface = scenario.surfaces.find((s) => s.id === id);
   const basis = (name: string) => parameterBasis(assumptions, name, scenario.id, id);
   const p = computed.parameters;
@@ -194,24 +200,29 @@ function surfaceRow(input: SurfaceTableInput, id: string, computed: SurfaceResul
     : html`<a href="#${anchor}">${computed.construction}</a>`;
   return html`<tr><td>${id}</td><td>${construction}</td>${
     orientationCell(surface, computed)
-  }<td class="num">${formatTrim(computed.area, 4)}</td><td>${
+  }<td class="num">${formatTrim(toDisplay(d, "area", computed.area), 4)}</td><td>${
     p.absorptance === null ? DASH : formatTrim(p.absorptance, 3)
   }</td><td>${marked(formatTrim(p.emittance, 3), basis("emittance"))}</td><td>${
-    marked(formatTrim(p.outsideCoefficient, 4), basis("outside-coefficient"))
-  }</td><td>${marked(formatFixed(p.longwaveCorrection, 2), basis("longwave-correction"))}</td><td>${
-    marked(formatTrim(p.radiantFraction, 3), basis("radiant-fraction"))
-  }</td><td>${marked(formatTrim(p.groundReflectance, 3), basis("ground-reflectance"))}</td></tr>`;
+    marked(formatTrim(toDisplay(d, "transmittance", p.outsideCoefficient), 4), basis("outside-coefficient"))
+  }</td><td>${
+    marked(
+      formatFixed(toDisplay(d, "temperatureDifference", p.longwaveCorrection), 2),
+      basis("longwave-correction"),
+    )
+  }</td><td>${marked(formatTrim(p.radiantFraction, 3), basis("radiant-fraction"))}</td><td>${
+    marked(formatTrim(p.groundReflectance, 3), basis("ground-reflectance"))
+  }</td></tr>`;
 }
 
-/** Renders the conditions table, the surface table (defaults marked) and the scenario's notes. */
+/** Renders the conditions table, the surface table (defaults marked, display units) and the scenario's notes. */
 export function renderConditions(input: SurfaceTableInput): Trusted {
-  const { scenario, results } = input;
+  const { scenario, results, display: d } = input;
   const rows = Object.entries(results.surfaces).map(([id, s]) => surfaceRow(input, id, s));
   const notes = results.notes.map((n) => html`<li>${n}</li>`);
   return html`
     <table class="conditions">
       <caption>Conditions of scenario ${scenario.id} as computed</caption>
-      <tbody>${conditionRows(scenario, results)}</tbody>
+      <tbody>${conditionRows(scenario, results, d)}</tbody>
     </table>
     <table class="scenario-surfaces compact">
       <caption>Surfaces of scenario ${scenario
@@ -221,11 +232,11 @@ export function renderConditions(input: SurfaceTableInput): Trusted {
           <th>Surface</th>
           <th>Construction</th>
           <th>Orientation</th>
-          <th>Area m²</th>
+          <th>Area ${unitLabel(d, "area")}</th>
           <th>α</th>
           <th>ε</th>
-          <th>h_o W/(m²·K)</th>
-          <th>ΔT_lw K</th>
+          <th>h_o ${unitLabel(d, "transmittance")}</th>
+          <th>ΔT_lw ${unitLabel(d, "temperatureDifference")}</th>
           <th>f_rad</th>
           <th>ρg</th>
         </tr>
@@ -233,7 +244,9 @@ export function renderConditions(input: SurfaceTableInput): Trusted {
       <tbody>${rows}</tbody>
     </table>
     ${notes.length === 0 ? html`` : html`
-      <p class="muted">Conventions applied (results.json notes):</p>
+      <p class="muted">Conventions applied (results.json notes${d.system === "SI"
+        ? ""
+        : ", quoted as recorded, so any value in them is in SI units"}):</p>
       <ul class="scenario-notes">${notes}</ul>
     `}
   `;

@@ -2,6 +2,8 @@
 import type { Assumption, Scenario } from "../project/model.ts";
 import type { CheckResult, ScenarioResults } from "../results/types.ts";
 import { checksTable } from "./constructionOutput.ts";
+import { renderCoolingLoad } from "./coolingLoadOutput.ts";
+import { type DisplayUnits, unitLabel } from "./displayUnits.ts";
 import { html, type Trusted } from "./html.ts";
 import { renderConditions } from "./scenarioConditions.ts";
 import {
@@ -35,6 +37,8 @@ export interface ScenarioOutputInput {
   readonly constructionAnchors: ReadonlyMap<string, string>;
   /** Fragment id of the output, also the prefix of the plots' ids. */
   readonly anchor: string;
+  /** The units every number is printed in. */
+  readonly display: DisplayUnits;
 }
 
 function figure(svg: Trusted, title: Trusted, caption: Trusted): Trusted {
@@ -48,25 +52,27 @@ function surfaceLegend(results: ScenarioResults): Trusted[] {
   return Object.keys(results.surfaces).map((id, i) => legendEntry(lineSwatch(surfaceStyle(i)), id));
 }
 
-function designDayPlots(id: string, results: ScenarioResults, prefix: string): Trusted {
+function designDayPlots(id: string, results: ScenarioResults, prefix: string, d: DisplayUnits): Trusted {
   const barLegend = Object.keys(results.surfaces).map((sid, i) =>
     legendEntry(fillSwatch(surfaceStyle(i)), sid)
   );
   return html`
     ${figure(
-      solAirPlot(results, prefix),
+      solAirPlot(results, prefix, d),
       html`Outdoor air and sol-air temperatures, scenario ${id}.`,
       html`<span class="legend">${legendEntry(lineSwatch(OUTDOOR_STYLE, 2.4), "outdoor air")}${
         legendEntry(lineSwatch(INDOOR_STYLE), "indoor air")
       }${surfaceLegend(results)}</span> The 24:00 point repeats 00:00 (the day repeats).`,
     )}
     ${figure(
-      insideFluxPlot(results, prefix),
+      insideFluxPlot(results, prefix, d),
       html`Inside heat flux by surface, scenario ${id}.`,
-      html`<span class="legend">${surfaceLegend(results)}</span> W/m² of surface, positive into the room.`,
+      html`<span class="legend">${surfaceLegend(results)}</span> ${
+        unitLabel(d, "heatFlux")
+      } of surface, positive into the room.`,
     )}
     ${figure(
-      stackedGainPlot(results, prefix),
+      stackedGainPlot(results, prefix, d),
       html`Heat gain stacked by surface, scenario ${id}.`,
       html`
         <span
@@ -79,16 +85,16 @@ function designDayPlots(id: string, results: ScenarioResults, prefix: string): T
   `;
 }
 
-function designDayBody(id: string, results: ScenarioResults, prefix: string): Trusted {
+function designDayBody(id: string, results: ScenarioResults, prefix: string, d: DisplayUnits): Trusted {
   return html`
     <h5>Values at every step</h5>
-    ${renderStepTables(id, results)}
+    ${renderStepTables(id, results, d)}
     <h5>Plots</h5>
-    ${designDayPlots(id, results, prefix)}
+    ${designDayPlots(id, results, prefix, d)}
   `;
 }
 
-function summaryBody(id: string, results: ScenarioResults, prefix: string): Trusted {
+function summaryBody(id: string, results: ScenarioResults, prefix: string, d: DisplayUnits): Trusted {
   const months = monthlyTotals(results.totals);
   const csv = stringKey(results, "csv");
   const csvLine = csv === undefined
@@ -106,13 +112,13 @@ function summaryBody(id: string, results: ScenarioResults, prefix: string): Trus
     ? html`<p class="muted">No monthly totals in results.json for ${id}.</p>`
     : html`
       <h5>Monthly totals</h5>
-      ${renderMonthlyTable(id, months, results.totals)}
+      ${renderMonthlyTable(id, months, results.totals, d)}
       ${figure(
-        monthlyPlot(months, prefix),
+        monthlyPlot(months, prefix, d),
         html`Monthly heat gain and heat loss, scenario ${id}.`,
         html`<span class="legend">${legendEntry(fillSwatch(GAIN_STYLE), "heat gain (above zero)")}${
           legendEntry(fillSwatch(LOSS_STYLE), "heat loss (below zero)")
-        }</span> All surfaces together, kWh per month.`,
+        }</span> All surfaces together, ${unitLabel(d, "energy")} per month.`,
       )}
     `;
   return html`${csvLine}${monthly}${dailyLine}`;
@@ -143,7 +149,10 @@ export function renderScenarioOutput(input: ScenarioOutputInput): Trusted {
     `;
   }
   const prefix = `${anchor}-fig`;
-  const body = hasStepSeries(results) ? designDayBody(id, results, prefix) : summaryBody(id, results, prefix);
+  const d = input.display;
+  const body = hasStepSeries(results)
+    ? designDayBody(id, results, prefix, d)
+    : summaryBody(id, results, prefix, d);
   const checks = checksTable(
     scenarioChecks(input.checks, id),
     (c) => surfaceOfSubject(c.subject, id),
@@ -153,10 +162,11 @@ export function renderScenarioOutput(input: ScenarioOutputInput): Trusted {
     <div class="scenario-output" id="${anchor}">
       <h4 class="output-heading">Results of scenario ${id}</h4>
       <p class="muted">Numbers as in results.json <code>scenarios</code> entry for ${id} (Appendix B); times are local standard time.</p>
-      ${renderPeakSummary(id, results)}
+      ${renderPeakSummary(id, results, d)}
       <h5>Conditions</h5>
       ${renderConditions({ ...input, results })}
       ${body}
+      ${renderCoolingLoad(id, results, prefix, d)}
       <h5>Checks on ${id}</h5>
       ${checks.markup === "" ? html`<p>No automated check is recorded for this scenario.</p>` : checks}
       ${caution(results)}

@@ -1,10 +1,11 @@
 /** The plots of a scenario's computed output, drawn with Observable Plot as inline SVG (numbers only inside). */
 import * as Plot from "@observablehq/plot";
 import type { ScenarioResults } from "../results/types.ts";
+import { type DisplayUnits, type QuantityKind, toDisplay, unitLabel } from "./displayUnits.ts";
 import { formatTrim } from "./format.ts";
 import type { Trusted } from "./html.ts";
 import { type PlotSpec, renderPlotSvg } from "./plotSvg.ts";
-import { clockTime, J_PER_KWH, MONTH_NAMES } from "./scenarioData.ts";
+import { clockTime, MONTH_NAMES } from "./scenarioData.ts";
 import {
   GAIN_STYLE,
   INDOOR_STYLE,
@@ -25,10 +26,18 @@ interface Point {
 
 const tick = (d: number) => formatTrim(d, 4);
 
-/** Points (kΔ, values[k]) plus a closing point at 24 h equal to the first (the day repeats). */
-function dayPoints(values: readonly number[], timestepH: number): Point[] {
-  const out = values.map((v, k) => ({ t: k * timestepH, v }));
-  if (values.length > 0) out.push({ t: values.length * timestepH, v: values[0]! });
+/**
+ * Points (kΔ, values[k]) in the display unit of `kind`, plus a closing point at 24 h equal to the first (the
+ * day repeats).
+ */
+function dayPoints(
+  values: readonly number[],
+  timestepH: number,
+  d: DisplayUnits,
+  kind: QuantityKind,
+): Point[] {
+  const out = values.map((v, k) => ({ t: k * timestepH, v: toDisplay(d, kind, v) }));
+  if (values.length > 0) out.push({ t: values.length * timestepH, v: toDisplay(d, kind, values[0]!) });
   return out;
 }
 
@@ -61,44 +70,50 @@ function daySpec(yLabel: string, marks: Plot.Markish[]): PlotSpec {
   };
 }
 
-/** (a) Outdoor and indoor air and each surface's sol-air temperature over the day, °C. */
-export function solAirPlot(results: ScenarioResults, idPrefix: string): Trusted {
+/** (a) Outdoor and indoor air and each surface's sol-air temperature over the day, °C or °F. */
+export function solAirPlot(results: ScenarioResults, idPrefix: string, d: DisplayUnits): Trusted {
   const dt = results.timestep_h;
-  const surfaces = Object.values(results.surfaces).map((s, i) =>
-    line(dayPoints(s.solAir, dt), surfaceStyle(i))
-  );
+  const points = (values: readonly number[]) => dayPoints(values, dt, d, "temperature");
+  const surfaces = Object.values(results.surfaces).map((s, i) => line(points(s.solAir), surfaceStyle(i)));
   return renderPlotSvg(
-    daySpec("Temperature (°C)", [
+    daySpec(`Temperature (${unitLabel(d, "temperature")})`, [
       ...surfaces,
-      line(dayPoints(results.indoor, dt), INDOOR_STYLE, 1.4),
-      line(dayPoints(results.outdoor, dt), OUTDOOR_STYLE, 2.4),
+      line(points(results.indoor), INDOOR_STYLE, 1.4),
+      line(points(results.outdoor), OUTDOOR_STYLE, 2.4),
     ]),
     `${idPrefix}-solair`,
     "Outdoor, indoor and sol-air temperatures over the design day",
   );
 }
 
-/** (b) Inside heat flux of each surface over the day, W/m², positive into the room. */
-export function insideFluxPlot(results: ScenarioResults, idPrefix: string): Trusted {
+/** (b) Inside heat flux of each surface over the day, W/m² or Btu/(h·ft²), positive into the room. */
+export function insideFluxPlot(results: ScenarioResults, idPrefix: string, d: DisplayUnits): Trusted {
   const dt = results.timestep_h;
   const surfaces = Object.values(results.surfaces).map((s, i) =>
-    line(dayPoints(s.insideFlux, dt), surfaceStyle(i))
+    line(dayPoints(s.insideFlux, dt, d, "heatFlux"), surfaceStyle(i))
   );
   return renderPlotSvg(
-    daySpec("Inside heat flux, into the room (W/m²)", [Plot.ruleY([0], { stroke: "#444" }), ...surfaces]),
+    daySpec(`Inside heat flux, into the room (${unitLabel(d, "heatFlux")})`, [
+      Plot.ruleY([0], { stroke: "#444" }),
+      ...surfaces,
+    ]),
     `${idPrefix}-flux`,
     "Inside heat flux of each surface over the design day",
   );
 }
 
-/** (c) Heat gain per step stacked by surface (gains above zero, losses below), with the total as a line. */
-export function stackedGainPlot(results: ScenarioResults, idPrefix: string): Trusted {
+/**
+ * (c) Heat gain per step (W or Btu/h) stacked by surface (gains above zero, losses below), with the total as
+ * a line.
+ */
+export function stackedGainPlot(results: ScenarioResults, idPrefix: string, d: DisplayUnits): Trusted {
   const dt = results.timestep_h;
   const n = results.totalHeatGain.length;
+  const gainOf = (w: number) => toDisplay(d, "heatGain", w);
   const bars = Object.values(results.surfaces).flatMap((s, i) =>
-    s.heatGain.map((g, k) => ({ k, gain: g, order: i, colour: surfaceStyle(i).colour }))
+    s.heatGain.map((g, k) => ({ k, gain: gainOf(g), order: i, colour: surfaceStyle(i).colour }))
   );
-  const total = results.totalHeatGain.map((g, k) => ({ k, gain: g }));
+  const total = results.totalHeatGain.map((g, k) => ({ k, gain: gainOf(g) }));
   const every = Math.max(1, Math.round(3 / dt));
   const ticks = Array.from({ length: n }, (_, k) => k).filter((k) => k % every === 0);
   return renderPlotSvg(
@@ -117,7 +132,13 @@ export function stackedGainPlot(results: ScenarioResults, idPrefix: string): Tru
         labelArrow: "none",
         padding: 0.12,
       },
-      y: { label: "Heat gain (W)", labelArrow: "none", grid: true, tickFormat: tick, nice: true },
+      y: {
+        label: `Heat gain (${unitLabel(d, "heatGain")})`,
+        labelArrow: "none",
+        grid: true,
+        tickFormat: tick,
+        nice: true,
+      },
       color: { type: "identity" },
       marks: [
         Plot.barY(bars, { x: "k", y: "gain", fill: "colour", z: "order", stroke: "#fff", strokeWidth: 0.4 }),
@@ -131,14 +152,15 @@ export function stackedGainPlot(results: ScenarioResults, idPrefix: string): Tru
   );
 }
 
-/** (d) Monthly heat gain (above zero) and heat loss (below zero) of a weather year, kWh. */
+/** (d) Monthly heat gain (above zero) and heat loss (below zero) of a weather year, kWh or kBtu. */
 export function monthlyPlot(
   months: readonly { gain_J: number; loss_J: number }[],
   idPrefix: string,
+  d: DisplayUnits,
 ): Trusted {
   const names = MONTH_NAMES.map((m) => m.slice(0, 3));
-  const gain = months.map((m, i) => ({ month: names[i]!, kWh: m.gain_J / J_PER_KWH }));
-  const loss = months.map((m, i) => ({ month: names[i]!, kWh: -m.loss_J / J_PER_KWH }));
+  const gain = months.map((m, i) => ({ month: names[i]!, energy: toDisplay(d, "energy", m.gain_J) }));
+  const loss = months.map((m, i) => ({ month: names[i]!, energy: -toDisplay(d, "energy", m.loss_J) }));
   return renderPlotSvg(
     {
       height: HEIGHT,
@@ -153,10 +175,15 @@ export function monthlyPlot(
         labelArrow: "none",
         padding: 0.2,
       },
-      y: { label: "Heat gain (+) and heat loss (−) (kWh)", labelArrow: "none", grid: true, tickFormat: tick },
+      y: {
+        label: `Heat gain (+) and heat loss (−) (${unitLabel(d, "energy")})`,
+        labelArrow: "none",
+        grid: true,
+        tickFormat: tick,
+      },
       marks: [
-        Plot.barY(gain, { x: "month", y: "kWh", fill: GAIN_STYLE.colour }),
-        Plot.barY(loss, { x: "month", y: "kWh", fill: LOSS_STYLE.colour }),
+        Plot.barY(gain, { x: "month", y: "energy", fill: GAIN_STYLE.colour }),
+        Plot.barY(loss, { x: "month", y: "energy", fill: LOSS_STYLE.colour }),
         Plot.ruleY([0], { stroke: "#111" }),
       ],
     },

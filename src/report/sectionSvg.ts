@@ -1,5 +1,6 @@
 /** Draws a construction section to scale as inline SVG: outside on the left, inside on the right. */
 import type { Construction } from "../project/model.ts";
+import { type DisplayUnits, toDisplay, unitLabel } from "./displayUnits.ts";
 import { formatTrim, THIN_SPACE } from "./format.ts";
 import { html, type Trusted } from "./html.ts";
 import { LAYER_KIND_FILL, LAYER_KIND_LABEL, type LayerKind, layerKind } from "./layerKind.ts";
@@ -19,7 +20,8 @@ interface PlacedLayer {
   readonly kind: LayerKind;
   readonly x: number;
   readonly width: number;
-  readonly thicknessMm?: number;
+  /** Thickness in the display unit (mm or in); absent for a resistive layer. */
+  readonly thickness?: number;
 }
 
 /** Prints an SVG coordinate: one decimal, ASCII minus, locale-independent. */
@@ -28,7 +30,10 @@ function coord(value: number): string {
   return String(rounded === 0 ? 0 : rounded);
 }
 
-function placeLayers(construction: Construction): { layers: PlacedLayer[]; pxPerMm: number } {
+function placeLayers(
+  construction: Construction,
+  d: DisplayUnits,
+): { layers: PlacedLayer[]; pxPerMm: number } {
   const massiveMm = construction.layers.reduce(
     (s, l) => s + (l.kind === "massive" ? l.thicknessM * 1000 : 0),
     0,
@@ -40,7 +45,13 @@ function placeLayers(construction: Construction): { layers: PlacedLayer[]; pxPer
   const layers = construction.layers.map((layer, i): PlacedLayer => {
     const width = layer.kind === "massive" ? layer.thicknessM * 1000 * pxPerMm : GAP_WIDTH_PX;
     const placed = layer.kind === "massive"
-      ? { number: i + 1, kind: layerKind(layer), x, width, thicknessMm: layer.thicknessM * 1000 }
+      ? {
+        number: i + 1,
+        kind: layerKind(layer),
+        x,
+        width,
+        thickness: toDisplay(d, "thickness", layer.thicknessM),
+      }
       : { number: i + 1, kind: layerKind(layer), x, width };
     x += width;
     return placed;
@@ -86,8 +97,8 @@ function callout(layer: PlacedLayer, labelX: number): Trusted {
 }
 
 function chainDimension(layer: PlacedLayer): Trusted {
-  if (layer.thicknessMm === undefined) return html``;
-  const label = formatTrim(layer.thicknessMm, 4);
+  if (layer.thickness === undefined) return html``;
+  const label = formatTrim(layer.thickness, 4);
   const fits = layer.width >= label.length * 6.5 + 4;
   const x2 = layer.x + layer.width;
   return html`
@@ -102,15 +113,15 @@ function chainDimension(layer: PlacedLayer): Trusted {
   `;
 }
 
-function overallDimension(layers: readonly PlacedLayer[]): Trusted {
+function overallDimension(layers: readonly PlacedLayer[], d: DisplayUnits): Trusted {
   const first = layers[0];
   const last = layers[layers.length - 1];
   if (first === undefined || last === undefined) return html``;
-  const totalMm = layers.reduce((s, l) => s + (l.thicknessMm ?? 0), 0);
+  const total = layers.reduce((s, l) => s + (l.thickness ?? 0), 0);
   const hasGaps = layers.some((l) => l.kind === "gap");
   const x1 = first.x;
   const x2 = last.x + last.width;
-  const text = `${formatTrim(totalMm, 4)}${THIN_SPACE}mm overall${
+  const text = `${formatTrim(total, 4)}${THIN_SPACE}${unitLabel(d, "thickness")} overall${
     hasGaps ? " (resistive layers not counted)" : ""
   }`;
   const tick = (x: number) =>
@@ -126,20 +137,30 @@ function overallDimension(layers: readonly PlacedLayer[]): Trusted {
   `;
 }
 
-function scaleBar(pxPerMm: number, hasGaps: boolean): Trusted {
+/** Scale-bar lengths tried, longest first, in the display unit of thickness. */
+const SCALE_BAR_LENGTHS: Readonly<Record<DisplayUnits["system"], readonly number[]>> = {
+  SI: [1000, 500, 200, 100, 50, 20, 10, 5, 2, 1],
+  IP: [48, 24, 12, 6, 4, 2, 1, 0.5, 0.25],
+};
+
+function scaleBar(pxPerMm: number, hasGaps: boolean, d: DisplayUnits): Trusted {
   const note = hasGaps
     ? "Drawn to scale, except resistive layers (dashed): nominal width, NOT TO SCALE."
     : "Drawn to scale.";
   if (pxPerMm <= 0) {
     return html`<text x="12" y="288" font-size="10">Resistive layers only: NOT TO SCALE.</text>`;
   }
-  const candidates = [1000, 500, 200, 100, 50, 20, 10, 5, 2, 1];
-  const lengthMm = candidates.find((mm) => mm * pxPerMm <= 120) ?? 1;
-  const barPx = lengthMm * pxPerMm;
+  const pxPerUnit = pxPerMm / toDisplay(d, "thickness", 0.001);
+  const candidates = SCALE_BAR_LENGTHS[d.system];
+  const length = candidates.find((n) => n * pxPerUnit <= 120) ?? candidates[candidates.length - 1] ?? 1;
+  const barPx = length * pxPerUnit;
   const x = SECTION_LEFT;
   return html`
     <rect x="${coord(x)}" y="264" width="${coord(barPx)}" height="4" fill="#333" />
-    <text x="${coord(x + barPx + 6)}" y="270" font-size="10">${String(lengthMm)}${THIN_SPACE}mm</text>
+    <text x="${coord(x + barPx + 6)}" y="270" font-size="10">${formatTrim(length, 4)}${THIN_SPACE}${unitLabel(
+      d,
+      "thickness",
+    )}</text>
     <text x="12" y="288" font-size="10">${note}</text>
   `;
 }
@@ -171,9 +192,12 @@ function legend(kinds: readonly LayerKind[]): Trusted {
   return html`${items}`;
 }
 
-/** Renders the section of a construction as a self-contained SVG element (no ids, no external references). */
-export function renderSectionSvg(construction: Construction): Trusted {
-  const { layers, pxPerMm } = placeLayers(construction);
+/**
+ * Renders the section of a construction as a self-contained SVG element (no ids, no external references),
+ * dimensioned in the display unit of thickness.
+ */
+export function renderSectionSvg(construction: Construction, d: DisplayUnits): Trusted {
+  const { layers, pxPerMm } = placeLayers(construction, d);
   const labelXs = spreadCallouts(layers.map((l) => l.x + l.width / 2));
   const kinds = (["masonry", "insulation", "board", "metal", "gap"] as const).filter((k) =>
     layers.some((l) => l.kind === k)
@@ -189,9 +213,10 @@ export function renderSectionSvg(construction: Construction): Trusted {
       fill="#111"><title>${label}</title>${layers.map(layerRect)}${layers.map((l, i) =>
         callout(l, labelXs[i] ?? 0)
       )}<text x="45" y="130" text-anchor="middle" font-size="12" font-weight="bold">OUTSIDE</text><text x="595" y="130" text-anchor="middle" font-size="12" font-weight="bold">INSIDE</text>${layers
-        .map(chainDimension)}${overallDimension(layers)}${scaleBar(
+        .map(chainDimension)}${overallDimension(layers, d)}${scaleBar(
           pxPerMm,
           layers.some((l) => l.kind === "gap"),
+          d,
         )}${legend(kinds)}</svg>
   `;
 }

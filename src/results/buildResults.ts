@@ -10,10 +10,14 @@ import { type Diagnostic, error } from "../project/diagnostic.ts";
 import type { Assumption, Construction, Model } from "../project/model.ts";
 import { formatPosition } from "../project/position.ts";
 import { computeDesignDay, type ScenarioContext } from "../scenarios/designDay.ts";
+import { computeHeating } from "../scenarios/heating.ts";
+import { heatingCsv } from "../scenarios/heatingCsv.ts";
 import { computeWeatherYear } from "../scenarios/weatherYear.ts";
 import { sensitivityStudy } from "../sensitivity/study.ts";
 import { parseWeatherCsv } from "../climate/weatherCsv.ts";
 import { TOOL_VERSION } from "../version.ts";
+import { limitsFor, ownLimits } from "../project/constructionLimits.ts";
+import { designResults } from "./designResults.ts";
 import type {
   CheckResult,
   ConstructionResults,
@@ -48,6 +52,9 @@ export function computeProject(
   const constructions: Record<string, ConstructionResults> = {};
   const checks: CheckResult[] = [];
   const problems: Diagnostic[] = [];
+  const ownLimitsById = ownLimits(model);
+  const designAssumptions: Assumption[] = [];
+  const designWarnings: { at: string; message: string }[] = [];
   for (const [index, construction] of model.constructions.entries()) {
     progress(`construction ${index + 1}/${model.constructions.length}: ${construction.id}`);
     const analysis = analyseConstruction(construction, construction.timestepS);
@@ -64,16 +71,27 @@ export function computeProject(
     }
     analyses[construction.id] = analysis;
     steady[construction.id] = analysis.steady;
-    constructions[construction.id] = {
+    const base = {
       ...constructionResults(construction, analysis.steady),
       ...constructionDynamicJson(analysis),
     };
-    checks.push(...constructionChecksJson(construction.id, analysis));
+    const design = designResults(
+      construction,
+      base,
+      limitsFor(ownLimitsById.get(construction.id), model.info.limits),
+    );
+    constructions[construction.id] = { ...base, ...design.keys };
+    checks.push(...constructionChecksJson(construction.id, analysis), ...design.checks);
+    designAssumptions.push(...design.assumptions);
+    designWarnings.push(...design.warnings);
   }
   if (problems.length > 0) return { ok: false, diagnostics: problems };
   const scenarioParts = computeScenarios(model, analyses, dataTexts, progress);
   if (scenarioParts.problems.length > 0) return { ok: false, diagnostics: scenarioParts.problems };
   checks.push(...scenarioParts.checks);
+  const heating = (model.heatingScenarios ?? []).map((s) =>
+    [s.id, computeHeating(s, new Map(model.constructions.map((c) => [c.id, c])), steady)] as const
+  );
   const variation = model.info.sensitivityVariation;
   if (variation !== undefined) progress("sensitivity study");
   const sensitivity = variation === undefined
@@ -86,16 +104,25 @@ export function computeProject(
     constructions,
     scenarios: scenarioParts.scenarios,
     checks,
-    assumptions: [...model.assumptions, ...scenarioParts.assumptions].map((a) => ({
+    assumptions: [
+      ...model.assumptions,
+      ...designAssumptions,
+      ...scenarioParts.assumptions,
+      ...heating.flatMap(([, h]) => h.assumptions),
+    ].map((a) => ({
       id: a.id,
       text: a.text,
       source: a.source,
       at: a.at,
     })),
-    warnings: scenarioParts.warnings,
+    warnings: [...designWarnings, ...scenarioParts.warnings],
     ...(sensitivity === undefined ? {} : { sensitivity }),
+    ...(heating.length === 0
+      ? {}
+      : { heating: Object.fromEntries(heating.map(([id, h]) => [id, h.results])) }),
   };
-  return { ok: true, computed: { results, steady, analyses, csvFiles: scenarioParts.csvFiles } };
+  const csvFiles = [...scenarioParts.csvFiles, ...heating.map(([id, h]) => heatingCsv(id, h.results))];
+  return { ok: true, computed: { results, steady, analyses, csvFiles } };
 }
 
 interface ScenarioParts {

@@ -1,4 +1,5 @@
 import type { SensitivityResults } from "../sensitivity/study.ts";
+import type { CoolingLoadResults, HeatingResults, PeakAt } from "./heatingTypes.ts";
 /** The machine-readable results (results.json), contract `fluxnote-results/1` (DESIGN.md §4). */
 
 export interface InputFileRecord {
@@ -60,6 +61,8 @@ export interface ResultsJson {
   readonly warnings: readonly { at: string; message: string }[];
   /** Extension: the optional sensitivity study (front matter `sensitivity: { variation }`). */
   readonly sensitivity?: SensitivityResults;
+  /** Extension: `kind: heating` scenarios (steady design heat loss, ISO 13788 surface checks), by id. */
+  readonly heating?: Readonly<Record<string, HeatingResults>>;
 }
 
 /** One surface of a scenario in results.json (DESIGN.md §4); series have one value per timestep. */
@@ -88,6 +91,12 @@ export interface SurfaceResults {
     readonly radiantFraction: number;
     readonly groundReflectance: number;
   };
+  /** Extension (design day): θ_si = θ_i + R_si·q_i per step, °C. */
+  readonly insideSurfaceTemperature?: readonly number[];
+  /** Extension (design day with a radiant time series): cooling load per full hour (24 values), W. */
+  readonly coolingLoad?: readonly number[];
+  /** Extension: peak of `coolingLoad`, W, and its hour. */
+  readonly coolingLoadPeak?: PeakAt;
 }
 
 export interface EnergyTotals {
@@ -114,4 +123,6 @@ export interface ScenarioResults {
   readonly sun?: readonly { readonly altitude_deg: number; readonly azimuth_deg: number }[];
   /** Extension: statements of the conventions and rules applied. */
   readonly notes: readonly string[];
+  /** Extension (design day with a radiant time series): total cooling load per full hour and its peak. */
+  readonly coolingLoad?: CoolingLoadResults;
 }

@@ -60,4 +60,6 @@ export const REVIEW_RULES: readonly ReviewRule[] = [
   rule("u-value-high", "warning", "U above 6 W/(m²·K) for an opaque element"),
   rule("kappa-high", "warning", "κ1 above 400 kJ/(m²·K)"),
   rule("time-lag-long", "note", "time lag above 24 h"),
+  rule("limit-not-met", "warning", "a code limit the user wrote (with its clause) is not met"),
+  rule("limit-met", "note", "a code limit the user wrote (with its clause) is met"),
 ];

@@ -8,6 +8,7 @@ import type { Model } from "../project/model.ts";
 import type { ResultsJson } from "../results/types.ts";
 import { reviewElements } from "./elementRules.ts";
 import { reviewLayers } from "./layerRules.ts";
+import { reviewLimits } from "./limitRules.ts";
 import { reviewMaterials } from "./materialRules.ts";
 import { reviewOrder } from "./orderRules.ts";
 import { reviewProvenance } from "./provenanceRules.ts";
@@ -25,6 +26,7 @@ export function reviewProject(model: Model, results?: ResultsJson): Diagnostic[]
     ...reviewProvenance(model, results),
     ...reviewScenarios(model, results),
     ...(results === undefined ? [] : reviewElements(model, results)),
+    ...(results === undefined ? [] : reviewLimits(model, results)),
   ];
   return sortDiagnostics(findings);
 }

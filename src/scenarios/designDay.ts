@@ -3,6 +3,7 @@ import type { DynamicAnalysis } from "../engine/mod.ts";
 import { ctfRepeatedDayFlux, repeatedDayFlux, steadyPeriodicFlux } from "../engine/surfaceFlux.ts";
 import type { Assumption, Construction, Scenario, TemperatureProfile } from "../project/model.ts";
 import type { CheckResult, ScenarioResults, SurfaceResults } from "../results/types.ts";
+import { coolingLoadNotes, designDayCoolingLoad } from "./coolingLoad.ts";
 import { gainAndLoss, meanOf, peakOf, sumSeries } from "./seriesStats.ts";
 import { type SurfaceParameters, surfaceParameters, type SurfaceWarning } from "./surfaceParameters.ts";
 
@@ -121,6 +122,7 @@ export function computeDesignDay(scenario: DesignDayScenario, context: ScenarioC
     );
     const heatGain = flux.insideWPerM2.map((q) => q * surface.areaM2);
     const peak = peakOf(heatGain);
+    const insideResistance = context.constructions.get(surface.construction)?.insideResistance ?? NaN;
     surfaces[surface.id] = {
       construction: surface.construction,
       area: surface.areaM2,
@@ -140,8 +142,12 @@ export function computeDesignDay(scenario: DesignDayScenario, context: ScenarioC
         radiantFraction: p.radiantFraction,
         groundReflectance: p.groundReflectance,
       },
+      insideSurfaceTemperature: flux.insideWPerM2.map((q, k) => indoor[k]! + insideResistance * q),
     };
   }
+  const cooling = scenario.radiantTimeSeries === undefined
+    ? undefined
+    : designDayCoolingLoad(surfaces, scenario.radiantTimeSeries, timestepS);
   const totalHeatGain = sumSeries(Object.values(surfaces).map((s) => s.heatGain), indoor.length);
   const totalPeak = peakOf(totalHeatGain);
   const results: ScenarioResults = {
@@ -149,7 +155,7 @@ export function computeDesignDay(scenario: DesignDayScenario, context: ScenarioC
     timestep_h: timestepS / 3600,
     outdoor: boundary.outdoorC,
     indoor,
-    surfaces,
+    surfaces: cooling?.surfaces ?? surfaces,
     totalHeatGain,
     peak: { heatGain: totalPeak.value, time_h: (totalPeak.index * timestepS) / 3600 },
     totals: gainAndLoss(totalHeatGain, timestepS),
@@ -170,7 +176,10 @@ export function computeDesignDay(scenario: DesignDayScenario, context: ScenarioC
       ...scenario.surfaces.filter((surface) => surface.solAirC !== undefined).map((surface) =>
         `Surface "${surface.id}": sol-air temperatures given in the input; the solar model is not used for it.`
       ),
+      "Inside surface temperature θ_si = θ_i + R_si·q_i at each step, with R_si of the surface's construction.",
+      ...(cooling === undefined ? [] : coolingLoadNotes(timestepS)),
     ],
+    ...(cooling === undefined ? {} : { coolingLoad: cooling.total }),
   };
   return { results, checks, assumptions, warnings };
 }

@@ -18,7 +18,7 @@ import {
   WEATHER_ENERGY_BALANCE_LIMIT,
 } from "./weatherChecks.ts";
 import {
-  fluxesAfterWarmUp,
+  forEachInsideFlux,
   MIN_WARM_UP_DAYS,
   WARM_UP_TIME_CONSTANTS,
   warmUpDays,
@@ -108,23 +108,26 @@ export function computeWeatherYear(
   const checks: CheckResult[] = [];
   const csvSurfaces: CsvSurface[] = [];
   const total = new Float64Array(n);
-  for (const [s, input] of inputs.entries()) {
-    const { surface, parameters: p, uValue } = input;
-    const modes = context.analysisAt(surface.construction, dt).airToAir.modes;
-    const solAirC = boundary.surfaces[s]!.solAirC;
-    const flux = fluxesAfterWarmUp(modes, solAirC, boundary.indoorC, warmUpSteps, n);
-    const heatGain = Float64Array.from(flux.insideWPerM2, (q) => q * surface.areaM2);
+  const runs = inputs.map((input, s) => ({
+    modes: context.analysisAt(input.surface.construction, dt).airToAir.modes,
+    solAirC: boundary.surfaces[s]!.solAirC,
+  }));
+  forEachInsideFlux(runs, boundary.indoorC, warmUpSteps, n, (s, insideWPerM2) => {
+    const { surface, parameters: p, uValue } = inputs[s]!;
+    const { modes, solAirC } = runs[s]!;
+    const heatGain = new Float64Array(n);
+    for (let k = 0; k < n; k++) heatGain[k] = insideWPerM2[k]! * surface.areaM2;
     for (let k = 0; k < n; k++) total[k] = total[k]! + heatGain[k]!;
     const subject = `scenario:${scenario.id}/${surface.id}`;
     checks.push(
-      energyBalanceCheck(subject, flux.insideWPerM2, solAirC, boundary.indoorC, uValue),
+      energyBalanceCheck(subject, insideWPerM2, solAirC, boundary.indoorC, uValue),
       warmUpCheck(
         subject,
         modes,
         solAirC,
         boundary.indoorC,
         warmUpSteps,
-        flux.insideWPerM2,
+        insideWPerM2,
         uValue,
         stepsPerDay,
       ),
@@ -158,10 +161,10 @@ export function computeWeatherYear(
       id: surface.id,
       incidentWPerM2: boundary.surfaces[s]!.incidentWPerM2,
       solAirC,
-      insideWPerM2: flux.insideWPerM2,
+      insideWPerM2,
       heatGainW: heatGain,
     });
-  }
+  });
   const csvPath = `csv/scenario-${scenario.id}.csv`;
   const peak = timedPeak(total, boundary.timeLabels, dt, 1);
   const results: WeatherScenarioResults = {

@@ -2,6 +2,7 @@
  * Dynamic results for the rendering tests, produced by the real engine (never typed in), and small
  * invented constructions with known closed-form behaviour.
  */
+import { SI_DISPLAY } from "../../src/report/displayUnits.ts";
 import {
   analyseConstruction,
   constructionChecksJson,
@@ -94,6 +95,6 @@ export function renderWithEngine(
   c: Construction,
 ): { markup: string; results: ConstructionResults; checks: CheckResult[] } {
   const { results, checks } = engineEntry(c);
-  const markup = renderConstructionOutput(c, results, checks, `c-${c.id.toLowerCase()}`).markup;
+  const markup = renderConstructionOutput(c, results, checks, `c-${c.id.toLowerCase()}`, SI_DISPLAY).markup;
   return { markup, results, checks };
 }

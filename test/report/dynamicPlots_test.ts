@@ -1,4 +1,5 @@
 import assert from "node:assert/strict";
+import { SI_DISPLAY } from "../../src/report/displayUnits.ts";
 import * as Plot from "@observablehq/plot";
 import { type DynamicView, readDynamic, seriesSum, stepResponse } from "../../src/report/dynamicData.ts";
 import { ctsPlot, responseFactorPlot, stepResponsePlot } from "../../src/report/dynamicPlots.ts";
@@ -39,7 +40,13 @@ function valueAt(svg: Element): (px: number) => number {
 
 Deno.test("dynamic plots are inline SVG with xmlns, a fixed width and nothing live or external", () => {
   const view = wallView();
-  for (const markup of [responseFactorPlot(view, "p"), ctsPlot(view, "p"), stepResponsePlot(view, "p")]) {
+  for (
+    const markup of [
+      responseFactorPlot(view, "p", SI_DISPLAY),
+      ctsPlot(view, "p"),
+      stepResponsePlot(view, "p", SI_DISPLAY),
+    ]
+  ) {
     const root = parseFragment(markup.markup);
     assertNoLiveMarkup(markup.markup, root);
     const svg = svgOf(markup.markup);
@@ -58,9 +65,15 @@ Deno.test("dynamic plots are inline SVG with xmlns, a fixed width and nothing li
 
 Deno.test("dynamic plots are byte-identical when rendered twice", () => {
   const view = wallView();
-  assert.equal(responseFactorPlot(view, "p").markup, responseFactorPlot(view, "p").markup);
+  assert.equal(
+    responseFactorPlot(view, "p", SI_DISPLAY).markup,
+    responseFactorPlot(view, "p", SI_DISPLAY).markup,
+  );
   assert.equal(ctsPlot(view, "p").markup, ctsPlot(view, "p").markup);
-  assert.equal(stepResponsePlot(view, "p").markup, stepResponsePlot(view, "p").markup);
+  assert.equal(
+    stepResponsePlot(view, "p", SI_DISPLAY).markup,
+    stepResponsePlot(view, "p", SI_DISPLAY).markup,
+  );
 });
 
 Deno.test("renderPlotSvg() renames Plot's generated clip-path ids so output is stable", () => {
@@ -102,7 +115,7 @@ Deno.test("stepResponsePlot() ends at U within the truncation residual (identity
       residual <= view.responseFactors.truncationResidual * (1 + 1e-6) + 1e-12,
       `residual ${residual}`,
     );
-    const svg = svgOf(stepResponsePlot(view, "p").markup);
+    const svg = svgOf(stepResponsePlot(view, "p", SI_DISPLAY).markup);
     const path = svg.querySelector('g[aria-label="line"] path')?.getAttribute("d") ?? "";
     const lastY = Number(/,([-\d.]+)$/.exec(path)?.[1]);
     const ruleY = Number(

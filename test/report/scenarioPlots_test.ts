@@ -1,4 +1,5 @@
 import assert from "node:assert/strict";
+import { SI_DISPLAY } from "../../src/report/displayUnits.ts";
 import { PLOT_WIDTH } from "../../src/report/plotSvg.ts";
 import { insideFluxPlot, monthlyPlot, solAirPlot, stackedGainPlot } from "../../src/report/scenarioPlots.ts";
 import type { ScenarioResults } from "../../src/results/types.ts";
@@ -27,10 +28,10 @@ const MONTHS = Array.from({ length: 12 }, (_, m) => ({ gain_J: m * 3.6e6, loss_J
 
 function plots(results: ScenarioResults, prefix: string) {
   return [
-    solAirPlot(results, prefix),
-    insideFluxPlot(results, prefix),
-    stackedGainPlot(results, prefix),
-    monthlyPlot(MONTHS, prefix),
+    solAirPlot(results, prefix, SI_DISPLAY),
+    insideFluxPlot(results, prefix, SI_DISPLAY),
+    stackedGainPlot(results, prefix, SI_DISPLAY),
+    monthlyPlot(MONTHS, prefix, SI_DISPLAY),
   ];
 }
 
@@ -64,7 +65,7 @@ Deno.test("scenario plots are byte-identical when rendered twice", () => {
 
 Deno.test("the stacked gain plot draws one bar per surface and step, above and below the zero line", () => {
   const results = mixedDay();
-  const svg = parseFragment(stackedGainPlot(results, "p").markup).querySelector("svg")!;
+  const svg = parseFragment(stackedGainPlot(results, "p", SI_DISPLAY).markup).querySelector("svg")!;
   const bars = Array.from(svg.querySelectorAll('g[aria-label="bar"] rect'));
   assert.equal(bars.length, 24 * 3);
   const zero = Number(svg.querySelector('g[aria-label="rule"] line')?.getAttribute("y1"));
@@ -80,7 +81,7 @@ Deno.test("the stacked gain plot draws one bar per surface and step, above and b
 });
 
 Deno.test("the monthly plot draws twelve gain bars above and twelve loss bars below zero", () => {
-  const svg = parseFragment(monthlyPlot(MONTHS, "p").markup).querySelector("svg")!;
+  const svg = parseFragment(monthlyPlot(MONTHS, "p", SI_DISPLAY).markup).querySelector("svg")!;
   const groups = Array.from(svg.querySelectorAll('g[aria-label="bar"]'));
   assert.equal(groups.length, 2);
   // January has no gain (0 J), so eleven gain bars have height; every month has a loss except December.

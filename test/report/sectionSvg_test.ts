@@ -1,4 +1,5 @@
 import assert from "node:assert/strict";
+import { SI_DISPLAY } from "../../src/report/displayUnits.ts";
 import { renderSectionSvg } from "../../src/report/sectionSvg.ts";
 import { assertNoLiveMarkup, parseFragment } from "./dom.ts";
 import { HOSTILE, wall } from "./fixture.ts";
@@ -9,7 +10,7 @@ function layerRects(svg: Element): Element[] {
 }
 
 Deno.test("renderSectionSvg() draws massive layers to scale and gaps at nominal width", () => {
-  const svg = parseFragment(renderSectionSvg(wall()).markup).querySelector("svg");
+  const svg = parseFragment(renderSectionSvg(wall(), SI_DISPLAY).markup).querySelector("svg");
   assert.ok(svg !== null);
   const widths = layerRects(svg).map((r) => Number(r.getAttribute("width")));
   assert.equal(widths.length, 5);
@@ -23,7 +24,7 @@ Deno.test("renderSectionSvg() draws massive layers to scale and gaps at nominal 
 });
 
 Deno.test("renderSectionSvg() labels OUTSIDE left of INSIDE, numbers layers and marks not to scale", () => {
-  const markup = renderSectionSvg(wall()).markup;
+  const markup = renderSectionSvg(wall(), SI_DISPLAY).markup;
   const svg = parseFragment(markup).querySelector("svg");
   assert.ok(svg !== null);
   assert.equal(svg.getAttribute("xmlns"), "http://www.w3.org/2000/svg");
@@ -41,7 +42,7 @@ Deno.test("renderSectionSvg() labels OUTSIDE left of INSIDE, numbers layers and 
 
 Deno.test("renderSectionSvg() escapes hostile construction ids", () => {
   const c = { ...wall(), id: HOSTILE.svg + HOSTILE.script };
-  const markup = renderSectionSvg(c).markup;
+  const markup = renderSectionSvg(c, SI_DISPLAY).markup;
   const body = parseFragment(markup);
   assertNoLiveMarkup(markup, body);
   assert.equal(body.querySelectorAll("svg").length, 1);

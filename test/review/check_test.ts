@@ -82,13 +82,17 @@ Deno.test("check finds every planted problem at its file:line:col with its rule,
   assert.equal(severities["density-in-lb-per-ft3@20-walls.md:109:5"], "warning");
 });
 
-Deno.test("check raises nothing beyond notes on the clean demo project, and --strict passes", async () => {
+Deno.test("check raises nothing beyond notes and EW-1's unmet U target on the demo; --strict reports it", async () => {
   const found = await findings(DEMO);
-  assert.deepStrictEqual(found.filter((f) => f.severity !== "note").map((f) => `${f.rule}@${f.at}`), []);
+  // The one warning is a compliance finding: EW-1 with its studs (combined method) misses the client's 0.18.
+  assert.deepStrictEqual(found.filter((f) => f.severity !== "note").map((f) => `${f.rule}@${f.at}`), [
+    "limit-not-met@20-walls.md:37:1",
+  ]);
   // The demo's defaults are listed (one note per `default:` assumption) and its cavity cites ISO 6946 in prose.
-  assert.ok(found.some((f) => f.rule === "default-used" && f.at === "20-walls.md:31:1"));
-  assert.ok(found.some((f) => f.rule === "source-in-prose-only" && f.at === "20-walls.md:107:5"));
-  assert.equal((await check(DEMO, "text", true)).code, 0);
+  assert.ok(found.some((f) => f.rule === "default-used" && f.at === "20-walls.md:37:1"));
+  assert.ok(found.some((f) => f.rule === "source-in-prose-only" && f.at === "20-walls.md:117:5"));
+  assert.equal((await check(DEMO, "text")).code, 0);
+  assert.equal((await check(DEMO, "text", true)).code, 1);
 });
 
 Deno.test("JSON findings have the fluxnote-check/1 shape; plausibility findings fill value, expected and source", async () => {
@@ -113,7 +117,7 @@ Deno.test("JSON findings have the fluxnote-check/1 shape; plausibility findings 
 Deno.test("--strict turns a review warning into exit 1; without it the exit code is 0", async () => {
   const dir = await Deno.makeTempDir();
   copyProject(DEMO, dir);
-  // Drop the source of one project material: one source-missing warning, nothing else.
+  // Drop the source of one project material: one source-missing warning besides EW-1's limit-not-met.
   const path = join(dir, "10-materials.md");
   const text = Deno.readTextFileSync(path);
   const edited = text.replace(/^source: "From memory: typical values for thin-coat.*\n/m, "");
@@ -122,7 +126,7 @@ Deno.test("--strict turns a review warning into exit 1; without it the exit code
   const loose = await check(dir, "text");
   assert.equal(loose.code, 0);
   assert.match(loose.stderr, /10-materials\.md:47:1: warning: Material "render-thin-coat" gives no source/);
-  assert.match(loose.stdout, /^0 error\(s\), 1 warning\(s\), \d+ note\(s\)/);
+  assert.match(loose.stdout, /^0 error\(s\), 2 warning\(s\), \d+ note\(s\)/);
   assert.equal((await check(dir, "text", true)).code, 1);
 });
 

@@ -1,0 +1,85 @@
+/**
+ * Building the bridged-wall fixture end to end: results.json carries the new keys with the values of the hand
+ * derivation in test/engine/bridgedLayer_test.ts, a failing limit does not fail the build, and the package
+ * shows the combined-method table, the corrections, the Requirements table and the cover count.
+ */
+import assert from "node:assert/strict";
+import { join } from "node:path";
+import { runBuild } from "../../src/commands/build.ts";
+import type { ResultsJson } from "../../src/results/types.ts";
+import { parseDocument } from "./dom.ts";
+
+const FIXTURE = new URL("../fixtures/bridged/", import.meta.url).pathname;
+const quiet = { stdout: () => {}, stderr: () => {} };
+
+// Hand derivation (test/engine/bridgedLayer_test.ts): R'_T = 77/36, R''_T = 117.1/57, R_T = mean.
+const UPPER = 77 / 36;
+const LOWER = 117.1 / 57;
+const R_T = (UPPER + LOWER) / 2;
+const close = (a: unknown, b: number, tol = 1e-12) =>
+  assert.ok(typeof a === "number" && Math.abs(a - b) <= tol * Math.abs(b), `${a} ≠ ${b}`);
+
+async function built(): Promise<{ code: number; results: ResultsJson; doc: Document }> {
+  const out = join(await Deno.makeTempDir(), "out");
+  const code = await runBuild({ project: FIXTURE, out }, quiet);
+  const results = JSON.parse(Deno.readTextFileSync(join(out, "results.json"))) as ResultsJson;
+  return { code, results, doc: parseDocument(Deno.readTextFileSync(join(out, "package.html"))) };
+}
+
+Deno.test("build of a bridged wall: results.json has the combined method, corrections, f_Rsi and limits", async () => {
+  const { code, results } = await built();
+  assert.equal(code, 0, "an unmet limit is a compliance finding, not a failed check");
+  const wall = results.constructions["EW-B"]!;
+  close(wall.R, R_T);
+  close(wall.U, 1 / R_T);
+  const cm = wall["combinedMethod"] as Record<string, number>;
+  close(cm["upperR"], UPPER);
+  close(cm["lowerR"], LOWER);
+  close(cm["R"], R_T);
+  close(cm["relativeError"], (UPPER - LOWER) / (2 * R_T));
+  assert.equal(cm["applicable"], true);
+  // ΔU = ΔU_f + ΔU''·(R_1/R_T)² with R_1 = R_T − 0.30 (equivalent stud-zone layer), ISO 6946 Annex F (from memory)
+  const deltaU = 0.02 + 0.01 * ((R_T - 0.3) / R_T) ** 2;
+  close((wall["corrections"] as { deltaU: number }).deltaU, deltaU);
+  close(wall["correctedU"], 1 / R_T + deltaU);
+  close(wall["temperatureFactor"], 1 - 0.13 / R_T); // f_Rsi = 1 − U·R_si, ISO 13788
+  const limits = wall["limits"] as { id: string; pass: boolean; scope: string; limit: number }[];
+  assert.deepStrictEqual(limits.map((l) => [l.id, l.pass, l.scope, l.limit]), [
+    ["max-u:EW-B", false, "construction", 0.49], // U_c ≈ 0.504 > 0.49, although U ≈ 0.477 alone would pass
+    ["min-temperature-factor:EW-B", true, "project", 0.9],
+  ]);
+  // The homogeneous wall inherits both project-wide limits; it has no combinedMethod key.
+  const plain = results.constructions["EW-H"]!;
+  assert.equal(plain["combinedMethod"], undefined);
+  assert.deepStrictEqual((plain["limits"] as { id: string }[]).map((l) => l.id), [
+    "max-u:EW-H",
+    "min-temperature-factor:EW-H",
+  ]);
+  // Limits are kept out of checks; the equivalent-layer check is in, and passes.
+  assert.ok(results.checks.every((c) => !c.id.startsWith("max-u")));
+  assert.ok(results.checks.some((c) => c.id === "equivalent-layer-R" && c.pass));
+  assert.ok(results.assumptions.some((a) => a.id === "equivalent-layer:EW-B" && /2-D effects/.test(a.text)));
+  assert.ok(
+    results.assumptions.some((a) => a.id === "correction:EW-B" && /does not enter the dynamic/.test(a.text)),
+  );
+});
+
+Deno.test("build of a bridged wall: the package shows the combined-method and Requirements tables", async () => {
+  const { doc } = await built();
+  const table = doc.querySelector("table.combined-method");
+  assert.ok(table !== null);
+  const text = table.textContent ?? "";
+  assert.match(text, /Upper limit R'_T/);
+  assert.match(text, /2\.139/); // R'_T = 77/36
+  assert.match(text, /2\.054/); // R''_T = 117.1/57
+  assert.match(text, /2\.097/); // R_T
+  assert.match(text, /APPLIES/);
+  const layerTable = doc.querySelector("table.layer-table")?.textContent ?? "";
+  assert.match(layerTable, /insulation 80 % \/ studs 20 %/);
+  assert.match(doc.querySelector("p.corrected-u")?.textContent ?? "", /does not enter the dynamic response/);
+  const rows = Array.from(doc.querySelectorAll("table.requirements tbody tr")).map((r) =>
+    r.querySelector(".result")?.textContent
+  );
+  assert.deepStrictEqual(rows, ["NOT MET", "MET", "MET", "MET"]);
+  assert.match(doc.querySelector(".limits-summary")?.textContent ?? "", /1 of 4 limits NOT MET/);
+});

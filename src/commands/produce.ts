@@ -56,20 +56,21 @@ export function produceOutputs(loaded: LoadedProject, progress?: (message: strin
     runtimeVersion: runtimeVersion(),
     resultsJsonText: resultsText,
   });
-  const encoder = new TextEncoder();
   const files: OutputFile[] = [
-    { path: "package.html", bytes: encoder.encode(page) },
-    { path: "results.json", bytes: encoder.encode(resultsText) },
-    { path: "csv/constructions.csv", bytes: encoder.encode(constructionsCsv(loaded.model, results)) },
+    { path: "package.html", text: page },
+    { path: "results.json", text: resultsText },
+    { path: "csv/constructions.csv", text: constructionsCsv(loaded.model, results) },
     ...loaded.model.constructions.map((c) => ({
       path: `csv/factors-${c.id}.csv`,
-      bytes: encoder.encode(factorsCsv(c.id, results)),
+      text: factorsCsv(c.id, results),
     })),
     ...loaded.model.scenarios.filter((s) => s.kind === "design-day").map((s) => ({
       path: `csv/scenario-${s.id}.csv`,
-      bytes: encoder.encode(designDayCsv(s.id, results)),
+      text: designDayCsv(s.id, results),
     })),
-    ...computed.csvFiles.map((f) => ({ path: f.path, bytes: encoder.encode(f.text) })),
+    ...computed.csvFiles.map((
+      f,
+    ) => (f.chunks === undefined ? { path: f.path, text: f.text } : { path: f.path, chunks: f.chunks })),
   ];
   return { ok: true, outputs: { results, resultsJsonText: resultsText, page, files } };
 }

@@ -1,10 +1,13 @@
 import { basename, dirname, join } from "node:path";
 
-/** One file of the output set, path relative to the output folder (POSIX). */
-export interface OutputFile {
-  readonly path: string;
-  readonly bytes: Uint8Array;
-}
+/** One file of the output set, path relative to the output folder (POSIX): text (written as UTF-8) or bytes. */
+export type OutputFile =
+  | { readonly path: string; readonly bytes: Uint8Array }
+  | { readonly path: string; readonly text: string }
+  | { readonly path: string; readonly chunks: () => Iterable<string> };
+
+/** Characters encoded per write, so a large text never needs a second full copy as bytes. */
+const TEXT_CHUNK = 1 << 20;
 
 /**
  * Replaces the output folder with a new set of files as one unit: the set is written and flushed in a
@@ -26,7 +29,9 @@ export async function writeOutputSet(
       const target = join(staging, file.path);
       await Deno.mkdir(dirname(target), { recursive: true });
       using handle = await Deno.open(target, { write: true, createNew: true });
-      await writeAll(handle, file.bytes);
+      if ("bytes" in file) await writeAll(handle, file.bytes);
+      else if ("text" in file) await writeText(handle, file.text);
+      else for (const chunk of file.chunks()) await writeText(handle, chunk);
       await handle.sync();
     }
     beforeSwap?.();
@@ -34,6 +39,17 @@ export async function writeOutputSet(
   } catch (cause) {
     await Deno.remove(staging, { recursive: true }).catch(() => {});
     throw cause;
+  }
+}
+
+async function writeText(handle: Deno.FsFile, text: string): Promise<void> {
+  const encoder = new TextEncoder();
+  for (let start = 0; start < text.length; start += TEXT_CHUNK) {
+    let end = Math.min(start + TEXT_CHUNK, text.length);
+    // Keep a surrogate pair together so each chunk is valid UTF-16.
+    const last = text.charCodeAt(end - 1);
+    if (end < text.length && last >= 0xd800 && last <= 0xdbff) end--;
+    await writeAll(handle, encoder.encode(text.slice(start, end)));
   }
 }
 

@@ -33,7 +33,11 @@ export interface ComputedProject {
   readonly steady: Readonly<Record<string, SteadyState>>;
   readonly analyses: Readonly<Record<string, DynamicAnalysis>>;
   /** Extra CSV files to write under csv/ (hourly series of weather years). */
-  readonly csvFiles: readonly { readonly path: string; readonly text: string }[];
+  readonly csvFiles: readonly {
+    readonly path: string;
+    readonly text: string;
+    readonly chunks?: () => Iterable<string>;
+  }[];
 }
 
 export type ComputeOutcome =
@@ -130,7 +134,7 @@ interface ScenarioParts {
   readonly checks: CheckResult[];
   readonly assumptions: Assumption[];
   readonly warnings: { at: string; message: string }[];
-  readonly csvFiles: { path: string; text: string }[];
+  readonly csvFiles: { path: string; readonly text: string; chunks?: () => Iterable<string> }[];
   readonly problems: Diagnostic[];
 }
 

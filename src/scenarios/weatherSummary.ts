@@ -1,4 +1,5 @@
 import type { EnergyTotals } from "../results/types.ts";
+import { civilFromDays, daysFromCivil } from "../climate/weatherTime.ts";
 
 /** Gain and loss energy of one month, J. */
 export interface MonthTotals {
@@ -109,6 +110,17 @@ export function weatherCsvText(
   surfaces: readonly CsvSurface[],
   totalW: ArrayLike<number>,
 ): string {
+  return [...weatherCsvChunks(timeLabels, outdoorC, indoorC, surfaces, totalW)].join("");
+}
+
+/** The same CSV as `weatherCsvText`, produced a block of rows at a time so a large year never sits in memory whole. */
+export function* weatherCsvChunks(
+  timeLabels: readonly string[],
+  outdoorC: ArrayLike<number>,
+  indoorC: ArrayLike<number>,
+  surfaces: readonly CsvSurface[],
+  totalW: ArrayLike<number>,
+): Generator<string> {
   const quote = (name: string) => (/[",\n\r]/.test(name) ? `"${name.replaceAll('"', '""')}"` : name);
   const header = ["time", "outdoor_degC", "indoor_degC"];
   for (const s of surfaces) {
@@ -119,7 +131,8 @@ export function weatherCsvText(
     );
   }
   header.push("total_heat_gain_W");
-  const rows = [header.join(",")];
+  yield `${header.join(",")}\n`;
+  const block: string[] = [];
   for (let k = 0; k < timeLabels.length; k++) {
     const cells = [timeLabels[k]!, plainNumber(outdoorC[k]!, 3), plainNumber(indoorC[k]!, 3)];
     for (const s of surfaces) {
@@ -131,7 +144,35 @@ export function weatherCsvText(
       );
     }
     cells.push(plainNumber(totalW[k]!, 2));
-    rows.push(cells.join(","));
+    block.push(`${cells.join(",")}\n`);
+    if (block.length === 96 || k === timeLabels.length - 1) {
+      yield block.join("");
+      block.length = 0;
+    }
+  }
+}
+
+/**
+ * The daily summary CSV of a weather scenario: `date`, then per surface `<id>:max_heat_gain_W`,
+ * `<id>:min_heat_gain_W`, `<id>:mean_heat_gain_W`; one row per calendar day from `firstDate`, LF line ends.
+ */
+export function dailyCsvText(firstDate: string, columns: readonly ({ id: string } & DailySummary)[]): string {
+  const quote = (name: string) => (/[",\n\r]/.test(name) ? `"${name.replaceAll('"', '""')}"` : name);
+  const header = [
+    "date",
+    ...columns.flatMap((c) => ["max", "min", "mean"].map((k) => quote(`${c.id}:${k}_heat_gain_W`))),
+  ];
+  const [year, month, day] = firstDate.split("-").map(Number) as [number, number, number];
+  const start = daysFromCivil(year, month, day);
+  const days = columns[0]?.mean.length ?? 0;
+  const rows = [header.join(",")];
+  for (let d = 0; d < days; d++) {
+    const date = civilFromDays(start + d);
+    const label = `${date.year}-${String(date.month).padStart(2, "0")}-${String(date.day).padStart(2, "0")}`;
+    rows.push(
+      [label, ...columns.flatMap((c) => [c.max[d]!, c.min[d]!, c.mean[d]!].map((v) => plainNumber(v, 2)))]
+        .join(","),
+    );
   }
   return `${rows.join("\n")}\n`;
 }

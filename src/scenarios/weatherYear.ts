@@ -25,12 +25,13 @@ import {
 } from "./weatherRecursion.ts";
 import {
   type CsvSurface,
+  dailyCsvText,
   type DailySummary,
   dailySummary,
   energyTotals,
   type TimedPeak,
   timedPeak,
-  weatherCsvText,
+  weatherCsvChunks,
 } from "./weatherSummary.ts";
 
 export { WARM_UP_LIMIT, WEATHER_ENERGY_BALANCE_LIMIT };
@@ -43,8 +44,6 @@ export interface WeatherSurfaceResults extends SurfaceResults {
   /** Most negative heat gain (largest loss), W, with its time. */
   readonly peakLoss: TimedPeak;
   readonly totals: Required<EnergyTotals>;
-  /** Daily max, min and mean heat gain, W, one value per calendar day from `daily.firstDate` of the scenario. */
-  readonly daily: DailySummary;
 }
 
 /** A weather-year scenario in results.json (DESIGN.md §4 plus extension keys). */
@@ -73,7 +72,8 @@ export interface WeatherScenarioResults extends ScenarioResults {
 /** A computed weather year with the CSV files to write under the output folder. */
 export interface WeatherOutcome extends ScenarioOutcome {
   readonly results: WeatherScenarioResults;
-  readonly csv: { path: string; text: string }[];
+  /** CSV files to write; `chunks`, when present, yields the same text block by block (used for large years). */
+  readonly csv: { path: string; readonly text: string; chunks?: () => Iterable<string> }[];
 }
 
 /** Computes a weather year: sol-air per surface, fluxes after a periodic warm-up, gains, summaries, checks and CSV. */
@@ -107,6 +107,7 @@ export function computeWeatherYear(
   const surfaces: Record<string, WeatherSurfaceResults> = {};
   const checks: CheckResult[] = [];
   const csvSurfaces: CsvSurface[] = [];
+  const dailyColumns: ({ id: string } & DailySummary)[] = [];
   const total = new Float64Array(n);
   const runs = inputs.map((input, s) => ({
     modes: context.analysisAt(input.surface.construction, dt).airToAir.modes,
@@ -155,8 +156,11 @@ export function computeWeatherYear(
       peakTime: peak.time,
       peakLoss: timedPeak(heatGain, boundary.timeLabels, dt, -1),
       totals: energyTotals(heatGain, weather.monthOfStep, dt),
-      daily: dailySummary(heatGain, boundary.dayIndexOfStep, boundary.dayCount),
     };
+    dailyColumns.push({
+      id: surface.id,
+      ...dailySummary(heatGain, boundary.dayIndexOfStep, boundary.dayCount),
+    });
     csvSurfaces.push({
       id: surface.id,
       incidentWPerM2: boundary.surfaces[s]!.incidentWPerM2,
@@ -166,6 +170,7 @@ export function computeWeatherYear(
     });
   });
   const csvPath = `csv/scenario-${scenario.id}.csv`;
+  const dailyPath = `csv/scenario-${scenario.id}-daily.csv`;
   const peak = timedPeak(total, boundary.timeLabels, dt, 1);
   const results: WeatherScenarioResults = {
     kind: "weather",
@@ -176,7 +181,10 @@ export function computeWeatherYear(
     totalHeatGain: [],
     peak: { heatGain: peak.heatGain, time_h: peak.time_h },
     totals: energyTotals(total, weather.monthOfStep, dt),
-    notes: notes(scenario.id, csvPath, dt),
+    notes: [
+      ...notes(scenario.id, csvPath, dt),
+      `Daily maximum, minimum and mean heat gain per surface are in ${dailyPath}.`,
+    ],
     csv: csvPath,
     peakTime: peak.time,
     peakLoss: timedPeak(total, boundary.timeLabels, dt, -1),
@@ -188,8 +196,25 @@ export function computeWeatherYear(
       ...dailySummary(total, boundary.dayIndexOfStep, boundary.dayCount),
     },
   };
-  const text = weatherCsvText(boundary.timeLabels, boundary.outdoorC, boundary.indoorC, csvSurfaces, total);
-  return { results, checks, assumptions, warnings, csv: [{ path: csvPath, text }] };
+  const chunks = () =>
+    weatherCsvChunks(boundary.timeLabels, boundary.outdoorC, boundary.indoorC, csvSurfaces, total);
+  const dailyText = dailyCsvText(boundary.firstDate, dailyColumns);
+  return {
+    results,
+    checks,
+    assumptions,
+    warnings,
+    csv: [
+      {
+        path: csvPath,
+        get text() {
+          return [...chunks()].join("");
+        },
+        chunks,
+      },
+      { path: dailyPath, text: dailyText },
+    ],
+  };
 }
 
 function warmUpAssumption(id: string, days: number, tau1H: number, at: string): Assumption {

@@ -1,6 +1,7 @@
 /** The echo of one input block (verbatim, with file:line) followed by its computed output. */
 import type { Segment } from "../project/model.ts";
 import { formatPosition } from "../project/position.ts";
+import { COMPACT_ABOVE_CONSTRUCTIONS } from "./compact.ts";
 import { renderConstructionOutput } from "./constructionOutput.ts";
 import { html, PRE_LEAD, type Trusted } from "./html.ts";
 import type { RenderContext } from "./packageInput.ts";
@@ -65,7 +66,15 @@ function constructionOutput(block: BlockSegment, ctx: RenderContext): Trusted {
     ? ctx.input.results.constructions[construction.id]
     : undefined;
   const anchor = ctx.constructionAnchors.get(construction.id) ?? "c-construction";
-  return renderConstructionOutput(construction, results, ctx.input.results.checks, anchor, ctx.display);
+  const compact = ctx.input.model.constructions.length > COMPACT_ABOVE_CONSTRUCTIONS;
+  return renderConstructionOutput(
+    construction,
+    results,
+    ctx.input.results.checks,
+    anchor,
+    ctx.display,
+    compact,
+  );
 }
 
 function outputFor(block: BlockSegment, ctx: RenderContext): Trusted {

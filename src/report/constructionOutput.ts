@@ -180,6 +180,7 @@ export function renderConstructionOutput(
   checks: readonly CheckResult[],
   anchor: string,
   d: DisplayUnits,
+  compact = false,
 ): Trusted {
   const countMismatch = results !== undefined && results.steady.layers.length !== construction.layers.length
     ? html`
@@ -231,8 +232,19 @@ export function renderConstructionOutput(
       results,
       checks,
       anchor,
-      subjectChecks(checks, `construction:${construction.id}`),
+      compact
+        ? compactChecks(checks, `construction:${construction.id}`)
+        : subjectChecks(checks, `construction:${construction.id}`),
       d,
+      compact,
     )}
   `;
+}
+
+function compactChecks(checks: readonly CheckResult[], subject: string): Trusted {
+  const own = checks.filter((c) => c.subject === subject);
+  const failed = own.filter((c) => !c.pass);
+  return failed.length === 0
+    ? html`<p class="pass">All ${String(own.length)} checks passed (listed with values in Appendix B).</p>`
+    : checksTable(failed);
 }

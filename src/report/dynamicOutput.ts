@@ -1,6 +1,7 @@
 /** The "Dynamic response" part after a construction's steady-state output: tables, CTFs, plots and checks. */
 import type { Construction } from "../project/model.ts";
 import type { CheckResult, ConstructionResults } from "../results/types.ts";
+import { COMPACT_ABOVE_CONSTRUCTIONS } from "./compact.ts";
 import { ctfSection } from "./ctfTables.ts";
 import { type DynamicView, readDynamic, seriesSum, stepResponse } from "./dynamicData.ts";
 import {
@@ -89,11 +90,21 @@ export function renderDynamicResponse(
   anchor: string,
   checksList: Trusted,
   d: DisplayUnits,
+  compact = false,
 ): Trusted {
   const view = readDynamic(results);
   const subject = `construction:${construction.id}`;
   const body = view === undefined
     ? html`<p class="fail">No dynamic results: results.json holds no complete dynamic entry for ${construction.id}.</p>`
+    : compact
+    ? html`
+      ${dynamicSummaryTable(view, d)}
+      <p
+        class="muted">A large project (more than ${String(
+          COMPACT_ABOVE_CONSTRUCTIONS,
+        )} constructions): the response factors, CTF coefficients, periodic factors and plots of ${construction
+          .id} are in results.json (Appendix B) and csv/factors-${construction.id}.csv.</p>
+    `
     : html`
       ${dynamicSummaryTable(view, d)}
       <h5>Response factors</h5>

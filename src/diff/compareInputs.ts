@@ -4,6 +4,7 @@ import { alignByKey } from "./align.ts";
 import {
   constructionFields,
   type Field,
+  heatingFields,
   infoFields,
   layerFields,
   materialFields,
@@ -197,5 +198,23 @@ export function compareInputs(a: InputSide, b: InputSide): Change[] {
         true,
       ),
   );
-  return [...project, ...materials, ...constructions, ...scenarios];
+  const heating = compareById(
+    "scenario",
+    { side: a, items: a.model.heatingScenarios ?? [] },
+    { side: b, items: b.model.heatingScenarios ?? [] },
+    (h) => heatingFields(h),
+    () => "heating scenario",
+    (id, o, n) =>
+      compareById(
+        "scenario",
+        { side: a, items: o.surfaces },
+        { side: b, items: n.surfaces },
+        (surface) => surfaceFields(surface),
+        (surface) => `surface on ${surface.construction}, ${surface.areaM2} m²`,
+        () => [],
+        (surfaceId) => ({ subject: id, part: `surface ${surfaceId}` }),
+        true,
+      ),
+  );
+  return [...project, ...materials, ...constructions, ...scenarios, ...heating];
 }

@@ -58,6 +58,14 @@ const QUANTITY_NAMES: Readonly<Record<EffectQuantity, string>> = {
   dailyLoss_J: "heat loss over the day",
   annualGain_J: "heat gain over the year",
   annualLoss_J: "heat loss over the year",
+  correctedU: "U-value with corrections",
+  temperatureFactor: "temperature factor f_Rsi",
+  limitsNotMet: "limits not met",
+  peakCoolingLoad: "peak cooling load",
+  peakCoolingLoadTime_h: "hour of peak cooling load",
+  designHeatLoss: "design heat loss",
+  insideSurfaceTemperature: "inside surface temperature",
+  mouldMargin: "mould margin f_Rsi − f_Rsi,min",
 };
 
 /** A readable name of a result quantity. */
@@ -79,7 +87,7 @@ function clock(hours: number): string {
 /** Prints one side of an effect; energies in kWh (1 kWh = 3.6 MJ), peak hours as a clock time. */
 export function effectValue(e: Effect, value: number | null): string {
   if (value === null) return "—";
-  if (e.quantity === "peakTime_h") return clock(value);
+  if (e.quantity === "peakTime_h" || e.quantity === "peakCoolingLoadTime_h") return clock(value);
   if (e.unit === "J") return withUnit(formatSig(value / 3.6e6, 4), "kWh");
   return withUnit(formatSig(value, 4), e.unit);
 }

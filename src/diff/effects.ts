@@ -1,3 +1,4 @@
+import type { HeatingResults } from "../results/heatingTypes.ts";
 import type { ConstructionResults, ResultsJson, ScenarioResults } from "../results/types.ts";
 import type { Effect, EffectQuantity } from "./types.ts";
 
@@ -26,6 +27,47 @@ function constructionQuantities(id: string, c: ConstructionResults): Quantity[] 
     { subject, quantity: "U", unit: "W/(m²·K)", value: finite(c.U), ratio: true },
     { subject, quantity: "decrementFactor", unit: "", value: finite(dynamic.decrementFactor), ratio: true },
     { subject, quantity: "timeLag_h", unit: "h", value: finite(dynamic.timeLag_h), ratio: true },
+    { subject, quantity: "correctedU", unit: "W/(m²·K)", value: finite(c.correctedU), ratio: true },
+    { subject, quantity: "temperatureFactor", unit: "", value: finite(c.temperatureFactor), ratio: true },
+    {
+      subject,
+      quantity: "limitsNotMet",
+      unit: "",
+      value: Array.isArray(c.limits)
+        ? c.limits.filter((l: { pass?: boolean }) => l.pass === false).length
+        : null,
+      ratio: false,
+    },
+  ];
+}
+
+function heatingQuantities(id: string, h: HeatingResults): Quantity[] {
+  const subject = `heating:${id}`;
+  return [
+    { subject, quantity: "designHeatLoss", unit: "W", value: finite(h.totalHeatLoss), ratio: true },
+    ...Object.entries(h.surfaces ?? {}).flatMap(([surfaceId, s]): Quantity[] => [
+      {
+        subject: `${subject}/${surfaceId}`,
+        quantity: "designHeatLoss",
+        unit: "W",
+        value: finite(s.heatLoss),
+        ratio: true,
+      },
+      {
+        subject: `${subject}/${surfaceId}`,
+        quantity: "insideSurfaceTemperature",
+        unit: "°C",
+        value: finite(s.insideSurfaceTemperature),
+        ratio: false,
+      },
+      {
+        subject: `${subject}/${surfaceId}`,
+        quantity: "mouldMargin",
+        unit: "",
+        value: finite(s.mould?.margin),
+        ratio: false,
+      },
+    ]),
   ];
 }
 
@@ -54,13 +96,30 @@ function scenarioQuantities(id: string, s: ScenarioResults): Quantity[] {
       ratio: false,
     },
   ]);
-  return [...own, ...surfaces];
+  const cooling = s.coolingLoad === undefined ? [] : [
+    {
+      subject,
+      quantity: "peakCoolingLoad" as const,
+      unit: "W",
+      value: finite(s.coolingLoad.peak.value),
+      ratio: true,
+    },
+    {
+      subject,
+      quantity: "peakCoolingLoadTime_h" as const,
+      unit: "h",
+      value: finite(s.coolingLoad.peak.time_h),
+      ratio: false,
+    },
+  ];
+  return [...own, ...cooling, ...surfaces];
 }
 
 function quantitiesOf(results: ResultsJson): Quantity[] {
   return [
     ...Object.entries(results.constructions ?? {}).flatMap(([id, c]) => constructionQuantities(id, c)),
     ...Object.entries(results.scenarios ?? {}).flatMap(([id, s]) => scenarioQuantities(id, s)),
+    ...Object.entries(results.heating ?? {}).flatMap(([id, h]) => heatingQuantities(id, h)),
   ];
 }
 

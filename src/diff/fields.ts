@@ -1,5 +1,6 @@
 import type {
   Construction,
+  HeatingScenario,
   MaterialDef,
   ProjectInfo,
   ResolvedLayer,
@@ -175,6 +176,17 @@ export function scenarioFields(s: Scenario): Field[] {
     : field("sky.model", "none");
   const date = `${String(s.month).padStart(2, "0")}-${String(s.day).padStart(2, "0")}`;
   return [...common, ...outdoor, ...field("date", date, "", /^\s*date\s*:/), ...sky];
+}
+
+/** The keys of a heating design condition (its surfaces are compared separately). */
+export function heatingFields(h: HeatingScenario): Field[] {
+  return [
+    ...field("kind", h.kind),
+    ...field("indoor", h.indoorC, UNIT.celsius),
+    ...field("outdoor.design-temperature", h.outdoorC, UNIT.celsius),
+    ...field("indoor-humidity", h.indoorRelativeHumidity),
+    ...field("moisture-surface-resistance", h.moistureSurfaceResistance, UNIT.resistance),
+  ];
 }
 
 /** The keys of one exposed surface of a scenario. */

@@ -58,7 +58,15 @@ export type EffectQuantity =
   | "dailyGain_J"
   | "dailyLoss_J"
   | "annualGain_J"
-  | "annualLoss_J";
+  | "annualLoss_J"
+  | "correctedU"
+  | "temperatureFactor"
+  | "limitsNotMet"
+  | "peakCoolingLoad"
+  | "peakCoolingLoadTime_h"
+  | "designHeatLoss"
+  | "insideSurfaceTemperature"
+  | "mouldMargin";
 
 /** How one result quantity moved between the two sides. */
 export interface Effect {

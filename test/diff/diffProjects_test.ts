@@ -124,8 +124,9 @@ Deno.test("diffProjects() of a revision with itself finds no differences", async
   const diff = diffProjects(b, b);
   assert.equal(diff.identical, true);
   assert.deepEqual([diff.files, diff.changes, diff.effects], [[], [], []]);
-  // 2 constructions × 3 quantities + scenario (peak, hour, gain, loss) + 2 surfaces × (peak, hour)
-  assert.equal(diff.unchangedEffects, 6 + 4 + 4);
+  // 2 constructions × 6 quantities (U, decrement, lag, corrected U, f_Rsi, limits not met)
+  // + scenario (peak, hour, gain, loss) + 2 surfaces × (peak, hour)
+  assert.equal(diff.unchangedEffects, 12 + 4 + 4);
 });
 
 Deno.test("diffProjects() in the other direction lists the inverse changes", async () => {

@@ -1,17 +1,8 @@
 /** Reads a `scenario` block of `kind: heating`: steady winter design conditions and the surfaces to assess. */
+import { readSurfaceCore, readSurfaceList } from "./surfaceList.ts";
 import { type Diagnostic, error, errorCount } from "./diagnostic.ts";
-import {
-  type Fields,
-  readFields,
-  readId,
-  readList,
-  readNumber,
-  readQuantity,
-  readText,
-  withSuggestion,
-} from "./fields.ts";
+import { type Fields, readFields, readId, readNumber, readQuantity } from "./fields.ts";
 import type { HeatingScenario, ScenarioSurface } from "./model.ts";
-import { describeCodePoints } from "./quantity.ts";
 import type { YamlValue } from "./yamlTree.ts";
 
 /** Allowed keys of a heating scenario block. */
@@ -157,35 +148,12 @@ function readHeatingSurfaces(
   constructionIds: readonly string[],
   out: Diagnostic[],
 ): ScenarioSurface[] {
-  const items = readList(fields, "surfaces", out, true) ?? [];
-  if (items.length === 0 && fields.entries.has("surfaces")) {
-    out.push(
-      error(
-        fields.entries.get("surfaces")?.value.at ?? fields.at,
-        "no-surfaces",
-        "The scenario has no surfaces",
-        "list at least one surface: `- { id: wall-south, construction: EW-1, area: 42 m^2 }`",
-      ),
-    );
-  }
-  const surfaces: ScenarioSurface[] = [];
-  for (const [index, item] of items.entries()) {
-    const surface = readHeatingSurface(item, index, constructionIds, out);
-    if (surface === undefined) continue;
-    if (surfaces.some((s) => s.id === surface.id)) {
-      out.push(
-        error(
-          surface.at,
-          "duplicate-id",
-          `Duplicate surface id "${surface.id}" in the scenario`,
-          "give each surface its own id",
-        ),
-      );
-      continue;
-    }
-    surfaces.push(surface);
-  }
-  return surfaces;
+  return readSurfaceList(
+    fields,
+    "{ id: wall-south, construction: EW-1, area: 42 m^2 }",
+    out,
+    (item, index) => readHeatingSurface(item, index, constructionIds, out),
+  );
 }
 
 function readHeatingSurface(
@@ -197,41 +165,14 @@ function readHeatingSurface(
   const surface = readFields(item, HEATING_SURFACE_KEYS, `surface ${index + 1}`, out);
   if (surface === undefined) return undefined;
   const before = errorCount(out);
-  const id = readId(surface, "id", out);
-  const label = id?.id ?? String(index + 1);
-  const construction = readText(surface, "construction", out, { example: "EW-1" });
-  if (construction !== undefined && !constructionIds.includes(construction)) {
-    out.push(
-      error(
-        surface.entries.get("construction")?.value.at ?? surface.at,
-        "unknown-construction",
-        `Unknown construction "${describeCodePoints(construction)}" in surface ${label}`,
-        withSuggestion(
-          construction,
-          constructionIds,
-          `constructions defined: ${constructionIds.join(", ") || "none"}`,
-        ),
-      ),
-    );
-  }
-  const areaM2 = readQuantity(surface, "area", "area", out, true);
-  if (areaM2 !== undefined && !(areaM2 > 0)) {
-    out.push(
-      error(
-        surface.entries.get("area")?.value.at ?? surface.at,
-        "not-positive",
-        `Expected a positive area, found ${areaM2} m^2`,
-        "give the net area of the surface",
-      ),
-    );
-  }
+  const { id, construction, areaM2 } = readSurfaceCore(surface, index, constructionIds, out);
   const azimuthDeg = readQuantity(surface, "azimuth", "angle", out);
   const tiltDeg = readQuantity(surface, "tilt", "angle", out);
   if (errorCount(out) > before || id === undefined || construction === undefined || areaM2 === undefined) {
     return undefined;
   }
   return {
-    id: id.id,
+    id,
     construction,
     areaM2,
     at: surface.at,

@@ -1,4 +1,5 @@
 import { type Diagnostic, error, errorCount } from "./diagnostic.ts";
+import { readSurfaceCore, readSurfaceList } from "./surfaceList.ts";
 import { readTimestep } from "./constructionBlock.ts";
 import {
   type Fields,
@@ -6,11 +7,9 @@ import {
   readChoice,
   readFields,
   readId,
-  readList,
   readNumber,
   readQuantity,
   readText,
-  withSuggestion,
 } from "./fields.ts";
 import { isHeatingBlock, readHeatingScenario } from "./heatingBlock.ts";
 import type {
@@ -400,37 +399,12 @@ function readSurfaces(
   constructionIds: readonly string[],
   out: Diagnostic[],
 ): ScenarioSurface[] {
-  const items = readList(fields, "surfaces", out, true) ?? [];
-  if (items.length === 0 && fields.entries.has("surfaces")) {
-    out.push(
-      error(
-        fields.entries.get("surfaces")?.value.at ?? fields.at,
-        "no-surfaces",
-        "The scenario has no surfaces",
-        "list at least one surface: `- { id: wall-south, construction: EW-1, azimuth: 180 deg, tilt: 90 deg, area: 42 m^2, absorptance: 0.6 }`",
-      ),
-    );
-  }
-  const surfaces: ScenarioSurface[] = [];
-  const seen = new Set<string>();
-  items.forEach((item, index) => {
-    const surface = readSurface(item, index, constructionIds, out);
-    if (surface === undefined) return;
-    if (seen.has(surface.id)) {
-      out.push(
-        error(
-          surface.at,
-          "duplicate-id",
-          `Duplicate surface id "${surface.id}" in the scenario`,
-          "give each surface its own id",
-        ),
-      );
-      return;
-    }
-    seen.add(surface.id);
-    surfaces.push(surface);
-  });
-  return surfaces;
+  return readSurfaceList(
+    fields,
+    "{ id: wall-south, construction: EW-1, azimuth: 180 deg, tilt: 90 deg, area: 42 m^2, absorptance: 0.6 }",
+    out,
+    (item, index) => readSurface(item, index, constructionIds, out),
+  );
 }
 
 function readSurface(
@@ -442,34 +416,7 @@ function readSurface(
   const surface = readFields(item, SURFACE_KEYS, `surface ${index + 1}`, out);
   if (surface === undefined) return undefined;
   const before = errorCount(out);
-  const id = readId(surface, "id", out);
-  const label = id?.id ?? String(index + 1);
-  const construction = readText(surface, "construction", out, { example: "EW-1" });
-  if (construction !== undefined && !constructionIds.includes(construction)) {
-    out.push(
-      error(
-        surface.entries.get("construction")?.value.at ?? surface.at,
-        "unknown-construction",
-        `Unknown construction "${describeCodePoints(construction)}" in surface ${label}`,
-        withSuggestion(
-          construction,
-          constructionIds,
-          `constructions defined: ${constructionIds.join(", ") || "none"}`,
-        ),
-      ),
-    );
-  }
-  const areaM2 = readQuantity(surface, "area", "area", out, true);
-  if (areaM2 !== undefined && !(areaM2 > 0)) {
-    out.push(
-      error(
-        surface.entries.get("area")?.value.at ?? surface.at,
-        "not-positive",
-        `Expected a positive area, found ${areaM2} m^2`,
-        "give the net area of the surface",
-      ),
-    );
-  }
+  const { id, label, construction, areaM2 } = readSurfaceCore(surface, index, constructionIds, out);
   const solAirEntry = surface.entries.get("sol-air");
   const solAirC = solAirEntry === undefined
     ? undefined
@@ -527,7 +474,7 @@ function readSurface(
       v !== undefined
     ),
   );
-  return { id: id.id, construction, areaM2, at: surface.at, ...present };
+  return { id, construction, areaM2, at: surface.at, ...present };
 }
 
 function inRange(

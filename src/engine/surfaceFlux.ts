@@ -127,27 +127,13 @@ export function repeatedDayFlux(
   relativeTolerance = 1e-4,
   maxDays = 2000,
 ): RepeatedDay {
-  const mean = (xs: readonly number[]) => xs.reduce((a, b) => a + b, 0) / xs.length;
-  const run = new SurfaceRecursion(modes, mean(solAirC), mean(indoorC));
-  let previousPeak = NaN;
-  let inside: number[] = [];
-  let outside: number[] = [];
-  for (let day = 1; day <= maxDays; day++) {
-    inside = [];
-    outside = [];
-    for (let k = 0; k < solAirC.length; k++) {
-      const [qi, qo] = run.step(solAirC[k]!, indoorC[k]!);
-      inside.push(qi);
-      outside.push(qo);
-    }
-    const peak = Math.max(...inside.map(Math.abs));
-    const change = Math.abs(peak - previousPeak) / Math.max(peak, 1e-12);
-    if (day >= 2 && change < relativeTolerance) {
-      return { insideWPerM2: inside, outsideWPerM2: outside, days: day, peakChange: change };
-    }
-    previousPeak = peak;
-  }
-  return { insideWPerM2: inside, outsideWPerM2: outside, days: maxDays, peakChange: NaN };
+  const run = new SurfaceRecursion(modes, meanOf(solAirC), meanOf(indoorC));
+  return repeatUntilSettled(
+    solAirC.length,
+    (k) => run.step(solAirC[k]!, indoorC[k]!),
+    relativeTolerance,
+    maxDays,
+  );
 }
 
 /** Polynomial CTF coefficients of one construction: X, Y, Z (n = 0, 1, …) and Φ (n = 1, 2, …). */
@@ -171,42 +157,54 @@ export function ctfRepeatedDayFlux(
   relativeTolerance = 1e-4,
   maxDays = 2000,
 ): RepeatedDay {
-  const n = solAirC.length;
-  const mean = (xs: readonly number[]) => xs.reduce((a, b) => a + b, 0) / xs.length;
-  const meanOut = mean(solAirC);
-  const meanIn = mean(indoorC);
+  const meanOut = meanOf(solAirC);
+  const meanIn = meanOf(indoorC);
   const history = Math.max(ctf.X.length, ctf.Y.length, ctf.Z.length, ctf.Phi.length + 1) + 1;
   const tOut: number[] = new Array<number>(history).fill(meanOut);
   const tIn: number[] = new Array<number>(history).fill(meanIn);
   const qIn: number[] = new Array<number>(history).fill(uValue * (meanOut - meanIn));
   const qOut: number[] = qIn.slice();
+  const step = (k: number): [number, number] => {
+    tOut.unshift(solAirC[k]!);
+    tIn.unshift(indoorC[k]!);
+    tOut.length = history;
+    tIn.length = history;
+    let qi = 0;
+    let qo = 0;
+    for (let j = 0; j < ctf.Y.length; j++) {
+      qi += ctf.Y[j]! * tOut[j]!;
+      qo -= ctf.Y[j]! * tIn[j]!;
+    }
+    for (let j = 0; j < ctf.Z.length; j++) qi -= ctf.Z[j]! * tIn[j]!;
+    for (let j = 0; j < ctf.X.length; j++) qo += ctf.X[j]! * tOut[j]!;
+    for (let j = 0; j < ctf.Phi.length; j++) {
+      qi += ctf.Phi[j]! * qIn[j]!;
+      qo += ctf.Phi[j]! * qOut[j]!;
+    }
+    qIn.unshift(qi);
+    qOut.unshift(qo);
+    qIn.length = history;
+    qOut.length = history;
+    return [qi, qo];
+  };
+  return repeatUntilSettled(solAirC.length, step, relativeTolerance, maxDays);
+}
+
+/** Repeats a day (one call of `step` per time step) until the daily peak |inside flux| settles. */
+function repeatUntilSettled(
+  steps: number,
+  step: (k: number) => [number, number],
+  relativeTolerance: number,
+  maxDays: number,
+): RepeatedDay {
   let previousPeak = NaN;
   let inside: number[] = [];
   let outside: number[] = [];
   for (let day = 1; day <= maxDays; day++) {
     inside = [];
     outside = [];
-    for (let k = 0; k < n; k++) {
-      tOut.unshift(solAirC[k]!);
-      tIn.unshift(indoorC[k]!);
-      tOut.length = history;
-      tIn.length = history;
-      let qi = 0;
-      let qo = 0;
-      for (let j = 0; j < ctf.Y.length; j++) {
-        qi += ctf.Y[j]! * tOut[j]!;
-        qo -= ctf.Y[j]! * tIn[j]!;
-      }
-      for (let j = 0; j < ctf.Z.length; j++) qi -= ctf.Z[j]! * tIn[j]!;
-      for (let j = 0; j < ctf.X.length; j++) qo += ctf.X[j]! * tOut[j]!;
-      for (let j = 0; j < ctf.Phi.length; j++) {
-        qi += ctf.Phi[j]! * qIn[j]!;
-        qo += ctf.Phi[j]! * qOut[j]!;
-      }
-      qIn.unshift(qi);
-      qOut.unshift(qo);
-      qIn.length = history;
-      qOut.length = history;
+    for (let k = 0; k < steps; k++) {
+      const [qi, qo] = step(k);
       inside.push(qi);
       outside.push(qo);
     }
@@ -218,4 +216,8 @@ export function ctfRepeatedDayFlux(
     previousPeak = peak;
   }
   return { insideWPerM2: inside, outsideWPerM2: outside, days: maxDays, peakChange: NaN };
+}
+
+function meanOf(xs: readonly number[]): number {
+  return xs.reduce((a, b) => a + b, 0) / xs.length;
 }

@@ -6,7 +6,7 @@ import type { RenderContext } from "./packageInput.ts";
 
 /** Renders section 5, one row per assumption. */
 export function renderAssumptionsSection(ctx: RenderContext): Trusted {
-  const list = ctx.input.model.assumptions;
+  const list = ctx.input.results.assumptions;
   const body = list.length === 0 ? html`<p>No assumptions were recorded.</p>` : html`
     <table>
       <thead>

@@ -197,7 +197,8 @@ export function fixture(options: FixtureOptions = {}): PackageInput {
     constructions: { "EW-9": constructionResults(c) },
     scenarios: {},
     checks: options.checks ?? [PASSING_CHECK],
-    assumptions: [],
+    // A build copies the reader's assumptions into results.json and adds the computed ones.
+    assumptions: model.assumptions.map((a) => ({ ...a })),
     warnings: [],
   };
   const findings: Diagnostic[] = [

@@ -87,7 +87,7 @@ function surfaceTable(id: string, r: HeatingResults, d: DisplayUnits): Trusted {
     `
   );
   return html`
-    <table class="heating-surfaces">
+    <table class="heating-surfaces compact">
       <caption>Scenario ${id}: steady heat loss U·A·(θ<sub>i</sub> − θ<sub>e</sub>) and ISO 13788 surface checks per surface.</caption>
       <thead>
         <tr>

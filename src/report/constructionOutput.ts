@@ -224,7 +224,7 @@ export function renderConstructionOutput(
       </tbody>
     </table>
     ${countMismatch}${renderBridgedOutput(results, d)}
-    ${uLine(construction, results, d)}${renderLimitsOutput(results)}
+    ${uLine(construction, results, d)}${renderLimitsOutput(results, d)}
     <figure>${renderSectionSvg(construction, d)}<figcaption>Section of ${construction
       .id}, drawn from outside (left) to inside (right); numbers refer to the table above.</figcaption></figure>
     ${renderDynamicResponse(

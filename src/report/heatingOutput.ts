@@ -2,6 +2,7 @@
 import type { HeatingScenario } from "../project/model.ts";
 import type { HeatingResults, Verdict } from "../results/heatingTypes.ts";
 import { type DisplayUnits, toDisplay, unitLabel } from "./displayUnits.ts";
+import { DELTA_F_PER_K } from "./displayUnits.ts";
 import { formatFixed, formatSig } from "./format.ts";
 import { html, type Trusted } from "./html.ts";
 import type { RenderContext } from "./packageInput.ts";
@@ -136,7 +137,11 @@ export function renderHeatingOutput(input: HeatingOutputInput): Trusted {
       <p class="peak-summary">Design heat loss through these surfaces: <strong data-q="total-loss-summary">${formatFixed(
         toDisplay(d, "heatGain", r.totalHeatLoss),
         0,
-      )} ${unitLabel(d, "heatGain")}</strong> (Σ U·A = ${formatSig(r.totalUA, 4)} W/K). ${failures === 0
+      )} ${unitLabel(d, "heatGain")}</strong> (Σ U·A = ${d.system === "SI"
+        ? `${formatSig(r.totalUA, 4)} W/K`
+        : `${
+          formatSig(toDisplay(d, "heatGain", r.totalUA) / DELTA_F_PER_K, 4)
+        } Btu/(h·°F)`}). ${failures === 0
         ? "Every surface passes the surface-condensation and mould checks at this condition."
         : `${failures} surface(s) fail a check: see the table.`}</p>
       ${conditions(r, d)}
@@ -146,9 +151,9 @@ export function renderHeatingOutput(input: HeatingOutputInput): Trusted {
         <p><strong>Limits:</strong> a steady-state screening at one design condition for the plane elements listed; ${rsi ===
             undefined
           ? ""
-          : `surface temperatures use R_si = ${
-            formatSig(rsi, 3)
-          } m²·K/W; `}thermal bridges, corners, ground contact, air leakage and interstitial condensation are not assessed, and the heat loss excludes ventilation and infiltration. The ISO 13788 constants used are logged in the assumptions register, with the clauses named from memory where so.</p>
+          : `surface temperatures use R_si = ${formatSig(toDisplay(d, "resistance", rsi), 3)} ${
+            unitLabel(d, "resistance")
+          }; `}thermal bridges, corners, ground contact, air leakage and interstitial condensation are not assessed, and the heat loss excludes ventilation and infiltration. The ISO 13788 constants used are logged in the assumptions register, with the clauses named from memory where so.</p>
         <p>The results support, and do not replace, the professional judgment of the engineer responsible.</p>
       </div>
     </div>

@@ -1,6 +1,7 @@
 /** The "Requirements" table of a construction (code limits with MET / NOT MET) and the cover's count. */
 import type { LimitResult } from "../results/limitResults.ts";
 import type { ConstructionResults } from "../results/types.ts";
+import { type DisplayUnits, toDisplay, unitLabel } from "./displayUnits.ts";
 import { formatSig } from "./format.ts";
 import { html, type Trusted } from "./html.ts";
 import type { PackageInput } from "./packageInput.ts";
@@ -18,10 +19,18 @@ export function limitsOf(results: ConstructionResults | undefined): readonly Lim
   return Array.isArray(l) ? l as LimitResult[] : [];
 }
 
-const withUnit = (v: number, unit: string) => unit === "-" ? formatSig(v, 3) : `${formatSig(v, 4)} ${unit}`;
+/** Formats a limit's value in the package's display units (results.json keeps W/(m²K) and h). */
+function shown(v: number, unit: string, d: DisplayUnits): string {
+  if (unit === "-") return formatSig(v, 3);
+  if (unit === "W/(m²K)") {
+    return `${formatSig(toDisplay(d, "transmittance", v), 4)} ${unitLabel(d, "transmittance")}`;
+  }
+  return `${formatSig(v, 4)} ${unit}`;
+}
 
-/** Renders the Requirements table of a construction; nothing when it has no limits. */
-export function renderLimitsOutput(results: ConstructionResults | undefined): Trusted {
+/** Renders the Requirements table of a construction in the display units `d`; nothing when it has no limits. */
+export function renderLimitsOutput(results: ConstructionResults | undefined, d: DisplayUnits): Trusted {
+  const withUnit = (v: number, unit: string) => shown(v, unit, d);
   const limits = limitsOf(results);
   if (limits.length === 0) return html``;
   const rows = limits.map((l) =>

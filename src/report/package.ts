@@ -49,9 +49,13 @@ function renderContents(ctx: RenderContext): Trusted {
     const nested = outputs.length === 0 ? html`` : html`<ol class="contents-outputs">${outputs}</ol>`;
     return html`<li><a href="#s-2-${String(i + 1)}">2.${String(i + 1)} ${d.path}</a>${nested}</li>`;
   });
+  const sensitivityNumber = String(ctx.input.model.documents.length + 1);
+  const sensitivity = ctx.input.results.sensitivity === undefined
+    ? html``
+    : html`<li><a href="#s-2-${sensitivityNumber}">2.${sensitivityNumber} Sensitivity study</a></li>`;
   const items = CONTENTS.map(([id, title]) =>
     id === "s-2"
-      ? html`<li><a href="#${id}">${title}</a><ol>${docs}</ol></li>`
+      ? html`<li><a href="#${id}">${title}</a><ol>${docs}${sensitivity}</ol></li>`
       : html`<li><a href="#${id}">${title}</a></li>`
   );
   return html`

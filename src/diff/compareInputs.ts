@@ -1,4 +1,4 @@
-import type { Construction, Model, ResolvedLayer } from "../project/model.ts";
+import type { Construction, Model, ResolvedLayer, ScenarioSurface } from "../project/model.ts";
 import type { Position } from "../project/position.ts";
 import { alignByKey } from "./align.ts";
 import {
@@ -180,23 +180,28 @@ export function compareInputs(a: InputSide, b: InputSide): Change[] {
     (c) => c.name,
     (id, o, n) => compareLayers(a, b, id, o, n),
   );
+  const compareSurfaces = (
+    id: string,
+    before: readonly ScenarioSurface[],
+    after: readonly ScenarioSurface[],
+  ) =>
+    compareById(
+      "scenario",
+      { side: a, items: before },
+      { side: b, items: after },
+      (surface) => surfaceFields(surface),
+      (surface) => `surface on ${surface.construction}, ${surface.areaM2} m²`,
+      () => [],
+      (surfaceId) => ({ subject: id, part: `surface ${surfaceId}` }),
+      true,
+    );
   const scenarios = compareById(
     "scenario",
     { side: a, items: a.model.scenarios },
     { side: b, items: b.model.scenarios },
     (s) => scenarioFields(s),
     (s) => `${s.kind} scenario`,
-    (id, o, n) =>
-      compareById(
-        "scenario",
-        { side: a, items: o.surfaces },
-        { side: b, items: n.surfaces },
-        (surface) => surfaceFields(surface),
-        (surface) => `surface on ${surface.construction}, ${surface.areaM2} m²`,
-        () => [],
-        (surfaceId) => ({ subject: id, part: `surface ${surfaceId}` }),
-        true,
-      ),
+    (id, o, n) => compareSurfaces(id, o.surfaces, n.surfaces),
   );
   const heating = compareById(
     "scenario",
@@ -204,17 +209,7 @@ export function compareInputs(a: InputSide, b: InputSide): Change[] {
     { side: b, items: b.model.heatingScenarios ?? [] },
     (h) => heatingFields(h),
     () => "heating scenario",
-    (id, o, n) =>
-      compareById(
-        "scenario",
-        { side: a, items: o.surfaces },
-        { side: b, items: n.surfaces },
-        (surface) => surfaceFields(surface),
-        (surface) => `surface on ${surface.construction}, ${surface.areaM2} m²`,
-        () => [],
-        (surfaceId) => ({ subject: id, part: `surface ${surfaceId}` }),
-        true,
-      ),
+    (id, o, n) => compareSurfaces(id, o.surfaces, n.surfaces),
   );
   return [...project, ...materials, ...constructions, ...scenarios, ...heating];
 }

@@ -51,7 +51,7 @@ export async function writeOutputSet(
   const parent = dirname(outDir);
   const name = basename(outDir);
   await Deno.mkdir(parent, { recursive: true });
-  using _lock = await lockFolder(parent);
+  using lock = await lockFolder(parent);
   const verdict = await inspectOutputFolder(outDir);
   if (verdict.kind === "refused") throw new OutputRefused(outDir, verdict.reason);
   const staging = await Deno.makeTempDir({ dir: parent, prefix: `.${name}.staging-` });
@@ -79,7 +79,8 @@ export async function writeOutputSet(
     throw cause;
   }
   await syncFolder(parent);
-  await removeLeftovers(parent, name);
+  // Without the lock a staging folder beside the target may be another build's, still being written.
+  if (lock.held) await removeLeftovers(parent, name);
 }
 
 async function writeText(handle: Deno.FsFile, text: string): Promise<void> {
@@ -155,25 +156,31 @@ async function isFluxnoteLeftover(path: string): Promise<boolean> {
   }
 }
 
+/** A lock on a folder; `held` is false where the platform could not take it. */
+interface FolderLock extends Disposable {
+  readonly held: boolean;
+}
+
 /**
  * Takes an exclusive lock on a folder, waiting while another build holds it; released when disposed, and
  * by the operating system when a process is killed. Where a folder cannot be opened for locking
- * (Windows), builds into one folder do not wait for each other.
+ * (Windows), builds into one folder do not wait for each other and leftovers are not removed.
  */
-async function lockFolder(path: string): Promise<Disposable> {
+async function lockFolder(path: string): Promise<FolderLock> {
+  const none = { held: false, [Symbol.dispose]: () => {} };
   let handle: Deno.FsFile;
   try {
     handle = await Deno.open(path, { read: true });
   } catch {
-    return { [Symbol.dispose]: () => {} };
+    return none;
   }
   try {
     await handle.lock(true);
   } catch {
     handle.close();
-    return { [Symbol.dispose]: () => {} };
+    return none;
   }
-  return { [Symbol.dispose]: () => handle.close() };
+  return { held: true, [Symbol.dispose]: () => handle.close() };
 }
 
 async function syncFolder(path: string): Promise<void> {

@@ -123,6 +123,19 @@ Deno.test("build refuses its earlier output once the user has added a file to it
   assert.deepEqual(snapshot(base), before);
 });
 
+Deno.test("build checks the folder again at the swap and keeps a file the user put there meanwhile", async () => {
+  const { base, project } = await workspace();
+  const out = join(base, "out");
+  assert.equal((await build(project, out)).code, 0);
+  const err: string[] = [];
+  const beforeSwap = () => Deno.writeTextFileSync(join(out, "draft.txt"), "written during the build");
+  const code = await runBuild({ project, out, beforeSwap }, { stdout: () => {}, stderr: (l) => err.push(l) });
+  assertRefused({ code, err }, out, /"draft\.txt", which is not one of the files/);
+  assert.equal(Deno.readTextFileSync(join(out, "draft.txt")), "written during the build");
+  assert.ok(listing(out).includes("package.html"));
+  assert.deepEqual(listing(base), ["out", "project"]);
+});
+
 Deno.test("build writes into an existing empty folder", async () => {
   const { base, project } = await workspace();
   const out = join(base, "empty");

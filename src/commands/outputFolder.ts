@@ -124,7 +124,7 @@ async function firstUnlisted(
 /** An output set of a fluxnote from before the marker: package.html, results.json, csv/*.csv only. */
 async function isEarlierOutput(path: string, entries: readonly Deno.DirEntry[]): Promise<boolean> {
   const kinds = new Map(entries.map((e) => [e.name, e]));
-  if (kinds.size !== entries.length || ![...kinds.keys()].every((n) => EARLIER_SET.has(n))) return false;
+  if (![...kinds.keys()].every((n) => EARLIER_SET.has(n))) return false;
   if (!kinds.get("package.html")?.isFile || !kinds.get("results.json")?.isFile) return false;
   const csv = kinds.get("csv");
   if (csv !== undefined) {

@@ -33,8 +33,10 @@ Reads the project folder, computes every construction and writes one output set:
   <dir>/results.json   machine-readable results (schema fluxnote-results/1)
   <dir>/csv/           tables as CSV
 --out defaults to <project>/out. The set is replaced as a whole; on an input error nothing is written.
-Exit codes: 0 success; 1 input errors or a failed computed check (the package is still written then);
-2 usage error or internal fault.`,
+--out must be absent, empty or an earlier output (marked by <dir>/.fluxnote-output); the project folder,
+a folder holding it, a file, a link or a folder of other files is refused and left untouched.
+Exit codes: 0 success; 1 input errors, a refused --out or a failed computed check (the package is still
+written then); 2 usage error or internal fault.`,
   verify: `usage: fluxnote verify <package.html>
 
 Extracts the inputs and results embedded in a package, checks their hashes, re-runs the inputs with this
@@ -52,9 +54,9 @@ Compares revision a with revision b; each is a project folder or an issued packa
 inputs are re-run). Lists the changed files, every changed input key (old → new, with file:line:col on each
 side) and the effect on the results (U, decrement factor, time lag, peaks and totals), largest first.
 --format json   print {"schema": "fluxnote-diff/1", ...}; --format html   a self-contained page
---out <file>    write the output to <file> (replaced atomically) instead of stdout
-Exit codes: 0 compared (whether or not anything differs); 1 input errors on either side;
-2 usage error or a file that is not a package.`,
+--out <file>    write the output to <file> (replaced atomically; never a folder, a link or a revision)
+Exit codes: 0 compared (whether or not anything differs); 1 input errors on either side or a refused
+--out; 2 usage error or a file that is not a package.`,
   init: `usage: fluxnote init <dir>
 
 Creates <dir> with a starter project (project.md, materials, constructions, a design day) to edit.

@@ -8,7 +8,8 @@ import { join } from "node:path";
 import { chromium } from "playwright-core";
 
 const PACKAGE = new URL("../projects/demo/out/package.html", import.meta.url);
-const SHOTS = new URL("../projects/demo/out/browser/", import.meta.url).pathname;
+// Beside the output folder, not in it: a build replaces only a folder holding nothing but its own files.
+const SHOTS = new URL("../projects/demo/screenshots/", import.meta.url).pathname;
 const ARGS = [
   "--no-sandbox",
   "--disable-gpu",

@@ -1,7 +1,9 @@
 import { join } from "node:path";
 import { loadProject } from "./loadProject.ts";
 import { printDiagnostics, produceOutputs } from "./produce.ts";
-import { writeOutputSet } from "./writeOutput.ts";
+import { NOT_OURS_HINT, refuseBuildTarget } from "./outputTarget.ts";
+import { OutputRefused, writeOutputSet } from "./writeOutput.ts";
+import { TOOL_VERSION } from "../version.ts";
 
 /** What a command needs from its surroundings (so tests can run it without a terminal). */
 export interface CommandIo {
@@ -13,11 +15,20 @@ export interface BuildOptions {
   readonly project: string;
   readonly out?: string;
   /** Test hook: called after rendering, before the output set is swapped in. */
-  readonly beforeSwap?: () => void;
+  readonly beforeSwap?: () => void | Promise<void>;
+  /** Test hook: called when the old output set has been moved aside, before the new one is put in place. */
+  readonly afterRetire?: () => void | Promise<void>;
 }
 
 /** Builds a project into package.html, results.json and csv/; returns the exit code. */
 export async function runBuild(options: BuildOptions, io: CommandIo): Promise<number> {
+  const outDir = options.out ?? join(options.project, "out");
+  const refusal = await refuseBuildTarget(options.project, outDir);
+  if (refusal !== undefined) {
+    io.stderr(`fluxnote build: refusing to write to "${outDir}": ${refusal.reason}; nothing was written`);
+    io.stderr(`  hint: ${refusal.hint}`);
+    return 1;
+  }
   const loaded = await loadProject(options.project);
   printDiagnostics(loaded.diagnostics, io.stderr);
   // Progress goes to stderr only when a person watches it (a terminal), never into logs or pipes.
@@ -33,8 +44,17 @@ export async function runBuild(options: BuildOptions, io: CommandIo): Promise<nu
   for (const w of results.warnings.slice(loaded.diagnostics.filter((d) => d.severity !== "error").length)) {
     io.stderr(`${w.at}: warning: ${w.message}`);
   }
-  const outDir = options.out ?? join(options.project, "out");
-  await writeOutputSet(outDir, files, options.beforeSwap);
+  try {
+    await writeOutputSet(outDir, files, { tool: `fluxnote ${TOOL_VERSION}`, inputs: results.inputs.sha256 }, {
+      ...(options.beforeSwap === undefined ? {} : { beforeSwap: options.beforeSwap }),
+      ...(options.afterRetire === undefined ? {} : { afterRetire: options.afterRetire }),
+    });
+  } catch (cause) {
+    if (!(cause instanceof OutputRefused)) throw cause;
+    io.stderr(`fluxnote build: ${cause.message}; nothing was written`);
+    io.stderr(`  hint: ${NOT_OURS_HINT}`);
+    return 1;
+  }
   io.stdout(
     `wrote ${join(outDir, "package.html")}, results.json and csv/ (${
       loaded.model?.constructions.length ?? 0

@@ -61,13 +61,39 @@ async function openSide(name: "a" | "b", path: string, io: CommandIo): Promise<S
   };
 }
 
+/**
+ * Why `diff --out` will not write to `path`: anything but an absent path or a regular file is refused (a
+ * rename would replace a link or fail on a folder), and so is a revision being compared.
+ */
+async function refuseDiffTarget(path: string, revisions: readonly string[]): Promise<string | undefined> {
+  let info: Deno.FileInfo;
+  try {
+    info = await Deno.lstat(path);
+  } catch (cause) {
+    if (cause instanceof Deno.errors.NotFound) return undefined;
+    return `it cannot be examined (${cause instanceof Error ? cause.message : String(cause)})`;
+  }
+  if (info.isSymlink) return "it is a symbolic link; fluxnote replaces the file, never a link or its target";
+  if (info.isDirectory) return "it is a folder, not a file";
+  if (!info.isFile) return "it is not a regular file";
+  const real = await Deno.realPath(path);
+  for (const revision of revisions) {
+    if (real === await Deno.realPath(revision).catch(() => undefined)) {
+      return `it is revision "${revision}", which is being compared`;
+    }
+  }
+  return undefined;
+}
+
 /** Writes `text` to `path` through a temporary file in the same folder and a rename, so readers never see part of it. */
-async function writeAtomically(path: string, text: string): Promise<void> {
+async function writeAtomically(path: string, text: string, revisions: readonly string[]): Promise<void> {
   const folder = dirname(path);
   const temp = await Deno.makeTempFile({ dir: folder, prefix: `.${basename(path)}.tmp-` });
   try {
     await Deno.writeTextFile(temp, text);
     await Deno.chmod(temp, 0o644).catch(() => {});
+    const refusal = await refuseDiffTarget(path, revisions);
+    if (refusal !== undefined) throw new DiffOutRefused(refusal);
     await Deno.rename(temp, path);
   } catch (cause) {
     await Deno.remove(temp).catch(() => {});
@@ -75,8 +101,23 @@ async function writeAtomically(path: string, text: string): Promise<void> {
   }
 }
 
-/** Compares two revisions (folders or package.html files); 0 whether or not they differ, 1 input errors, 2 not a package. */
+class DiffOutRefused extends Error {}
+
+/**
+ * Compares two revisions (folders or package.html files); 0 whether or not they differ, 1 input errors or an
+ * --out it will not replace, 2 not a package.
+ */
 export async function runDiff(options: DiffOptions, io: CommandIo): Promise<number> {
+  const revisions = [options.a, options.b];
+  const refused = (reason: string) => {
+    io.stderr(`fluxnote diff: refusing to write to "${options.out}": ${reason}; nothing was written`);
+    io.stderr("  hint: give --out a new file name or an existing regular file to replace");
+    return 1;
+  };
+  if (options.out !== undefined) {
+    const refusal = await refuseDiffTarget(options.out, revisions);
+    if (refusal !== undefined) return refused(refusal);
+  }
   const a = await openSide("a", options.a, io);
   const b = await openSide("b", options.b, io);
   if (!a.ok || !b.ok) return Math.max(a.ok ? 0 : a.code, b.ok ? 0 : b.code);
@@ -91,8 +132,9 @@ export async function runDiff(options: DiffOptions, io: CommandIo): Promise<numb
     return 0;
   }
   try {
-    await writeAtomically(options.out, text);
+    await writeAtomically(options.out, text, revisions);
   } catch (cause) {
+    if (cause instanceof DiffOutRefused) return refused(cause.message);
     io.stderr(
       `fluxnote diff: cannot write "${options.out}": ${
         cause instanceof Error ? cause.message : String(cause)

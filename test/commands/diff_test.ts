@@ -91,6 +91,45 @@ Deno.test("runDiff() --out writes the chosen format to the file, and nothing els
   assert.ok(out[0]?.startsWith("wrote "));
 });
 
+Deno.test("runDiff() --out refuses a folder, a symbolic link and a revision being compared, changing none", async () => {
+  const dir = await Deno.makeTempDir();
+  const folder = join(dir, "results");
+  Deno.mkdirSync(folder);
+  Deno.writeTextFileSync(join(folder, "kept.txt"), "the user's file");
+  const target = join(dir, "notes.txt");
+  Deno.writeTextFileSync(target, "the link's target");
+  const link = join(dir, "link.html");
+  Deno.symlinkSync(target, link);
+  const revision = join(dir, "rev-b.html");
+  const built = join(dir, "built");
+  assert.equal(await runBuild({ project: REV_B, out: built }, capture().io), 0);
+  Deno.copyFileSync(join(built, "package.html"), revision);
+  const packageBytes = Deno.readFileSync(revision);
+  const cases: [string, RegExp][] = [
+    [folder, /it is a folder, not a file/],
+    [link, /it is a symbolic link/],
+    [revision, /it is revision ".*rev-b\.html", which is being compared/],
+  ];
+  for (const [out, why] of cases) {
+    const { out: printed, err, io } = capture();
+    assert.equal(await runDiff({ a: revision, b: REV_C, format: "html", out }, io), 1);
+    assert.deepEqual(printed, []);
+    assert.ok(err[0]?.startsWith(`fluxnote diff: refusing to write to "${out}": `), err.join("\n"));
+    assert.match(err[0] ?? "", why);
+  }
+  assert.equal(Deno.readTextFileSync(join(folder, "kept.txt")), "the user's file");
+  assert.equal(Deno.readLinkSync(link), target);
+  assert.equal(Deno.readTextFileSync(target), "the link's target");
+  assert.deepEqual(Deno.readFileSync(revision), packageBytes);
+  assert.deepEqual([...Deno.readDirSync(dir)].map((e) => e.name).sort(), [
+    "built",
+    "link.html",
+    "notes.txt",
+    "results",
+    "rev-b.html",
+  ]);
+});
+
 Deno.test("fluxnote diff: usage errors exit 2, --help exits 0", async () => {
   assert.equal(await main(["diff", REV_B], capture().io), 2);
   assert.equal(await main(["diff", REV_B, REV_C, "--format", "xml"], capture().io), 2);

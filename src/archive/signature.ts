@@ -160,6 +160,11 @@ export function findSignature(page: string): FoundSignature {
   if (signatureElement(found) !== page.slice(start, end + close.length)) {
     return { kind: "malformed", reason: "its signature element is not in the form fluxnote writes" };
   }
+  // ...and where fluxnote puts it, so it cannot be slipped into a style sheet or a table cell.
+  const after = end + close.length;
+  if (!page.startsWith(ANCHOR, after) || page.lastIndexOf(ANCHOR) !== after) {
+    return { kind: "malformed", reason: "its signature element is not just before the end marker" };
+  }
   return {
     kind: "signed",
     signature: found,

@@ -107,6 +107,11 @@ Deno.test("verify --key fails a signed package whose content a forger rebuilt wi
     assert.ok(result.lines.some((l) => l.includes("does not match the package content")));
   }
   // Moving the signing time is caught too: the time is part of what is signed.
+  // The element must stay where build puts it (moved into the style sheet, it could disturb the layout).
+  const misplaced = signed.replace(element, "").replace("<style>", `<style>${element}`);
+  const refused = await verifyText(misplaced, `${base}.public.pem`);
+  assert.equal(refused.code, 2);
+  assert.ok(refused.lines[0]!.includes("not just before the end marker"));
   const retimed = signed.replaceAll(/\d{4}-\d\d-\d\dT\d\d:\d\d:\d\dZ/g, "2031-01-16T08:00:00Z");
   assert.notEqual(retimed, signed);
   const moved = await verifyText(retimed, `${base}.public.pem`);

@@ -40,7 +40,7 @@ Reads the project folder, computes every construction and writes one output set:
 --sign <file>  sign package.html with an Ed25519 private key (PEM, from "fluxnote keygen"); the signature
                covers the whole page, the signing key's fingerprint and the signing time.
 Exit codes: 0 success; 1 input errors or a failed computed check (the package is still written then);
-2 usage error or internal fault.`,
+2 usage error, an unreadable --sign key (nothing is written) or internal fault.`,
   verify: `usage: fluxnote verify <package.html> [--key <public key>]
 
 Extracts the inputs and results embedded in a package, checks their hashes, re-runs the inputs with this

@@ -4,6 +4,7 @@ import { runCheck } from "./commands/check.ts";
 import { runDiff } from "./commands/diff.ts";
 import { runInit } from "./commands/init.ts";
 import { runVerify } from "./commands/verify.ts";
+import { runKeygen } from "./commands/signingKeys.ts";
 import { runServe } from "./commands/serve.ts";
 import { TOOL_VERSION } from "./version.ts";
 
@@ -13,12 +14,15 @@ const USAGE =
 usage: fluxnote <command> [options]
 
 commands:
-  build <project> [--out <dir>]            write package.html, results.json and csv/
+  build <project> [--out <dir>] [--sign <private key>]
+                                           write package.html, results.json and csv/
   check <project> [--format text|json] [--strict]
                                            validate the project, write nothing
   diff <a> <b> [--format text|json|html] [--out <file>]
                                            compare two revisions (folders or package.html files)
-  verify <package.html>                    re-run the embedded inputs and compare
+  verify <package.html> [--key <public key>]
+                                           re-run the embedded inputs and compare
+  keygen <name>                            make a signing key pair <name>.private.pem, <name>.public.pem
   init <dir>                               start a new project from the template
   serve <project> [--port N]               live preview on 127.0.0.1, rebuilt on every change
   help [command]                           show help
@@ -26,7 +30,7 @@ commands:
 Run "fluxnote <command> --help" for a command's options.`;
 
 const HELP: Record<string, string> = {
-  build: `usage: fluxnote build <project> [--out <dir>]
+  build: `usage: fluxnote build <project> [--out <dir>] [--sign <private key>]
 
 Reads the project folder, computes every construction and writes one output set:
   <dir>/package.html   the self-contained calculation package
@@ -35,14 +39,28 @@ Reads the project folder, computes every construction and writes one output set:
 --out defaults to <project>/out. The set is replaced as a whole; on an input error nothing is written.
 --out must be absent, empty or an earlier output (marked by <dir>/.fluxnote-output); the project folder,
 a folder holding it, a file, a link or a folder of other files is refused and left untouched.
+--sign <file>  sign package.html with an Ed25519 private key (PEM, from "fluxnote keygen"); the signature
+               covers the whole page, the signing key's fingerprint and the signing time.
 Exit codes: 0 success; 1 input errors, a refused --out or a failed computed check (the package is still
-written then); 2 usage error or internal fault.`,
-  verify: `usage: fluxnote verify <package.html>
+written then); 2 usage error, an unreadable --sign key (nothing is written) or internal fault.`,
+  verify: `usage: fluxnote verify <package.html> [--key <public key>]
 
 Extracts the inputs and results embedded in a package, checks their hashes, re-runs the inputs with this
-version and compares. Same version: results and package must be byte-identical (an edited table cell is
-caught). Another version: every number must agree within 1e-9 relative; each difference is listed with its
-JSON Pointer. Exit codes: 0 reproduced; 1 not reproduced or tampered; 2 not a package or usage error.`,
+version and compares. The package's version is the one in its embedded results (the generator mark must
+agree). Same version: results and package must be byte-identical (an edited table cell is caught). Another
+version: every number must agree within 1e-9 relative (each difference is listed with its JSON Pointer), but
+the page text is not verifiable with this version, so the answer is NOT REPRODUCED (exit 1): REPRODUCED
+needs both the results and the page proven. Packages over 200 MiB, devices and pipes are refused.
+--key <file>  the package must carry a valid signature by this Ed25519 public key (PEM); prints the key
+              fingerprint and signing time. Without --key a signature is checked against the key the
+              package carries, which proves no signer.
+Exit codes: 0 reproduced; 1 not reproduced, tampered or not signed by the key; 2 not a package, malformed
+embedded data, a bad key file or usage error.`,
+  keygen: `usage: fluxnote keygen <name>
+
+Makes an Ed25519 key pair for signing packages: <name>.private.pem (PKCS#8, mode 0600, keep it secret) and
+<name>.public.pem (SubjectPublicKeyInfo, give it to whoever verifies), and prints the key fingerprint
+(SHA-256 of the public key). Never overwrites a file. Exit codes: 0 written; 2 a file exists or usage error.`,
   serve: `usage: fluxnote serve <project> [--port N]
 
 Builds the project in memory and serves the package at http://127.0.0.1:N/ (default port 8470), rebuilding
@@ -91,10 +109,14 @@ function choice<T extends string>(option: string, value: unknown, allowed: reado
 
 const COMMANDS: Record<string, CommandSpec> = {
   build: {
-    options: { out: { type: "string" } },
+    options: { out: { type: "string" }, sign: { type: "string" } },
     positionals: { count: 1, what: "one project folder" },
     run: ([project = ""], values, io) =>
-      runBuild(typeof values.out === "string" ? { project, out: values.out } : { project }, io),
+      runBuild({
+        project,
+        ...(typeof values.out === "string" ? { out: values.out } : {}),
+        ...(typeof values.sign === "string" ? { sign: values.sign } : {}),
+      }, io),
   },
   check: {
     options: { format: { type: "string", default: "text" }, strict: { type: "boolean" } },
@@ -118,9 +140,15 @@ const COMMANDS: Record<string, CommandSpec> = {
     },
   },
   verify: {
-    options: {},
+    options: { key: { type: "string" } },
     positionals: { count: 1, what: "one package file" },
-    run: ([path = ""], _values, io) => runVerify(path, io),
+    run: ([path = ""], values, io) =>
+      runVerify(path, io, typeof values.key === "string" ? { key: values.key } : {}),
+  },
+  keygen: {
+    options: {},
+    positionals: { count: 1, what: "one key name" },
+    run: ([name = ""], _values, io) => runKeygen(name, io),
   },
   init: {
     options: {},

@@ -4,7 +4,8 @@ import { sha256Hex } from "./hash.ts";
 
 /** What a package carries for re-running it: the exact input files, library entries and results. */
 export interface PackageContents {
-  readonly toolVersion: string;
+  /** The version the `<meta name="generator">` mark claims; `verify` trusts only the embedded results. */
+  readonly generatorVersion: string;
   readonly files: ReadonlyMap<string, Uint8Array>;
   readonly library: readonly { readonly id: string; readonly canonical: string; readonly sha256: string }[];
   readonly resultsJsonText: string;
@@ -49,6 +50,6 @@ export function extractPackage(pageText: string): ExtractOutcome {
   const resultsJsonText = (resultsPre.textContent ?? "").replace(/^\n/, "");
   return {
     ok: true,
-    contents: { toolVersion: generator[1] ?? "", files, library, resultsJsonText, tampered },
+    contents: { generatorVersion: generator[1] ?? "", files, library, resultsJsonText, tampered },
   };
 }

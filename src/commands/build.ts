@@ -2,6 +2,7 @@ import { join } from "node:path";
 import { loadProject } from "./loadProject.ts";
 import { printDiagnostics, produceOutputs } from "./produce.ts";
 import { NOT_OURS_HINT, refuseBuildTarget } from "./outputTarget.ts";
+import { readSigner, signOutputFiles } from "./signOutputs.ts";
 import { OutputRefused, writeOutputSet } from "./writeOutput.ts";
 import { TOOL_VERSION } from "../version.ts";
 
@@ -14,6 +15,8 @@ export interface CommandIo {
 export interface BuildOptions {
   readonly project: string;
   readonly out?: string;
+  /** A private key file (PEM, PKCS#8 Ed25519): package.html is signed with it. */
+  readonly sign?: string;
   /** Test hook: called after rendering, before the output set is swapped in. */
   readonly beforeSwap?: () => void | Promise<void>;
   /** Test hook: called when the old output set has been moved aside, before the new one is put in place. */
@@ -29,6 +32,11 @@ export async function runBuild(options: BuildOptions, io: CommandIo): Promise<nu
     io.stderr(`  hint: ${refusal.hint}`);
     return 1;
   }
+  const signer = options.sign === undefined ? undefined : await readSigner(options.sign);
+  if (signer !== undefined && !signer.ok) {
+    io.stderr(`fluxnote build: ${signer.reason}; nothing was written`);
+    return 2;
+  }
   const loaded = await loadProject(options.project);
   printDiagnostics(loaded.diagnostics, io.stderr);
   // Progress goes to stderr only when a person watches it (a terminal), never into logs or pipes.
@@ -40,7 +48,10 @@ export async function runBuild(options: BuildOptions, io: CommandIo): Promise<nu
     io.stderr(`build stopped: ${count} error(s); nothing was written`);
     return 1;
   }
-  const { results, files } = produced.outputs;
+  const { results } = produced.outputs;
+  const files = signer === undefined
+    ? produced.outputs.files
+    : await signOutputFiles(produced.outputs, signer.key, io);
   for (const w of results.warnings.slice(loaded.diagnostics.filter((d) => d.severity !== "error").length)) {
     io.stderr(`${w.at}: warning: ${w.message}`);
   }

@@ -1,8 +1,10 @@
+import { checkLibraryEntry } from "../archive/embeddedShape.ts";
 import { extractPackage } from "../archive/extract.ts";
 import type { LibraryMaterial } from "../materials/libraryMaterial.ts";
 import { memoryProjectFs } from "../project/projectFs.ts";
 import { libraryWith } from "../project/resolveProject.ts";
 import { type LoadedProject, loadProject } from "./loadProject.ts";
+import { PACKAGE_SIZE_LIMIT, readBoundedFile } from "./readBounded.ts";
 
 /** A project opened from a folder or from the inputs embedded in an issued package. */
 export type OpenedProject =
@@ -23,9 +25,11 @@ export async function openProject(path: string): Promise<OpenedProject> {
     return { ok: false, reason: `"${path}" does not exist` };
   }
   if (info.isDirectory) return { ok: true, kind: "folder", loaded: await loadProject(path), label: path };
+  const read = await readBoundedFile(path, PACKAGE_SIZE_LIMIT);
+  if (!read.ok) return { ok: false, reason: `"${path}" cannot be read as a package: ${read.reason}` };
   let text: string;
   try {
-    text = new TextDecoder("utf-8", { fatal: true }).decode(await Deno.readFile(path));
+    text = new TextDecoder("utf-8", { fatal: true }).decode(read.bytes);
   } catch {
     return { ok: false, reason: `"${path}" is neither a project folder nor a UTF-8 package file` };
   }
@@ -37,7 +41,17 @@ export async function openProject(path: string): Promise<OpenedProject> {
       reason: `"${path}" was altered: ${extracted.contents.tampered.join(", ")} no longer match their hashes`,
     };
   }
-  const library = extracted.contents.library.map((entry) => JSON.parse(entry.canonical) as LibraryMaterial);
+  const library: LibraryMaterial[] = [];
+  for (const entry of extracted.contents.library) {
+    const checked = checkLibraryEntry(entry.canonical, entry.id);
+    if (!checked.ok) {
+      return {
+        ok: false,
+        reason: `"${path}" has a malformed library entry "${entry.id}": ${checked.reason}`,
+      };
+    }
+    library.push(checked.value);
+  }
   const loaded = await loadProject(memoryProjectFs(path, extracted.contents.files), libraryWith(library));
   return { ok: true, kind: "package", loaded, label: path };
 }

@@ -1,57 +1,88 @@
 import { compareJson } from "../archive/compareJson.ts";
+import { checkEmbeddedResults, checkLibraryEntry } from "../archive/embeddedShape.ts";
 import { extractPackage } from "../archive/extract.ts";
 import { inputsHash } from "../archive/hash.ts";
+import { findSignature } from "../archive/signature.ts";
 import type { LibraryMaterial } from "../materials/libraryMaterial.ts";
 import { memoryProjectFs } from "../project/projectFs.ts";
 import { libraryWith } from "../project/resolveProject.ts";
-import type { ResultsJson } from "../results/types.ts";
 import { TOOL_VERSION } from "../version.ts";
 import type { CommandIo } from "./build.ts";
 import { loadProject } from "./loadProject.ts";
 import { printDiagnostics, produceOutputs } from "./produce.ts";
+import { PACKAGE_SIZE_LIMIT, readBoundedFile } from "./readBounded.ts";
+import { readPublicKey } from "./signingKeys.ts";
+import { type ExpectedKey, signatureProblems } from "./verifySignature.ts";
 
 /** Relative tolerance for numbers when the package was made by another version. */
 export const CROSS_VERSION_TOLERANCE = 1e-9;
 const MAX_LISTED = 20;
 
-/** Re-runs the inputs embedded in a package and compares; 0 reproduces, 1 does not, 2 not a package. */
-export async function runVerify(packagePath: string, io: CommandIo): Promise<number> {
+export interface VerifyOptions {
+  /** A public key file (PEM, SPKI): the package must carry a valid signature by that key. */
+  readonly key?: string;
+  /** Largest package read, in bytes (tests lower it). */
+  readonly sizeLimit?: number;
+}
+
+/** Re-runs the inputs embedded in a package and compares; 0 reproduced, 1 not reproduced, 2 not a package. */
+export async function runVerify(
+  packagePath: string,
+  io: CommandIo,
+  options: VerifyOptions = {},
+): Promise<number> {
+  const refuse = (reason: string) => {
+    io.stderr(`fluxnote verify: "${packagePath}" ${reason}`);
+    return 2;
+  };
+  let expected: ExpectedKey | undefined;
+  if (options.key !== undefined) {
+    const key = await readPublicKey(options.key);
+    if (!key.ok) {
+      io.stderr(`fluxnote verify: ${key.reason}`);
+      return 2;
+    }
+    expected = { path: options.key, ...key.key };
+  }
+  const read = await readBoundedFile(packagePath, options.sizeLimit ?? PACKAGE_SIZE_LIMIT);
+  if (!read.ok) return refuse(`cannot be read: ${read.reason}`);
   let pageText: string;
   try {
-    pageText = new TextDecoder("utf-8", { fatal: true }).decode(await Deno.readFile(packagePath));
-  } catch (cause) {
-    io.stderr(
-      `fluxnote verify: cannot read "${packagePath}": ${
-        cause instanceof Error ? cause.message : String(cause)
-      }`,
-    );
-    return 2;
+    pageText = new TextDecoder("utf-8", { fatal: true }).decode(read.bytes);
+  } catch {
+    return refuse("is not a fluxnote package: it is not UTF-8 text");
   }
-  const extracted = extractPackage(pageText);
-  if (!extracted.ok) {
-    io.stderr(`fluxnote verify: "${packagePath}" is not a fluxnote package: ${extracted.reason}`);
-    return 2;
-  }
+  const found = findSignature(pageText);
+  if (found.kind === "malformed") return refuse(`is not a fluxnote package as written: ${found.reason}`);
+  const unsignedPage = found.kind === "signed" ? found.unsignedPage : pageText;
+  const extracted = extractPackage(unsignedPage);
+  if (!extracted.ok) return refuse(`is not a fluxnote package: ${extracted.reason}`);
   const contents = extracted.contents;
+  const head = checkEmbeddedResults(contents.resultsJsonText);
+  if (!head.ok) return refuse(`has malformed embedded results: ${head.reason}`);
+  const library: LibraryMaterial[] = [];
+  for (const entry of contents.library) {
+    const checked = checkLibraryEntry(entry.canonical, entry.id);
+    if (!checked.ok) return refuse(`has a malformed embedded library entry "${entry.id}": ${checked.reason}`);
+    library.push(checked.value);
+  }
+  const embedded = head.value;
+  // The version comes from the embedded results; the generator mark must agree with it.
+  const version = embedded.tool.version;
   const problems: string[] = contents.tampered.map((item) =>
     `embedded ${item}: its bytes do not match the SHA-256 written beside it`
   );
-  let embedded: ResultsJson;
-  try {
-    embedded = JSON.parse(contents.resultsJsonText) as ResultsJson;
-  } catch {
-    io.stderr(
-      `fluxnote verify: the embedded results of "${packagePath}" are not valid JSON: the package was edited`,
+  if (contents.generatorVersion !== version) {
+    problems.push(
+      `the generator mark says "fluxnote ${contents.generatorVersion}" but the embedded results were made by ` +
+        `fluxnote ${version}: the page was edited`,
     );
-    return 1;
   }
-  const records = embedded.inputs?.files ?? [];
-  if (inputsHash(records) !== embedded.inputs?.sha256) {
+  problems.push(...await signatureProblems(found, expected, io));
+  const records = embedded.inputs.files;
+  if (inputsHash(records) !== embedded.inputs.sha256) {
     problems.push("the whole-input SHA-256 does not match the list of input hashes");
   }
-  const library: LibraryMaterial[] = contents.library.map((entry) =>
-    JSON.parse(entry.canonical) as LibraryMaterial
-  );
   const loaded = await loadProject(memoryProjectFs("embedded inputs", contents.files), libraryWith(library));
   const produced = produceOutputs(loaded);
   if (!produced.ok) {
@@ -60,8 +91,8 @@ export async function runVerify(packagePath: string, io: CommandIo): Promise<num
     return 1;
   }
   const rerun = produced.outputs;
-  const sameVersion = contents.toolVersion === TOOL_VERSION;
-  io.stdout(`package made by fluxnote ${contents.toolVersion}; re-run with fluxnote ${TOOL_VERSION}`);
+  const sameVersion = version === TOOL_VERSION;
+  io.stdout(`package made by fluxnote ${version} (embedded results); re-run with fluxnote ${TOOL_VERSION}`);
   io.stdout(`inputs: ${records.length} records, SHA-256 ${embedded.inputs.sha256}`);
   if (rerun.results.inputs.sha256 !== embedded.inputs.sha256) {
     problems.push(
@@ -72,43 +103,48 @@ export async function runVerify(packagePath: string, io: CommandIo): Promise<num
     if (rerun.resultsJsonText !== contents.resultsJsonText) {
       problems.push(`results differ: ${firstDifference(contents.resultsJsonText, rerun.resultsJsonText)}`);
     }
-    if (rerun.page !== pageText) {
+    if (rerun.page !== unsignedPage) {
       problems.push(
-        `the package text differs from a fresh rendering: ${firstDifference(pageText, rerun.page)}`,
+        `the package text differs from a fresh rendering: ${firstDifference(unsignedPage, rerun.page)}`,
       );
     }
   } else {
-    const differences = compareJson(
-      stripVersion(embedded),
-      stripVersion(rerun.results),
-      CROSS_VERSION_TOLERANCE,
+    const differences = crossVersionDifferences(head.parsed, rerun.results, version);
+    if (differences.length === 0) {
+      io.stdout(`results: every number agrees within ${CROSS_VERSION_TOLERANCE} relative with the re-run`);
+    }
+    problems.push(...differences);
+    // An older or newer layout cannot be re-rendered here, so the visible numbers and verdicts stay unproven.
+    problems.push(
+      `page text not verifiable with this version: the page was laid out by fluxnote ${version}; its visible ` +
+        `numbers and verdicts can only be proven by verify of fluxnote ${version}`,
     );
-    for (const d of differences.slice(0, MAX_LISTED)) {
-      problems.push(
-        `${d.pointer}: ${JSON.stringify(d.before)} (fluxnote ${contents.toolVersion}) → ${
-          JSON.stringify(d.after)
-        } (fluxnote ${TOOL_VERSION})`,
-      );
-    }
-    if (differences.length > MAX_LISTED) {
-      problems.push(`… and ${differences.length - MAX_LISTED} more differences`);
-    }
   }
   if (problems.length > 0) {
     for (const p of problems) io.stderr(`${packagePath}: error: ${p}`);
     io.stderr(`NOT REPRODUCED: ${problems.length} problem(s)`);
     return 1;
   }
-  io.stdout(
-    sameVersion
-      ? "REPRODUCED: results and package are byte-identical to a fresh build of the embedded inputs"
-      : `REPRODUCED: every number agrees within ${CROSS_VERSION_TOLERANCE} relative`,
-  );
+  io.stdout("REPRODUCED: results and package are byte-identical to a fresh build of the embedded inputs");
   return 0;
 }
 
-function stripVersion(results: ResultsJson): unknown {
-  return { ...results, tool: { name: results.tool?.name } };
+/** Differences between embedded and re-run results beyond the cross-version tolerance, listed. */
+function crossVersionDifferences(embedded: unknown, rerun: unknown, version: string): string[] {
+  const differences = compareJson(stripVersion(embedded), stripVersion(rerun), CROSS_VERSION_TOLERANCE);
+  const lines = differences.slice(0, MAX_LISTED).map((d) =>
+    `${d.pointer}: ${JSON.stringify(d.before)} (fluxnote ${version}) → ${
+      JSON.stringify(d.after)
+    } (fluxnote ${TOOL_VERSION})`
+  );
+  if (differences.length > MAX_LISTED) {
+    lines.push(`… and ${differences.length - MAX_LISTED} more differences`);
+  }
+  return lines;
+}
+
+function stripVersion(results: unknown): unknown {
+  return { ...(results as Record<string, unknown>), tool: "(version not compared)" };
 }
 
 /** Describes where two texts first differ: line number and both lines, shortened. */

@@ -36,3 +36,16 @@ Deno.test("main() prints each command's help with exit 0", async () => {
   }
   assert.ok((await run([])).out.includes("commands:"));
 });
+
+Deno.test("main() knows keygen, build --sign and verify --key", async () => {
+  const help = await run(["keygen", "--help"]);
+  assert.equal(help.code, 0);
+  assert.ok(help.out.startsWith("usage: fluxnote keygen <name>"));
+  assert.ok((await run(["build", "--help"])).out.includes("--sign <file>"));
+  assert.ok((await run(["verify", "--help"])).out.includes("--key <file>"));
+  for (const args of [["keygen"], ["keygen", "a", "b"], ["verify", "p.html", "--key"]]) {
+    const result = await run(args);
+    assert.equal(result.code, 2, args.join(" "));
+    assert.ok(result.err.includes("usage:"), args.join(" "));
+  }
+});

@@ -141,3 +141,18 @@ Deno.test("fluxnote diff: usage errors exit 2, --help exits 0", async () => {
   assert.equal(await main(["diff", REV_B, REV_C, "--format", "json"], json.io), 0);
   assert.equal(JSON.parse(json.out.join("\n")).schema, "fluxnote-diff/1");
 });
+
+Deno.test({
+  name: "runDiff() refuses a device or an oversized file as a package at once, with exit 2",
+  ignore: Deno.build.os === "windows",
+  fn: async () => {
+    const huge = join(await Deno.makeTempDir(), "huge.html");
+    Deno.writeTextFileSync(huge, "");
+    Deno.truncateSync(huge, 200 * 1024 * 1024 + 1); // sparse; the stated limit is 200 MiB (README, verify)
+    for (const [path, expected] of [["/dev/zero", "character device"], [huge, "larger than the limit"]]) {
+      const { err, io } = capture();
+      assert.equal(await runDiff({ a: path!, b: REV_C, format: "text" }, io), 2);
+      assert.ok(err.some((l) => l.startsWith("fluxnote diff: a: ") && l.includes(expected!)), err.join("\n"));
+    }
+  },
+});

@@ -215,7 +215,7 @@ const canMkfifo = Deno.build.os !== "windows" &&
 
 Deno.test({
   name: "runVerify() refuses a named pipe at once instead of waiting for a writer",
-  // Needs --allow-run=mkfifo to make the pipe; `deno task test` does not grant it, so CI skips this case
+  // Needs --allow-run=mkfifo to make the pipe (`deno task test` grants it)
   // (the same refusal is exercised by /dev/zero above).
   ignore: !canMkfifo,
   fn: async () => {

@@ -65,6 +65,7 @@ export function readBridge(
     const id = textOf(materialEntry.value, `"material" in the ${label}`, out);
     if (id === undefined) return undefined;
     const material = materials.find(id);
+    if (material === undefined && materials.isBroken?.(id) === true) return undefined;
     if (material === undefined) {
       out.push(error(
         materialEntry.value.at,

@@ -64,6 +64,8 @@ export interface ConstructionDraft {
 export interface MaterialLookup {
   find(id: string): MaterialDef | undefined;
   ids(): readonly string[];
+  /** True for the id of a material block that has errors of its own (already reported once). */
+  isBroken?(id: string): boolean;
 }
 
 const MAX_LAYERS = 40;
@@ -206,6 +208,7 @@ function readLayer(
     const materialId = textOf(materialEntry.value, `"material" in the ${what}`, out);
     if (materialId === undefined) return undefined;
     const material = materials.find(materialId);
+    if (material === undefined && materials.isBroken?.(materialId) === true) return undefined;
     if (material === undefined) {
       out.push(
         error(

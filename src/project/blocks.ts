@@ -1,5 +1,7 @@
 import { type Diagnostic, error, warning } from "./diagnostic.ts";
+import { nearBlockKind } from "./fenceKind.ts";
 import { splitFrontMatter, splitMarkdown } from "./fences.ts";
+import { describeCodePoints } from "./quantity.ts";
 import type { SourceText } from "./sourceText.ts";
 import { parseYamlAt, type YamlValue } from "./yamlTree.ts";
 
@@ -62,6 +64,19 @@ export function splitFile(source: SourceText, isProjectFile: boolean, out: Diagn
       continue;
     }
     if (!INPUT_KINDS.includes(piece.info)) {
+      const near = nearBlockKind(piece.infoString, INPUT_KINDS);
+      if (near !== undefined) {
+        out.push(
+          error(
+            { file: source.path, line: piece.line, col: 1 },
+            "fence-kind-misspelt",
+            `Cannot read the fence \`${
+              describeCodePoints(piece.infoString)
+            }\` as an input block: ${near.reason}, so the block would be prose`,
+            `did you mean \`${near.kind}\`? Write the kind alone after the fence, exactly \`${near.kind}\` (for an example that is not input, use another word, e.g. \`text\`)`,
+          ),
+        );
+      }
       pieces.push({ kind: "code", raw: piece.raw, line: piece.line });
       continue;
     }

@@ -7,6 +7,8 @@ export type MarkdownPiece =
     readonly kind: "fence";
     /** First word of the info string, read from the fence line itself. */
     readonly info: string;
+    /** The whole info string after the fence characters, trimmed. */
+    readonly infoString: string;
     /** Raw text of the whole fence, for display. */
     readonly raw: string;
     /** Text between the fences. */
@@ -75,11 +77,13 @@ export function splitMarkdown(body: string, firstLine: number): MarkdownPiece[] 
     if (token.type === "code" && /^ {0,3}(```|~~~)/.test(raw)) {
       flushProse();
       const fenceLine = raw.split("\n", 1)[0] ?? "";
-      const info = fenceLine.replace(/^ {0,3}(`{3,}|~{3,})/, "").trim().split(/\s+/, 1)[0] ?? "";
+      const infoString = fenceLine.replace(/^ {0,3}(`{3,}|~{3,})/, "").trim();
+      const info = infoString.split(/\s+/, 1)[0] ?? "";
       const leading = /^\n*/.exec(raw)?.[0].length ?? 0;
       pieces.push({
         kind: "fence",
         info,
+        infoString,
         raw,
         body: String(token.text ?? ""),
         line: line + leading,

@@ -1,6 +1,12 @@
 import { type Diagnostic, error } from "./diagnostic.ts";
 import type { Position } from "./position.ts";
-import { describeCodePoints, parseQuantity, QUANTITY_KINDS, type QuantityKind } from "./quantity.ts";
+import {
+  describeCodePoints,
+  NON_DECIMAL_NUMBER,
+  parseQuantity,
+  QUANTITY_KINDS,
+  type QuantityKind,
+} from "./quantity.ts";
 import { closest } from "./suggest.ts";
 import type { YamlEntry, YamlValue } from "./yamlTree.ts";
 
@@ -189,7 +195,9 @@ export function readNumber(
         value.at,
         "expected-number",
         `Expected a plain number between ${min} and ${max} for ${what}, found ${describe(value)}`,
-        `write e.g. \`${key}: ${(min + max) / 2}\` (a pure number, no unit)`,
+        `write e.g. \`${key}: ${(min + max) / 2}\` (a pure number, no unit${
+          value.kind === "scalar" && NON_DECIMAL_NUMBER.test(value.text) ? ", in decimal digits" : ""
+        })`,
       ),
     );
     return undefined;

@@ -26,6 +26,8 @@ const NUMBER = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?/;
 const UNIT_CHARS = /^[A-Za-z0-9^/()*. -]+$/;
 const SPOOF_CHARS = /[\u200B-\u200F\u202A-\u202E\u2060-\u2069\uFEFF]/;
 const LARGEST_MAGNITUDE = 1e12;
+/** A number written with a 0x, 0o or 0b prefix (YAML core schema integers, never meant here). */
+export const NON_DECIMAL_NUMBER = /^[-+]?0[xXoObB][0-9A-Fa-f.]/;
 
 /** Shows invisible or non-ASCII code points so a user can see what was really written. */
 export function describeCodePoints(text: string): string {
@@ -48,6 +50,12 @@ export function parseQuantity(text: string, kind: QuantityKind): QuantityResult 
         describeCodePoints(trimmed)
       }": it contains invisible or direction-control characters`,
       `retype the value as plain text, e.g. "${spec.example}"`,
+    );
+  }
+  if (NON_DECIMAL_NUMBER.test(trimmed)) {
+    return fail(
+      `Cannot read ${spec.label} "${trimmed}": only decimal numbers are accepted, not hexadecimal, octal or binary`,
+      `write the number in decimal digits, e.g. "${spec.example}"`,
     );
   }
   const numberMatch = NUMBER.exec(trimmed);

@@ -427,7 +427,7 @@ function readSurface(
   inRange(surface, "tilt", tiltDeg, 0, 180, "deg", out);
   if (
     solAirEntry === undefined && tiltDeg !== undefined && tiltDeg > 0 && tiltDeg < 180 &&
-    azimuthDeg === undefined
+    !surface.entries.has("azimuth")
   ) {
     out.push(
       error(

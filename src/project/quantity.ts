@@ -18,6 +18,12 @@ export const QUANTITY_KINDS = {
 
 export type QuantityKind = keyof typeof QUANTITY_KINDS;
 
+/** The unit a quantity is usually written in, when it is not the SI unit (a time zone in h, not s). */
+export interface NaturalUnit {
+  readonly unit: string;
+  readonly example: string;
+}
+
 export type QuantityResult =
   | { readonly ok: true; readonly value: number }
   | { readonly ok: false; readonly message: string; readonly hint: string };
@@ -41,8 +47,8 @@ export function describeCodePoints(text: string): string {
  * Parses a quantity written as `"<number> <unit>"` and converts it to the SI unit of its kind.
  * Numbers use `.` as decimal mark, no thousands separators; the unit is required.
  */
-export function parseQuantity(text: string, kind: QuantityKind): QuantityResult {
-  const spec = QUANTITY_KINDS[kind];
+export function parseQuantity(text: string, kind: QuantityKind, natural?: NaturalUnit): QuantityResult {
+  const spec = natural === undefined ? QUANTITY_KINDS[kind] : { ...QUANTITY_KINDS[kind], ...natural };
   const trimmed = text.trim();
   if (SPOOF_CHARS.test(trimmed)) {
     return fail(
@@ -84,7 +90,7 @@ export function parseQuantity(text: string, kind: QuantityKind): QuantityResult 
   if (unitText === "") {
     return fail(
       `Missing unit in ${spec.label} "${trimmed}": a bare number is ambiguous`,
-      `write the unit, e.g. "${numberText} ${exampleUnit(kind)}"`,
+      `write the unit, e.g. "${numberText} ${natural?.unit ?? exampleUnit(kind)}"`,
     );
   }
   if (!UNIT_CHARS.test(unitText)) {

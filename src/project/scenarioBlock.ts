@@ -23,6 +23,7 @@ import type {
 import type { Position } from "./position.ts";
 import { describeCodePoints, type QuantityKind } from "./quantity.ts";
 import { readRadiantTimeSeries } from "./radiantTimeSeriesBlock.ts";
+import { readElevation, readTimeZone } from "./siteFields.ts";
 import type { YamlValue } from "./yamlTree.ts";
 
 export const SCENARIO_KEYS = [
@@ -281,19 +282,18 @@ function readSite(fields: Fields, out: Diagnostic[]): Site | undefined {
   const before = errorCount(out);
   const latitudeDeg = readQuantity(site, "latitude", "angle", out, true);
   const longitudeDeg = readQuantity(site, "longitude", "angle", out, true);
-  const timeZoneS = readQuantity(site, "time-zone", "time", out, true);
-  const elevationM = readQuantity(site, "elevation", "length", out);
+  const timeZoneH = readTimeZone(site, out);
+  const elevationM = readElevation(site, out);
   inRange(site, "latitude", latitudeDeg, -90, 90, "deg", out);
   inRange(site, "longitude", longitudeDeg, -180, 180, "deg", out);
-  inRange(site, "time-zone", timeZoneS === undefined ? undefined : timeZoneS / 3600, -12, 14, "h", out);
   if (
     errorCount(out) > before || latitudeDeg === undefined || longitudeDeg === undefined ||
-    timeZoneS === undefined
+    timeZoneH === undefined
   ) return undefined;
   return {
     latitudeDeg,
     longitudeDeg,
-    timeZoneH: timeZoneS / 3600,
+    timeZoneH,
     ...(elevationM === undefined ? {} : { elevationM }),
   };
 }

@@ -1,6 +1,6 @@
-import { type Diagnostic, error, warning } from "./diagnostic.ts";
+import { type Diagnostic, error } from "./diagnostic.ts";
 import { nearBlockKind } from "./fenceKind.ts";
-import { splitFrontMatter, splitMarkdown } from "./fences.ts";
+import { findSecondFrontMatter, splitFrontMatter, splitMarkdown } from "./fences.ts";
 import { describeCodePoints } from "./quantity.ts";
 import type { SourceText } from "./sourceText.ts";
 import { parseYamlAt, type YamlValue } from "./yamlTree.ts";
@@ -43,12 +43,13 @@ export function splitFile(source: SourceText, isProjectFile: boolean, out: Diagn
     );
   } else if (split.yaml !== undefined) {
     if (!isProjectFile) {
+      // An error, not a warning: settings written here would be lost while the build went on.
       out.push(
-        warning(
+        error(
           { file: source.path, line: 1, col: 1 },
           "front-matter-ignored",
-          "Front matter is read only in project.md; it is ignored here",
-          "move project settings to project.md",
+          `Cannot read front matter in "${source.path}": only project.md has front matter, so these keys would be lost`,
+          "move the keys into the front matter of project.md and delete the `---` block here",
         ),
       );
     } else {
@@ -56,6 +57,21 @@ export function splitFile(source: SourceText, isProjectFile: boolean, out: Diagn
       if (parsed.ok) frontMatter = parsed.value;
       else out.push(...parsed.diagnostics);
     }
+  }
+  const second = findSecondFrontMatter(split.body, split.bodyLine);
+  if (second !== undefined) {
+    out.push(
+      error(
+        { file: source.path, line: second, col: 1 },
+        "front-matter-second",
+        split.yaml === undefined
+          ? "Cannot read this `---` block of keys as front matter: front matter starts on the very first line of project.md, so it would be prose"
+          : "Cannot read a second front matter block: only the first one is read, so these keys would be prose",
+        isProjectFile
+          ? "merge the keys into one front matter block at the top of project.md"
+          : "move the keys into the front matter of project.md and delete the `---` block here",
+      ),
+    );
   }
   const pieces: FilePiece[] = [];
   for (const piece of splitMarkdown(split.body, split.bodyLine)) {

@@ -23,6 +23,7 @@ import type {
 import type { Position } from "./position.ts";
 import { describeCodePoints, type QuantityKind } from "./quantity.ts";
 import { readRadiantTimeSeries } from "./radiantTimeSeriesBlock.ts";
+import { MAX_LONGWAVE_CORRECTION, withinBound } from "./physicalBounds.ts";
 import { readElevation, readTimeZone } from "./siteFields.ts";
 import type { YamlValue } from "./yamlTree.ts";
 
@@ -456,6 +457,14 @@ function readSurface(
     outsideCoefficient: readQuantity(surface, "outside-coefficient", "coefficient", out),
     longwaveCorrectionK: readQuantity(surface, "longwave-correction", "temperatureDifference", out),
   };
+  const longwaveAt = surface.entries.get("longwave-correction")?.value.at ?? surface.at;
+  withinBound(
+    optional.longwaveCorrectionK,
+    MAX_LONGWAVE_CORRECTION,
+    "a longwave-correction of",
+    longwaveAt,
+    out,
+  );
   if (optional.outsideCoefficient !== undefined && !(optional.outsideCoefficient > 0)) {
     out.push(
       error(

@@ -26,6 +26,7 @@ export type YamlParse =
 
 const MAX_DEPTH = 16;
 /** C0 controls except tab and line feed, DEL and C1 controls: never meant in a project's text. */
+// deno-lint-ignore no-control-regex -- matching control characters is the point
 const CONTROL = /[\u0000-\u0008\u000B-\u001F\u007F-\u009F]/;
 
 /**

@@ -65,6 +65,16 @@ function inTagOrRawText(before: string): boolean {
   return /^<(title|textarea|script|style)\b/i.test(before.slice(open));
 }
 
+/** True inside an SVG `text` or `tspan` element, where an HTML `<bdi>` would not be rendered. */
+function inSvgText(before: string): boolean {
+  return /^<(text|tspan)\b/.test(before.slice(before.lastIndexOf("<")));
+}
+
+/** Isolates escaped text: `<bdi>` in HTML; FIRST STRONG ISOLATE … POP DIRECTIONAL ISOLATE in SVG text. */
+function isolated(before: string, rendered: string): string {
+  return inSvgText(before) ? `\u2068${rendered}\u2069` : `<bdi>${rendered}</bdi>`;
+}
+
 /**
  * Tagged template that escapes every interpolated value unless it is Trusted (arrays of Trusted are joined).
  * Text holding bidirectional controls (a right-to-left override in a name or file name) is put in a
@@ -77,7 +87,7 @@ export function html(strings: TemplateStringsArray, ...values: readonly HtmlValu
     const value = values[i] as HtmlValue;
     const rendered = renderValue(value);
     const isolate = typeof value === "string" && BIDI_CONTROL.test(value) && !inTagOrRawText(out);
-    out += (isolate ? `<bdi>${rendered}</bdi>` : rendered) + (strings[i + 1] ?? "");
+    out += (isolate ? isolated(out, rendered) : rendered) + (strings[i + 1] ?? "");
   }
   return new Trusted(MINT, out);
 }

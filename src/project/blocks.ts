@@ -1,5 +1,7 @@
-import { type Diagnostic, error, warning } from "./diagnostic.ts";
-import { splitFrontMatter, splitMarkdown } from "./fences.ts";
+import { type Diagnostic, error } from "./diagnostic.ts";
+import { nearBlockKind } from "./fenceKind.ts";
+import { findSecondFrontMatter, splitFrontMatter, splitMarkdown } from "./fences.ts";
+import { describeCodePoints } from "./quantity.ts";
 import type { SourceText } from "./sourceText.ts";
 import { parseYamlAt, type YamlValue } from "./yamlTree.ts";
 
@@ -41,12 +43,13 @@ export function splitFile(source: SourceText, isProjectFile: boolean, out: Diagn
     );
   } else if (split.yaml !== undefined) {
     if (!isProjectFile) {
+      // An error, not a warning: settings written here would be lost while the build went on.
       out.push(
-        warning(
+        error(
           { file: source.path, line: 1, col: 1 },
           "front-matter-ignored",
-          "Front matter is read only in project.md; it is ignored here",
-          "move project settings to project.md",
+          `Cannot read front matter in "${source.path}": only project.md has front matter, so these keys would be lost`,
+          "move the keys into the front matter of project.md and delete the `---` block here",
         ),
       );
     } else {
@@ -55,6 +58,21 @@ export function splitFile(source: SourceText, isProjectFile: boolean, out: Diagn
       else out.push(...parsed.diagnostics);
     }
   }
+  const second = findSecondFrontMatter(split.body, split.bodyLine);
+  if (second !== undefined) {
+    out.push(
+      error(
+        { file: source.path, line: second, col: 1 },
+        "front-matter-second",
+        split.yaml === undefined
+          ? "Cannot read this `---` block of keys as front matter: front matter starts on the very first line of project.md, so it would be prose"
+          : "Cannot read a second front matter block: only the first one is read, so these keys would be prose",
+        isProjectFile
+          ? "merge the keys into one front matter block at the top of project.md"
+          : "move the keys into the front matter of project.md and delete the `---` block here",
+      ),
+    );
+  }
   const pieces: FilePiece[] = [];
   for (const piece of splitMarkdown(split.body, split.bodyLine)) {
     if (piece.kind === "prose") {
@@ -62,6 +80,19 @@ export function splitFile(source: SourceText, isProjectFile: boolean, out: Diagn
       continue;
     }
     if (!INPUT_KINDS.includes(piece.info)) {
+      const near = nearBlockKind(piece.infoString, INPUT_KINDS);
+      if (near !== undefined) {
+        out.push(
+          error(
+            { file: source.path, line: piece.line, col: 1 },
+            "fence-kind-misspelt",
+            `Cannot read the fence \`${
+              describeCodePoints(piece.infoString)
+            }\` as an input block: ${near.reason}, so the block would be prose`,
+            `did you mean \`${near.kind}\`? Write the kind alone after the fence, exactly \`${near.kind}\` (for an example that is not input, use another word, e.g. \`text\`)`,
+          ),
+        );
+      }
       pieces.push({ kind: "code", raw: piece.raw, line: piece.line });
       continue;
     }

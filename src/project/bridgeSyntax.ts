@@ -11,6 +11,7 @@ import { describeCodePoints } from "./quantity.ts";
 import { didYouMean } from "./suggest.ts";
 import type { YamlValue } from "./yamlTree.ts";
 import type { MaterialLookup } from "./constructionBlock.ts";
+import { MAX_U_CORRECTION, withinBound } from "./physicalBounds.ts";
 
 /** Keys of a layer's `bridge:` mapping. */
 export const BRIDGE_KEYS = [
@@ -65,6 +66,7 @@ export function readBridge(
     const id = textOf(materialEntry.value, `"material" in the ${label}`, out);
     if (id === undefined) return undefined;
     const material = materials.find(id);
+    if (material === undefined && materials.isBroken?.(id) === true) return undefined;
     if (material === undefined) {
       out.push(error(
         materialEntry.value.at,
@@ -171,6 +173,8 @@ export function readCorrections(
   if (fields === undefined) return undefined;
   const before = errorCount(out);
   const fastenersDeltaU = readQuantity(fields, "fasteners", "coefficient", out);
+  const fastenersAt = fields.entries.get("fasteners")?.value.at ?? fields.at;
+  withinBound(fastenersDeltaU, MAX_U_CORRECTION, "a fasteners ΔU_f of", fastenersAt, out);
   if (fastenersDeltaU !== undefined && !(fastenersDeltaU >= 0)) {
     out.push(error(
       fields.entries.get("fasteners")?.value.at ?? fields.at,
@@ -189,6 +193,9 @@ export function readCorrections(
     const deltaU2 = deltaEntry === undefined
       ? undefined
       : quantityOf(deltaEntry, "coefficient", "delta-u", out);
+    if (deltaEntry !== undefined) {
+      withinBound(deltaU2, MAX_U_CORRECTION, "an air-gaps ΔU'' of", deltaEntry.at, out);
+    }
     if (gaps !== undefined && (level !== 0 && level !== 1 && level !== 2)) {
       out.push(error(
         levelValue?.at ?? gaps.at,

@@ -64,6 +64,8 @@ export interface ConstructionDraft {
 export interface MaterialLookup {
   find(id: string): MaterialDef | undefined;
   ids(): readonly string[];
+  /** True for the id of a material block that has errors of its own (already reported once). */
+  isBroken?(id: string): boolean;
 }
 
 const MAX_LAYERS = 40;
@@ -85,8 +87,8 @@ export function readConstructionBlock(
   const outsideResistance = readQuantity(fields, "outside-surface-resistance", "resistance", out);
   const insideResistance = readQuantity(fields, "inside-surface-resistance", "resistance", out);
   const timestepS = readTimestep(fields, out);
-  nonNegative(fields, "outside-surface-resistance", outsideResistance, out);
-  nonNegative(fields, "inside-surface-resistance", insideResistance, out);
+  surfaceResistanceFloor(fields, "outside-surface-resistance", outsideResistance, out);
+  surfaceResistanceFloor(fields, "inside-surface-resistance", insideResistance, out);
   const items = readList(fields, "layers", out, true);
   const label = id?.id ?? "construction";
   const layers: ResolvedLayer[] = [];
@@ -161,14 +163,25 @@ export function readTimestep(fields: Fields, out: Diagnostic[]): number | undefi
   return seconds;
 }
 
-function nonNegative(fields: Fields, key: string, value: number | undefined, out: Diagnostic[]): void {
-  if (value !== undefined && value < 0) {
+/**
+ * The smallest surface resistance accepted, m²·K/W. ISO 6946:2017 Annex C gives R_se ≈ 0.02 at 10 m/s
+ * wind (h_c = 4 + 4v, from memory); half of that leaves a margin. Zero would make h = 1/R infinite.
+ */
+export const MIN_SURFACE_RESISTANCE = 0.01;
+
+function surfaceResistanceFloor(
+  fields: Fields,
+  key: string,
+  value: number | undefined,
+  out: Diagnostic[],
+): void {
+  if (value !== undefined && !(value >= MIN_SURFACE_RESISTANCE)) {
     out.push(
       error(
         fields.entries.get(key)?.value.at ?? fields.at,
-        "negative",
-        `Expected a non-negative ${key}, found ${value}`,
-        "surface resistances are zero or positive",
+        "surface-resistance-too-small",
+        `Expected ${key} of at least ${MIN_SURFACE_RESISTANCE} m^2 K/W, found ${value} m^2 K/W`,
+        `a surface film in air has R ≥ 0.02 m^2 K/W even at 10 m/s wind (ISO 6946:2017 Annex C, from memory); give the film's resistance here rather than as a layer`,
       ),
     );
   }
@@ -206,6 +219,7 @@ function readLayer(
     const materialId = textOf(materialEntry.value, `"material" in the ${what}`, out);
     if (materialId === undefined) return undefined;
     const material = materials.find(materialId);
+    if (material === undefined && materials.isBroken?.(materialId) === true) return undefined;
     if (material === undefined) {
       out.push(
         error(

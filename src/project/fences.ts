@@ -7,6 +7,8 @@ export type MarkdownPiece =
     readonly kind: "fence";
     /** First word of the info string, read from the fence line itself. */
     readonly info: string;
+    /** The whole info string after the fence characters, trimmed. */
+    readonly infoString: string;
     /** Raw text of the whole fence, for display. */
     readonly raw: string;
     /** Text between the fences. */
@@ -55,6 +57,29 @@ export function splitFrontMatter(text: string): FrontMatterSplit {
   };
 }
 
+const YAML_KEY_LINE = /^[A-Za-z][A-Za-z0-9_-]*:(\s|$)/;
+const YAML_MORE_LINE = /^(\s+\S|-\s|#|\s*$)/;
+
+/**
+ * The line of a `---` block of YAML keys at the start of a body (blank lines before it allowed): a
+ * second front matter after the first, or one that does not start on line 1. Markdown would read it
+ * as a rule and a heading, and its keys would be lost in silence.
+ */
+export function findSecondFrontMatter(body: string, firstLine: number): number | undefined {
+  const lines = body.split("\n");
+  let start = 0;
+  while (start < lines.length && (lines[start] ?? "").trim() === "") start++;
+  if (lines[start] !== "---") return undefined;
+  let keys = 0;
+  for (let i = start + 1; i < lines.length; i++) {
+    const line = lines[i] ?? "";
+    if (line === "---" || line === "...") return keys > 0 ? firstLine + start : undefined;
+    if (YAML_KEY_LINE.test(line)) keys++;
+    else if (!YAML_MORE_LINE.test(line)) return undefined;
+  }
+  return undefined;
+}
+
 /**
  * Lexes a Markdown body into prose and top-level fenced blocks with line numbers.
  * marked's tokens carry no positions, but their `raw` texts concatenate to the source, so a
@@ -75,11 +100,13 @@ export function splitMarkdown(body: string, firstLine: number): MarkdownPiece[] 
     if (token.type === "code" && /^ {0,3}(```|~~~)/.test(raw)) {
       flushProse();
       const fenceLine = raw.split("\n", 1)[0] ?? "";
-      const info = fenceLine.replace(/^ {0,3}(`{3,}|~{3,})/, "").trim().split(/\s+/, 1)[0] ?? "";
+      const infoString = fenceLine.replace(/^ {0,3}(`{3,}|~{3,})/, "").trim();
+      const info = infoString.split(/\s+/, 1)[0] ?? "";
       const leading = /^\n*/.exec(raw)?.[0].length ?? 0;
       pieces.push({
         kind: "fence",
         info,
+        infoString,
         raw,
         body: String(token.text ?? ""),
         line: line + leading,

@@ -1,6 +1,13 @@
 import { type Diagnostic, error } from "./diagnostic.ts";
 import type { Position } from "./position.ts";
-import { describeCodePoints, parseQuantity, QUANTITY_KINDS, type QuantityKind } from "./quantity.ts";
+import {
+  describeCodePoints,
+  type NaturalUnit,
+  NON_DECIMAL_NUMBER,
+  parseQuantity,
+  QUANTITY_KINDS,
+  type QuantityKind,
+} from "./quantity.ts";
 import { closest } from "./suggest.ts";
 import type { YamlEntry, YamlValue } from "./yamlTree.ts";
 
@@ -129,6 +136,20 @@ export function idOf(
   return { id: text, at: value.at };
 }
 
+/**
+ * Keys whose quantity has a natural unit other than the SI unit of its kind (or a clearer example):
+ * messages and hints about them use that unit, so `time-zone: 1` is told "1 h", never "1 s".
+ */
+const NATURAL_UNITS: Readonly<Record<string, NaturalUnit>> = {
+  "time-zone": { unit: "h", example: "1 h" },
+  "timestep": { unit: "min", example: "15 min" },
+  "elevation": { unit: "m", example: "120 m" },
+  "latitude": { unit: "deg", example: "52.4 deg" },
+  "longitude": { unit: "deg", example: "-1.9 deg" },
+  "azimuth": { unit: "deg", example: "180 deg" },
+  "tilt": { unit: "deg", example: "90 deg" },
+};
+
 /** Reads a quantity with unit and converts it to SI. */
 export function readQuantity(
   fields: Fields,
@@ -138,10 +159,11 @@ export function readQuantity(
   required = false,
 ): number | undefined {
   const entry = fields.entries.get(key);
+  const natural = NATURAL_UNITS[key];
   if (entry === undefined) {
-    return required ? missing(fields, key, QUANTITY_KINDS[kind].example, out) : undefined;
+    return required ? missing(fields, key, natural?.example ?? QUANTITY_KINDS[kind].example, out) : undefined;
   }
-  return quantityOf(entry.value, kind, `"${key}" in the ${fields.what}`, out);
+  return quantityOf(entry.value, kind, `"${key}" in the ${fields.what}`, out, natural);
 }
 
 /** Converts a scalar quantity to SI, reporting bare numbers, wrong units and bad numbers at the value. */
@@ -150,8 +172,9 @@ export function quantityOf(
   kind: QuantityKind,
   what: string,
   out: Diagnostic[],
+  natural?: NaturalUnit,
 ): number | undefined {
-  const spec = QUANTITY_KINDS[kind];
+  const spec = natural === undefined ? QUANTITY_KINDS[kind] : { ...QUANTITY_KINDS[kind], ...natural };
   if (value.kind !== "scalar" || value.value === null) {
     out.push(
       error(
@@ -163,7 +186,7 @@ export function quantityOf(
     );
     return undefined;
   }
-  const result = parseQuantity(value.text.replace(/^(["'])(.*)\1$/, "$2"), kind);
+  const result = parseQuantity(value.text.replace(/^(["'])(.*)\1$/, "$2"), kind, natural);
   if (!result.ok) {
     out.push(error(value.at, "bad-quantity", `${result.message} (for ${what})`, result.hint));
     return undefined;
@@ -189,7 +212,9 @@ export function readNumber(
         value.at,
         "expected-number",
         `Expected a plain number between ${min} and ${max} for ${what}, found ${describe(value)}`,
-        `write e.g. \`${key}: ${(min + max) / 2}\` (a pure number, no unit)`,
+        `write e.g. \`${key}: ${(min + max) / 2}\` (a pure number, no unit${
+          value.kind === "scalar" && NON_DECIMAL_NUMBER.test(value.text) ? ", in decimal digits" : ""
+        })`,
       ),
     );
     return undefined;

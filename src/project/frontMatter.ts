@@ -2,6 +2,7 @@ import { type Diagnostic, error, errorCount } from "./diagnostic.ts";
 import { type Fields, readChoice, readFields, readList, readNumber, readText, textOf } from "./fields.ts";
 import type { ProjectInfo, ProjectStatus, RevisionEntry } from "./model.ts";
 import type { Position } from "./position.ts";
+import { describeCodePoints } from "./quantity.ts";
 import { readLimits } from "./limitsSyntax.ts";
 import type { YamlValue } from "./yamlTree.ts";
 
@@ -91,19 +92,38 @@ function requireKey(fields: Fields, key: string, example: string, out: Diagnosti
 function readDate(fields: Fields, key: string, out: Diagnostic[], required: boolean): string | undefined {
   const text = readText(fields, key, out, required ? { example: "2031-05-14" } : undefined);
   if (text === undefined) return undefined;
+  const at = fields.entries.get(key)?.value.at ?? fields.at;
   if (!ISO_DATE.test(text)) {
-    const at = fields.entries.get(key)?.value.at ?? fields.at;
     out.push(
       error(
         at,
         "bad-date",
-        `Cannot read the date "${text}": expected an ISO date YYYY-MM-DD`,
+        `Cannot read the date "${describeCodePoints(text)}": expected an ISO date YYYY-MM-DD`,
         "write e.g. `date: 2031-05-14`",
       ),
     );
     return undefined;
   }
+  const [year, month, day] = text.split("-").map(Number) as [number, number, number];
+  const last = daysInMonth(year, month);
+  if (day > last) {
+    out.push(
+      error(
+        at,
+        "bad-date",
+        `Cannot use the date "${text}": month ${month} of ${year} has ${last} days`,
+        `check the day; the last day of that month is ${text.slice(0, 8)}${last}`,
+      ),
+    );
+    return undefined;
+  }
   return text;
+}
+
+/** Days in a month of the Gregorian calendar (ISO 8601): February has 29 in leap years. */
+export function daysInMonth(year: number, month: number): number {
+  if (month === 2) return (year % 4 === 0 && year % 100 !== 0) || year % 400 === 0 ? 29 : 28;
+  return [4, 6, 9, 11].includes(month) ? 30 : 31;
 }
 
 function readRevisions(fields: Fields, out: Diagnostic[]): RevisionEntry[] {

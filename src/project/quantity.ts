@@ -18,6 +18,12 @@ export const QUANTITY_KINDS = {
 
 export type QuantityKind = keyof typeof QUANTITY_KINDS;
 
+/** The unit a quantity is usually written in, when it is not the SI unit (a time zone in h, not s). */
+export interface NaturalUnit {
+  readonly unit: string;
+  readonly example: string;
+}
+
 export type QuantityResult =
   | { readonly ok: true; readonly value: number }
   | { readonly ok: false; readonly message: string; readonly hint: string };
@@ -26,6 +32,8 @@ const NUMBER = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?/;
 const UNIT_CHARS = /^[A-Za-z0-9^/()*. -]+$/;
 const SPOOF_CHARS = /[\u200B-\u200F\u202A-\u202E\u2060-\u2069\uFEFF]/;
 const LARGEST_MAGNITUDE = 1e12;
+/** A number written with a 0x, 0o or 0b prefix (YAML core schema integers, never meant here). */
+export const NON_DECIMAL_NUMBER = /^[-+]?0[xXoObB][0-9A-Fa-f.]/;
 
 /** Shows invisible or non-ASCII code points so a user can see what was really written. */
 export function describeCodePoints(text: string): string {
@@ -39,8 +47,8 @@ export function describeCodePoints(text: string): string {
  * Parses a quantity written as `"<number> <unit>"` and converts it to the SI unit of its kind.
  * Numbers use `.` as decimal mark, no thousands separators; the unit is required.
  */
-export function parseQuantity(text: string, kind: QuantityKind): QuantityResult {
-  const spec = QUANTITY_KINDS[kind];
+export function parseQuantity(text: string, kind: QuantityKind, natural?: NaturalUnit): QuantityResult {
+  const spec = natural === undefined ? QUANTITY_KINDS[kind] : { ...QUANTITY_KINDS[kind], ...natural };
   const trimmed = text.trim();
   if (SPOOF_CHARS.test(trimmed)) {
     return fail(
@@ -48,6 +56,12 @@ export function parseQuantity(text: string, kind: QuantityKind): QuantityResult 
         describeCodePoints(trimmed)
       }": it contains invisible or direction-control characters`,
       `retype the value as plain text, e.g. "${spec.example}"`,
+    );
+  }
+  if (NON_DECIMAL_NUMBER.test(trimmed)) {
+    return fail(
+      `Cannot read ${spec.label} "${trimmed}": only decimal numbers are accepted, not hexadecimal, octal or binary`,
+      `write the number in decimal digits, e.g. "${spec.example}"`,
     );
   }
   const numberMatch = NUMBER.exec(trimmed);
@@ -76,7 +90,7 @@ export function parseQuantity(text: string, kind: QuantityKind): QuantityResult 
   if (unitText === "") {
     return fail(
       `Missing unit in ${spec.label} "${trimmed}": a bare number is ambiguous`,
-      `write the unit, e.g. "${numberText} ${exampleUnit(kind)}"`,
+      `write the unit, e.g. "${numberText} ${natural?.unit ?? exampleUnit(kind)}"`,
     );
   }
   if (!UNIT_CHARS.test(unitText)) {

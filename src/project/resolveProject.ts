@@ -2,6 +2,7 @@ import { canonicalLibraryEntry, findLibraryMaterial, libraryIds } from "../mater
 import { isResistiveLibraryMaterial, type LibraryMaterial } from "../materials/libraryMaterial.ts";
 import { defaultSurfaceResistances } from "../materials/surfaceResistance.ts";
 import { type SplitFile, splitFile } from "./blocks.ts";
+import { brokenIds } from "./brokenBlocks.ts";
 import { type ConstructionDraft, type MaterialLookup, readConstructionBlock } from "./constructionBlock.ts";
 import { type Diagnostic, error, errorCount } from "./diagnostic.ts";
 import { findFenceProblems, splitFrontMatter } from "./fences.ts";
@@ -85,8 +86,10 @@ export function resolveProject(
   const assumptions: Assumption[] = [];
   const materials = readMaterials(files, out, assumptions, library);
   const libraryUsed = new Map<string, LibraryMaterial>();
+  const brokenMaterials = brokenIds(files, "material", new Set(materials.keys()));
   const lookup: MaterialLookup = {
     find(id) {
+      if (brokenMaterials.has(id)) return undefined;
       const own = materials.get(id);
       if (own !== undefined) return own;
       const entry = library.find(id);
@@ -95,10 +98,19 @@ export function resolveProject(
       return fromLibrary(entry);
     },
     ids: () => [...materials.keys(), ...library.ids()],
+    isBroken: (id) => brokenMaterials.has(id),
   };
   const constructions = readConstructions(files, lookup, out, assumptions);
+  // A scenario naming a construction that has errors (reported at the construction) adds no error of its own.
+  const constructionIds = constructions.map((c) => c.id);
+  const brokenConstructions = brokenIds(files, "construction", new Set(constructionIds));
   const heatingScenarios: HeatingScenario[] = [];
-  const scenarios = readScenarios(files, constructions.map((c) => c.id), out, heatingScenarios);
+  const scenarios = readScenarios(
+    files,
+    [...constructionIds, ...brokenConstructions],
+    out,
+    heatingScenarios,
+  );
   for (const entry of [...libraryUsed.values()].sort((a, b) => a.id < b.id ? -1 : 1)) {
     assumptions.push({
       id: `library:material:${entry.id}`,
@@ -186,8 +198,18 @@ function readConstructions(
 ): Construction[] {
   const constructions: Construction[] = [];
   for (const piece of inputs(files, "construction")) {
-    const draft = readConstructionBlock(piece.value, lookup, out);
-    if (draft === undefined) continue;
+    let usesBroken = false;
+    const tracking: MaterialLookup = {
+      ...lookup,
+      isBroken(id) {
+        const broken = lookup.isBroken?.(id) === true;
+        if (broken) usesBroken = true;
+        return broken;
+      },
+    };
+    const draft = readConstructionBlock(piece.value, tracking, out);
+    // A layer that names a broken material is left out silently; the construction is then broken too.
+    if (draft === undefined || usesBroken) continue;
     const earlier = constructions.find((c) => c.id === draft.id);
     if (earlier !== undefined) {
       out.push(duplicate("construction", draft.id, draft.at, earlier.at));

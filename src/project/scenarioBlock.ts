@@ -23,6 +23,8 @@ import type {
 import type { Position } from "./position.ts";
 import { describeCodePoints, type QuantityKind } from "./quantity.ts";
 import { readRadiantTimeSeries } from "./radiantTimeSeriesBlock.ts";
+import { MAX_LONGWAVE_CORRECTION, withinBound } from "./physicalBounds.ts";
+import { readElevation, readTimeZone } from "./siteFields.ts";
 import type { YamlValue } from "./yamlTree.ts";
 
 export const SCENARIO_KEYS = [
@@ -281,19 +283,18 @@ function readSite(fields: Fields, out: Diagnostic[]): Site | undefined {
   const before = errorCount(out);
   const latitudeDeg = readQuantity(site, "latitude", "angle", out, true);
   const longitudeDeg = readQuantity(site, "longitude", "angle", out, true);
-  const timeZoneS = readQuantity(site, "time-zone", "time", out, true);
-  const elevationM = readQuantity(site, "elevation", "length", out);
+  const timeZoneH = readTimeZone(site, out);
+  const elevationM = readElevation(site, out);
   inRange(site, "latitude", latitudeDeg, -90, 90, "deg", out);
   inRange(site, "longitude", longitudeDeg, -180, 180, "deg", out);
-  inRange(site, "time-zone", timeZoneS === undefined ? undefined : timeZoneS / 3600, -12, 14, "h", out);
   if (
     errorCount(out) > before || latitudeDeg === undefined || longitudeDeg === undefined ||
-    timeZoneS === undefined
+    timeZoneH === undefined
   ) return undefined;
   return {
     latitudeDeg,
     longitudeDeg,
-    timeZoneH: timeZoneS / 3600,
+    timeZoneH,
     ...(elevationM === undefined ? {} : { elevationM }),
   };
 }
@@ -427,7 +428,7 @@ function readSurface(
   inRange(surface, "tilt", tiltDeg, 0, 180, "deg", out);
   if (
     solAirEntry === undefined && tiltDeg !== undefined && tiltDeg > 0 && tiltDeg < 180 &&
-    azimuthDeg === undefined
+    !surface.entries.has("azimuth")
   ) {
     out.push(
       error(
@@ -456,6 +457,14 @@ function readSurface(
     outsideCoefficient: readQuantity(surface, "outside-coefficient", "coefficient", out),
     longwaveCorrectionK: readQuantity(surface, "longwave-correction", "temperatureDifference", out),
   };
+  const longwaveAt = surface.entries.get("longwave-correction")?.value.at ?? surface.at;
+  withinBound(
+    optional.longwaveCorrectionK,
+    MAX_LONGWAVE_CORRECTION,
+    "a longwave-correction of",
+    longwaveAt,
+    out,
+  );
   if (optional.outsideCoefficient !== undefined && !(optional.outsideCoefficient > 0)) {
     out.push(
       error(

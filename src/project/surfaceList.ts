@@ -1,4 +1,5 @@
 import { type Diagnostic, error } from "./diagnostic.ts";
+import { MAX_SURFACE_AREA, withinBound } from "./physicalBounds.ts";
 import { type Fields, readId, readList, readQuantity, readText, withSuggestion } from "./fields.ts";
 import type { Position } from "./position.ts";
 import { describeCodePoints } from "./quantity.ts";
@@ -67,6 +68,8 @@ export function readSurfaceCore(
     );
   }
   const areaM2 = readQuantity(surface, "area", "area", out, true);
+  const areaAt = surface.entries.get("area")?.value.at ?? surface.at;
+  withinBound(areaM2, MAX_SURFACE_AREA, "an area of", areaAt, out);
   if (areaM2 !== undefined && !(areaM2 > 0)) {
     out.push(
       error(

@@ -1,6 +1,7 @@
 import { isAlias, isMap, isScalar, isSeq, LineCounter, type Node, parseDocument } from "yaml";
 import { type Diagnostic, error } from "./diagnostic.ts";
 import type { Position } from "./position.ts";
+import { describeCodePoints, NON_DECIMAL_NUMBER } from "./quantity.ts";
 
 /** A YAML value with the position of its first character in the project file. */
 export type YamlValue =
@@ -24,6 +25,9 @@ export type YamlParse =
   | { readonly ok: false; readonly diagnostics: readonly Diagnostic[] };
 
 const MAX_DEPTH = 16;
+/** C0 controls except tab and line feed, DEL and C1 controls: never meant in a project's text. */
+// deno-lint-ignore no-control-regex -- matching control characters is the point
+const CONTROL = /[\u0000-\u0008\u000B-\u001F\u007F-\u009F]/;
 
 /**
  * Parses a YAML text that sits at `firstLine` of `file` into a position-carrying tree.
@@ -72,18 +76,44 @@ export function parseYamlAt(text: string, file: string, firstLine: number, first
       aliases.push(at);
       return undefined;
     }
-    if (n.tag !== undefined && !n.tag.startsWith("tag:yaml.org,2002:")) {
-      diagnostics.push(error(at, "yaml-tag", `Cannot use the YAML tag "${n.tag}"`, "remove the tag"));
+    if (n.tag !== undefined) {
+      // Core schema only: an explicit tag (`!!timestamp`, `!!binary`, `!!str`, `!local`) changes what a
+      // value means, and `!!timestamp` even depends on the machine's time zone.
+      const shown = n.tag.replace(/^tag:yaml\.org,2002:/, "!!");
+      diagnostics.push(
+        error(
+          at,
+          "yaml-tag",
+          `Cannot use the YAML tag "${describeCodePoints(shown)}": input blocks hold plain values only`,
+          "remove the tag and write the value as plain text (a date as `2031-05-14`, a name as words)",
+        ),
+      );
       return undefined;
     }
     if (isScalar(n)) {
       const [start, end] = n.range ?? [0, 0];
+      const written = text.slice(start, end);
       const value = n.value;
-      const plain = typeof value === "string" || typeof value === "number" || typeof value === "boolean" ||
-          value === null
+      if (typeof value === "string" && CONTROL.test(value)) {
+        const code = describeCodePoints(CONTROL.exec(value)?.[0] ?? "");
+        diagnostics.push(
+          error(
+            at,
+            "control-character",
+            `Cannot use the control character ${code} in the text "${describeCodePoints(value)}"`,
+            "remove it; escapes such as \\u001b, \\0 or \\a in quoted text are not accepted",
+          ),
+        );
+        return undefined;
+      }
+      // Hexadecimal, octal and binary integers (0x1, 0o7, 0b1) stay text, so a number field refuses them.
+      const plain = typeof value === "number" && NON_DECIMAL_NUMBER.test(written)
+        ? written
+        : typeof value === "string" || typeof value === "number" || typeof value === "boolean" ||
+            value === null
         ? value
         : String(value);
-      return { kind: "scalar", value: plain, text: text.slice(start, end), at };
+      return { kind: "scalar", value: plain, text: written, at };
     }
     if (isSeq(n)) {
       const items: YamlValue[] = [];

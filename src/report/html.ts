@@ -52,11 +52,42 @@ function renderValue(value: HtmlValue): string {
   throw new TypeError(`Cannot interpolate a value of type "${typeof value}": format it to a string first`);
 }
 
-/** Tagged template that escapes every interpolated value unless it is Trusted (arrays of Trusted are joined). */
+/** Bidirectional embeddings, overrides, isolates and marks (UAX #9 explicit formatting characters). */
+const BIDI_CONTROL = /[\u061C\u200E\u200F\u202A-\u202E\u2066-\u2069]/;
+
+/**
+ * True when markup ending with `before` continues inside a tag (an attribute value) or in an element
+ * whose content is not parsed as markup (`title`, `textarea`, `script`, `style`).
+ */
+function inTagOrRawText(before: string): boolean {
+  const open = before.lastIndexOf("<");
+  if (open > before.lastIndexOf(">")) return true;
+  return /^<(title|textarea|script|style)\b/i.test(before.slice(open));
+}
+
+/** True inside an SVG `text` or `tspan` element, where an HTML `<bdi>` would not be rendered. */
+function inSvgText(before: string): boolean {
+  return /^<(text|tspan)\b/.test(before.slice(before.lastIndexOf("<")));
+}
+
+/** Isolates escaped text: `<bdi>` in HTML; FIRST STRONG ISOLATE … POP DIRECTIONAL ISOLATE in SVG text. */
+function isolated(before: string, rendered: string): string {
+  return inSvgText(before) ? `\u2068${rendered}\u2069` : `<bdi>${rendered}</bdi>`;
+}
+
+/**
+ * Tagged template that escapes every interpolated value unless it is Trusted (arrays of Trusted are joined).
+ * Text holding bidirectional controls (a right-to-left override in a name or file name) is put in a
+ * `<bdi>` element in element content, so it cannot reorder the text around it; the text itself is
+ * unchanged, so what the archive reader extracts stays byte-exact.
+ */
 export function html(strings: TemplateStringsArray, ...values: readonly HtmlValue[]): Trusted {
   let out = strings[0] ?? "";
   for (let i = 0; i < values.length; i++) {
-    out += renderValue(values[i] as HtmlValue) + (strings[i + 1] ?? "");
+    const value = values[i] as HtmlValue;
+    const rendered = renderValue(value);
+    const isolate = typeof value === "string" && BIDI_CONTROL.test(value) && !inTagOrRawText(out);
+    out += (isolate ? isolated(out, rendered) : rendered) + (strings[i + 1] ?? "");
   }
   return new Trusted(MINT, out);
 }

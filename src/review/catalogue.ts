@@ -57,6 +57,8 @@ export const REVIEW_RULES: readonly ReviewRule[] = [
   rule("sol-air-below-outdoor", "warning", "given sol-air more than 10 K below the coldest outdoor air"),
   rule("sol-air-too-high", "warning", "given sol-air above 90 °C"),
   rule("sol-air-range-large", "warning", "given sol-air swinging more than 60 K in a day"),
+  rule("indoor-temperature-unusual", "warning", "an indoor temperature outside 10–32 °C"),
+  rule("longwave-correction-unusual", "warning", "a long-wave correction outside 0–10 K"),
   rule("u-value-high", "warning", "U above 6 W/(m²·K) for an opaque element"),
   rule("kappa-high", "warning", "κ1 above 400 kJ/(m²·K)"),
   rule("time-lag-long", "note", "time lag above 24 h"),

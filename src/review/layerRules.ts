@@ -85,9 +85,9 @@ function surfaceFilm(c: Construction, layer: ResolvedLayer, index: number): Diag
     message: `The ${layerLabel(c, index)} looks like a surface resistance${
       equal ? " and has a conventional surface-resistance value" : ""
     }, but ${c.id} also applies its ${side} surface resistance (${num(tool)} ${M2K_W})`,
-    hint: `remove this layer, or set \`${
+    hint: `remove this layer; if its value is the film you mean, give it as \`${
       outermost ? "outside" : "inside"
-    }-surface-resistance: 0 m^2 K/W\` on ${c.id} if it is meant to replace the film`,
+    }-surface-resistance\` on ${c.id} instead`,
     value: `R = ${num(layer.resistance)} ${M2K_W}`,
     expected: "surface resistances counted once: only in the construction's surface-resistance keys",
     source: conventional.source,

@@ -179,3 +179,22 @@ export const ELEMENT = {
     "common practice, no source: a lag beyond one 24 h period is rare (a 600 mm stone wall lags about 14 h, from memory) and may be a phase-unwrapping artefact",
   ),
 } as const;
+
+/** Scenario conditions: possible, but unusual enough to check. */
+export const CONDITIONS = {
+  minIndoor: limit(
+    10,
+    "°C",
+    "from memory: design indoor temperatures of heated buildings run from about 12 °C (stores, workshops) to 30 °C (pool halls) (CIBSE Guide A Table 1.5 and EN 12831 national annexes, not checked); the band is widened by 2 K",
+  ),
+  maxIndoor: limit(
+    32,
+    "°C",
+    "from memory: design indoor temperatures of heated buildings run from about 12 °C (stores, workshops) to 30 °C (pool halls) (CIBSE Guide A Table 1.5 and EN 12831 national annexes, not checked); the band is widened by 2 K",
+  ),
+  maxLongwaveCorrection: limit(
+    10,
+    "K",
+    "from memory: the ASHRAE Handbook—Fundamentals sol-air convention uses ε·ΔR/h_o ≈ 3.9 K (7 °F) for horizontal surfaces and 0 for vertical ones; more than 10 K needs a reason",
+  ),
+} as const;

@@ -6,6 +6,7 @@
 import { type Diagnostic, sortDiagnostics } from "../project/diagnostic.ts";
 import type { Model } from "../project/model.ts";
 import type { ResultsJson } from "../results/types.ts";
+import { reviewConditions } from "./conditionRules.ts";
 import { reviewElements } from "./elementRules.ts";
 import { reviewLayers } from "./layerRules.ts";
 import { reviewLimits } from "./limitRules.ts";
@@ -25,6 +26,7 @@ export function reviewProject(model: Model, results?: ResultsJson): Diagnostic[]
     ...reviewOrder(model),
     ...reviewProvenance(model, results),
     ...reviewScenarios(model, results),
+    ...reviewConditions(model),
     ...(results === undefined ? [] : reviewElements(model, results)),
     ...(results === undefined ? [] : reviewLimits(model, results)),
   ];

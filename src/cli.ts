@@ -5,6 +5,10 @@ import { runDiff } from "./commands/diff.ts";
 import { runInit } from "./commands/init.ts";
 import { runVerify } from "./commands/verify.ts";
 import { runServe } from "./commands/serve.ts";
+import { describeEnvironmentFault, isEnvironmentFault } from "./commands/environmentFault.ts";
+import { hideEnvironmentFromDependencies } from "./commands/quietDependencies.ts";
+import { streamWriter, terminalIo } from "./commands/terminalIo.ts";
+import { terminalSafe } from "./project/displayText.ts";
 import { TOOL_VERSION } from "./version.ts";
 
 const USAGE =
@@ -139,7 +143,9 @@ const COMMANDS: Record<string, CommandSpec> = {
 };
 
 /** Runs the command line; returns the process exit code. */
-export async function main(args: readonly string[], io: CommandIo): Promise<number> {
+export async function main(args: readonly string[], rawIo: CommandIo): Promise<number> {
+  hideEnvironmentFromDependencies();
+  const io = terminalIo(rawIo);
   const [command, ...rest] = args;
   if (command === undefined || command === "help" || command === "--help" || command === "-h") {
     const topic = rest[0];
@@ -174,23 +180,25 @@ export async function main(args: readonly string[], io: CommandIo): Promise<numb
   } catch (cause) {
     const isUsage = cause instanceof UsageError || (cause instanceof TypeError && "code" in cause &&
       String((cause as { code: unknown }).code).startsWith("ERR_PARSE_ARGS"));
-    if (!isUsage) throw cause;
+    if (!isUsage) {
+      if (!isEnvironmentFault(cause)) throw cause;
+      // The reader of our output has gone (e.g. `| head`): there is no one left to tell.
+      if (cause instanceof Deno.errors.BrokenPipe) return 1;
+      io.stderr(`fluxnote ${command}: ${describeEnvironmentFault(cause)}`);
+      return 1;
+    }
     io.stderr(`fluxnote ${command}: ${cause.message}\n\n${HELP[command] ?? USAGE}`);
     return 2;
   }
 }
 
 if (import.meta.main) {
-  const encoder = new TextEncoder();
-  const io: CommandIo = {
-    stdout: (line) => Deno.stdout.writeSync(encoder.encode(`${line}\n`)),
-    stderr: (line) => Deno.stderr.writeSync(encoder.encode(`${line}\n`)),
-  };
+  const io: CommandIo = { stdout: streamWriter(Deno.stdout), stderr: streamWriter(Deno.stderr) };
   let code: number;
   try {
     code = await main(Deno.args, io);
   } catch (cause) {
-    const message = cause instanceof Error ? `${cause.name}: ${cause.message}` : String(cause);
+    const message = terminalSafe(cause instanceof Error ? `${cause.name}: ${cause.message}` : String(cause));
     io.stderr(
       `fluxnote: internal error: ${message}\nThis is a fault in fluxnote, not in your project; nothing was changed.`,
     );

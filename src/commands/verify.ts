@@ -2,6 +2,7 @@ import { compareJson } from "../archive/compareJson.ts";
 import { extractPackage } from "../archive/extract.ts";
 import { inputsHash } from "../archive/hash.ts";
 import type { LibraryMaterial } from "../materials/libraryMaterial.ts";
+import { oneLine, shortenValues } from "../project/displayText.ts";
 import { memoryProjectFs } from "../project/projectFs.ts";
 import { libraryWith } from "../project/resolveProject.ts";
 import type { ResultsJson } from "../results/types.ts";
@@ -95,7 +96,7 @@ export async function runVerify(packagePath: string, io: CommandIo): Promise<num
     }
   }
   if (problems.length > 0) {
-    for (const p of problems) io.stderr(`${packagePath}: error: ${p}`);
+    for (const p of problems) io.stderr(`${packagePath}: error: ${oneLine(shortenValues(p))}`);
     io.stderr(`NOT REPRODUCED: ${problems.length} problem(s)`);
     return 1;
   }

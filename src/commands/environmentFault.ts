@@ -68,9 +68,12 @@ export function describeEnvironmentFault(cause: Error): string {
   if (cause instanceof Deno.errors.NotCapable) {
     // "Requires write access to "/x", run again with the --allow-write flag"
     const m = /^Requires (\w+) access to "?([^",]*)"?,.*(--allow-[a-z-]+)/.exec(cause.message);
-    return m === null
-      ? `not allowed: ${cause.message}`
-      : `not allowed to ${m[1]} "${m[2]}": this run was not given ${m[3]} for it`;
+    if (m === null) return `not allowed: ${cause.message}`;
+    const access = ({ read: "read", write: "write", net: "connect to", env: "read the variable" } as Record<
+      string,
+      string
+    >)[m[1] ?? ""] ?? "use";
+    return `not allowed to ${access} "${m[2]}": this run was not given ${m[3]} for it`;
   }
   const m = /\(os error (\d+)\)(?::\s*(\w+)\s+'([^']*)'(?:\s*->\s*'([^']*)')?)?/.exec(cause.message);
   const reason = reasonOf(cause, m?.[1]);
@@ -78,6 +81,9 @@ export function describeEnvironmentFault(cause: Error): string {
   const path = m?.[3];
   if (operation === undefined || path === undefined) return reason;
   const verb = OPERATIONS[operation] ?? operation;
+  if (operation === "mkdir" && cause instanceof Deno.errors.AlreadyExists) {
+    return `cannot create the folder "${path}": a file of that name is in the way`;
+  }
   const target = m?.[4] === undefined ? "" : ` to "${m[4]}"`;
   return `cannot ${verb} "${path}"${target}: ${reason}`;
 }

@@ -94,6 +94,16 @@ Deno.test("output cut short by its reader (broken pipe) ends quietly and keeps t
   });
   assert.equal(code, 0);
   assert.doesNotMatch(err, /internal error|BrokenPipe/);
+  // A writer that raises the broken pipe itself: main() ends quietly with exit 1 instead of an internal error.
+  let told = "";
+  const cut = await main(["check", GOOD], {
+    stdout: () => {
+      throw new Deno.errors.BrokenPipe("Broken pipe (os error 32)");
+    },
+    stderr: (l) => (told += `${l}\n`),
+  });
+  assert.equal(cut, 1);
+  assert.doesNotMatch(told, /internal error|BrokenPipe|fluxnote check:/);
 });
 
 Deno.test("a pipe that takes a line in parts still gets every byte", () => {

@@ -59,7 +59,14 @@ export async function runServe(options: ServeOptions, io: CommandIo): Promise<nu
   };
   await rebuild();
   const refresh = options.refreshS ?? 2;
-  const watcher = Deno.watchFs(options.project, { recursive: true });
+  let watcher: Deno.FsWatcher;
+  try {
+    watcher = Deno.watchFs(options.project, { recursive: true });
+  } catch (cause) {
+    if (!(cause instanceof Deno.errors.NotFound || cause instanceof Deno.errors.NotADirectory)) throw cause;
+    io.stderr(`fluxnote serve: cannot watch "${options.project}": it does not exist or is not a folder`);
+    return 1;
+  }
   let server: Deno.HttpServer;
   let listeningPort = options.port;
   try {

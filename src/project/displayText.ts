@@ -8,12 +8,12 @@
  * newline in a value cannot start a line of its own (a fake "REPRODUCED").
  */
 
-/** C0 controls except TAB and LF, DEL, C1 controls, and the bidi controls (embedding, override, isolate, marks). */
-const UNSAFE =
-  /[\u0000-\u0008\u000b-\u001f\u007f-\u009f\u061c\u200e\u200f\u2028\u2029\u202a-\u202e\u2066-\u2069]/g;
+/** The bidi controls (Arabic letter mark, LRM/RLM, embeddings, overrides, isolates) and the line/paragraph separators. */
+const BIDI = String.raw`\u061c\u200e\u200f\u2028\u2029\u202a-\u202e\u2066-\u2069`;
+/** C0 controls except TAB and LF, DEL, C1 controls, and the bidi controls. */
+const UNSAFE = new RegExp(String.raw`[\u0000-\u0008\u000b-\u001f\u007f-\u009f${BIDI}]`, "g");
 /** The same, plus TAB and LF. */
-const UNSAFE_IN_LINE =
-  /[\u0000-\u001f\u007f-\u009f\u061c\u200e\u200f\u2028\u2029\u202a-\u202e\u2066-\u2069]/g;
+const UNSAFE_IN_LINE = new RegExp(String.raw`[\u0000-\u001f\u007f-\u009f${BIDI}]`, "g");
 
 /** Longest value quoted whole in a message, characters. */
 export const MAX_QUOTED_VALUE = 200;

@@ -15,6 +15,7 @@ const GOOD = new URL("../fixtures/good/minimal/", import.meta.url).pathname;
 const quiet = { stdout: () => {}, stderr: () => {} };
 
 /** Any control character except TAB and LF, DEL, C1, and the bidi controls: none may be written raw. */
+// deno-lint-ignore no-control-regex
 const RAW_CONTROL = /[\u0000-\u0008\u000b-\u001f\u007f-\u009f\u061c\u200e\u200f\u202a-\u202e\u2066-\u2069]/;
 
 async function run(args: string[]): Promise<{ code: number; out: string; err: string }> {

@@ -8,7 +8,9 @@
 import assert from "node:assert/strict";
 import { join } from "node:path";
 import { main } from "../../src/cli.ts";
+import { parseHTML } from "linkedom";
 import { runBuild } from "../../src/commands/build.ts";
+import { terminalIo } from "../../src/commands/terminalIo.ts";
 import { oneLine, shortened, terminalSafe } from "../../src/project/displayText.ts";
 
 const GOOD = new URL("../fixtures/good/minimal/", import.meta.url).pathname;
@@ -201,4 +203,14 @@ Deno.test("terminalSafe() and oneLine() make every control and bidi character vi
   assert.equal(oneLine("a\u001b[2Jb\nc"), "a\\u001b[2Jb\\nc");
   assert.equal(terminalSafe("U = 0.35 W/(m²·K) — “ok”"), "U = 0.35 W/(m²·K) — “ok”");
   assert.equal(shortened("y".repeat(300)), `${"y".repeat(200)}… (300 characters)`);
+});
+
+Deno.test("an HTML document on stdout gets character references for control characters, which a browser reads back", () => {
+  let out = "";
+  const io = terminalIo({ stdout: (l) => (out += l), stderr: () => {} });
+  io.stdout("<!doctype html><p>a\u001b[2Jb\u202ec</p>");
+  assert.equal(out, "<!doctype html><p>a&#x1b;[2Jb&#x202e;c</p>");
+  // HTML numeric character references (WHATWG HTML, "numeric character reference end state"; from memory).
+  const { document } = parseHTML(out);
+  assert.equal(document.querySelector("p")?.textContent, "a\u001b[2Jb\u202ec");
 });

@@ -49,7 +49,8 @@ JSON Pointer. Exit codes: 0 reproduced; 1 not reproduced or tampered; 2 not a pa
 
 Builds the project in memory and serves the package at http://127.0.0.1:N/ (default port 8470), rebuilding
 when a file of the project changes; the page reloads by itself every 2 s. Nothing is written to disk.
-Only the loopback address is used. Exit codes: 0 stopped; 2 usage error.`,
+Only the loopback address is used, and only requests for 127.0.0.1:N or localhost:N are answered.
+Exit codes: 0 stopped; 1 the port is in use or the folder cannot be watched; 2 usage error.`,
   diff: `usage: fluxnote diff <a> <b> [--format text|json|html] [--out <file>]
 
 Compares revision a with revision b; each is a project folder or an issued package.html (its embedded

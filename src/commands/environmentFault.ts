@@ -54,7 +54,8 @@ function reasonOf(cause: Error, osError: string | undefined): string {
 /** True for errors that come from the operating system or from a permission the run was not given. */
 export function isEnvironmentFault(cause: unknown): cause is Error {
   if (!(cause instanceof Error)) return false;
-  return cause instanceof Deno.errors.NotCapable || cause instanceof Deno.errors.PermissionDenied ||
+  return cause instanceof PathFault || cause instanceof Deno.errors.NotCapable ||
+    cause instanceof Deno.errors.PermissionDenied ||
     cause instanceof Deno.errors.NotFound || cause instanceof Deno.errors.AlreadyExists ||
     cause instanceof Deno.errors.IsADirectory || cause instanceof Deno.errors.NotADirectory ||
     cause instanceof Deno.errors.BrokenPipe || cause instanceof Deno.errors.AddrInUse ||
@@ -65,6 +66,7 @@ export function isEnvironmentFault(cause: unknown): cause is Error {
 
 /** One line for an environment fault: what could not be done, to which path, and why. */
 export function describeEnvironmentFault(cause: Error): string {
+  if (cause instanceof PathFault) return cause.message;
   if (cause instanceof Deno.errors.NotCapable) {
     // "Requires write access to "/x", run again with the --allow-write flag"
     const m = /^Requires (\w+) access to "?([^",]*)"?,.*(--allow-[a-z-]+)/.exec(cause.message);
@@ -86,4 +88,19 @@ export function describeEnvironmentFault(cause: Error): string {
   }
   const target = m?.[4] === undefined ? "" : ` to "${m[4]}"`;
   return `cannot ${verb} "${path}"${target}: ${reason}`;
+}
+
+/** An operating-system error raised without a path (e.g. by `Deno.makeTempDir`), with the path it concerns. */
+export class PathFault extends Error {
+  constructor(readonly operation: string, readonly path: string, override readonly cause: Error) {
+    super(`cannot ${operation} "${path}": ${reasonOf(cause, /\(os error (\d+)\)/.exec(cause.message)?.[1])}`);
+    this.name = "PathFault";
+  }
+}
+
+/** A `.catch` handler that names `path` in an operating-system error that does not. */
+export function faultAt(operation: string, path: string): (cause: unknown) => never {
+  return (cause) => {
+    throw cause instanceof Error && isEnvironmentFault(cause) ? new PathFault(operation, path, cause) : cause;
+  };
 }

@@ -1,3 +1,4 @@
+import { faultAt } from "./environmentFault.ts";
 import { basename, dirname, join } from "node:path";
 
 /** One file of the output set, path relative to the output folder (POSIX): text (written as UTF-8) or bytes. */
@@ -22,7 +23,8 @@ export async function writeOutputSet(
   const parent = dirname(outDir);
   const name = basename(outDir);
   await Deno.mkdir(parent, { recursive: true });
-  const staging = await Deno.makeTempDir({ dir: parent, prefix: `.${name}.staging-` });
+  const staging = await Deno.makeTempDir({ dir: parent, prefix: `.${name}.staging-` })
+    .catch(faultAt("create a staging folder in", parent));
   try {
     await Deno.chmod(staging, 0o755);
     for (const file of files) {

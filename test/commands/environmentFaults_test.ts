@@ -8,7 +8,11 @@
 import assert from "node:assert/strict";
 import { join } from "node:path";
 import { main } from "../../src/cli.ts";
-import { describeEnvironmentFault, isEnvironmentFault } from "../../src/commands/environmentFault.ts";
+import {
+  describeEnvironmentFault,
+  faultAt,
+  isEnvironmentFault,
+} from "../../src/commands/environmentFault.ts";
 import { streamWriter } from "../../src/commands/terminalIo.ts";
 import { diskProjectFs, type ProjectFs } from "../../src/project/projectFs.ts";
 import { readProject } from "../../src/project/readProject.ts";
@@ -209,4 +213,39 @@ Deno.test("LOG_TOKENS=1 does not reach the YAML parser: check --format json prin
     else Deno.env.set("LOG_TOKENS", before);
     Deno.env.delete("LOG_STREAM");
   }
+});
+
+Deno.test({
+  name: "a folder where nothing can be created (read-only project) is named in one line, exit 1",
+  // procfs refuses new entries to every user, root included (Linux proc(5), from memory); CI runs as root,
+  // so permission bits cannot make a read-only folder there.
+  ignore: Deno.build.os !== "linux",
+  async fn() {
+    const result = await run(["build", GOOD, "--out", "/proc/fluxnote-out"]);
+    assert.equal(result.code, 1, result.err);
+    assertOneLine(result.err, "/proc");
+  },
+});
+
+Deno.test("faultAt() names the path of an error that has none (Deno.makeTempDir reports only 'tmpdir')", async () => {
+  const denied = new Deno.errors.PermissionDenied("Permission denied (os error 13): tmpdir");
+  const named = await Promise.reject(denied).catch(faultAt("create a staging folder in", "/srv/project"))
+    .then(
+      () => undefined,
+      (e: unknown) => e,
+    );
+  assert.ok(isEnvironmentFault(named));
+  assert.equal(
+    describeEnvironmentFault(named),
+    'cannot create a staging folder in "/srv/project": permission denied',
+  );
+  const readOnly = new Error("Read-only file system (os error 30): tmpdir");
+  const named30 = await Promise.reject(readOnly).catch(faultAt("create a staging folder in", "/srv/p")).then(
+    () => undefined,
+    (e: unknown) => e as Error,
+  );
+  assert.equal(
+    describeEnvironmentFault(named30!),
+    'cannot create a staging folder in "/srv/p": the file system is read-only',
+  );
 });

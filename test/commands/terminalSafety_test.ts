@@ -10,7 +10,6 @@ import { join } from "node:path";
 import { main } from "../../src/cli.ts";
 import { parseHTML } from "linkedom";
 import { runBuild } from "../../src/commands/build.ts";
-import { terminalIo } from "../../src/commands/terminalIo.ts";
 import { oneLine, shortened, terminalSafe } from "../../src/project/displayText.ts";
 
 const GOOD = new URL("../fixtures/good/minimal/", import.meta.url).pathname;
@@ -205,12 +204,27 @@ Deno.test("terminalSafe() and oneLine() make every control and bidi character vi
   assert.equal(shortened("y".repeat(300)), `${"y".repeat(200)}… (300 characters)`);
 });
 
-Deno.test("an HTML document on stdout gets character references for control characters, which a browser reads back", () => {
-  let out = "";
-  const io = terminalIo({ stdout: (l) => (out += l), stderr: () => {} });
-  io.stdout("<!doctype html><p>a\u001b[2Jb\u202ec</p>");
-  assert.equal(out, "<!doctype html><p>a&#x1b;[2Jb&#x202e;c</p>");
-  // HTML numeric character references (WHATWG HTML, "numeric character reference end state"; from memory).
-  const { document } = parseHTML(out);
-  assert.equal(document.querySelector("p")?.textContent, "a\u001b[2Jb\u202ec");
+Deno.test("diff --format html on stdout carries control characters as references, which a browser reads back", async () => {
+  const a = await project((
+    f,
+  ) => (f["project.md"] = f["project.md"]!.replace(
+    "title: Fixture project",
+    String.raw`title: "Fixture\e[2J\u202e project"`,
+  )));
+  const b = await project((f) => (f["walls.md"] = f["walls.md"]!.replace("100 mm", "120 mm")));
+  try {
+    const diff = await run(["diff", a, b, "--format", "html"]);
+    assert.equal(diff.code, 0, diff.err);
+    assertNoRawControl(diff.out, "diff --format html");
+    assert.ok(diff.out.includes("&#x1b;[2J&#x202e;"), "the title is not carried as references");
+    // HTML numeric character references (WHATWG HTML, "numeric character reference end state"; from memory).
+    const { document } = parseHTML(diff.out);
+    assert.ok(
+      document.body.textContent?.includes("Fixture\u001b[2J\u202e project"),
+      "a browser does not read the title back",
+    );
+  } finally {
+    await Deno.remove(a, { recursive: true });
+    await Deno.remove(b, { recursive: true });
+  }
 });

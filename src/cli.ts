@@ -6,6 +6,10 @@ import { runInit } from "./commands/init.ts";
 import { runVerify } from "./commands/verify.ts";
 import { runKeygen } from "./commands/signingKeys.ts";
 import { runServe } from "./commands/serve.ts";
+import { describeEnvironmentFault, isEnvironmentFault } from "./commands/environmentFault.ts";
+import { hideEnvironmentFromDependencies } from "./commands/quietDependencies.ts";
+import { streamWriter, terminalIo } from "./commands/terminalIo.ts";
+import { terminalSafe } from "./project/displayText.ts";
 import { TOOL_VERSION } from "./version.ts";
 
 const USAGE =
@@ -65,7 +69,8 @@ Makes an Ed25519 key pair for signing packages: <name>.private.pem (PKCS#8, mode
 
 Builds the project in memory and serves the package at http://127.0.0.1:N/ (default port 8470), rebuilding
 when a file of the project changes; the page reloads by itself every 2 s. Nothing is written to disk.
-Only the loopback address is used. Exit codes: 0 stopped; 2 usage error.`,
+Only the loopback address is used, and only requests for 127.0.0.1:N or localhost:N are answered.
+Exit codes: 0 stopped; 1 the port is in use or the folder cannot be watched; 2 usage error.`,
   diff: `usage: fluxnote diff <a> <b> [--format text|json|html] [--out <file>]
 
 Compares revision a with revision b; each is a project folder or an issued package.html (its embedded
@@ -169,7 +174,9 @@ const COMMANDS: Record<string, CommandSpec> = {
 };
 
 /** Runs the command line; returns the process exit code. */
-export async function main(args: readonly string[], io: CommandIo): Promise<number> {
+export async function main(args: readonly string[], rawIo: CommandIo): Promise<number> {
+  hideEnvironmentFromDependencies();
+  const io = terminalIo(rawIo);
   const [command, ...rest] = args;
   if (command === undefined || command === "help" || command === "--help" || command === "-h") {
     const topic = rest[0];
@@ -204,23 +211,25 @@ export async function main(args: readonly string[], io: CommandIo): Promise<numb
   } catch (cause) {
     const isUsage = cause instanceof UsageError || (cause instanceof TypeError && "code" in cause &&
       String((cause as { code: unknown }).code).startsWith("ERR_PARSE_ARGS"));
-    if (!isUsage) throw cause;
+    if (!isUsage) {
+      if (!isEnvironmentFault(cause)) throw cause;
+      // The reader of our output has gone (e.g. `| head`): there is no one left to tell.
+      if (cause instanceof Deno.errors.BrokenPipe) return 1;
+      io.stderr(`fluxnote ${command}: ${describeEnvironmentFault(cause)}`);
+      return 1;
+    }
     io.stderr(`fluxnote ${command}: ${cause.message}\n\n${HELP[command] ?? USAGE}`);
     return 2;
   }
 }
 
 if (import.meta.main) {
-  const encoder = new TextEncoder();
-  const io: CommandIo = {
-    stdout: (line) => Deno.stdout.writeSync(encoder.encode(`${line}\n`)),
-    stderr: (line) => Deno.stderr.writeSync(encoder.encode(`${line}\n`)),
-  };
+  const io: CommandIo = { stdout: streamWriter(Deno.stdout), stderr: streamWriter(Deno.stderr) };
   let code: number;
   try {
     code = await main(Deno.args, io);
   } catch (cause) {
-    const message = cause instanceof Error ? `${cause.name}: ${cause.message}` : String(cause);
+    const message = terminalSafe(cause instanceof Error ? `${cause.name}: ${cause.message}` : String(cause));
     io.stderr(
       `fluxnote: internal error: ${message}\nThis is a fault in fluxnote, not in your project; nothing was changed.`,
     );

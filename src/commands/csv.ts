@@ -2,11 +2,26 @@ import type { Model } from "../project/model.ts";
 import type { ResultsJson } from "../results/types.ts";
 import { coolingLoadCells, coolingLoadHeader } from "./csvCoolingLoad.ts";
 
-/** Quotes a CSV cell; a cell that a spreadsheet would read as a formula gets a leading apostrophe. */
+/** Characters that start a formula in a spreadsheet, ASCII and full width (U+FF1D ＝, U+FF0B ＋, U+FF0D －, U+FF20 ＠). */
+const FORMULA_START = "=+\\-@\uFF1D\uFF0B\uFF0D\uFF20";
+/** A formula start at the beginning of the cell, after any spaces (`\s` includes NBSP and the Unicode spaces). */
+const LEADING_FORMULA = new RegExp(`^[\\s]*[${FORMULA_START}]|^[\\t\\r]`);
+/**
+ * A formula start after a separator a spreadsheet may split on (`;`, tab, CR, LF) and any spaces: opened
+ * with `;` or tab as the separator, `x;=1+1` is two cells, the second a formula.
+ */
+const SPLIT_FORMULA = new RegExp(`([;\\t\\r\\n][\\s]*)(?=[${FORMULA_START}])`, "g");
+
+/**
+ * Quotes a CSV cell. Numbers are written as numbers. A text cell that a spreadsheet would read as a
+ * formula — at its start, or after a `;`, tab or line break it may split on — gets an apostrophe before
+ * each such part (OWASP "CSV Injection" guidance).
+ */
 export function csvCell(value: string | number): string {
   if (typeof value === "number") return String(value);
-  const safe = /^[=+\-@\t\r]/.test(value) ? `'${value}` : value;
-  return /[",\n\r]/.test(safe) ? `"${safe.replaceAll('"', '""')}"` : safe;
+  const split = value.replace(SPLIT_FORMULA, "$1'");
+  const safe = LEADING_FORMULA.test(split) || split !== value ? `'${split}` : split;
+  return /[",;\t\n\r]/.test(safe) ? `"${safe.replaceAll('"', '""')}"` : safe;
 }
 
 /** One row per construction: steady-state figures in SI units. */

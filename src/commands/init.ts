@@ -6,6 +6,15 @@ export const TEMPLATE_FOLDER = new URL("../../templates/new-project/", import.me
 
 /** Creates a new project folder from the template; refuses to touch a folder that already has files. */
 export async function runInit(target: string, io: CommandIo): Promise<number> {
+  const existing = await Deno.lstat(target).catch((cause) => {
+    if (cause instanceof Deno.errors.NotFound) return undefined;
+    throw cause;
+  });
+  if (existing !== undefined && !existing.isDirectory) {
+    io.stderr(`fluxnote init: "${target}" already exists and is not a folder; nothing was written`);
+    io.stderr("  hint: give a new folder name, e.g. fluxnote init projects/my-building");
+    return 2;
+  }
   try {
     const entries = [...Deno.readDirSync(target)];
     if (entries.length > 0) {

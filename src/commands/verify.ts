@@ -4,6 +4,7 @@ import { extractPackage } from "../archive/extract.ts";
 import { inputsHash } from "../archive/hash.ts";
 import { findSignature } from "../archive/signature.ts";
 import type { LibraryMaterial } from "../materials/libraryMaterial.ts";
+import { oneLine, shortenValues } from "../project/displayText.ts";
 import { memoryProjectFs } from "../project/projectFs.ts";
 import { libraryWith } from "../project/resolveProject.ts";
 import { TOOL_VERSION } from "../version.ts";
@@ -121,7 +122,7 @@ export async function runVerify(
     );
   }
   if (problems.length > 0) {
-    for (const p of problems) io.stderr(`${packagePath}: error: ${p}`);
+    for (const p of problems) io.stderr(`${packagePath}: error: ${oneLine(shortenValues(p))}`);
     io.stderr(`NOT REPRODUCED: ${problems.length} problem(s)`);
     return 1;
   }

@@ -1,3 +1,4 @@
+import { faultAt } from "./environmentFault.ts";
 import { basename, dirname, join } from "node:path";
 import { inspectOutputFolder, OUTPUT_MARKER, outputMarkerText } from "./outputFolder.ts";
 
@@ -54,7 +55,8 @@ export async function writeOutputSet(
   using lock = await lockFolder(parent);
   const verdict = await inspectOutputFolder(outDir);
   if (verdict.kind === "refused") throw new OutputRefused(outDir, verdict.reason);
-  const staging = await Deno.makeTempDir({ dir: parent, prefix: `.${name}.staging-` });
+  const staging = await Deno.makeTempDir({ dir: parent, prefix: `.${name}.staging-` })
+    .catch(faultAt("create a staging folder in", parent));
   try {
     await Deno.chmod(staging, 0o755);
     const marker = outputMarkerText(identity.tool, identity.inputs, files.map((f) => f.path));

@@ -1,3 +1,4 @@
+import { oneLine, shortenValues } from "./displayText.ts";
 import { formatPosition, type Position } from "./position.ts";
 
 export type Severity = "error" | "warning" | "note";
@@ -18,18 +19,18 @@ export interface Diagnostic {
   readonly source?: string;
 }
 
-/** Creates an error diagnostic. */
+/** Creates an error diagnostic; quoted values longer than 200 characters are shortened. */
 export function error(at: Position, rule: string, message: string, hint?: string): Diagnostic {
   return hint === undefined
-    ? { severity: "error", at, rule, message }
-    : { severity: "error", at, rule, message, hint };
+    ? { severity: "error", at, rule, message: shortenValues(message) }
+    : { severity: "error", at, rule, message: shortenValues(message), hint: shortenValues(hint) };
 }
 
-/** Creates a warning diagnostic. */
+/** Creates a warning diagnostic; quoted values longer than 200 characters are shortened. */
 export function warning(at: Position, rule: string, message: string, hint?: string): Diagnostic {
   return hint === undefined
-    ? { severity: "warning", at, rule, message }
-    : { severity: "warning", at, rule, message, hint };
+    ? { severity: "warning", at, rule, message: shortenValues(message) }
+    : { severity: "warning", at, rule, message: shortenValues(message), hint: shortenValues(hint) };
 }
 
 /** Orders diagnostics by file, line, column, then message, so output is stable. */
@@ -40,10 +41,13 @@ export function sortDiagnostics(list: readonly Diagnostic[]): Diagnostic[] {
   );
 }
 
-/** Formats a diagnostic as `path:line:col: severity: message` plus an indented hint line. */
+/**
+ * Formats a diagnostic as `path:line:col: severity: message` plus an indented hint line. Each line is
+ * kept one line (a newline or control character in a value is shown escaped) and long values are shortened.
+ */
 export function formatDiagnostic(d: Diagnostic): string {
-  const head = `${formatPosition(d.at)}: ${d.severity}: ${d.message}`;
-  return d.hint === undefined ? head : `${head}\n  hint: ${d.hint}`;
+  const head = oneLine(`${formatPosition(d.at)}: ${d.severity}: ${shortenValues(d.message)}`);
+  return d.hint === undefined ? head : `${head}\n  hint: ${oneLine(shortenValues(d.hint))}`;
 }
 
 /** True when the list holds at least one error. */

@@ -4,13 +4,37 @@ import { isAbsolute, join, relative, sep } from "node:path";
 export interface ProjectFs {
   /** A name for messages (the folder's base name). */
   readonly label: string;
-  /** Checks that `path` (POSIX, relative) stays inside the project and exists; containment by path components. */
-  locate(path: string): Promise<{ ok: true; key: string } | { ok: false; reason: string }>;
+  /**
+   * Checks that `path` (POSIX, relative) stays inside the project and exists; containment by path
+   * components. A failure may carry its own hint.
+   */
+  locate(path: string): Promise<{ ok: true; key: string } | { ok: false; reason: string; hint?: string }>;
   /** Size in bytes of a located regular file, or undefined when it is not a regular file. */
   regularFileSize(key: string): Promise<number | undefined>;
+  /** The file's bytes; a file that cannot be read (gone, no permission) throws `FileReadError`. */
   read(key: string): Promise<Uint8Array>;
   /** Names of the `*.md` files at the top of the project, unsorted. */
   listMarkdown(): Promise<string[]>;
+}
+
+/** A located file that could not be read after all (removed meanwhile, no permission, an I/O error). */
+export class FileReadError extends Error {
+  constructor(readonly reason: string) {
+    super(reason);
+    this.name = "FileReadError";
+  }
+}
+
+/** Why reading failed, in the words of a diagnostic (`Cannot read "x": <reason>`). */
+function readFailure(cause: unknown): FileReadError {
+  if (cause instanceof Deno.errors.NotFound) return new FileReadError("it was removed while being read");
+  if (cause instanceof Deno.errors.PermissionDenied) {
+    return new FileReadError("permission denied (the file is not readable by this user)");
+  }
+  if (cause instanceof Deno.errors.NotCapable) return new FileReadError("this run is not allowed to read it");
+  if (cause instanceof Deno.errors.IsADirectory) return new FileReadError("it is not a regular file");
+  const message = cause instanceof Error ? cause.message : String(cause);
+  return new FileReadError(`it cannot be read (${message.replace(/\s*\(os error \d+\).*$/s, "")})`);
 }
 
 /** Rejects absolute paths, drive letters and `..` components before any lookup. */
@@ -49,16 +73,38 @@ export async function diskProjectFs(folder: string): Promise<ProjectFs | undefin
       if (rel === "" || rel.split(sep)[0] === ".." || isAbsolute(rel)) {
         return { ok: false, reason: "it resolves (through a link) to a place outside the project folder" };
       }
+      // A hard link is the same file under a second name, which may be outside the project: no path
+      // test can tell, so a regular file with more than one link is refused.
+      const links = await Deno.lstat(real).then((i) => (i.isFile ? i.nlink ?? 1 : 1), () => 1);
+      if (links > 1) {
+        return {
+          ok: false,
+          reason:
+            `it is a hard link (the file has ${links} names, and another may be outside the project folder)`,
+          hint: "copy the file into the project folder instead of linking it (cp, not ln)",
+        };
+      }
       return { ok: true, key: real };
     },
     async regularFileSize(key) {
-      const info = await Deno.stat(key);
-      return info.isFile ? info.size : undefined;
+      try {
+        const info = await Deno.stat(key);
+        return info.isFile ? info.size : undefined;
+      } catch (cause) {
+        throw readFailure(cause);
+      }
     },
-    read: (key) => Deno.readFile(key),
+    read: (key) =>
+      Deno.readFile(key).catch((cause) => {
+        throw readFailure(cause);
+      }),
     async listMarkdown() {
       const names: string[] = [];
-      for await (const entry of Deno.readDir(root)) if (entry.name.endsWith(".md")) names.push(entry.name);
+      try {
+        for await (const entry of Deno.readDir(root)) if (entry.name.endsWith(".md")) names.push(entry.name);
+      } catch (cause) {
+        throw readFailure(cause);
+      }
       return names;
     },
   };

@@ -1,7 +1,7 @@
 import { sha256Hex } from "../archive/hash.ts";
 import { type Diagnostic, error } from "./diagnostic.ts";
 import type { Position } from "./position.ts";
-import type { ProjectFs } from "./projectFs.ts";
+import { FileReadError, type ProjectFs } from "./projectFs.ts";
 import { readProjectFrontMatter } from "./resolveProject.ts";
 import { decodeSource, type SourceText } from "./sourceText.ts";
 
@@ -35,7 +35,7 @@ export async function readProject(fs: ProjectFs): Promise<ReadResult> {
   const files: InputFile[] = [first.file];
   const frontMatter = readProjectFrontMatter(first.source, []);
   const listed = frontMatter?.files ??
-    (await fs.listMarkdown()).filter((name) => name !== "project.md" && !name.startsWith("."))
+    (await listMarkdown(fs, projectAt, out)).filter((name) => name !== "project.md" && !name.startsWith("."))
       .sort((a, b) => (a < b ? -1 : a > b ? 1 : 0)).map((path) => ({ path, at: projectAt }));
   // Files already read, by located key (the real path on disk), so `./a.md` or a link to a.md is not read twice.
   const seen = new Map<string, string>();
@@ -112,13 +112,58 @@ async function readOne(
           at,
           "file-not-readable",
           `Cannot read "${path}": ${place.reason}`,
-          path.endsWith(".md")
-            ? "list only Markdown files inside the project folder"
-            : "give the path of a file inside the project folder",
+          place.hint ??
+            (path.endsWith(".md")
+              ? "list only Markdown files inside the project folder"
+              : "give the path of a file inside the project folder"),
         ),
     );
     return undefined;
   }
+  try {
+    return await readLocated(fs, path, place.key, at, maxBytes, out);
+  } catch (cause) {
+    // The file was there a moment ago (a save in progress, a removal) or cannot be read by this user.
+    if (!(cause instanceof FileReadError)) throw cause;
+    out.push(
+      error(
+        at,
+        "file-not-readable",
+        `Cannot read "${path}": ${cause.reason}`,
+        "check the file and run again",
+      ),
+    );
+    return undefined;
+  }
+}
+
+/** The names of the project's top-level Markdown files; a folder that cannot be listed is reported. */
+async function listMarkdown(fs: ProjectFs, at: Position, out: Diagnostic[]): Promise<string[]> {
+  try {
+    return await fs.listMarkdown();
+  } catch (cause) {
+    if (!(cause instanceof FileReadError)) throw cause;
+    out.push(
+      error(
+        at,
+        "folder-not-readable",
+        `Cannot list the files of the project folder "${fs.label}": ${cause.reason}`,
+        "list the files in the front matter (files: [...]) or check the folder",
+      ),
+    );
+    return [];
+  }
+}
+
+async function readLocated(
+  fs: ProjectFs,
+  path: string,
+  key: string,
+  at: Position,
+  maxBytes: number,
+  out: Diagnostic[],
+): Promise<{ source: SourceText; file: InputFile } | undefined> {
+  const place = { key };
   const size = await fs.regularFileSize(place.key);
   if (size === undefined) {
     out.push(

@@ -1,6 +1,7 @@
 /** Terminal text for findings: `path:line:col: severity: message`, a hint line and a value line. */
 
 import { type Diagnostic, formatDiagnostic } from "../project/diagnostic.ts";
+import { oneLine, shortenValues } from "../project/displayText.ts";
 
 /** Formats one finding; plausibility findings get `  value: … expected: … (source: …)`. */
 export function formatFinding(d: Diagnostic): string {
@@ -10,7 +11,7 @@ export function formatFinding(d: Diagnostic): string {
   if (d.value !== undefined) parts.push(`value: ${d.value}`);
   if (d.expected !== undefined) parts.push(`expected: ${d.expected}`);
   if (d.source !== undefined) parts.push(`(source: ${d.source})`);
-  return `${head}\n  ${parts.join(" ")}`;
+  return `${head}\n  ${oneLine(shortenValues(parts.join(" ")))}`;
 }
 
 /** Formats a list of findings, one block per finding. */

@@ -224,6 +224,36 @@ project.md:1:1: error: Cannot read "b.md": it is a link that cannot be followed 
       `walls.md:16:10: error: Cannot read "weather.csv": it resolves (through a link) to a place outside the project folder
   hint: give the path of a file inside the project folder`,
   },
+  {
+    name: "hard-link-to-a-file-outside",
+    make(folder) {
+      const files = goodFiles();
+      Deno.writeTextFileSync(join(folder, "project.md"), files["project.md"] ?? "");
+      Deno.writeTextFileSync(join(folder, "walls.md"), files["walls.md"] ?? "");
+      // A file outside the project, linked in under a Markdown name: same inode, no symbolic link to see.
+      Deno.writeTextFileSync(join(folder, "../secret.md"), "# outside the project\n");
+      Deno.linkSync(join(folder, "../secret.md"), join(folder, "notes.md"));
+    },
+    expected:
+      `project.md:1:1: error: Cannot read "notes.md": it is a hard link (the file has 2 names, and another may be outside the project folder)
+  hint: copy the file into the project folder instead of linking it (cp, not ln)`,
+  },
+  {
+    name: "weather-through-hard-link",
+    make(folder) {
+      const files = goodFiles();
+      Deno.writeTextFileSync(join(folder, "project.md"), files["project.md"] ?? "");
+      Deno.writeTextFileSync(join(folder, "walls.md"), (files["walls.md"] ?? "") + "\n" + WEATHER_SCENARIO);
+      Deno.writeTextFileSync(
+        join(folder, "../outside.csv"),
+        "time,dry-bulb,global-horizontal,diffuse-horizontal\n",
+      );
+      Deno.linkSync(join(folder, "../outside.csv"), join(folder, "weather.csv"));
+    },
+    expected:
+      `walls.md:16:10: error: Cannot read "weather.csv": it is a hard link (the file has 2 names, and another may be outside the project folder)
+  hint: copy the file into the project folder instead of linking it (cp, not ln)`,
+  },
 ];
 
 Deno.test("the bad-input corpus holds at least 60 broken or hostile projects", () => {

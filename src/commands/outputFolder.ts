@@ -44,8 +44,11 @@ export async function inspectOutputFolder(path: string): Promise<FolderVerdict> 
   try {
     info = await Deno.lstat(path);
   } catch (cause) {
-    if (cause instanceof Deno.errors.NotFound) return { kind: "absent" };
-    return refused(`it cannot be examined (${messageOf(cause)})`);
+    // A path under a file is absent too: creating its parent then fails with a one-line environment fault.
+    if (cause instanceof Deno.errors.NotFound || cause instanceof Deno.errors.NotADirectory) {
+      return { kind: "absent" };
+    }
+    throw cause;
   }
   if (info.isSymlink) {
     return refused(

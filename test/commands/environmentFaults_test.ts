@@ -223,7 +223,9 @@ Deno.test({
   async fn() {
     const result = await run(["build", GOOD, "--out", "/proc/fluxnote-out"]);
     assert.equal(result.code, 1, result.err);
-    assertOneLine(result.err, "/proc");
+    // Deno asks for full access before it looks at anything under /proc, so the refusal may name the
+    // output folder itself rather than /proc; either way one line names the path.
+    assertOneLine(result.err, result.err.includes('"/proc/fluxnote-out"') ? "/proc/fluxnote-out" : "/proc");
   },
 });
 

@@ -65,7 +65,7 @@ const CASES: readonly { name: string; edit: (files: Record<string, string>) => v
   {
     name: "the front-matter date",
     edit: (f) => (f["project.md"] = f["project.md"]!.replace("date: 2031-01-15", `date: "2031${PAYLOAD}"`)),
-    shows: "Cannot read the date",
+    shows: "Cannot use the control character U+001B",
   },
   {
     name: "a name in files:",
@@ -75,12 +75,12 @@ const CASES: readonly { name: string; edit: (files: Record<string, string>) => v
       "units: SI\n",
       `units: SI\nfiles: [walls.md, "x${PAYLOAD}.md"]\n`,
     )),
-    shows: "it does not exist",
+    shows: "Cannot use the control character U+001B",
   },
   {
     name: "the weather path",
     edit: (f) => (f["walls.md"] = `${f["walls.md"]}\n${WEATHER_SCENARIO(`"w${PAYLOAD}.csv"`)}`),
-    shows: "Cannot read",
+    shows: "Cannot use the control character U+001B",
   },
   {
     name: "a material class",
@@ -96,7 +96,7 @@ const CASES: readonly { name: string; edit: (files: Record<string, string>) => v
       "```",
       "",
     ].join("\n")),
-    shows: "not a known material class",
+    shows: "Cannot use the control character U+001B",
   },
   {
     name: "a weather cell",
@@ -114,16 +114,20 @@ for (const c of CASES) {
     const folder = await project(c.edit);
     try {
       const check = await run(["check", folder]);
-      assert.equal(check.code, c.name === "a material class" ? 0 : 1, check.err);
+      assert.equal(check.code, 1, check.err);
       assert.ok(check.err.includes(c.shows), check.err);
-      assert.ok(check.err.includes("\\u001b"), `the ESC is not shown escaped:\n${check.err}`);
+      // The YAML reader refuses control characters and names them as U+001B; a weather cell is echoed escaped.
+      assert.ok(/\\u001b|U\+001B/.test(check.err), `the ESC is not shown escaped:\n${check.err}`);
       assertNoRawControl(check.err + check.out, `check, ${c.name}`);
       const build = await run(["build", folder, "--out", join(folder, "out")]);
       assertNoRawControl(build.err + build.out, `build, ${c.name}`);
       const json = await run(["check", folder, "--format", "json"]);
       // JSON output stays valid JSON and carries the value itself, not a changed one.
       const parsed = JSON.parse(json.out) as { findings: { message: string }[] };
-      assert.ok(parsed.findings.some((f) => f.message.includes("\u001b")), "the JSON lost the value");
+      assert.ok(
+        parsed.findings.some((f) => f.message.includes("\u001b") || f.message.includes("U+001B")),
+        "the JSON lost the value",
+      );
       assertNoRawControl(json.out, `check --format json, ${c.name}`);
     } finally {
       await Deno.remove(folder, { recursive: true });
@@ -204,23 +208,24 @@ Deno.test("terminalSafe() and oneLine() make every control and bidi character vi
   assert.equal(shortened("y".repeat(300)), `${"y".repeat(200)}… (300 characters)`);
 });
 
-Deno.test("diff --format html on stdout carries control characters as references, which a browser reads back", async () => {
+Deno.test("diff --format html on stdout carries bidi controls as references, which a browser reads back", async () => {
+  // The reader refuses C0/C1 controls in YAML text, so the title carries a bidi override (allowed, isolated).
   const a = await project((
     f,
   ) => (f["project.md"] = f["project.md"]!.replace(
     "title: Fixture project",
-    String.raw`title: "Fixture\e[2J\u202e project"`,
+    String.raw`title: "Fixture\u202e project"`,
   )));
   const b = await project((f) => (f["walls.md"] = f["walls.md"]!.replace("100 mm", "120 mm")));
   try {
     const diff = await run(["diff", a, b, "--format", "html"]);
     assert.equal(diff.code, 0, diff.err);
     assertNoRawControl(diff.out, "diff --format html");
-    assert.ok(diff.out.includes("&#x1b;[2J&#x202e;"), "the title is not carried as references");
+    assert.ok(diff.out.includes("Fixture&#x202e; project"), "the title is not carried as references");
     // HTML numeric character references (WHATWG HTML, "numeric character reference end state"; from memory).
     const { document } = parseHTML(diff.out);
     assert.ok(
-      document.body.textContent?.includes("Fixture\u001b[2J\u202e project"),
+      document.body.textContent?.includes("Fixture\u202e project"),
       "a browser does not read the title back",
     );
   } finally {

@@ -60,8 +60,14 @@ export function splitFrontMatter(text: string): FrontMatterSplit {
  * `raw` texts, and marked's inline lexing of a long paragraph can take far longer than the blocks.
  */
 function lexBlocks(body: string): Token[] {
-  return new Lexer({ gfm: true }).blockTokens(body.replace(/\r\n?/g, "\n"), []);
+  if (lastLexed?.body !== body) {
+    lastLexed = { body, tokens: new Lexer({ gfm: true }).blockTokens(body.replace(/\r\n?/g, "\n"), []) };
+  }
+  return lastLexed.tokens;
 }
+
+/** The last body lexed: `findFenceProblems` reads the body `splitMarkdown` has just split. */
+let lastLexed: { readonly body: string; readonly tokens: Token[] } | undefined;
 
 /**
  * Lexes a Markdown body into prose and top-level fenced blocks with line numbers.

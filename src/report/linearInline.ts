@@ -1,5 +1,11 @@
 /**
- * marked's GFM e-mail autolink rules look ahead over a whole run of address characters (`[…]+@`) at
+ * Two inline paths of marked take more than linear time, and the tokenizer here bounds both.
+ *
+ * Nesting: emphasis, strikethrough and link text are read by reading their content again one call
+ * deeper, so `*a *a … a* a*` costs a pass over the text per level and some ten thousand levels
+ * overflow the stack. Past `MAX_INLINE_NESTING` levels the marks are kept as literal text.
+ *
+ * E-mail autolinks: marked's GFM e-mail autolink rules look ahead over a whole run of address characters (`[…]+@`) at
  * every place an inline token starts. In a long run split into many tokens, such as `_a_a_a…` or
  * `*a*a*a…`, each token rescans the rest of the run, so a 128 KiB paragraph takes minutes. The
  * tokenizer here reads the same rules with the run bounded to 64 characters, the longest local part
@@ -7,6 +13,23 @@
  * every address that can exist is still linked.
  */
 import { Tokenizer, type TokenizerObject, type Tokens } from "marked";
+
+/** Deepest nesting of emphasis, strikethrough and links read as markup (common practice, no source: prose nests two or three). */
+export const MAX_INLINE_NESTING = 8;
+
+/** Inline levels being read right now (the lexer is synchronous, so one counter serves every call). */
+let inlineDepth = 0;
+
+/** Runs `read` one nesting level deeper, or returns undefined (the marks stay text) past the limit. */
+function nested<T>(read: () => T): T | undefined {
+  if (inlineDepth >= MAX_INLINE_NESTING) return undefined;
+  inlineDepth++;
+  try {
+    return read();
+  } finally {
+    inlineDepth--;
+  }
+}
 
 /** Longest local part of an e-mail address, octets (RFC 5321, section 4.5.3.1.1). */
 export const MAX_EMAIL_LOCAL_PART = 64;
@@ -57,8 +80,8 @@ function withBoundedRules<T>(tokenizer: Tokenizer, read: () => T): T {
 }
 
 /**
- * Tokenizer overrides (for marked's `tokenizer` option) whose inline text and autolink scans take
- * time linear in the text; each runs marked's own method with the bounded rules.
+ * Tokenizer overrides (for marked's `tokenizer` option) whose inline scans take time linear in the
+ * text; each runs marked's own method, with the bounded rules or under the nesting limit.
  */
 export const linearInlineTokenizer: TokenizerObject = {
   url(this: Tokenizer, src: string): Tokens.Link | undefined {
@@ -66,5 +89,17 @@ export const linearInlineTokenizer: TokenizerObject = {
   },
   inlineText(this: Tokenizer, src: string): Tokens.Text | undefined {
     return withBoundedRules(this, () => Tokenizer.prototype.inlineText.call(this, src));
+  },
+  emStrong(this: Tokenizer, src: string, maskedSrc: string, prevChar?: string) {
+    return nested(() => Tokenizer.prototype.emStrong.call(this, src, maskedSrc, prevChar));
+  },
+  del(this: Tokenizer, src: string, maskedSrc: string, prevChar?: string) {
+    return nested(() => Tokenizer.prototype.del.call(this, src, maskedSrc, prevChar));
+  },
+  link(this: Tokenizer, src: string) {
+    return nested(() => Tokenizer.prototype.link.call(this, src));
+  },
+  reflink(this: Tokenizer, src: string, links: Parameters<Tokenizer["reflink"]>[1]) {
+    return nested(() => Tokenizer.prototype.reflink.call(this, src, links));
   },
 };

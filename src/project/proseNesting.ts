@@ -119,6 +119,7 @@ function findDeepNesting(
     const before = open.length;
     let quotes = 0;
     let firstItem = true;
+    let pastLimit: number | undefined;
     for (const marker of markers) {
       if (marker.kind === "quote") quotes++;
       else {
@@ -126,12 +127,11 @@ function findDeepNesting(
         firstItem = false;
         open.push(marker.contentCol);
       }
-      const depth = quotes + open.length;
-      if (depth > MAX_PROSE_NESTING) {
-        found.push({ line: firstLine + index, col: marker.index + 1, depth });
-        open.length = Math.min(open.length, before);
-        break;
-      }
+      if (pastLimit === undefined && quotes + open.length > MAX_PROSE_NESTING) pastLimit = marker.index + 1;
+    }
+    if (pastLimit !== undefined) {
+      found.push({ line: firstLine + index, col: pastLimit, depth: quotes + open.length });
+      open.length = Math.min(open.length, before); // the line is dropped, so its items never open
     }
   }
   return found;
@@ -157,9 +157,9 @@ export function boundProseNesting(source: SourceText, out: Diagnostic[]): Source
     out.push(error(
       { file: source.path, line: first.line, col: first.col },
       "prose-nesting-too-deep",
-      `This line nests lists or quotes ${first.depth} levels deep${
-        more === 0 ? "" : ` (and so do the next ${more} lines)`
-      }: at most ${MAX_PROSE_NESTING} are read, because each level makes the Markdown reader read the nested text once more`,
+      `Lists or quotes nest ${first.depth} levels deep on this line${
+        more === 0 ? "" : ` (and on the next ${more})`
+      }: at most ${MAX_PROSE_NESTING} levels are read, because the Markdown reader reads the text once more for each level`,
       `flatten the list or quote to ${MAX_PROSE_NESTING} levels or fewer, or put the text in a fenced code block`,
     ));
     for (let k = i; k < j; k++) drop.add((deep[k]?.line ?? 0) - split.bodyLine);

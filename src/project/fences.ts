@@ -1,4 +1,4 @@
-import { Lexer } from "marked";
+import { Lexer, type Token } from "marked";
 
 /** A top-level piece of a Markdown body: prose or a fenced code block, with its 1-based start line. */
 export type MarkdownPiece =
@@ -81,12 +81,26 @@ export function findSecondFrontMatter(body: string, firstLine: number): number |
 }
 
 /**
+ * Block tokens of a Markdown body, without the inline pass: splitting needs only the blocks'
+ * `raw` texts, and marked's inline lexing of a long paragraph can take far longer than the blocks.
+ */
+function lexBlocks(body: string): Token[] {
+  if (lastLexed?.body !== body) {
+    lastLexed = { body, tokens: new Lexer({ gfm: true }).blockTokens(body.replace(/\r\n?/g, "\n"), []) };
+  }
+  return lastLexed.tokens;
+}
+
+/** The last body lexed: `findFenceProblems` reads the body `splitMarkdown` has just split. */
+let lastLexed: { readonly body: string; readonly tokens: Token[] } | undefined;
+
+/**
  * Lexes a Markdown body into prose and top-level fenced blocks with line numbers.
  * marked's tokens carry no positions, but their `raw` texts concatenate to the source, so a
  * running offset gives each token's line.
  */
 export function splitMarkdown(body: string, firstLine: number): MarkdownPiece[] {
-  const tokens = new Lexer({ gfm: true }).lex(body);
+  const tokens = lexBlocks(body);
   const pieces: MarkdownPiece[] = [];
   let line = firstLine;
   let prose = "";
@@ -149,7 +163,7 @@ const NESTED_OPENER = /^((?:[ \t]*(?:>|[-*+]|\d{1,9}[.)]))*[ \t]*)(`{3,}|~{3,})[
 export function findFenceProblems(body: string, firstLine: number, infos: readonly string[]): FenceProblem[] {
   const problems: FenceProblem[] = [];
   let line = firstLine;
-  for (const token of new Lexer({ gfm: true }).lex(body)) {
+  for (const token of lexBlocks(body)) {
     const raw = token.raw;
     const lines = raw.split("\n");
     const leading = /^\n*/.exec(raw)?.[0].length ?? 0;

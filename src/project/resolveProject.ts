@@ -8,6 +8,7 @@ import { type Diagnostic, error, errorCount } from "./diagnostic.ts";
 import { findFenceProblems, splitFrontMatter } from "./fences.ts";
 import { type FrontMatter, readFrontMatter } from "./frontMatter.ts";
 import { readMaterialBlock } from "./materialBlock.ts";
+import { boundProseNesting } from "./proseNesting.ts";
 import type {
   Assumption,
   Construction,
@@ -21,6 +22,7 @@ import type {
 import { formatPosition, type Position } from "./position.ts";
 import { readScenarioBlock } from "./scenarioBlock.ts";
 import type { SourceText } from "./sourceText.ts";
+import { parseYamlAt } from "./yamlTree.ts";
 
 /** A built-in library entry a project used, with its canonical text (hashed with the inputs). */
 export interface LibraryUse {
@@ -56,9 +58,10 @@ export function libraryWith(entries: readonly LibraryMaterial[]): LibrarySource 
 
 /** Reads the front matter of `project.md` only (to learn the file list before the other files are read). */
 export function readProjectFrontMatter(source: SourceText, out: Diagnostic[]): FrontMatter | undefined {
-  const split = splitFile(source, true, []);
-  if (split.frontMatter === undefined) return undefined;
-  return readFrontMatter(split.frontMatter, out);
+  const split = splitFrontMatter(source.text);
+  if (split.unterminated || split.yaml === undefined) return undefined;
+  const parsed = parseYamlAt(split.yaml, source.path, split.yamlLine);
+  return parsed.ok ? readFrontMatter(parsed.value, out) : undefined;
 }
 
 /** Resolves a project's decoded files (project.md first, then in reading order) into a model. */
@@ -67,8 +70,14 @@ export function resolveProject(
   library: LibrarySource = BUILT_IN_LIBRARY,
 ): ResolveResult {
   const out: Diagnostic[] = [];
-  const files = sources.map((s, i) => splitFile(s, i === 0, out));
-  for (const source of sources) out.push(...fenceProblems(source));
+  const bounded = sources.map((s) => boundProseNesting(s, out));
+  const fenceOut: Diagnostic[] = [];
+  const files = bounded.map((s, i) => {
+    const file = splitFile(s, i === 0, out);
+    fenceOut.push(...fenceProblems(s)); // right after the split, which lexed the same body
+    return file;
+  });
+  out.push(...fenceOut);
   const projectFile = files[0];
   let frontMatter: FrontMatter | undefined;
   if (projectFile?.frontMatter === undefined && splitFrontMatter(sources[0]?.text ?? "").yaml === undefined) {

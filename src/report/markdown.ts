@@ -1,6 +1,7 @@
 /** Renders the consultant's prose: raw HTML shown as text, links allow-listed, images not loaded. */
 import { Marked, type Tokens } from "marked";
 import { escapeHtml, type Trusted, trustMarkdownRendererOutput } from "./html.ts";
+import { linearInlineTokenizer } from "./linearInline.ts";
 import { decodeCharacterReferences, safeLinkUrl } from "./safeUrl.ts";
 
 /** Prefix of every heading id generated from prose, so no id can clobber a page or DOM name. */
@@ -14,12 +15,25 @@ export interface MarkdownOptions {
   readonly headingShift?: number;
 }
 
+/**
+ * Per id set, the suffix to try next for each base id. Ids are only ever added to a set, so the
+ * first free suffix of a base never goes down: resuming from the last one found gives the same
+ * ids as counting from 2 each time, and k repeats of one heading cost O(k), not O(k²).
+ */
+const nextSuffix = new WeakMap<Set<string>, Map<string, number>>();
+
 /** Turns heading text into an id `u-<slug>`, unique within `usedIds`. */
 export function uniqueHeadingId(text: string, usedIds: Set<string>): string {
   const slug = text.toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-+|-+$/g, "").slice(0, 60);
   const base = PROSE_ID_PREFIX + (slug === "" ? "section" : slug);
+  let suffixes = nextSuffix.get(usedIds);
+  if (suffixes === undefined) nextSuffix.set(usedIds, suffixes = new Map());
   let id = base;
-  for (let n = 2; usedIds.has(id); n++) id = `${base}-${n}`;
+  let n = suffixes.get(base) ?? 2;
+  if (usedIds.has(id)) {
+    while (usedIds.has(id = `${base}-${n}`)) n++;
+    suffixes.set(base, n + 1);
+  }
   usedIds.add(id);
   return id;
 }
@@ -30,6 +44,7 @@ function makeMarked(options: MarkdownOptions): Marked {
     async: false,
     gfm: true,
     breaks: false,
+    tokenizer: linearInlineTokenizer,
     renderer: {
       html(token: Tokens.HTML | Tokens.Tag): string {
         const shown = escapeHtml(token.text);
@@ -40,6 +55,10 @@ function makeMarked(options: MarkdownOptions): Marked {
         const plain = this.parser.parseInline(token.tokens, this.parser.textRenderer);
         const id = uniqueHeadingId(decodeCharacterReferences(plain), options.usedIds);
         return `<h${level} id="${escapeHtml(id)}">${this.parser.parseInline(token.tokens)}</h${level}>\n`;
+      },
+      checkbox(token: Tokens.Checkbox): string {
+        // A task-list box as text: the package holds no form controls.
+        return `<span class="task-box">${token.checked ? "[x]" : "[ ]"}</span> `;
       },
       link(token: Tokens.Link): string {
         const label = token.autolink === true

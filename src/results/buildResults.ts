@@ -59,6 +59,7 @@ export function computeProject(
   const ownLimitsById = ownLimits(model);
   const designAssumptions: Assumption[] = [];
   const designWarnings: { at: string; message: string }[] = [];
+  const correctedU = new Map<string, number>();
   for (const [index, construction] of model.constructions.entries()) {
     progress(`construction ${index + 1}/${model.constructions.length}: ${construction.id}`);
     const analysis = analyseConstruction(construction, construction.timestepS);
@@ -85,6 +86,7 @@ export function computeProject(
       limitsFor(ownLimitsById.get(construction.id), model.info.limits),
     );
     constructions[construction.id] = { ...base, ...design.keys };
+    correctedU.set(construction.id, design.keys.correctedU);
     checks.push(...constructionChecksJson(construction.id, analysis), ...design.checks);
     designAssumptions.push(...design.assumptions);
     designWarnings.push(...design.warnings);
@@ -94,7 +96,10 @@ export function computeProject(
   if (scenarioParts.problems.length > 0) return { ok: false, diagnostics: scenarioParts.problems };
   checks.push(...scenarioParts.checks);
   const heating = (model.heatingScenarios ?? []).map((s) =>
-    [s.id, computeHeating(s, new Map(model.constructions.map((c) => [c.id, c])), steady)] as const
+    [
+      s.id,
+      computeHeating(s, new Map(model.constructions.map((c) => [c.id, c])), steady, correctedU),
+    ] as const
   );
   const variation = model.info.sensitivityVariation;
   if (variation !== undefined) progress("sensitivity study");

@@ -13,6 +13,7 @@ import { computeDesignDay, type ScenarioContext } from "../scenarios/designDay.t
 import { computeHeating } from "../scenarios/heating.ts";
 import { heatingCsv } from "../scenarios/heatingCsv.ts";
 import { computeWeatherYear } from "../scenarios/weatherYear.ts";
+import { weatherCoverage } from "../scenarios/weatherPeriod.ts";
 import { sensitivityStudy } from "../sensitivity/study.ts";
 import { parseWeatherCsv } from "../climate/weatherCsv.ts";
 import { TOOL_VERSION } from "../version.ts";
@@ -219,7 +220,12 @@ function computeScenarios(
           parts.problems.push(...parsed.diagnostics);
           break;
         }
-        const outcome = computeWeatherYear(scenario, parsed.weather, context);
+        const coverage = weatherCoverage(scenario, parsed.weather);
+        if (!coverage.ok) {
+          parts.problems.push(coverage.diagnostic);
+          break;
+        }
+        const outcome = computeWeatherYear(scenario, parsed.weather, context, coverage.coverage);
         parts.scenarios[scenario.id] = outcome.results;
         parts.checks.push(...outcome.checks);
         parts.assumptions.push(...outcome.assumptions);

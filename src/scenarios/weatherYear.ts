@@ -10,6 +10,8 @@ import { formatPosition } from "../project/position.ts";
 import type { CheckResult, EnergyTotals, ScenarioResults, SurfaceResults } from "../results/types.ts";
 import type { ScenarioContext, ScenarioOutcome } from "./designDay.ts";
 import { surfaceParameters, type SurfaceWarning } from "./surfaceParameters.ts";
+import { type PeriodJson, type WeatherCoverage } from "./weatherPeriod.ts";
+import { weatherSpan } from "../climate/weatherSpan.ts";
 import { weatherBoundary, type WeatherSurfaceInput } from "./weatherBoundary.ts";
 import {
   energyBalanceCheck,
@@ -67,6 +69,8 @@ export interface WeatherScenarioResults extends ScenarioResults {
   };
   readonly warmUp: { readonly days: number; readonly tau1_h: number };
   readonly daily: { readonly firstDate: string; readonly days: number } & DailySummary;
+  /** What the file covers: a whole year or the scenario's stated `period` (extension key). */
+  readonly period: PeriodJson;
 }
 
 /** A computed weather year with the CSV files to write under the output folder. */
@@ -81,6 +85,7 @@ export function computeWeatherYear(
   scenario: WeatherScenario,
   weather: WeatherSeries,
   context: ScenarioContext,
+  coverage: WeatherCoverage = impliedCoverage(weather),
 ): WeatherOutcome {
   if (scenario.site === undefined) {
     throw new RangeError(`Cannot compute weather scenario ${scenario.id}: it has no site to place the sun`);
@@ -103,12 +108,19 @@ export function computeWeatherYear(
   const stepsPerDay = Math.round(86400 / dt);
   const warmUpSteps = days * stepsPerDay;
   const at = formatPosition(scenario.at);
-  assumptions.push(warmUpAssumption(scenario.id, days, tau1H, at), ...methodAssumptions(scenario.id, at));
+  const repeating = coverage.label;
+  assumptions.push(
+    warmUpAssumption(scenario.id, days, tau1H, at, repeating),
+    ...methodAssumptions(scenario.id, at),
+  );
   const surfaces: Record<string, WeatherSurfaceResults> = {};
   const checks: CheckResult[] = [];
   const csvSurfaces: CsvSurface[] = [];
   const dailyColumns: ({ id: string } & DailySummary)[] = [];
   const total = new Float64Array(n);
+  // One heat-gain buffer for all surfaces: each surface's summaries are taken before the next overwrites it, so memory
+  // grows with rows × surfaces only by the series the CSV needs (incident, sol-air, inside flux).
+  const heatGain = new Float64Array(n);
   const runs = inputs.map((input, s) => ({
     modes: context.analysisAt(input.surface.construction, dt).airToAir.modes,
     solAirC: boundary.surfaces[s]!.solAirC,
@@ -116,7 +128,6 @@ export function computeWeatherYear(
   forEachInsideFlux(runs, boundary.indoorC, warmUpSteps, n, (s, insideWPerM2) => {
     const { surface, parameters: p, uValue } = inputs[s]!;
     const { modes, solAirC } = runs[s]!;
-    const heatGain = new Float64Array(n);
     for (let k = 0; k < n; k++) heatGain[k] = insideWPerM2[k]! * surface.areaM2;
     for (let k = 0; k < n; k++) total[k] = total[k]! + heatGain[k]!;
     const subject = `scenario:${scenario.id}/${surface.id}`;
@@ -166,7 +177,7 @@ export function computeWeatherYear(
       incidentWPerM2: boundary.surfaces[s]!.incidentWPerM2,
       solAirC,
       insideWPerM2,
-      heatGainW: heatGain,
+      areaM2: surface.areaM2,
     });
   });
   const csvPath = `csv/scenario-${scenario.id}.csv`;
@@ -182,7 +193,8 @@ export function computeWeatherYear(
     peak: { heatGain: peak.heatGain, time_h: peak.time_h },
     totals: energyTotals(total, weather.monthOfStep, dt),
     notes: [
-      ...notes(scenario.id, csvPath, dt),
+      ...coverageNotes(coverage),
+      ...notes(scenario.id, csvPath, dt, repeating),
       `Daily maximum, minimum and mean heat gain per surface are in ${dailyPath}.`,
     ],
     csv: csvPath,
@@ -195,6 +207,7 @@ export function computeWeatherYear(
       days: boundary.dayCount,
       ...dailySummary(total, boundary.dayIndexOfStep, boundary.dayCount),
     },
+    period: coverage.json,
   };
   const chunks = () =>
     weatherCsvChunks(boundary.timeLabels, boundary.outdoorC, boundary.indoorC, csvSurfaces, total);
@@ -217,12 +230,45 @@ export function computeWeatherYear(
   };
 }
 
-function warmUpAssumption(id: string, days: number, tau1H: number, at: string): Assumption {
+/** The coverage of a series passed without one (direct engine use): a year when it is one, else its own period. */
+function impliedCoverage(weather: WeatherSeries): WeatherCoverage {
+  const span = weatherSpan(weather.startTime, weather.count, weather.timestepS);
+  const kind = span.isYear ? "year" : "period";
+  const days = span.spanS / 86400;
+  return {
+    kind,
+    span,
+    label: kind === "year" ? "year" : `period of ${Number(days.toPrecision(6))} days`,
+    json: { kind, days, first: span.first, last: span.last },
+  };
+}
+
+function coverageNotes(coverage: WeatherCoverage): string[] {
+  const { span } = coverage;
+  if (coverage.kind === "year") return [];
+  return [
+    `Weather period, not a year: the file covers a ${coverage.label}, ${span.first} … ${span.last}, ${span.rows} ` +
+    "rows, as the scenario's `period` states; totals, peaks and the warm-up are over this period, repeated.",
+    "Monthly totals hold the steps of the period that fall in each calendar month (0 for months it does not " +
+    "cover); they are not monthly figures of a year.",
+  ];
+}
+
+function warmUpAssumption(
+  id: string,
+  days: number,
+  tau1H: number,
+  at: string,
+  repeating: string,
+): Assumption {
+  const periodic = repeating === "year"
+    ? "periodic-year assumption"
+    : `periodic assumption over the ${repeating}`;
   return {
     id: `rule:weather-warm-up:${id}`,
     text:
       `Warm-up: the last ${days} days of the weather file are run first, from a steady state at their mean ` +
-      `temperatures, so the first row follows the end of the file as if the year repeated (periodic-year assumption); ` +
+      `temperatures, so the first row follows the end of the file as if the ${repeating} repeated (${periodic}); ` +
       `${days} days = max(${MIN_WARM_UP_DAYS}, ⌈${WARM_UP_TIME_CONSTANTS} τ1 / 24 h⌉) with the slowest τ1 = ${
         tau1H.toFixed(1)
       } h of the scenario's constructions`,
@@ -242,16 +288,19 @@ function methodAssumptions(id: string, at: string): Assumption[] {
   }];
 }
 
-function notes(id: string, csvPath: string, dt: number): string[] {
+function notes(id: string, csvPath: string, dt: number, repeating: string): string[] {
+  const periodic = repeating === "year" ? "periodic year" : `the ${repeating} repeating`;
   return [
     "Time base: local standard time as written in the weather file; row k is at the first row's time + k·Δ.",
     "Irradiance in the file is the mean over the interval ending at each row's time; transposition uses the sun at " +
     "the interval's midpoint.",
     "Irradiance at a row's time is the mean of the interval ending and the interval starting there (the last row " +
-    "uses the first interval: periodic year), so a peak is not shifted by half a step; the sol-air temperature " +
+    `uses the first interval: ${periodic}), so a peak is not shifted by half a step; the sol-air temperature ` +
     "combines it with the dry bulb at that time and is taken as linear between rows.",
     "Sky model for the transposition: isotropic (Liu & Jordan).",
-    `Fluxes: modal recursion at Δ = ${formatDurationS(dt)} after a periodic-year warm-up (see assumptions).`,
+    `Fluxes: modal recursion at Δ = ${formatDurationS(dt)} after a ${
+      repeating === "year" ? "periodic-year" : `periodic (${repeating})`
+    } warm-up (see assumptions).`,
     "Monthly totals: each step counts for the month of the interval ending at its time (time − Δ/2).",
     `Step series of scenario ${id} are in ${csvPath}, not in results.json: columns time, outdoor_degC, indoor_degC, ` +
     "then per surface <id>:incident_W_per_m2, <id>:sol_air_degC, <id>:inside_flux_W_per_m2 (positive into the " +

@@ -95,7 +95,8 @@ export interface CsvSurface {
   readonly incidentWPerM2: Float64Array | null;
   readonly solAirC: ArrayLike<number>;
   readonly insideWPerM2: ArrayLike<number>;
-  readonly heatGainW: ArrayLike<number>;
+  /** m²: the heat gain column is inside flux × area, computed as the row is written (not held as a series). */
+  readonly areaM2: number;
 }
 
 /**
@@ -140,7 +141,7 @@ export function* weatherCsvChunks(
         s.incidentWPerM2 === null ? "" : plainNumber(s.incidentWPerM2[k]!, 2),
         plainNumber(s.solAirC[k]!, 3),
         plainNumber(s.insideWPerM2[k]!, 4),
-        plainNumber(s.heatGainW[k]!, 2),
+        plainNumber(s.insideWPerM2[k]! * s.areaM2, 2),
       );
     }
     cells.push(plainNumber(totalW[k]!, 2));

@@ -1,5 +1,6 @@
 import type { EnergyTotals } from "../results/types.ts";
 import { civilFromDays, daysFromCivil } from "../climate/weatherTime.ts";
+import type { StepLabels } from "./weatherBoundary.ts";
 
 /** Gain and loss energy of one month, J. */
 export interface MonthTotals {
@@ -47,7 +48,7 @@ export function energyTotals(
 /** Largest (`sign` +1) or most negative (`sign` −1) value of a power series with its time (first on ties). */
 export function timedPeak(
   powerW: ArrayLike<number>,
-  timeLabels: readonly string[],
+  timeLabels: StepLabels,
   timestepS: number,
   sign: 1 | -1,
 ): TimedPeak {
@@ -56,7 +57,7 @@ export function timedPeak(
   return {
     heatGain: powerW[index] ?? NaN,
     time_h: (index * timestepS) / 3600,
-    time: timeLabels[index] ?? "",
+    time: timeLabels.at(index) ?? "",
   };
 }
 
@@ -105,7 +106,7 @@ export interface CsvSurface {
  * `total_heat_gain_W`; one row per step, LF line ends.
  */
 export function weatherCsvText(
-  timeLabels: readonly string[],
+  timeLabels: StepLabels,
   outdoorC: ArrayLike<number>,
   indoorC: ArrayLike<number>,
   surfaces: readonly CsvSurface[],
@@ -116,7 +117,7 @@ export function weatherCsvText(
 
 /** The same CSV as `weatherCsvText`, produced a block of rows at a time so a large year never sits in memory whole. */
 export function* weatherCsvChunks(
-  timeLabels: readonly string[],
+  timeLabels: StepLabels,
   outdoorC: ArrayLike<number>,
   indoorC: ArrayLike<number>,
   surfaces: readonly CsvSurface[],
@@ -135,7 +136,7 @@ export function* weatherCsvChunks(
   yield `${header.join(",")}\n`;
   const block: string[] = [];
   for (let k = 0; k < timeLabels.length; k++) {
-    const cells = [timeLabels[k]!, plainNumber(outdoorC[k]!, 3), plainNumber(indoorC[k]!, 3)];
+    const cells = [timeLabels.at(k)!, plainNumber(outdoorC[k]!, 3), plainNumber(indoorC[k]!, 3)];
     for (const s of surfaces) {
       cells.push(
         s.incidentWPerM2 === null ? "" : plainNumber(s.incidentWPerM2[k]!, 2),

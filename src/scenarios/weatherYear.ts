@@ -12,7 +12,7 @@ import type { ScenarioContext, ScenarioOutcome } from "./designDay.ts";
 import { surfaceParameters, type SurfaceWarning } from "./surfaceParameters.ts";
 import { type PeriodJson, type WeatherCoverage } from "./weatherPeriod.ts";
 import { weatherSpan } from "../climate/weatherSpan.ts";
-import { weatherBoundary, type WeatherSurfaceInput } from "./weatherBoundary.ts";
+import { type StepLabels, weatherBoundary, type WeatherSurfaceInput } from "./weatherBoundary.ts";
 import {
   energyBalanceCheck,
   WARM_UP_LIMIT,
@@ -311,7 +311,7 @@ function notes(id: string, csvPath: string, dt: number, repeating: string): stri
 function weatherSummary(
   path: string,
   weather: WeatherSeries,
-  timeLabels: readonly string[],
+  timeLabels: StepLabels,
 ): WeatherScenarioResults["weather"] {
   let sum = 0;
   let min = Infinity;
@@ -326,8 +326,8 @@ function weatherSummary(
   }
   return {
     path,
-    firstTime: timeLabels[0] ?? "",
-    lastTime: timeLabels[timeLabels.length - 1] ?? "",
+    firstTime: timeLabels.at(0) ?? "",
+    lastTime: timeLabels.at(timeLabels.length - 1) ?? "",
     steps: weather.count,
     dryBulbMean_C: sum / weather.count,
     dryBulbMin_C: min,

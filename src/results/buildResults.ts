@@ -14,6 +14,7 @@ import { computeHeating } from "../scenarios/heating.ts";
 import { heatingCsv } from "../scenarios/heatingCsv.ts";
 import { computeWeatherYear } from "../scenarios/weatherYear.ts";
 import { weatherCoverage } from "../scenarios/weatherPeriod.ts";
+import { weatherBudget } from "../scenarios/weatherBudget.ts";
 import { sensitivityStudy } from "../sensitivity/study.ts";
 import { parseWeatherCsv } from "../climate/weatherCsv.ts";
 import { TOOL_VERSION } from "../version.ts";
@@ -183,6 +184,7 @@ function computeScenarios(
       return analysis;
     },
   };
+  let heldBytes = 0;
   for (const scenario of model.scenarios) {
     progress(`scenario ${scenario.id} (${scenario.kind}, ${scenario.surfaces.length} surfaces)`);
     if (scenario.timestepDefaulted) {
@@ -225,6 +227,12 @@ function computeScenarios(
           parts.problems.push(coverage.diagnostic);
           break;
         }
+        const budget = weatherBudget(scenario, parsed.weather.count, heldBytes);
+        if (!budget.ok) {
+          parts.problems.push(budget.diagnostic);
+          break;
+        }
+        heldBytes += budget.bytes;
         const outcome = computeWeatherYear(scenario, parsed.weather, context, coverage.coverage);
         parts.scenarios[scenario.id] = outcome.results;
         parts.checks.push(...outcome.checks);

@@ -57,7 +57,7 @@ Deno.test("rows × surfaces above the budget are refused with the figure and how
   // per surface (with its own orientation) 2.9e6 × 32 B = 92.8 MB → 7 surfaces.
   assert.match(
     text,
-    /error: Split scenario "test-year": 2,900,000 rows × 40 surfaces = 116,000,000 surface-steps needs about 5\.0 GB, above the 2 GB a run may use\n  hint: give at most about 7 surfaces here/,
+    /error: Split scenario "test-year": 2,900,000 rows × 40 surfaces = 116,000,000 surface-steps needs about 5\.0 GB, above the 2 GB a run may use\n {2}hint: give at most about 7 surfaces here/,
   );
   // A second scenario counts what the first still holds (its CSV is written at the end).
   const small = weatherScenario(walls(1, 1));

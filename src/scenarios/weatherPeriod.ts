@@ -71,6 +71,24 @@ export function weatherCoverage(
   return { ok: true, coverage: coverageOf("period", span) };
 }
 
+/** The coverage of a series given without one (direct engine use): a year when it is one, else its own period. */
+export function impliedCoverage(weather: WeatherSeries): WeatherCoverage {
+  const span = weatherSpan(weather.startTime, weather.count, weather.timestepS);
+  return coverageOf(span.isYear ? "year" : "period", span);
+}
+
+/** Notes for results.json: none for a year; for a period, what it covers and what the monthly totals then mean. */
+export function coverageNotes(coverage: WeatherCoverage): string[] {
+  const { span } = coverage;
+  if (coverage.kind === "year") return [];
+  return [
+    `Weather period, not a year: the file covers a ${coverage.label}, ${span.first} … ${span.last}, ${span.rows} ` +
+    "rows, as the scenario's `period` states; totals, peaks and the warm-up are over this period, repeated.",
+    "Monthly totals hold the steps of the period that fall in each calendar month (0 for months it does not " +
+    "cover); they are not monthly figures of a year.",
+  ];
+}
+
 function coverageOf(kind: "year" | "period", span: WeatherSpan): WeatherCoverage {
   const days = span.spanS / 86400;
   return {

@@ -1,6 +1,20 @@
 import type { EnergyTotals } from "../results/types.ts";
 import { civilFromDays, daysFromCivil } from "../climate/weatherTime.ts";
 import type { StepLabels } from "./weatherBoundary.ts";
+import type { WeatherSeries } from "../climate/weatherCsv.ts";
+
+/** `scenarios.<id>.weather` of a weather scenario in results.json. */
+export interface WeatherFileSummary {
+  readonly path: string;
+  readonly firstTime: string;
+  readonly lastTime: string;
+  readonly steps: number;
+  readonly dryBulbMean_C: number;
+  readonly dryBulbMin_C: number;
+  readonly dryBulbMax_C: number;
+  /** Global horizontal irradiation over the file, J/m². */
+  readonly globalHorizontal_J_per_m2: number;
+}
 
 /** Gain and loss energy of one month, J. */
 export interface MonthTotals {
@@ -177,4 +191,33 @@ export function dailyCsvText(firstDate: string, columns: readonly ({ id: string 
     );
   }
   return `${rows.join("\n")}\n`;
+}
+
+/** The weather file's extent and dry-bulb and irradiation summary for results.json `scenarios.<id>.weather`. */
+export function weatherSummary(
+  path: string,
+  weather: WeatherSeries,
+  timeLabels: StepLabels,
+): WeatherFileSummary {
+  let sum = 0;
+  let min = Infinity;
+  let max = -Infinity;
+  let global = 0;
+  for (let k = 0; k < weather.count; k++) {
+    const t = weather.dryBulbC[k]!;
+    sum += t;
+    min = Math.min(min, t);
+    max = Math.max(max, t);
+    global += weather.globalHorizontalWPerM2[k]! * weather.timestepS;
+  }
+  return {
+    path,
+    firstTime: timeLabels.at(0) ?? "",
+    lastTime: timeLabels.at(timeLabels.length - 1) ?? "",
+    steps: weather.count,
+    dryBulbMean_C: sum / weather.count,
+    dryBulbMin_C: min,
+    dryBulbMax_C: max,
+    globalHorizontal_J_per_m2: global,
+  };
 }

@@ -10,9 +10,8 @@ import { formatPosition } from "../project/position.ts";
 import type { CheckResult, EnergyTotals, ScenarioResults, SurfaceResults } from "../results/types.ts";
 import type { ScenarioContext, ScenarioOutcome } from "./designDay.ts";
 import { surfaceParameters, type SurfaceWarning } from "./surfaceParameters.ts";
-import { type PeriodJson, type WeatherCoverage } from "./weatherPeriod.ts";
-import { weatherSpan } from "../climate/weatherSpan.ts";
-import { type StepLabels, weatherBoundary, type WeatherSurfaceInput } from "./weatherBoundary.ts";
+import { coverageNotes, impliedCoverage, type PeriodJson, type WeatherCoverage } from "./weatherPeriod.ts";
+import { weatherBoundary, type WeatherSurfaceInput } from "./weatherBoundary.ts";
 import {
   energyBalanceCheck,
   WARM_UP_LIMIT,
@@ -34,6 +33,8 @@ import {
   type TimedPeak,
   timedPeak,
   weatherCsvChunks,
+  type WeatherFileSummary,
+  weatherSummary,
 } from "./weatherSummary.ts";
 
 export { WARM_UP_LIMIT, WEATHER_ENERGY_BALANCE_LIMIT };
@@ -56,17 +57,7 @@ export interface WeatherScenarioResults extends ScenarioResults {
   readonly csv: string;
   readonly peakTime: string;
   readonly peakLoss: TimedPeak;
-  readonly weather: {
-    readonly path: string;
-    readonly firstTime: string;
-    readonly lastTime: string;
-    readonly steps: number;
-    readonly dryBulbMean_C: number;
-    readonly dryBulbMin_C: number;
-    readonly dryBulbMax_C: number;
-    /** Annual global horizontal irradiation, J/m². */
-    readonly globalHorizontal_J_per_m2: number;
-  };
+  readonly weather: WeatherFileSummary;
   readonly warmUp: { readonly days: number; readonly tau1_h: number };
   readonly daily: { readonly firstDate: string; readonly days: number } & DailySummary;
   /** What the file covers: a whole year or the scenario's stated `period` (extension key). */
@@ -230,30 +221,6 @@ export function computeWeatherYear(
   };
 }
 
-/** The coverage of a series passed without one (direct engine use): a year when it is one, else its own period. */
-function impliedCoverage(weather: WeatherSeries): WeatherCoverage {
-  const span = weatherSpan(weather.startTime, weather.count, weather.timestepS);
-  const kind = span.isYear ? "year" : "period";
-  const days = span.spanS / 86400;
-  return {
-    kind,
-    span,
-    label: kind === "year" ? "year" : `period of ${Number(days.toPrecision(6))} days`,
-    json: { kind, days, first: span.first, last: span.last },
-  };
-}
-
-function coverageNotes(coverage: WeatherCoverage): string[] {
-  const { span } = coverage;
-  if (coverage.kind === "year") return [];
-  return [
-    `Weather period, not a year: the file covers a ${coverage.label}, ${span.first} … ${span.last}, ${span.rows} ` +
-    "rows, as the scenario's `period` states; totals, peaks and the warm-up are over this period, repeated.",
-    "Monthly totals hold the steps of the period that fall in each calendar month (0 for months it does not " +
-    "cover); they are not monthly figures of a year.",
-  ];
-}
-
 function warmUpAssumption(
   id: string,
   days: number,
@@ -306,32 +273,4 @@ function notes(id: string, csvPath: string, dt: number, repeating: string): stri
     "then per surface <id>:incident_W_per_m2, <id>:sol_air_degC, <id>:inside_flux_W_per_m2 (positive into the " +
     "room), <id>:heat_gain_W, and total_heat_gain_W.",
   ];
-}
-
-function weatherSummary(
-  path: string,
-  weather: WeatherSeries,
-  timeLabels: StepLabels,
-): WeatherScenarioResults["weather"] {
-  let sum = 0;
-  let min = Infinity;
-  let max = -Infinity;
-  let global = 0;
-  for (let k = 0; k < weather.count; k++) {
-    const t = weather.dryBulbC[k]!;
-    sum += t;
-    min = Math.min(min, t);
-    max = Math.max(max, t);
-    global += weather.globalHorizontalWPerM2[k]! * weather.timestepS;
-  }
-  return {
-    path,
-    firstTime: timeLabels.at(0) ?? "",
-    lastTime: timeLabels.at(timeLabels.length - 1) ?? "",
-    steps: weather.count,
-    dryBulbMean_C: sum / weather.count,
-    dryBulbMin_C: min,
-    dryBulbMax_C: max,
-    globalHorizontal_J_per_m2: global,
-  };
 }

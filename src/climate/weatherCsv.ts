@@ -72,9 +72,19 @@ export function parseWeatherCsv(
   const at = (line: number, col: number) => ({ file: path, line, col });
   const full = () => errors.length >= MAX_WEATHER_ERRORS;
   const fail = (): WeatherParseResult => ({ ok: false, diagnostics: errors });
-  const lines = (text.startsWith("\uFEFF") ? text.slice(1) : text).split(/\r?\n/);
-  let index = lines.findIndex((l) => l.trim() !== "");
-  if (index < 0) {
+  const body = text.startsWith("\uFEFF") ? text.slice(1) : text;
+  // Lines are visited in place (no array of every line) and values go straight into typed arrays sized by the line
+  // count, so a 64 MiB file costs a few bytes per value, not a string and a boxed number per cell.
+  const lines = lineCursor(body);
+  let lineNo = firstLine - 1;
+  let headerLine: string | undefined;
+  while (headerLine === undefined) {
+    const line = lines.next();
+    if (line === undefined) break;
+    lineNo++;
+    if (line.trim() !== "") headerLine = line;
+  }
+  if (headerLine === undefined) {
     errors.push(
       error(
         at(firstLine, 1),
@@ -84,27 +94,33 @@ export function parseWeatherCsv(
     );
     return fail();
   }
-  const header = readHeader(lines[index]!, firstLine + index, at, errors);
+  const header = readHeader(headerLine, lineNo, at, errors);
   if (!(timestepS > 0 && timestepS % 60 === 0)) {
     errors.push(error(
-      at(firstLine + index, 1),
+      at(lineNo, 1),
       "weather-timestep",
       `The scenario time step ${timestepS} s is not a whole number of minutes, but weather times are HH:MM`,
     ));
   }
   if (header === undefined || errors.length > 0) return fail();
-  const values = new Map<ValueColumn, number[]>();
-  for (const name of header.names) if (name !== "time") values.set(name, []);
-  const times: number[] = [];
+  const capacity = lines.remaining();
+  const columns = header.names.map((name) => (name === "time" ? undefined : new Float64Array(capacity)));
+  const timeColumn = header.names.indexOf("time");
+  const diffuseColumn = header.names.indexOf("diffuse-horizontal");
+  const globalColumn = header.names.indexOf("global-horizontal");
+  const times = new Float64Array(capacity);
+  const monthOfStep = new Uint8Array(capacity);
+  const row = new Float64Array(header.names.length);
+  let rows = 0;
+  let count = 0;
   let negatives = 0;
   let firstNegative = "";
   let previous: number | undefined;
-  for (index++; index < lines.length && !full(); index++) {
-    const line = lines[index]!;
+  for (let line = lines.next(); line !== undefined && !full(); line = lines.next()) {
+    lineNo++;
     if (line.trim() === "") continue;
-    const lineNo = firstLine + index;
     const cells = splitCells(line);
-    const timeCell = cells[header.names.indexOf("time")];
+    const timeCell = cells[timeColumn];
     const parsedTime = timeCell === undefined ? undefined : parseLocalTime(timeCell.text);
     if (cells.length !== header.names.length) {
       const more = cells.length > header.names.length;
@@ -136,41 +152,46 @@ export function parseWeatherCsv(
         errors.push(error(at(lineNo, timeCell!.col), "weather-step", problem));
       }
       previous = seconds;
-      times.push(seconds);
+      if (count < capacity) {
+        times[count] = seconds;
+        monthOfStep[count] = civilFromDays(Math.floor((seconds - timestepS / 2) / 86400)).month;
+      }
+      count++;
     }
-    const row = new Map<ValueColumn, number>();
+    row.fill(NaN);
     for (const [c, name] of header.names.entries()) {
       if (name === "time" || full()) continue;
       const cell = cells[c]!;
       const read = readValueCell(name, cell.text, at(lineNo, cell.col), errors);
       if (read === undefined) continue;
       if (read.clipped && negatives++ === 0) firstNegative = `line ${lineNo}, ${name} ${cell.text}`;
-      row.set(name, read.value);
+      row[c] = read.value;
     }
-    const global = row.get("global-horizontal");
-    const diffuse = row.get("diffuse-horizontal");
-    if (
-      global !== undefined && diffuse !== undefined && diffuse > global + DIFFUSE_EXCESS_TOLERANCE_W_PER_M2
-    ) {
+    const global = row[globalColumn]!;
+    const diffuse = row[diffuseColumn]!;
+    if (diffuse > global + DIFFUSE_EXCESS_TOLERANCE_W_PER_M2) {
       errors.push(error(
-        at(lineNo, cells[header.names.indexOf("diffuse-horizontal")]!.col),
+        at(lineNo, cells[diffuseColumn]!.col),
         "weather-range",
         `diffuse-horizontal ${diffuse} W/m² exceeds global-horizontal ${global} W/m² by more than ${DIFFUSE_EXCESS_TOLERANCE_W_PER_M2} W/m²`,
         "diffuse is part of global: check that the two columns are not swapped",
       ));
     }
-    for (const [name, list] of values) list.push(row.get(name) ?? NaN);
+    if (rows < capacity) {
+      for (const [c, column] of columns.entries()) if (column !== undefined) column[rows] = row[c]!;
+    }
+    rows++;
   }
   if (full()) {
-    const lineNo = errors[errors.length - 1]!.at.line;
+    const last = errors[errors.length - 1]!.at.line;
     errors.push({
       severity: "note",
-      at: at(lineNo, 1),
+      at: at(last, 1),
       rule: "weather-too-many-errors",
       message: `Stopped reading the weather file after ${MAX_WEATHER_ERRORS} errors`,
     });
   }
-  if (errors.length === 0 && times.length === 0) {
+  if (errors.length === 0 && count === 0) {
     errors.push(error(at(firstLine, 1), "weather-empty", "The weather file has a header but no data rows"));
   }
   if (errors.length > 0) return fail();
@@ -183,16 +204,42 @@ export function parseWeatherCsv(
       } (down to −${NEGATIVE_IRRADIANCE_TOLERANCE_W_PER_M2} W/m²) set to 0; the first at ${firstNegative}`,
     ));
   }
-  const series = (name: ValueColumn) => Float64Array.from(values.get(name) ?? []);
+  const exact = <T extends Float64Array | Uint8Array>(array: T): T =>
+    (array.length === count ? array : array.slice(0, count)) as T;
+  const series = (name: ValueColumn) => {
+    const column = columns[header.names.indexOf(name)];
+    return column === undefined ? new Float64Array(0) : exact(column);
+  };
   const weather: WeatherSeries = {
     startTime: localTimeAt(times[0]!),
     timestepS,
-    count: times.length,
+    count,
     dryBulbC: series("dry-bulb"),
     globalHorizontalWPerM2: series("global-horizontal"),
     diffuseHorizontalWPerM2: series("diffuse-horizontal"),
-    ...(values.has("direct-normal") ? { directNormalWPerM2: series("direct-normal") } : {}),
-    monthOfStep: Uint8Array.from(times, (s) => civilFromDays(Math.floor((s - timestepS / 2) / 86400)).month),
+    ...(header.names.includes("direct-normal") ? { directNormalWPerM2: series("direct-normal") } : {}),
+    monthOfStep: exact(monthOfStep),
   };
   return { ok: true, weather, diagnostics: warnings };
+}
+
+/** Visits the lines of a text one at a time (LF or CRLF ends), and counts the lines not yet visited. */
+function lineCursor(text: string): { next(): string | undefined; remaining(): number } {
+  let position = 0;
+  return {
+    next() {
+      if (position > text.length) return undefined;
+      let end = text.indexOf("\n", position);
+      if (end < 0) end = text.length;
+      const line = text.slice(position, end > position && text[end - 1] === "\r" ? end - 1 : end);
+      position = end + 1;
+      return line;
+    },
+    remaining() {
+      if (position > text.length) return 0;
+      let lines = 1;
+      for (let i = text.indexOf("\n", position); i >= 0; i = text.indexOf("\n", i + 1)) lines++;
+      return lines;
+    },
+  };
 }

@@ -186,6 +186,8 @@ export type Scenario =
     readonly weatherPath: string;
     readonly weatherAt: Position;
     readonly site?: Site;
+    /** `period: <n> days` when the file covers a repeating period other than one whole year, s. */
+    readonly period?: { readonly seconds: number; readonly at: Position };
   });
 
 /** A radiant time series given by the user: 24 hourly fractions r_0…r_23 (Σ = 1) and where they come from. */

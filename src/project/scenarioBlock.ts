@@ -39,6 +39,7 @@ export const SCENARIO_KEYS = [
   "surfaces",
   "weather",
   "radiant-time-series",
+  "period",
 ] as const;
 export const SURFACE_KEYS = [
   "id",
@@ -95,7 +96,7 @@ export function readScenarioBlock(
     ...(site === undefined ? {} : { site }),
   };
   if (kind === "design-day") {
-    forbid(fields, ["weather"], "a design-day scenario", out);
+    forbid(fields, ["weather", "period"], "a design-day scenario", out);
     const radiantTimeSeries = readRadiantTimeSeries(fields, out);
     const outdoor = readOutdoor(fields, out);
     const date = readMonthDay(fields, out);
@@ -133,6 +134,7 @@ export function readScenarioBlock(
       out,
     );
     const weather = readWeatherPath(fields, out);
+    const period = readPeriod(fields, out);
     if (site === undefined && !fields.entries.has("site")) {
       out.push(
         error(
@@ -146,7 +148,13 @@ export function readScenarioBlock(
     if (errorCount(out) > before || id === undefined || indoor === undefined || weather === undefined) {
       return undefined;
     }
-    return { ...common, kind, weatherPath: weather.path, weatherAt: weather.at };
+    return {
+      ...common,
+      kind,
+      weatherPath: weather.path,
+      weatherAt: weather.at,
+      ...(period === undefined ? {} : { period }),
+    };
   }
   return undefined;
 }
@@ -393,6 +401,25 @@ function readWeatherPath(fields: Fields, out: Diagnostic[]): { path: string; at:
     return undefined;
   }
   return { path: path.replaceAll("\\", "/"), at };
+}
+
+/** `period: 10 days`: the span a shorter (or longer) than one-year weather file covers, repeated for the warm-up. */
+function readPeriod(fields: Fields, out: Diagnostic[]): { seconds: number; at: Position } | undefined {
+  const seconds = readQuantity(fields, "period", "time", out);
+  if (seconds === undefined) return undefined;
+  const at = fields.entries.get("period")?.value.at ?? fields.at;
+  if (!(seconds > 0)) {
+    out.push(
+      error(
+        at,
+        "not-positive",
+        `Expected a positive period, found ${seconds} s`,
+        "write the span the weather file covers, e.g. `period: 10 days`",
+      ),
+    );
+    return undefined;
+  }
+  return { seconds, at };
 }
 
 function readSurfaces(

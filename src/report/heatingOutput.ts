@@ -72,6 +72,9 @@ function surfaceTable(id: string, r: HeatingResults, d: DisplayUnits): Trusted {
       <tr><th scope="row">${sid}</th><td>${s.construction}</td><td class="num" data-q="u">${formatSig(
         toDisplay(d, "transmittance", s.U),
         3,
+      )}</td><td class="num" data-q="u-c">${formatSig(
+        toDisplay(d, "transmittance", s.correctedU ?? s.U),
+        3,
       )}</td><td class="num" data-q="area">${formatSig(
         toDisplay(d, "area", s.area),
         3,
@@ -89,12 +92,13 @@ function surfaceTable(id: string, r: HeatingResults, d: DisplayUnits): Trusted {
   );
   return html`
     <table class="heating-surfaces compact">
-      <caption>Scenario ${id}: steady heat loss U·A·(θ<sub>i</sub> − θ<sub>e</sub>) and ISO 13788 surface checks per surface.</caption>
+      <caption>Scenario ${id}: steady heat loss U<sub>c</sub>·A·(θ<sub>i</sub> − θ<sub>e</sub>) (U<sub>c</sub> = U + ΔU of the corrections given) and ISO 13788 surface checks per surface.</caption>
       <thead>
         <tr>
           <th>Surface</th>
           <th>Construction</th>
           <th>U ${unitLabel(d, "transmittance")}</th>
+          <th>U<sub>c</sub> ${unitLabel(d, "transmittance")}</th>
           <th>Area ${unitLabel(d, "area")}</th>
           <th>Heat loss ${unitLabel(d, "heatGain")}</th>
           <th>θ<sub>si</sub> ${unitLabel(d, "temperature")}</th>
@@ -106,7 +110,7 @@ function surfaceTable(id: string, r: HeatingResults, d: DisplayUnits): Trusted {
         </tr>
       </thead>
       <tbody>${rows}
-        <tr class="total-row"><th scope="row">Total</th><td></td><td></td><td class="num">${formatSig(
+        <tr class="total-row"><th scope="row">Total</th><td></td><td></td><td></td><td class="num">${formatSig(
           toDisplay(d, "area", Object.values(r.surfaces).reduce((a, s) => a + s.area, 0)),
           3,
         )}</td><td class="num" data-q="total-loss">${w(r.totalHeatLoss)}</td><td colspan="6"></td></tr>
@@ -137,7 +141,7 @@ export function renderHeatingOutput(input: HeatingOutputInput): Trusted {
       <p class="peak-summary">Design heat loss through these surfaces: <strong data-q="total-loss-summary">${formatFixed(
         toDisplay(d, "heatGain", r.totalHeatLoss),
         0,
-      )} ${unitLabel(d, "heatGain")}</strong> (Σ U·A = ${d.system === "SI"
+      )} ${unitLabel(d, "heatGain")}</strong> (Σ U<sub>c</sub>·A = ${d.system === "SI"
         ? `${formatSig(r.totalUA, 4)} W/K`
         : `${
           formatSig(toDisplay(d, "heatGain", r.totalUA) / DELTA_F_PER_K, 4)

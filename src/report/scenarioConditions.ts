@@ -5,6 +5,7 @@ import { type DisplayUnits, toDisplay, unitLabel } from "./displayUnits.ts";
 import { formatFixed, formatSig, formatTrim, MINUS } from "./format.ts";
 import { html, type Trusted } from "./html.ts";
 import {
+  coverageLabel,
   MONTH_NAMES,
   numberKey,
   objectKey,
@@ -109,6 +110,7 @@ function weatherRows(path: string, results: ScenarioResults, d: DisplayUnits): T
   const max = numberKey(w, "dryBulbMax_C");
   const global = numberKey(w, "globalHorizontal_J_per_m2");
   const days = numberKey(objectKey(results, "warmUp"), "days");
+  const coverage = coverageLabel(results);
   const tau = numberKey(objectKey(results, "warmUp"), "tau1_h");
   const span = first === undefined || last === undefined || steps === undefined
     ? "Extent not recorded in results.json."
@@ -117,7 +119,12 @@ function weatherRows(path: string, results: ScenarioResults, d: DisplayUnits): T
     ? "Not recorded in results.json."
     : `Dry bulb from the file: mean ${t(mean)} ${unit}, lowest ${t(min)} ${unit}, highest ${t(max)} ${unit}.`;
   const rows = [
-    row("Kind", "Weather year: the file's rows in sequence after a warm-up (see the assumptions register)."),
+    row(
+      "Kind",
+      coverage.kind === "year"
+        ? "Weather year: the file's rows in sequence after a warm-up (see the assumptions register)."
+        : `Weather ${coverage.label} (not a year, as the scenario's period states): the file's rows in sequence after a warm-up, the period repeating (see the assumptions register).`,
+    ),
     row("Weather file", html`<code>${path}</code> ${span}`),
     row("Outdoor air", air),
     row(

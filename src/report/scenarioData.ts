@@ -132,3 +132,14 @@ export function monthlyTotals(totals: unknown): { gain_J: number; loss_J: number
 export function weatherTime(time: string): string {
   return /^\d{4}-\d\d-\d\dT\d\d:\d\d$/.test(time) ? time.replace("T", " ") : time;
 }
+
+/** The coverage of a weather scenario from results.json `period`: a year, or e.g. "period of 10 days". */
+export function coverageLabel(results: unknown): { kind: "year" | "period"; label: string; days?: number } {
+  const period = objectKey(results, "period");
+  const days = numberKey(period, "days");
+  if (stringKey(period, "kind") !== "period" || days === undefined) return { kind: "year", label: "year" };
+  const text = Number.isInteger(days)
+    ? `${days} day${days === 1 ? "" : "s"}`
+    : `${Number(days.toFixed(2))} days`;
+  return { kind: "period", label: `period of ${text}`, days };
+}

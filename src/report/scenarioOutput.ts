@@ -7,6 +7,7 @@ import { type DisplayUnits, unitLabel } from "./displayUnits.ts";
 import { html, type Trusted } from "./html.ts";
 import { renderConditions } from "./scenarioConditions.ts";
 import {
+  coverageLabel,
   hasStepSeries,
   monthlyTotals,
   objectKey,
@@ -108,7 +109,14 @@ function summaryBody(id: string, results: ScenarioResults, prefix: string, d: Di
     <p
       class="muted">Daily largest, smallest and mean heat gain per surface are in results.json (Appendix B), key <code>daily</code>.</p>
   `;
-  const monthly = months === undefined
+  const coverage = coverageLabel(results);
+  const monthly = coverage.kind === "period"
+    ? html`
+      <p
+        class="muted">No monthly totals or monthly plot: the weather file of ${id} covers a ${coverage
+          .label}, not a year. The totals over the period are in the summary above; results.json <code>period</code> gives its first and last rows.</p>
+    `
+    : months === undefined
     ? html`<p class="muted">No monthly totals in results.json for ${id}.</p>`
     : html`
       <h5>Monthly totals</h5>
@@ -125,9 +133,10 @@ function summaryBody(id: string, results: ScenarioResults, prefix: string, d: Di
 }
 
 function caution(results: ScenarioResults): Trusted {
+  const coverage = coverageLabel(results);
   const basis = results.kind === "design-day"
     ? "these figures assume a steady-periodic day (the same day repeated, continuous operation at the stated indoor temperature)"
-    : "these figures assume the stated indoor temperature at every step (continuous operation) and a year that repeats for the warm-up";
+    : `these figures assume the stated indoor temperature at every step (continuous operation) and a ${coverage.label} that repeats for the warm-up`;
   return html`
     <div class="caution-box" role="note">
       <p><strong>Heat gain is not cooling load:</strong> the radiant part reaches the room air later, after the room's surfaces absorb and release it, so the load on the plant peaks later and lower than the heat gain shown; ${basis}. Set-back, intermittent plant, glazing, ventilation and internal gains are outside these figures.</p>

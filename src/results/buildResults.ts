@@ -13,6 +13,8 @@ import { computeDesignDay, type ScenarioContext } from "../scenarios/designDay.t
 import { computeHeating } from "../scenarios/heating.ts";
 import { heatingCsv } from "../scenarios/heatingCsv.ts";
 import { computeWeatherYear } from "../scenarios/weatherYear.ts";
+import { weatherCoverage } from "../scenarios/weatherPeriod.ts";
+import { weatherBudget } from "../scenarios/weatherBudget.ts";
 import { sensitivityStudy } from "../sensitivity/study.ts";
 import { parseWeatherCsv } from "../climate/weatherCsv.ts";
 import { TOOL_VERSION } from "../version.ts";
@@ -59,6 +61,7 @@ export function computeProject(
   const ownLimitsById = ownLimits(model);
   const designAssumptions: Assumption[] = [];
   const designWarnings: { at: string; message: string }[] = [];
+  const correctedU = new Map<string, number>();
   for (const [index, construction] of model.constructions.entries()) {
     progress(`construction ${index + 1}/${model.constructions.length}: ${construction.id}`);
     const analysis = analyseConstruction(construction, construction.timestepS);
@@ -85,6 +88,7 @@ export function computeProject(
       limitsFor(ownLimitsById.get(construction.id), model.info.limits),
     );
     constructions[construction.id] = { ...base, ...design.keys };
+    correctedU.set(construction.id, design.keys.correctedU);
     checks.push(...constructionChecksJson(construction.id, analysis), ...design.checks);
     designAssumptions.push(...design.assumptions);
     designWarnings.push(...design.warnings);
@@ -94,7 +98,10 @@ export function computeProject(
   if (scenarioParts.problems.length > 0) return { ok: false, diagnostics: scenarioParts.problems };
   checks.push(...scenarioParts.checks);
   const heating = (model.heatingScenarios ?? []).map((s) =>
-    [s.id, computeHeating(s, new Map(model.constructions.map((c) => [c.id, c])), steady)] as const
+    [
+      s.id,
+      computeHeating(s, new Map(model.constructions.map((c) => [c.id, c])), steady, correctedU),
+    ] as const
   );
   const variation = model.info.sensitivityVariation;
   if (variation !== undefined) progress("sensitivity study");
@@ -177,6 +184,7 @@ function computeScenarios(
       return analysis;
     },
   };
+  let heldBytes = 0;
   for (const scenario of model.scenarios) {
     progress(`scenario ${scenario.id} (${scenario.kind}, ${scenario.surfaces.length} surfaces)`);
     if (scenario.timestepDefaulted) {
@@ -214,7 +222,18 @@ function computeScenarios(
           parts.problems.push(...parsed.diagnostics);
           break;
         }
-        const outcome = computeWeatherYear(scenario, parsed.weather, context);
+        const coverage = weatherCoverage(scenario, parsed.weather);
+        if (!coverage.ok) {
+          parts.problems.push(coverage.diagnostic);
+          break;
+        }
+        const budget = weatherBudget(scenario, parsed.weather.count, heldBytes);
+        if (!budget.ok) {
+          parts.problems.push(budget.diagnostic);
+          break;
+        }
+        heldBytes += budget.bytes;
+        const outcome = computeWeatherYear(scenario, parsed.weather, context, coverage.coverage);
         parts.scenarios[scenario.id] = outcome.results;
         parts.checks.push(...outcome.checks);
         parts.assumptions.push(...outcome.assumptions);

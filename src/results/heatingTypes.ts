@@ -33,7 +33,9 @@ export interface HeatingSurfaceResults {
   readonly area: number;
   /** W/(m²K), air to air, of the construction (its own surface resistances) */
   readonly U: number;
-  /** W, U·A·(θ_i − θ_e), positive = heat leaving the room */
+  /** W/(m²K), U_c = U + ΔU of the user's corrections (equal to U without corrections); used for the heat loss */
+  readonly correctedU: number;
+  /** W, U_c·A·(θ_i − θ_e), positive = heat leaving the room */
   readonly heatLoss: number;
   /** m²K/W, R_si used for the surface temperature */
   readonly moistureSurfaceResistance: number;
@@ -76,7 +78,7 @@ export interface HeatingResults {
   readonly surfaces: Readonly<Record<string, HeatingSurfaceResults>>;
   /** W */
   readonly totalHeatLoss: number;
-  /** W/K, Σ U·A */
+  /** W/K, Σ U_c·A */
   readonly totalUA: number;
   readonly notes: readonly string[];
 }

@@ -37,11 +37,16 @@ export function steadyInsideSurfaceTemperature(
   return indoorC - (insideResistance * (indoorC - outdoorC)) / total;
 }
 
-/** Computes a heating scenario from the steady state of its constructions (missing ones are skipped). */
+/**
+ * Computes a heating scenario from the steady state of its constructions (missing ones are skipped). The heat loss
+ * uses U_c, the construction's U with the user's ΔU corrections (`correctedU`, as the U-limit of the same run); the
+ * surface temperature uses the plane-element U (the corrections are local: fasteners, air gaps).
+ */
 export function computeHeating(
   scenario: HeatingScenario,
   constructions: ReadonlyMap<string, Construction>,
   steady: Readonly<Record<string, SteadyState>>,
+  correctedU: ReadonlyMap<string, number> = new Map(),
 ): HeatingOutcome {
   const { indoorC, outdoorC, indoorRelativeHumidity: phi } = scenario;
   const at = formatPosition(scenario.at);
@@ -84,15 +89,17 @@ export function computeHeating(
     const state = steady[surface.construction];
     if (construction === undefined || state === undefined) continue;
     const u = state.uValue;
-    const heatLoss = u * surface.areaM2 * (indoorC - outdoorC);
+    const uc = correctedU.get(surface.construction) ?? u;
+    const heatLoss = uc * surface.areaM2 * (indoorC - outdoorC);
     const thetaSi = steadyInsideSurfaceTemperature(indoorC, outdoorC, u, construction.insideResistance, rsi);
     const fRsi = temperatureFactor(thetaSi, indoorC, outdoorC);
     totalHeatLoss += heatLoss;
-    totalUA += u * surface.areaM2;
+    totalUA += uc * surface.areaM2;
     surfaces[surface.id] = {
       construction: surface.construction,
       area: surface.areaM2,
       U: u,
+      correctedU: uc,
       heatLoss,
       moistureSurfaceResistance: rsi,
       insideSurfaceTemperature: thetaSi,
@@ -128,7 +135,8 @@ export function computeHeating(
 
 function heatingNotes(rsi: number): string[] {
   return [
-    "Steady state: heat loss of each surface = U·A·(θ_i − θ_e), U of its construction (one-dimensional, thermal bridges, ground and air leakage excluded).",
+    "Steady state: heat loss of each surface = U_c·A·(θ_i − θ_e), U_c = U of its construction plus the ΔU corrections given for it (ISO 6946 Annex F; U_c = U without corrections); one-dimensional, thermal bridges, ground and air leakage excluded.",
+    "Surface temperatures use U without the ΔU corrections: the corrections stand for local effects (fasteners, air gaps), not for the plane element's surface temperature.",
     `Surface temperature θ_si = θ_i − R_si·(θ_i − θ_e)/R_T with R_si = ${rsi} m²·K/W and R_T the construction's total resistance with this R_si in place of its own; f_Rsi = (θ_si − θ_e)/(θ_i − θ_e).`,
     "Surface condensation: the check fails when θ_si is below the indoor dew point.",
     `Mould: the check fails when f_Rsi is below f_Rsi,min, the factor at which the surface relative humidity reaches ${MOULD_SURFACE_RELATIVE_HUMIDITY}.`,

@@ -14,6 +14,7 @@ const HEADER = [
   "dew_point_C",
   "surface_condensation",
   "mould",
+  "U_c_W_per_m2K",
 ];
 
 /** Path and text of the heating CSV; ids are validated identifiers, so no cell needs quoting. */
@@ -32,8 +33,9 @@ export function heatingCsv(id: string, r: HeatingResults): { path: string; text:
       s.dewPoint,
       s.surfaceCondensation.pass ? "pass" : "fail",
       s.mould.pass ? "pass" : "fail",
+      s.correctedU,
     ].join(",")
   );
-  const total = ["total", "", "", "", r.totalHeatLoss, "", "", "", "", "", "", ""].join(",");
+  const total = ["total", "", "", "", r.totalHeatLoss, "", "", "", "", "", "", "", ""].join(",");
   return { path: `csv/heating-${id}.csv`, text: `${[HEADER.join(","), ...rows, total].join("\n")}\n` };
 }

@@ -115,12 +115,18 @@ export function surfaceParameters(
   }
   const isRoof = tiltDeg < ROOF_TILT_LIMIT_DEG;
   const radiantFraction = surface.radiantFraction ?? (isRoof ? RADIANT_FRACTION_ROOF : RADIANT_FRACTION_WALL);
+  const untilted = surface.tiltDeg === undefined;
+  if (surface.radiantFraction === undefined && untilted && surface.solAirC !== undefined) {
+    warnings.push({ at, message: untiltedSolAirWarning(surface.id, radiantFraction) });
+  }
   if (surface.radiantFraction === undefined) {
     assumptions.push({
       id: `default:radiant-fraction:${tag}`,
       text: `Radiant part of the conduction heat gain of ${surface.id}: ${radiantFraction} (${
         isRoof ? "roof" : "wall"
-      }; tilt below ${ROOF_TILT_LIMIT_DEG}° counts as a roof)`,
+      }; ${
+        untilted ? "no tilt given, taken as a wall" : `tilt below ${ROOF_TILT_LIMIT_DEG}° counts as a roof`
+      })`,
       source:
         "ASHRAE Handbook—Fundamentals 2009–2021, Ch. 18 Table 14, recommended radiative/convective split (from memory)",
       at,
@@ -136,6 +142,16 @@ export function surfaceParameters(
     tiltDeg,
     azimuthDeg: surface.azimuthDeg ?? 180,
   };
+}
+
+/**
+ * The warning for a surface given only a `sol-air` list: nothing tells a wall from a roof, so the wall's radiant
+ * fraction is used; the message says which value and how to state the surface's kind.
+ */
+export function untiltedSolAirWarning(id: string, radiantFraction: number): string {
+  return `Give "tilt" or "radiant-fraction" for surface ${id}: it has only a sol-air list and no tilt, so nothing ` +
+    `tells a wall from a roof and its radiant fraction is taken as ${radiantFraction}, a wall's (a roof's is ` +
+    `${RADIANT_FRACTION_ROOF}); add e.g. \`tilt: 0 deg\` for a roof`;
 }
 
 function round(value: number): number {

@@ -24,7 +24,8 @@ export interface WeatherSurfaceBoundary {
 /** Outdoor, indoor and sol-air series of a weather year, with the calendar of its steps. */
 export interface WeatherBoundary {
   /** ISO `YYYY-MM-DDTHH:MM` of each row. */
-  readonly timeLabels: readonly string[];
+  /** Row times `YYYY-MM-DDTHH:MM`, made when asked for (a list of a million template strings costs hundreds of MB). */
+  readonly timeLabels: StepLabels;
   readonly outdoorC: Float64Array;
   readonly indoorC: Float64Array;
   readonly surfaces: readonly WeatherSurfaceBoundary[];
@@ -57,7 +58,7 @@ export function weatherBoundary(
   const n = weather.count;
   const dt = weather.timestepS;
   const start = secondsOf(weather.startTime);
-  const timeLabels: string[] = [];
+  const timeLabels = stepLabels(start, dt, n);
   const clockH = new Float64Array(n);
   const outdoorC = Float64Array.from(weather.dryBulbC);
   const indoorC = new Float64Array(n);
@@ -85,7 +86,6 @@ export function weatherBoundary(
   for (let k = 0; k < n; k++) {
     const seconds = start + k * dt;
     const time = localTimeAt(seconds);
-    timeLabels.push(formatLocalTime(time));
     const endTimeH = time.hour + time.minute / 60;
     clockH[k] = endTimeH;
     indoorC[k] = indoorAtC(indoor, endTimeH);
@@ -163,4 +163,21 @@ function solAirSeriesC(outdoorC: Float64Array, incident: Float64Array, surface: 
     out[k] = outdoorC[k]! + solarTermK - longwaveTermK;
   }
   return out;
+}
+
+/** Labels of the rows of a series: `length` and the label of row k; an array of strings is one too. */
+export interface StepLabels {
+  readonly length: number;
+  at(index: number): string | undefined;
+}
+
+/** The labels `YYYY-MM-DDTHH:MM` of `count` rows from `startS` at step `dt`, each formatted when asked for. */
+export function stepLabels(startS: number, dt: number, count: number): StepLabels {
+  return {
+    length: count,
+    at: (index) =>
+      Number.isInteger(index) && index >= 0 && index < count
+        ? formatLocalTime(localTimeAt(startS + index * dt))
+        : undefined,
+  };
 }

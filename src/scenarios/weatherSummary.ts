@@ -1,5 +1,20 @@
 import type { EnergyTotals } from "../results/types.ts";
 import { civilFromDays, daysFromCivil } from "../climate/weatherTime.ts";
+import type { StepLabels } from "./weatherBoundary.ts";
+import type { WeatherSeries } from "../climate/weatherCsv.ts";
+
+/** `scenarios.<id>.weather` of a weather scenario in results.json. */
+export interface WeatherFileSummary {
+  readonly path: string;
+  readonly firstTime: string;
+  readonly lastTime: string;
+  readonly steps: number;
+  readonly dryBulbMean_C: number;
+  readonly dryBulbMin_C: number;
+  readonly dryBulbMax_C: number;
+  /** Global horizontal irradiation over the file, J/m². */
+  readonly globalHorizontal_J_per_m2: number;
+}
 
 /** Gain and loss energy of one month, J. */
 export interface MonthTotals {
@@ -47,7 +62,7 @@ export function energyTotals(
 /** Largest (`sign` +1) or most negative (`sign` −1) value of a power series with its time (first on ties). */
 export function timedPeak(
   powerW: ArrayLike<number>,
-  timeLabels: readonly string[],
+  timeLabels: StepLabels,
   timestepS: number,
   sign: 1 | -1,
 ): TimedPeak {
@@ -56,7 +71,7 @@ export function timedPeak(
   return {
     heatGain: powerW[index] ?? NaN,
     time_h: (index * timestepS) / 3600,
-    time: timeLabels[index] ?? "",
+    time: timeLabels.at(index) ?? "",
   };
 }
 
@@ -95,7 +110,8 @@ export interface CsvSurface {
   readonly incidentWPerM2: Float64Array | null;
   readonly solAirC: ArrayLike<number>;
   readonly insideWPerM2: ArrayLike<number>;
-  readonly heatGainW: ArrayLike<number>;
+  /** m²: the heat gain column is inside flux × area, computed as the row is written (not held as a series). */
+  readonly areaM2: number;
 }
 
 /**
@@ -104,7 +120,7 @@ export interface CsvSurface {
  * `total_heat_gain_W`; one row per step, LF line ends.
  */
 export function weatherCsvText(
-  timeLabels: readonly string[],
+  timeLabels: StepLabels,
   outdoorC: ArrayLike<number>,
   indoorC: ArrayLike<number>,
   surfaces: readonly CsvSurface[],
@@ -115,7 +131,7 @@ export function weatherCsvText(
 
 /** The same CSV as `weatherCsvText`, produced a block of rows at a time so a large year never sits in memory whole. */
 export function* weatherCsvChunks(
-  timeLabels: readonly string[],
+  timeLabels: StepLabels,
   outdoorC: ArrayLike<number>,
   indoorC: ArrayLike<number>,
   surfaces: readonly CsvSurface[],
@@ -134,13 +150,13 @@ export function* weatherCsvChunks(
   yield `${header.join(",")}\n`;
   const block: string[] = [];
   for (let k = 0; k < timeLabels.length; k++) {
-    const cells = [timeLabels[k]!, plainNumber(outdoorC[k]!, 3), plainNumber(indoorC[k]!, 3)];
+    const cells = [timeLabels.at(k)!, plainNumber(outdoorC[k]!, 3), plainNumber(indoorC[k]!, 3)];
     for (const s of surfaces) {
       cells.push(
         s.incidentWPerM2 === null ? "" : plainNumber(s.incidentWPerM2[k]!, 2),
         plainNumber(s.solAirC[k]!, 3),
         plainNumber(s.insideWPerM2[k]!, 4),
-        plainNumber(s.heatGainW[k]!, 2),
+        plainNumber(s.insideWPerM2[k]! * s.areaM2, 2),
       );
     }
     cells.push(plainNumber(totalW[k]!, 2));
@@ -175,4 +191,33 @@ export function dailyCsvText(firstDate: string, columns: readonly ({ id: string 
     );
   }
   return `${rows.join("\n")}\n`;
+}
+
+/** The weather file's extent and dry-bulb and irradiation summary for results.json `scenarios.<id>.weather`. */
+export function weatherSummary(
+  path: string,
+  weather: WeatherSeries,
+  timeLabels: StepLabels,
+): WeatherFileSummary {
+  let sum = 0;
+  let min = Infinity;
+  let max = -Infinity;
+  let global = 0;
+  for (let k = 0; k < weather.count; k++) {
+    const t = weather.dryBulbC[k]!;
+    sum += t;
+    min = Math.min(min, t);
+    max = Math.max(max, t);
+    global += weather.globalHorizontalWPerM2[k]! * weather.timestepS;
+  }
+  return {
+    path,
+    firstTime: timeLabels.at(0) ?? "",
+    lastTime: timeLabels.at(timeLabels.length - 1) ?? "",
+    steps: weather.count,
+    dryBulbMean_C: sum / weather.count,
+    dryBulbMin_C: min,
+    dryBulbMax_C: max,
+    globalHorizontal_J_per_m2: global,
+  };
 }

@@ -10,6 +10,7 @@ import { formatPosition } from "../project/position.ts";
 import type { CheckResult, EnergyTotals, ScenarioResults, SurfaceResults } from "../results/types.ts";
 import type { ScenarioContext, ScenarioOutcome } from "./designDay.ts";
 import { surfaceParameters, type SurfaceWarning } from "./surfaceParameters.ts";
+import { coverageNotes, impliedCoverage, type PeriodJson, type WeatherCoverage } from "./weatherPeriod.ts";
 import { weatherBoundary, type WeatherSurfaceInput } from "./weatherBoundary.ts";
 import {
   energyBalanceCheck,
@@ -32,6 +33,8 @@ import {
   type TimedPeak,
   timedPeak,
   weatherCsvChunks,
+  type WeatherFileSummary,
+  weatherSummary,
 } from "./weatherSummary.ts";
 
 export { WARM_UP_LIMIT, WEATHER_ENERGY_BALANCE_LIMIT };
@@ -54,19 +57,11 @@ export interface WeatherScenarioResults extends ScenarioResults {
   readonly csv: string;
   readonly peakTime: string;
   readonly peakLoss: TimedPeak;
-  readonly weather: {
-    readonly path: string;
-    readonly firstTime: string;
-    readonly lastTime: string;
-    readonly steps: number;
-    readonly dryBulbMean_C: number;
-    readonly dryBulbMin_C: number;
-    readonly dryBulbMax_C: number;
-    /** Annual global horizontal irradiation, J/m². */
-    readonly globalHorizontal_J_per_m2: number;
-  };
+  readonly weather: WeatherFileSummary;
   readonly warmUp: { readonly days: number; readonly tau1_h: number };
   readonly daily: { readonly firstDate: string; readonly days: number } & DailySummary;
+  /** What the file covers: a whole year or the scenario's stated `period` (extension key). */
+  readonly period: PeriodJson;
 }
 
 /** A computed weather year with the CSV files to write under the output folder. */
@@ -81,6 +76,7 @@ export function computeWeatherYear(
   scenario: WeatherScenario,
   weather: WeatherSeries,
   context: ScenarioContext,
+  coverage: WeatherCoverage = impliedCoverage(weather),
 ): WeatherOutcome {
   if (scenario.site === undefined) {
     throw new RangeError(`Cannot compute weather scenario ${scenario.id}: it has no site to place the sun`);
@@ -103,12 +99,19 @@ export function computeWeatherYear(
   const stepsPerDay = Math.round(86400 / dt);
   const warmUpSteps = days * stepsPerDay;
   const at = formatPosition(scenario.at);
-  assumptions.push(warmUpAssumption(scenario.id, days, tau1H, at), ...methodAssumptions(scenario.id, at));
+  const repeating = coverage.label;
+  assumptions.push(
+    warmUpAssumption(scenario.id, days, tau1H, at, repeating),
+    ...methodAssumptions(scenario.id, at),
+  );
   const surfaces: Record<string, WeatherSurfaceResults> = {};
   const checks: CheckResult[] = [];
   const csvSurfaces: CsvSurface[] = [];
   const dailyColumns: ({ id: string } & DailySummary)[] = [];
   const total = new Float64Array(n);
+  // One heat-gain buffer for all surfaces: each surface's summaries are taken before the next overwrites it, so memory
+  // grows with rows × surfaces only by the series the CSV needs (incident, sol-air, inside flux).
+  const heatGain = new Float64Array(n);
   const runs = inputs.map((input, s) => ({
     modes: context.analysisAt(input.surface.construction, dt).airToAir.modes,
     solAirC: boundary.surfaces[s]!.solAirC,
@@ -116,7 +119,6 @@ export function computeWeatherYear(
   forEachInsideFlux(runs, boundary.indoorC, warmUpSteps, n, (s, insideWPerM2) => {
     const { surface, parameters: p, uValue } = inputs[s]!;
     const { modes, solAirC } = runs[s]!;
-    const heatGain = new Float64Array(n);
     for (let k = 0; k < n; k++) heatGain[k] = insideWPerM2[k]! * surface.areaM2;
     for (let k = 0; k < n; k++) total[k] = total[k]! + heatGain[k]!;
     const subject = `scenario:${scenario.id}/${surface.id}`;
@@ -166,7 +168,7 @@ export function computeWeatherYear(
       incidentWPerM2: boundary.surfaces[s]!.incidentWPerM2,
       solAirC,
       insideWPerM2,
-      heatGainW: heatGain,
+      areaM2: surface.areaM2,
     });
   });
   const csvPath = `csv/scenario-${scenario.id}.csv`;
@@ -182,7 +184,8 @@ export function computeWeatherYear(
     peak: { heatGain: peak.heatGain, time_h: peak.time_h },
     totals: energyTotals(total, weather.monthOfStep, dt),
     notes: [
-      ...notes(scenario.id, csvPath, dt),
+      ...coverageNotes(coverage),
+      ...notes(scenario.id, csvPath, dt, repeating),
       `Daily maximum, minimum and mean heat gain per surface are in ${dailyPath}.`,
     ],
     csv: csvPath,
@@ -195,6 +198,7 @@ export function computeWeatherYear(
       days: boundary.dayCount,
       ...dailySummary(total, boundary.dayIndexOfStep, boundary.dayCount),
     },
+    period: coverage.json,
   };
   const chunks = () =>
     weatherCsvChunks(boundary.timeLabels, boundary.outdoorC, boundary.indoorC, csvSurfaces, total);
@@ -217,12 +221,21 @@ export function computeWeatherYear(
   };
 }
 
-function warmUpAssumption(id: string, days: number, tau1H: number, at: string): Assumption {
+function warmUpAssumption(
+  id: string,
+  days: number,
+  tau1H: number,
+  at: string,
+  repeating: string,
+): Assumption {
+  const periodic = repeating === "year"
+    ? "periodic-year assumption"
+    : `periodic assumption over the ${repeating}`;
   return {
     id: `rule:weather-warm-up:${id}`,
     text:
       `Warm-up: the last ${days} days of the weather file are run first, from a steady state at their mean ` +
-      `temperatures, so the first row follows the end of the file as if the year repeated (periodic-year assumption); ` +
+      `temperatures, so the first row follows the end of the file as if the ${repeating} repeated (${periodic}); ` +
       `${days} days = max(${MIN_WARM_UP_DAYS}, ⌈${WARM_UP_TIME_CONSTANTS} τ1 / 24 h⌉) with the slowest τ1 = ${
         tau1H.toFixed(1)
       } h of the scenario's constructions`,
@@ -242,47 +255,22 @@ function methodAssumptions(id: string, at: string): Assumption[] {
   }];
 }
 
-function notes(id: string, csvPath: string, dt: number): string[] {
+function notes(id: string, csvPath: string, dt: number, repeating: string): string[] {
+  const periodic = repeating === "year" ? "periodic year" : `the ${repeating} repeating`;
   return [
     "Time base: local standard time as written in the weather file; row k is at the first row's time + k·Δ.",
     "Irradiance in the file is the mean over the interval ending at each row's time; transposition uses the sun at " +
     "the interval's midpoint.",
     "Irradiance at a row's time is the mean of the interval ending and the interval starting there (the last row " +
-    "uses the first interval: periodic year), so a peak is not shifted by half a step; the sol-air temperature " +
+    `uses the first interval: ${periodic}), so a peak is not shifted by half a step; the sol-air temperature ` +
     "combines it with the dry bulb at that time and is taken as linear between rows.",
     "Sky model for the transposition: isotropic (Liu & Jordan).",
-    `Fluxes: modal recursion at Δ = ${formatDurationS(dt)} after a periodic-year warm-up (see assumptions).`,
+    `Fluxes: modal recursion at Δ = ${formatDurationS(dt)} after a ${
+      repeating === "year" ? "periodic-year" : `periodic (${repeating})`
+    } warm-up (see assumptions).`,
     "Monthly totals: each step counts for the month of the interval ending at its time (time − Δ/2).",
     `Step series of scenario ${id} are in ${csvPath}, not in results.json: columns time, outdoor_degC, indoor_degC, ` +
     "then per surface <id>:incident_W_per_m2, <id>:sol_air_degC, <id>:inside_flux_W_per_m2 (positive into the " +
     "room), <id>:heat_gain_W, and total_heat_gain_W.",
   ];
-}
-
-function weatherSummary(
-  path: string,
-  weather: WeatherSeries,
-  timeLabels: readonly string[],
-): WeatherScenarioResults["weather"] {
-  let sum = 0;
-  let min = Infinity;
-  let max = -Infinity;
-  let global = 0;
-  for (let k = 0; k < weather.count; k++) {
-    const t = weather.dryBulbC[k]!;
-    sum += t;
-    min = Math.min(min, t);
-    max = Math.max(max, t);
-    global += weather.globalHorizontalWPerM2[k]! * weather.timestepS;
-  }
-  return {
-    path,
-    firstTime: timeLabels[0] ?? "",
-    lastTime: timeLabels[timeLabels.length - 1] ?? "",
-    steps: weather.count,
-    dryBulbMean_C: sum / weather.count,
-    dryBulbMin_C: min,
-    dryBulbMax_C: max,
-    globalHorizontal_J_per_m2: global,
-  };
 }

@@ -1,5 +1,5 @@
-import { type EngineCheck, engineCheck } from "./check.ts";
-import { CTF_MAX_COEFFICIENT, CTF_MAX_IDENTITY_ERROR, CTF_MAX_RESYNTHESIS_ERROR } from "./ctf.ts";
+import { type EngineCheck, engineCheck, type MethodNote } from "./check.ts";
+import { rootCtfOutcome, stateSpaceCtfOutcome } from "./ctfChecks.ts";
 import { transmissionDeterminantError } from "./determinantCheck.ts";
 import { type ConductionChain, conductionChain } from "./elements.ts";
 import { type Unresolvable, unresolvable } from "./engineError.ts";
@@ -50,6 +50,8 @@ export interface DynamicAnalysis {
   readonly cellsPerLayer: readonly number[] | null;
   readonly iso13786: Iso13786Characteristics;
   readonly checks: readonly EngineCheck[];
+  /** Method choices: each polynomial CTF that was not published and why (the modal form is used instead). */
+  readonly methodNotes: readonly MethodNote[];
 }
 
 /** Timesteps accepted: whole seconds from 60 s to 3600 s that divide one hour. */
@@ -69,73 +71,46 @@ function sumRuleChecks(root: RootAnalysis, suffix: string): EngineCheck[] {
   );
 }
 
-function rootChecks(root: RootAnalysis, suffix: string): EngineCheck[] {
-  const c = root.ctfCandidate;
-  return [
-    ...sumRuleChecks(root, suffix),
-    engineCheck(
-      `root-count${suffix}`,
-      `Poles found minus the exact oscillation count below β = ${
-        root.poles.betaMax.toExponential(4)
-      } 1/s (plus unresolved intervals)`,
-      Math.abs(root.poles.bracketedCount - root.poles.exactCount) + root.poles.unresolvedIntervals,
-      0,
-    ),
-    engineCheck(
-      `ctf-identity${suffix}`,
-      "max |ΣCTF / (1 − ΣΦ) − U| / U over X, Y, Z",
-      c.identityError,
-      CTF_MAX_IDENTITY_ERROR,
-    ),
-    engineCheck(
-      `ctf-resynthesis${suffix}`,
-      `Root CTF (${c.ctf.Phi.length} poles) long division versus response factors, max error / U`,
-      c.resynthesisError,
-      CTF_MAX_RESYNTHESIS_ERROR,
-    ),
-    engineCheck(
-      `ctf-coefficient-bound${suffix}`,
-      "Largest |CTF coefficient|",
-      c.maxAbsCoefficient,
-      CTF_MAX_COEFFICIENT,
-    ),
-  ];
+function rootChecks(root: RootAnalysis, suffix: string): { checks: EngineCheck[]; notes: readonly MethodNote[] } {
+  const ctf = rootCtfOutcome(root, suffix);
+  return {
+    checks: [
+      ...sumRuleChecks(root, suffix),
+      engineCheck(
+        `root-count${suffix}`,
+        `Poles found minus the exact oscillation count below β = ${
+          root.poles.betaMax.toExponential(4)
+        } 1/s (plus unresolved intervals)`,
+        Math.abs(root.poles.bracketedCount - root.poles.exactCount) + root.poles.unresolvedIntervals,
+        0,
+      ),
+      ...ctf.checks,
+    ],
+    notes: ctf.notes,
+  };
 }
 
-function stateSpaceChecks(ss: StateSpaceAnalysis): EngineCheck[] {
-  const c = ss.ctfCandidate;
-  return [
-    engineCheck(
-      "state-space-agreement",
-      `max_j |RF state space − RF roots| / U over X, Y, Z (${ss.response.model.capacities.length} graded cells)`,
-      ss.agreement.max,
-      STATE_SPACE_AGREEMENT_LIMIT,
-    ),
-    engineCheck(
-      "state-space-reciprocity",
-      "max_j |q_i per T_o pulse + q_o per T_i pulse| / U of the state-space model",
-      ss.response.reciprocityError,
-      1e-9,
-    ),
-    engineCheck(
-      "ctf-state-space-resynthesis",
-      `State-space CTF (${c.ctf.Phi.length} poles) long division versus its response factors, max error / U`,
-      c.resynthesisError,
-      CTF_MAX_RESYNTHESIS_ERROR,
-    ),
-    engineCheck(
-      "ctf-state-space-coefficient-bound",
-      "Largest |state-space CTF coefficient|",
-      c.maxAbsCoefficient,
-      CTF_MAX_COEFFICIENT,
-    ),
-    engineCheck(
-      "ctf-state-space-identity",
-      "max |ΣCTF / (1 − ΣΦ) − U| / U (state space)",
-      c.identityError,
-      CTF_MAX_IDENTITY_ERROR,
-    ),
-  ];
+function stateSpaceChecks(ss: StateSpaceAnalysis): { checks: EngineCheck[]; notes: readonly MethodNote[] } {
+  const ctf = stateSpaceCtfOutcome(ss);
+
+  return {
+    checks: [
+      engineCheck(
+        "state-space-agreement",
+        `max_j |RF state space − RF roots| / U over X, Y, Z (${ss.response.model.capacities.length} graded cells)`,
+        ss.agreement.max,
+        STATE_SPACE_AGREEMENT_LIMIT,
+      ),
+      engineCheck(
+        "state-space-reciprocity",
+        "max_j |q_i per T_o pulse + q_o per T_i pulse| / U of the state-space model",
+        ss.response.reciprocityError,
+        1e-9,
+      ),
+      ...ctf.checks,
+    ],
+    notes: ctf.notes,
+  };
 }
 
 function periodicFactors(hourly: RootAnalysis): PeriodicFactors {
@@ -211,7 +186,7 @@ export function analyseConstruction(
       (input.outsideResistance > 0 ? 1 : 0) + input.layers.length,
     ),
     iso13786: iso,
-    checks: buildChecks(air, surface, airToAir, surfaceToSurface, hourly, periodic, stateSpace),
+    ...buildChecks(air, surface, airToAir, surfaceToSurface, hourly, periodic, stateSpace),
   };
 }
 
@@ -223,11 +198,14 @@ function buildChecks(
   hourly: RootAnalysis,
   periodic: PeriodicFactors,
   stateSpace: StateSpaceAnalysis | null,
-): EngineCheck[] {
+): { checks: EngineCheck[]; methodNotes: MethodNote[] } {
   const harmonic = harmonicErrors(air, periodic.Y);
-  return [
-    ...rootChecks(airToAir, ""),
-    ...rootChecks(surfaceToSurface, "-surface"),
+  const air2 = rootChecks(airToAir, "");
+  const surface2 = rootChecks(surfaceToSurface, "-surface");
+  const ss = stateSpace === null ? { checks: [], notes: [] } : stateSpaceChecks(stateSpace);
+  const checks = [
+    ...air2.checks,
+    ...surface2.checks,
     engineCheck(
       "transmission-determinant",
       "max |det M − 1| / max(1, |AD|) at sampled s, air to air and surface to surface",
@@ -255,6 +233,7 @@ function buildChecks(
       periodicFoldError(hourly, periodic),
       1e-8,
     ),
-    ...(stateSpace === null ? [] : stateSpaceChecks(stateSpace)),
+    ...ss.checks,
   ];
+  return { checks, methodNotes: [...air2.notes, ...surface2.notes, ...ss.notes] };
 }

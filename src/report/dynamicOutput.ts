@@ -1,6 +1,6 @@
 /** The "Dynamic response" part after a construction's steady-state output: tables, CTFs, plots and checks. */
 import type { Construction } from "../project/model.ts";
-import type { CheckResult, ConstructionResults } from "../results/types.ts";
+import type { CheckResult, ConstructionResults, MethodNoteResult } from "../results/types.ts";
 import { COMPACT_ABOVE_CONSTRUCTIONS } from "./compact.ts";
 import { ctfSection } from "./ctfTables.ts";
 import { type DynamicView, readDynamic, seriesSum, stepResponse } from "./dynamicData.ts";
@@ -91,6 +91,7 @@ export function renderDynamicResponse(
   checksList: Trusted,
   d: DisplayUnits,
   compact = false,
+  notes: readonly MethodNoteResult[] = [],
 ): Trusted {
   const view = readDynamic(results);
   const subject = `construction:${construction.id}`;
@@ -111,7 +112,7 @@ export function renderDynamicResponse(
       ${responseFactorTable(view, d)}
       ${surfaceLine(view, d)}
       <h5>Conduction transfer functions</h5>
-      ${ctfSection(view, checks, subject, d)}
+      ${ctfSection(view, notes, subject, d)}
       <h5>Periodic response factors and conduction time series</h5>
       ${periodicTable(view, d)}
       ${plots(construction, view, `${anchor}-fig`, d)}

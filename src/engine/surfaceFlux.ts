@@ -109,30 +109,50 @@ export class SurfaceRecursion {
   }
 }
 
-/** Result of repeating a design day until its peak settles. */
+/** Result of repeating a design day until the whole day settles. */
 export interface RepeatedDay extends SurfaceFlux {
   readonly days: number;
   /** Relative change of the daily peak inside flux between the last two days. */
   readonly peakChange: number;
+  /** max over all steps of |q_i(last day) − q_i(day before)| / scale (scale: max(peak |q_i|, floor)). */
+  readonly dayChange: number;
+  /**
+   * Estimated distance of the last day from the steady-periodic day, relative to scale: the iteration contracts
+   * geometrically, so the remaining change is dayChange · ρ/(1 − ρ) with ρ the observed day-to-day contraction
+   * (at most the slowest pole's e^(−β₁·24 h)); NaN if it never settled.
+   */
+  readonly remainingEstimate: number;
+}
+
+/** Largest number of repeated days; never reached by the constructions the pole budget admits (sweep test). */
+export const MAX_REPEATED_DAYS = 20000;
+
+/** Slowest mode's decay over one day of `steps` steps, q₁^steps (0 without poles). */
+function dailyContraction(ratios: readonly number[], steps: number): number {
+  const q1 = Math.max(0, ...ratios);
+  return q1 ** steps;
 }
 
 /**
- * Runs the design day again and again through the modal recursion (starting from a steady state at the
- * daily means) until the daily peak inside flux changes by less than `relativeTolerance`.
+ * Runs the design day again and again through the modal recursion (starting from a steady state at the daily
+ * means) until the whole day's inside flux is estimated to lie within `relativeTolerance` of the steady-periodic
+ * day (see `RepeatedDay.remainingEstimate`); `scaleFloor` (W/m², e.g. U × 1 K) keeps the scale of a nearly
+ * flux-free day away from zero.
  */
 export function repeatedDayFlux(
   modes: FluxModes,
   solAirC: readonly number[],
   indoorC: readonly number[],
   relativeTolerance = 1e-4,
-  maxDays = 2000,
+  maxDays = MAX_REPEATED_DAYS,
+  scaleFloor = 0,
 ): RepeatedDay {
   const run = new SurfaceRecursion(modes, meanOf(solAirC), meanOf(indoorC));
   return repeatUntilSettled(
     solAirC.length,
     (k) => run.step(solAirC[k]!, indoorC[k]!),
-    relativeTolerance,
-    maxDays,
+    { tolerance: relativeTolerance, maxDays, scaleFloor },
+    dailyContraction([...modes.X.ratios, ...modes.Y.ratios, ...modes.Z.ratios], solAirC.length),
   );
 }
 
@@ -155,7 +175,8 @@ export function ctfRepeatedDayFlux(
   solAirC: readonly number[],
   indoorC: readonly number[],
   relativeTolerance = 1e-4,
-  maxDays = 2000,
+  maxDays = MAX_REPEATED_DAYS,
+  scaleFloor = 0,
 ): RepeatedDay {
   const meanOut = meanOf(solAirC);
   const meanIn = meanOf(indoorC);
@@ -187,20 +208,29 @@ export function ctfRepeatedDayFlux(
     qOut.length = history;
     return [qi, qo];
   };
-  return repeatUntilSettled(solAirC.length, step, relativeTolerance, maxDays);
+  // The CTF's poles are not at hand here: the contraction is the observed one alone.
+  return repeatUntilSettled(solAirC.length, step, { tolerance: relativeTolerance, maxDays, scaleFloor }, 1);
 }
 
-/** Repeats a day (one call of `step` per time step) until the daily peak |inside flux| settles. */
+/**
+ * Repeats a day (one call of `step` per time step) until the whole day's inside flux settles: the day-to-day
+ * change over all steps, extrapolated geometrically with the observed contraction ρ (capped at `contraction`, the
+ * slowest pole's decay over a day), estimates the distance to the steady-periodic day; stop when it and the change
+ * itself are below the tolerance.
+ */
 function repeatUntilSettled(
   steps: number,
   step: (k: number) => [number, number],
-  relativeTolerance: number,
-  maxDays: number,
+  options: { readonly tolerance: number; readonly maxDays: number; readonly scaleFloor: number },
+  contraction: number,
 ): RepeatedDay {
-  let previousPeak = NaN;
+  let previous: number[] = [];
+  let previousChange = NaN;
+  let previousRatio = 0;
   let inside: number[] = [];
   let outside: number[] = [];
-  for (let day = 1; day <= maxDays; day++) {
+  let last = { peakChange: NaN, dayChange: NaN };
+  for (let day = 1; day <= options.maxDays; day++) {
     inside = [];
     outside = [];
     for (let k = 0; k < steps; k++) {
@@ -209,13 +239,32 @@ function repeatUntilSettled(
       outside.push(qo);
     }
     const peak = Math.max(...inside.map(Math.abs));
-    const change = Math.abs(peak - previousPeak) / Math.max(peak, 1e-12);
-    if (day >= 2 && change < relativeTolerance) {
-      return { insideWPerM2: inside, outsideWPerM2: outside, days: day, peakChange: change };
+    const scale = Math.max(peak, options.scaleFloor, 1e-300);
+    if (day >= 2) {
+      let change = 0;
+      for (let k = 0; k < steps; k++) change = Math.max(change, Math.abs(inside[k]! - previous[k]!));
+      const dayChange = change / scale;
+      const previousPeak = Math.max(...previous.map(Math.abs));
+      last = { peakChange: Math.abs(peak - previousPeak) / Math.max(peak, 1e-12), dayChange };
+      const ratio = previousChange > 0 ? dayChange / previousChange : 0;
+      // The larger of the last two observed contractions, never above the slowest pole's (nor 1 − 1e-9).
+      const rho = Math.min(Math.max(ratio, previousRatio), contraction, 1 - 1e-9);
+      const remainingEstimate = (dayChange * rho) / (1 - rho);
+      if (day >= 3 && dayChange <= options.tolerance && remainingEstimate <= options.tolerance) {
+        return { insideWPerM2: inside, outsideWPerM2: outside, days: day, ...last, remainingEstimate };
+      }
+      previousChange = dayChange;
+      previousRatio = ratio;
     }
-    previousPeak = peak;
+    previous = inside;
   }
-  return { insideWPerM2: inside, outsideWPerM2: outside, days: maxDays, peakChange: NaN };
+  return {
+    insideWPerM2: inside,
+    outsideWPerM2: outside,
+    days: options.maxDays,
+    ...last,
+    remainingEstimate: NaN,
+  };
 }
 
 function meanOf(xs: readonly number[]): number {

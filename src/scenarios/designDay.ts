@@ -21,8 +21,17 @@ export interface ScenarioOutcome {
   readonly warnings: readonly SurfaceWarning[];
 }
 
-/** Limit of the periodic-convergence check: recursion vs periodic response factors, relative to the peak flux. */
-export const PERIODIC_CONVERGENCE_LIMIT = 1e-3;
+/**
+ * Convergence criterion of the repeated day: the whole day's inside flux is estimated (geometric extrapolation of the
+ * day-to-day change) to lie within this fraction of max(peak |q|, U × 1 K) of the steady-periodic day.
+ */
+export const PERIODIC_CONVERGENCE_TOLERANCE = 1e-4;
+/**
+ * Limit of the periodic-convergence check (recursion vs periodic response factors, every step of the day, relative
+ * to max(peak |q|, U × 1 K)): ten times the convergence criterion, because the recursion's distance from the periodic
+ * day is only estimated; roundoff of either route is below 1e-12 and does not count.
+ */
+export const PERIODIC_CONVERGENCE_LIMIT = 10 * PERIODIC_CONVERGENCE_TOLERANCE;
 /** Limit of the daily energy balance, relative to U × max(1 K, |mean T_sa − mean T_i|). */
 export const ENERGY_BALANCE_LIMIT = 1e-6;
 
@@ -86,8 +95,16 @@ export function computeDesignDay(scenario: DesignDayScenario, context: ScenarioC
     const flux = steadyPeriodicFlux(analysis.airToAir.modes, solAir, indoor);
     const root = analysis.airToAir;
     const recursion = root.ctfAccepted
-      ? ctfRepeatedDayFlux(root.ctfCandidate.ctf, root.uValue, solAir, indoor)
-      : repeatedDayFlux(root.modes, solAir, indoor);
+      ? ctfRepeatedDayFlux(
+        root.ctfCandidate.ctf,
+        root.uValue,
+        solAir,
+        indoor,
+        PERIODIC_CONVERGENCE_TOLERANCE,
+        undefined,
+        root.uValue,
+      )
+      : repeatedDayFlux(root.modes, solAir, indoor, PERIODIC_CONVERGENCE_TOLERANCE, undefined, root.uValue);
     convergenceDays = Math.max(convergenceDays, recursion.days);
     convergenceChange = Math.max(convergenceChange, recursion.peakChange);
     const subject = `scenario:${scenario.id}/${surface.id}`;
@@ -101,9 +118,11 @@ export function computeDesignDay(scenario: DesignDayScenario, context: ScenarioC
         subject,
         `${
           root.ctfAccepted ? "Polynomial CTF" : "Modal"
-        } recursion repeated ${recursion.days} days (peak change ${
-          recursion.peakChange.toExponential(2)
-        }) versus periodic response factors: max |Δq| / peak`,
+        } recursion repeated ${recursion.days} days (last day-to-day change ${
+          recursion.dayChange.toExponential(2)
+        }, estimated remaining ${
+          recursion.remainingEstimate.toExponential(2)
+        }) versus periodic response factors: max over the day's steps |Δq| / max(peak |q|, U × 1 K)`,
         difference,
         PERIODIC_CONVERGENCE_LIMIT,
       ),

@@ -71,7 +71,10 @@ function sumRuleChecks(root: RootAnalysis, suffix: string): EngineCheck[] {
   );
 }
 
-function rootChecks(root: RootAnalysis, suffix: string): { checks: EngineCheck[]; notes: readonly MethodNote[] } {
+function rootChecks(
+  root: RootAnalysis,
+  suffix: string,
+): { checks: EngineCheck[]; notes: readonly MethodNote[] } {
   const ctf = rootCtfOutcome(root, suffix);
   return {
     checks: [
@@ -97,8 +100,10 @@ function stateSpaceChecks(ss: StateSpaceAnalysis): { checks: EngineCheck[]; note
     checks: [
       engineCheck(
         "state-space-agreement",
-        `max_j |RF state space − RF roots| / U over X, Y, Z (${ss.response.model.capacities.length} graded cells)`,
-        ss.agreement.max,
+        `max_j |RF state space − RF roots| / max(U, max_j |RF roots|), each of X, Y, Z against its own magnitude (${ss.response.model.capacities.length} graded cells; / U alone: ${
+          ss.agreement.max.toExponential(2)
+        })`,
+        ss.relativeAgreement.max,
         STATE_SPACE_AGREEMENT_LIMIT,
       ),
       engineCheck(

@@ -1,4 +1,5 @@
 import { periodicFromModes } from "./periodic.ts";
+import { insideFluxBound, type RepeatedDayBound } from "./periodicStart.ts";
 import type { PulseModes } from "./pulseModes.ts";
 
 /** The modal form of X, Y and Z of one construction at the scenario timestep (air to air). */
@@ -117,9 +118,8 @@ export interface RepeatedDay extends SurfaceFlux {
   /** max over all steps of |q_i(last day) − q_i(day before)| / scale (scale: max(peak |q_i|, floor)). */
   readonly dayChange: number;
   /**
-   * Estimated distance of the last day from the steady-periodic day, relative to scale: the iteration contracts
-   * geometrically, so the remaining change is dayChange · ρ/(1 − ρ) with ρ the observed day-to-day contraction
-   * (at most the slowest pole's e^(−β₁·24 h)); NaN if it never settled.
+   * Bound of the last day's distance from the steady-periodic day at any step, relative to scale (`periodicStart.ts`:
+   * a priori, from the modes and the day's inputs); NaN if it never came below the tolerance.
    */
   readonly remainingEstimate: number;
 }
@@ -127,17 +127,10 @@ export interface RepeatedDay extends SurfaceFlux {
 /** Largest number of repeated days; never reached by the constructions the pole budget admits (sweep test). */
 export const MAX_REPEATED_DAYS = 20000;
 
-/** Slowest mode's decay over one day of `steps` steps, q₁^steps (0 without poles). */
-function dailyContraction(ratios: readonly number[], steps: number): number {
-  const q1 = Math.max(0, ...ratios);
-  return q1 ** steps;
-}
-
 /**
  * Runs the design day again and again through the modal recursion (starting from a steady state at the daily
- * means) until the whole day's inside flux is estimated to lie within `relativeTolerance` of the steady-periodic
- * day (see `RepeatedDay.remainingEstimate`); `scaleFloor` (W/m², e.g. U × 1 K) keeps the scale of a nearly
- * flux-free day away from zero.
+ * means) until the bound of the whole day's distance from the steady-periodic day (`insideFluxBound`) and the last
+ * day-to-day change are both below `relativeTolerance` of max(peak |q_i|, `scaleFloor`) (W/m², e.g. U × 1 K).
  */
 export function repeatedDayFlux(
   modes: FluxModes,
@@ -152,7 +145,7 @@ export function repeatedDayFlux(
     solAirC.length,
     (k) => run.step(solAirC[k]!, indoorC[k]!),
     { tolerance: relativeTolerance, maxDays, scaleFloor },
-    dailyContraction([...modes.X.ratios, ...modes.Y.ratios, ...modes.Z.ratios], solAirC.length),
+    insideFluxBound(modes, solAirC, indoorC),
   );
 }
 
@@ -177,6 +170,7 @@ export function ctfRepeatedDayFlux(
   relativeTolerance = 1e-4,
   maxDays = MAX_REPEATED_DAYS,
   scaleFloor = 0,
+  modes?: FluxModes,
 ): RepeatedDay {
   const meanOut = meanOf(solAirC);
   const meanIn = meanOf(indoorC);
@@ -208,25 +202,29 @@ export function ctfRepeatedDayFlux(
     qOut.length = history;
     return [qi, qo];
   };
-  // The CTF's poles are not at hand here: the contraction is the observed one alone.
-  return repeatUntilSettled(solAirC.length, step, { tolerance: relativeTolerance, maxDays, scaleFloor }, 1);
+  // The CTF reproduces the response of the modal form it was built from (resynthesis to 1e-6 U, the same slowest
+  // poles), so that form's bound tells how many days the CTF's start needs too; without it, the change alone decides.
+  const bound = modes === undefined ? { after: () => 0 } : insideFluxBound(modes, solAirC, indoorC);
+  return repeatUntilSettled(
+    solAirC.length,
+    step,
+    { tolerance: relativeTolerance, maxDays, scaleFloor },
+    bound,
+  );
 }
 
 /**
- * Repeats a day (one call of `step` per time step) until the whole day's inside flux settles: the day-to-day
- * change over all steps, extrapolated geometrically with the observed contraction ρ (capped at `contraction`, the
- * slowest pole's decay over a day), estimates the distance to the steady-periodic day; stop when it and the change
- * itself are below the tolerance.
+ * Repeats a day (one call of `step` per time step) until the a priori bound of the day's distance from the
+ * steady-periodic day and the day-to-day change over all steps are both below the tolerance (relative to
+ * max(peak |q_i|, floor)); at least two days.
  */
 function repeatUntilSettled(
   steps: number,
   step: (k: number) => [number, number],
   options: { readonly tolerance: number; readonly maxDays: number; readonly scaleFloor: number },
-  contraction: number,
+  bound: RepeatedDayBound,
 ): RepeatedDay {
   let previous: number[] = [];
-  let previousChange = NaN;
-  let previousRatio = 0;
   let inside: number[] = [];
   let outside: number[] = [];
   let last = { peakChange: NaN, dayChange: NaN };
@@ -243,18 +241,12 @@ function repeatUntilSettled(
     if (day >= 2) {
       let change = 0;
       for (let k = 0; k < steps; k++) change = Math.max(change, Math.abs(inside[k]! - previous[k]!));
-      const dayChange = change / scale;
       const previousPeak = Math.max(...previous.map(Math.abs));
-      last = { peakChange: Math.abs(peak - previousPeak) / Math.max(peak, 1e-12), dayChange };
-      const ratio = previousChange > 0 ? dayChange / previousChange : 0;
-      // The larger of the last two observed contractions, never above the slowest pole's (nor 1 − 1e-9).
-      const rho = Math.min(Math.max(ratio, previousRatio), contraction, 1 - 1e-9);
-      const remainingEstimate = (dayChange * rho) / (1 - rho);
-      if (day >= 3 && dayChange <= options.tolerance && remainingEstimate <= options.tolerance) {
+      last = { peakChange: Math.abs(peak - previousPeak) / Math.max(peak, 1e-12), dayChange: change / scale };
+      const remainingEstimate = bound.after(day) / scale;
+      if (last.dayChange <= options.tolerance && remainingEstimate <= options.tolerance) {
         return { insideWPerM2: inside, outsideWPerM2: outside, days: day, ...last, remainingEstimate };
       }
-      previousChange = dayChange;
-      previousRatio = ratio;
     }
     previous = inside;
   }

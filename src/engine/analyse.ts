@@ -8,7 +8,7 @@ import { harmonicErrors } from "./harmonicCheck.ts";
 import { iso13786, type Iso13786Characteristics } from "./iso13786.ts";
 import type { ConstructionInput } from "./layer.ts";
 import { foldPeriodic, periodicFromModes } from "./periodic.ts";
-import { foldedModalTail, modalTailSum, pulseModes } from "./pulseModes.ts";
+import { foldedModalTail, modalTailSum, type PulseModes, pulseModes } from "./pulseModes.ts";
 import { responseFactors } from "./responseFactors.ts";
 import { type RootAnalysis, rootAnalysis } from "./rootAnalysis.ts";
 import {
@@ -60,21 +60,25 @@ export function isValidTimestep(timestepS: number): boolean {
 }
 
 /**
- * Σ RF = U over the listed terms plus the closed-form tail of the modal form past them: the listed series is cut
+ * |Σ RF − U| / U over the listed terms plus the closed-form tail of the modal form past them: the listed series is cut
  * once its tail is below 1e-10 U or at `MAX_RESPONSE_FACTOR_TERMS` (very slow constructions), and that cut is
  * reported as `truncationResidual`, not as a failed identity.
  */
+export function sumRuleWithTail(series: readonly number[], modes: PulseModes, uValue: number): number {
+  const listed = series.reduce((s, v) => s + v, 0);
+  return Math.abs(listed + modalTailSum(modes, series.length) - uValue) / uValue;
+}
+
 function sumRuleChecks(root: RootAnalysis, suffix: string): EngineCheck[] {
   const rf = root.responseFactors;
   return (["X", "Y", "Z"] as const).map((key) => {
     const tail = modalTailSum(root.modes[key], rf.termCount);
-    const listed = rf[key].reduce((s, v) => s + v, 0);
     return engineCheck(
       `sum-rule-${key}${suffix}`,
       `|Σ ${key}_j − U| / U of ${rf.termCount} ${root.boundary} response factors (Δ = ${rf.timestepS} s) plus their closed-form tail (${
         (Math.abs(tail) / root.uValue).toExponential(1)
       } U)`,
-      Math.abs(listed + tail - root.uValue) / root.uValue,
+      sumRuleWithTail(rf[key], root.modes[key], root.uValue),
       1e-8,
     );
   });
@@ -133,7 +137,8 @@ function periodicFactors(hourly: RootAnalysis): PeriodicFactors {
   return { X: periodic("X"), Y, Z: periodic("Z"), cts: Y.map((v) => v / hourly.uValue) };
 }
 
-function periodicFoldError(hourly: RootAnalysis, periodic: PeriodicFactors): number {
+/** Closed-form periodic factors versus the folded hourly response factors plus their folded tail, max / U. */
+export function periodicFoldError(hourly: RootAnalysis, periodic: PeriodicFactors): number {
   let worst = 0;
   for (const key of ["X", "Y", "Z"] as const) {
     const tail = foldedModalTail(hourly.modes[key], hourly.responseFactors.termCount, 24);

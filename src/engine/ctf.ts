@@ -105,6 +105,12 @@ function sum(values: readonly number[]): number {
   return values.reduce((s, v) => s + v, 0);
 }
 
+/** max over X, Y, Z of |ΣCTF / (1 − ΣΦ) − U| / U (the steady-state identity of a CTF). */
+export function ctfIdentityError(ctf: Ctf, uValue: number): number {
+  const sd = 1 - sum(ctf.Phi);
+  return Math.max(...[ctf.X, ctf.Y, ctf.Z].map((num) => Math.abs(sum(num) / sd - uValue) / uValue));
+}
+
 /**
  * Roundoff bound of |Σb/Σd − U| / U for the CTF of the ratios q_n (Higham, Accuracy and Stability of Numerical
  * Algorithms, 2nd ed., §3.1: a sum or product chain of m terms carries at most γ_m = m u/(1 − m u) relative error
@@ -148,10 +154,7 @@ export function ctfCandidate(
   const Y = numeratorByConvolution(rf.Y, d);
   const Z = numeratorByConvolution(rf.Z, d);
   const Phi = d.slice(1).map((v) => -v);
-  const sd = sum(d);
-  const identityError = Math.max(
-    ...[X, Y, Z].map((num) => Math.abs(sum(num) / sd - uValue) / uValue),
-  );
+  const identityError = ctfIdentityError({ X, Y, Z, Phi }, uValue);
   const all = [...X, ...Y, ...Z, ...Phi];
   const maxAbsCoefficient = all.reduce((m, v) => Math.max(m, Math.abs(v)), 0);
   // A candidate over the coefficient bound is rejected whatever its resynthesis: skip the long division.

@@ -47,7 +47,11 @@ const REMESH_ABOVE = 0.9 * STATE_SPACE_AGREEMENT_LIMIT;
 const COARSEST_SPACING = 0.3;
 const MAX_CELLS = 400;
 
-function agreementOf(ss: ResponseFactors, root: ResponseFactors, u: number, relative = false) {
+/**
+ * max_j |RF_ss − RF_root| for X, Y, Z, divided by U, or with `relative` by max(U, max_j |RF_root|) of each series
+ * (terms past the state-space listing count in full).
+ */
+export function agreementOf(ss: ResponseFactors, root: ResponseFactors, u: number, relative = false) {
   const one = (a: readonly number[], b: readonly number[]) => {
     let worst = 0;
     let magnitude = u;

@@ -231,14 +231,13 @@ export function renderConstructionOutput(
     ${renderDynamicResponse(
       construction,
       results,
-      checks,
+      notes,
       anchor,
       compact
         ? compactChecks(checks, `construction:${construction.id}`)
         : subjectChecks(checks, `construction:${construction.id}`),
       d,
       compact,
-      notes,
     )}
   `;
 }

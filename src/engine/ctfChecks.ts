@@ -6,6 +6,7 @@
 import { type EngineCheck, engineCheck, type MethodNote } from "./check.ts";
 import {
   CTF_MAX_COEFFICIENT,
+  CTF_MAX_IDENTITY_ROUNDOFF,
   CTF_MAX_RESYNTHESIS_ERROR,
   type CtfCandidate,
   ctfRejectionReasons,
@@ -36,14 +37,22 @@ function outcome(
   figures: EngineCheck[],
   noteId: string,
   what: string,
+  conditioningId: string,
 ): CtfOutcome {
   if (accepted) return { checks: figures, notes: [] };
+  // Conditioning has no check row of its own: a published CTF meets it through its identity limit.
+  const conditioning = engineCheck(
+    conditioningId,
+    "Roundoff bound of the CTF's steady-state gain from its coefficients' conditioning, relative to U",
+    c.identityRoundoff,
+    CTF_MAX_IDENTITY_ROUNDOFF,
+  );
   const note: MethodNote = {
     id: noteId,
     text: `Method choice: modal form used for ${what}; no polynomial CTF is published because ${
       ctfRejectionReasons(c).join("; ")
     } (best candidate: ${c.ctf.Phi.length} poles)`,
-    figures,
+    figures: [...figures, conditioning],
   };
   return { checks: [], notes: [note] };
 }
@@ -72,6 +81,7 @@ export function rootCtfOutcome(root: RootAnalysis, suffix: string): CtfOutcome {
     figures,
     `ctf-modal-form${suffix}`,
     `the root method, ${root.boundary}`,
+    `ctf-conditioning${suffix}`,
   );
 }
 
@@ -99,5 +109,6 @@ export function stateSpaceCtfOutcome(ss: StateSpaceAnalysis): CtfOutcome {
     figures,
     "ctf-state-space-modal-form",
     "the state-space method, air-to-air",
+    "ctf-state-space-conditioning",
   );
 }

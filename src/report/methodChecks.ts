@@ -14,7 +14,7 @@ const CHECK_MEANING: readonly (readonly [id: string, meaning: string])[] = [
   ],
   [
     "ctf-identity",
-    "Steady-state identity of the root CTF: max |Σ CTF / (1 − Σ Φ) − U| / U over X, Y, Z (3.5).",
+    "Steady-state identity of the root CTF: max |Σ CTF / (1 − Σ Φ) − U| / U over X, Y, Z; limit max(10⁻⁶, its roundoff bound) (3.5).",
   ],
   ["ctf-resynthesis", "Long division of the root CTF against the response factors, max error / U (3.5)."],
   [

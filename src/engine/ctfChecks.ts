@@ -51,7 +51,7 @@ function outcome(
     id: noteId,
     text: `Method choice: modal form used for ${what}; no polynomial CTF is published because ${
       ctfRejectionReasons(c).join("; ")
-    } (best candidate: ${c.ctf.Phi.length} poles)`,
+    } (best candidate tried: ${c.ctf.Phi.length} poles)`,
     figures: [...figures, conditioning],
   };
   return { checks: [], notes: [note] };

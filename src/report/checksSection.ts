@@ -57,7 +57,7 @@ function methodNotesTable(ctx: RenderContext): Trusted {
     html`<tr><td>${n.id}</td>${subjectCell(n.subject, ctx)}<td>${n.text}</td><td class="note">NOTE</td></tr>`
   );
   return html`
-    <p>Method notes: choices of numerical form, not checks. A polynomial CTF that is not published is replaced by the modal form, which every computed flux uses; its acceptance figures are listed with the construction.</p>
+    <p>Method notes: choices of numerical form, not checks. A polynomial CTF that is not published is replaced by the modal form, which every computed flux uses; its acceptance figures are in results.json <code>methodNotes</code> and, for the air-to-air CTFs, with the construction.</p>
     <table class="method-notes">
       <thead>
         <tr>

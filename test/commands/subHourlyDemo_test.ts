@@ -54,4 +54,8 @@ Deno.test("the demo with its roof and design day at 5 min builds (exit 0): no fa
   assert.match(summary, /all \d+ passed/);
   assert.match(summary, /Method notes: \d+ \(a numerical form chosen, not a failure\)/);
   assert.ok(!html.includes(`class="check-summary has-failures"`), "no failure box on the cover");
+  // Section 4 lists the notes apart from the checks, each as a NOTE, and no check cell says FAIL.
+  const noteRows = html.match(/<td class="note">NOTE<\/td>/g) ?? [];
+  assert.equal(noteRows.length, notes.length);
+  assert.ok(!html.includes(`<td class="fail">FAIL</td>`));
 });

@@ -18,14 +18,25 @@ export interface CtfCandidate {
   readonly resynthesisError: number;
   /** max over X, Y, Z of |ΣCTF/(1 − ΣΦ) − U| / U */
   readonly identityError: number;
+  /** Roundoff bound of `identityError` from the coefficients' conditioning (see `identityRoundoffBound`). */
+  readonly identityRoundoff: number;
+  /** Limit of `identityError`: max(`CTF_MAX_IDENTITY_ERROR`, `identityRoundoff`). */
+  readonly identityLimit: number;
 }
 
 /** Limits for accepting a polynomial CTF. */
 export const CTF_MAX_COEFFICIENT = 1e3;
 /** Largest accepted resynthesis error, relative to U. */
 export const CTF_MAX_RESYNTHESIS_ERROR = 1e-6;
-/** Largest accepted |ΣCTF/(1 − ΣΦ) − U| / U. */
+/** Largest accepted |ΣCTF/(1 − ΣΦ) − U| / U when roundoff allows less (the floor of the identity limit). */
 export const CTF_MAX_IDENTITY_ERROR = 1e-6;
+/**
+ * Largest roundoff bound of the steady-state gain a published CTF may have: a CTF whose own coefficients cannot
+ * carry its gain to 1e-4 in double precision is ill-conditioned and the modal form is used instead.
+ */
+export const CTF_MAX_IDENTITY_ROUNDOFF = 1e-4;
+/** Unit roundoff of IEEE 754 double precision, 2^−53. */
+const UNIT_ROUNDOFF = 2 ** -53;
 /** Resynthesis error at which the pole search stops adding poles, relative to U. */
 const CTF_TARGET_ERROR = 1e-9;
 
@@ -94,6 +105,43 @@ function sum(values: readonly number[]): number {
   return values.reduce((s, v) => s + v, 0);
 }
 
+/** max over X, Y, Z of |ΣCTF / (1 − ΣΦ) − U| / U (the steady-state identity of a CTF). */
+export function ctfIdentityError(ctf: Ctf, uValue: number): number {
+  const sd = 1 - sum(ctf.Phi);
+  return Math.max(...[ctf.X, ctf.Y, ctf.Z].map((num) => Math.abs(sum(num) / sd - uValue) / uValue));
+}
+
+/**
+ * Roundoff bound of |Σb/Σd − U| / U for the CTF of the ratios q_n (Higham, Accuracy and Stability of Numerical
+ * Algorithms, 2nd ed., §3.1: a sum or product chain of m terms carries at most γ_m = m u/(1 − m u) relative error
+ * of the sum of absolute values). The expansion of d(z) = Π(1 − q_n z⁻¹) errs by at most γ_N times the coefficients
+ * of Π(1 + q_n z⁻¹), whose sum is Π(1 + q_n); the numerators b = RF ∗ d add Σ|RF_j| times that. Summing N + 2
+ * terms and dividing add γ_(N+3). Relative to Σb ≈ U Σd the bound is
+ * γ_(2N+5) · Π(1 + q_n)/Σd · (1 + Σ_(j≤N+1) |RF_j| / U), worst over X, Y, Z.
+ */
+export function identityRoundoffBound(
+  ratios: readonly number[],
+  rf: ResponseFactors,
+  uValue: number,
+): number {
+  const n = ratios.length;
+  const m = 2 * n + 5;
+  const gamma = (m * UNIT_ROUNDOFF) / (1 - m * UNIT_ROUNDOFF);
+  let absProduct = 1;
+  let product = 1;
+  for (const q of ratios) {
+    absProduct *= 1 + q;
+    product *= 1 - q;
+  }
+  let worstRf = 0;
+  for (const series of [rf.X, rf.Y, rf.Z]) {
+    let s = 0;
+    for (let j = 0; j <= n + 1 && j < series.length; j++) s += Math.abs(series[j]!);
+    worstRf = Math.max(worstRf, s / uValue);
+  }
+  return (gamma * absProduct * (1 + worstRf)) / product;
+}
+
 /** Builds the CTF from the first `poleCount` ratios q_n and checks it against the response factors. */
 export function ctfCandidate(
   ratios: readonly number[],
@@ -106,10 +154,7 @@ export function ctfCandidate(
   const Y = numeratorByConvolution(rf.Y, d);
   const Z = numeratorByConvolution(rf.Z, d);
   const Phi = d.slice(1).map((v) => -v);
-  const sd = sum(d);
-  const identityError = Math.max(
-    ...[X, Y, Z].map((num) => Math.abs(sum(num) / sd - uValue) / uValue),
-  );
+  const identityError = ctfIdentityError({ X, Y, Z, Phi }, uValue);
   const all = [...X, ...Y, ...Z, ...Phi];
   const maxAbsCoefficient = all.reduce((m, v) => Math.max(m, Math.abs(v)), 0);
   // A candidate over the coefficient bound is rejected whatever its resynthesis: skip the long division.
@@ -120,26 +165,59 @@ export function ctfCandidate(
       maxError(Y, d, rf.Y, uValue, stopAbove),
       maxError(Z, d, rf.Z, uValue, stopAbove),
     );
+  const roundoff = identityRoundoffBound(ratios, rf, uValue);
+  const identityRoundoff = Number.isFinite(roundoff) ? roundoff : Infinity;
   return {
     ctf: { X, Y, Z, Phi },
     maxAbsCoefficient,
     resynthesisError: Number.isNaN(resynthesisError) ? Infinity : resynthesisError,
     identityError: Number.isNaN(identityError) ? Infinity : identityError,
+    identityRoundoff,
+    identityLimit: Math.max(CTF_MAX_IDENTITY_ERROR, identityRoundoff),
   };
 }
 
-/** Worst of the three acceptance ratios (≤ 1 means accepted). */
+/** Worst of the acceptance ratios (≤ 1 means accepted). */
 function score(c: CtfCandidate): number {
   return Math.max(
     c.resynthesisError / CTF_MAX_RESYNTHESIS_ERROR,
-    c.identityError / CTF_MAX_IDENTITY_ERROR,
+    c.identityError / c.identityLimit,
+    c.identityRoundoff / CTF_MAX_IDENTITY_ROUNDOFF,
     c.maxAbsCoefficient / CTF_MAX_COEFFICIENT,
   );
 }
 
+/** Why a candidate is not accepted: each failed criterion with its value and limit (empty when accepted). */
+export function ctfRejectionReasons(c: CtfCandidate): string[] {
+  const reasons: string[] = [];
+  const e = (v: number) => v.toExponential(2);
+  if (!(c.resynthesisError <= CTF_MAX_RESYNTHESIS_ERROR)) {
+    reasons.push(
+      `its long division misses the response factors by ${e(c.resynthesisError)} U (limit ${
+        e(CTF_MAX_RESYNTHESIS_ERROR)
+      } U)`,
+    );
+  }
+  if (!(c.maxAbsCoefficient <= CTF_MAX_COEFFICIENT)) {
+    reasons.push(
+      `its largest coefficient is ${e(c.maxAbsCoefficient)} (limit ${e(CTF_MAX_COEFFICIENT)}: cancellation)`,
+    );
+  }
+  if (!(c.identityRoundoff <= CTF_MAX_IDENTITY_ROUNDOFF)) {
+    reasons.push(
+      `its coefficients are ill-conditioned: roundoff alone could move its steady-state gain by ${
+        e(c.identityRoundoff)
+      } U (limit ${e(CTF_MAX_IDENTITY_ROUNDOFF)} U)`,
+    );
+  } else if (!(c.identityError <= c.identityLimit)) {
+    reasons.push(`its steady-state gain is off by ${e(c.identityError)} U (limit ${e(c.identityLimit)} U)`);
+  }
+  return reasons;
+}
+
 /**
  * Smallest pole set (slowest first) whose CTF resynthesises the response factors to 1e-9 U with the identity to
- * 1e-8; otherwise the candidate with the best acceptance score.
+ * 1e-8 (or to its roundoff bound, if larger); otherwise the candidate with the best acceptance score.
  */
 export function selectCtf(ratios: readonly number[], rf: ResponseFactors, uValue: number): CtfCandidate {
   const usable = ratios.filter((q) => q > 1e-12);
@@ -148,7 +226,10 @@ export function selectCtf(ratios: readonly number[], rf: ResponseFactors, uValue
     const stopAbove = Math.max(best?.resynthesisError ?? Infinity, CTF_MAX_RESYNTHESIS_ERROR);
     const candidate = ctfCandidate(usable.slice(0, n), rf, uValue, stopAbove);
     if (best === undefined || score(candidate) < score(best)) best = candidate;
-    if (candidate.resynthesisError <= CTF_TARGET_ERROR && candidate.identityError <= 10 * CTF_TARGET_ERROR) {
+    if (
+      candidate.resynthesisError <= CTF_TARGET_ERROR &&
+      candidate.identityError <= Math.max(10 * CTF_TARGET_ERROR, candidate.identityRoundoff)
+    ) {
       break;
     }
     if (candidate.maxAbsCoefficient > CTF_MAX_COEFFICIENT && best.maxAbsCoefficient <= CTF_MAX_COEFFICIENT) {

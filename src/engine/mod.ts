@@ -6,7 +6,7 @@
 export type { ConstructionInput, Layer } from "./layer.ts";
 export { type SteadyState, steadyState } from "./steady.ts";
 export type { Unresolvable, UnresolvableReason } from "./engineError.ts";
-export type { EngineCheck } from "./check.ts";
+export type { EngineCheck, MethodNote } from "./check.ts";
 export {
   analyseConstruction,
   type AnalysisOptions,
@@ -18,6 +18,7 @@ export {
   constructionChecksJson,
   type ConstructionDynamicJson,
   constructionDynamicJson,
+  constructionMethodNotesJson,
 } from "./resultsJson.ts";
 export type { RootAnalysis } from "./rootAnalysis.ts";
 export type { StateSpaceAnalysis } from "./stateSpaceAnalysis.ts";

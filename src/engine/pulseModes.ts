@@ -88,3 +88,28 @@ export function modalConvolve(modes: PulseModes, input: readonly number[]): numb
     return value;
   });
 }
+
+/** Σ_(j≥terms) RF_j of a modal form in closed form: Σ_n c_n q_n^(terms−1)/(1 − q_n) (terms ≥ 2). */
+export function modalTailSum(modes: PulseModes, terms: number): number {
+  let sum = 0;
+  modes.ratios.forEach((q, n) => {
+    if (!(q > 0)) return;
+    sum += (modes.coefficients[n]! * Math.exp((terms - 1) * Math.log(q))) / -Math.expm1(Math.log(q));
+  });
+  return sum;
+}
+
+/** The tail Σ_(j≥terms) RF_j folded into `period` residues j mod period, in closed form (terms ≥ 2). */
+export function foldedModalTail(modes: PulseModes, terms: number, period: number): number[] {
+  const out = new Array<number>(period).fill(0);
+  modes.ratios.forEach((q, n) => {
+    if (!(q > 0)) return;
+    const logQ = Math.log(q);
+    const c = modes.coefficients[n]! / -Math.expm1(period * logQ);
+    for (let r = 0; r < period; r++) {
+      const first = terms + ((((r - terms) % period) + period) % period);
+      out[r] = out[r]! + c * Math.exp((first - 1) * logQ);
+    }
+  });
+  return out;
+}

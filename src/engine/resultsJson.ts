@@ -126,3 +126,13 @@ export function constructionChecksJson(constructionId: string, analysis: Dynamic
     pass: c.pass,
   }));
 }
+
+/** The construction's method notes as results.json `methodNotes` entries with subject `construction:<id>`. */
+export function constructionMethodNotesJson(constructionId: string, analysis: DynamicAnalysis) {
+  return analysis.methodNotes.map((n) => ({
+    id: n.id,
+    subject: `construction:${constructionId}`,
+    text: n.text,
+    figures: n.figures.map((f) => ({ id: f.id, description: f.description, value: f.value, limit: f.limit })),
+  }));
+}

@@ -13,6 +13,17 @@ export interface StateSpaceAnalysis {
   readonly response: StateSpaceResponse;
   /** max_j |RF_ss − RF_root| / U for X, Y, Z (compared terms plus a bound on the rest). */
   readonly agreement: { readonly X: number; readonly Y: number; readonly Z: number; readonly max: number };
+  /**
+   * max_j |RF_ss − RF_root| / max(U, max_j |RF_root|) for X, Y, Z: each series against its own magnitude. The
+   * self responses X, Z of a well-insulated wall start far above U (X_0/U of several hundred), and a mesh whose
+   * X_0 is right to 1e-5 of X_0 still misses by several 1e-3 U; the check compares like with like.
+   */
+  readonly relativeAgreement: {
+    readonly X: number;
+    readonly Y: number;
+    readonly Z: number;
+    readonly max: number;
+  };
   readonly ctfCandidate: CtfCandidate;
   readonly ctfAccepted: boolean;
   /** max_j |RF resynthesised from this CTF − root RF| / U. */
@@ -36,14 +47,20 @@ const REMESH_ABOVE = 0.9 * STATE_SPACE_AGREEMENT_LIMIT;
 const COARSEST_SPACING = 0.3;
 const MAX_CELLS = 400;
 
-function agreementOf(ss: ResponseFactors, root: ResponseFactors, u: number) {
+/**
+ * max_j |RF_ss − RF_root| for X, Y, Z, divided by U, or with `relative` by max(U, max_j |RF_root|) of each series
+ * (terms past the state-space listing count in full).
+ */
+export function agreementOf(ss: ResponseFactors, root: ResponseFactors, u: number, relative = false) {
   const one = (a: readonly number[], b: readonly number[]) => {
     let worst = 0;
+    let magnitude = u;
     for (let j = 0; j < b.length; j++) {
       const e = j < a.length ? Math.abs(a[j]! - b[j]!) : Math.abs(b[j]!);
       if (!(e <= worst)) worst = e;
+      if (relative) magnitude = Math.max(magnitude, Math.abs(b[j]!));
     }
-    return worst / u;
+    return worst / magnitude;
   };
   const X = one(ss.X, root.X), Y = one(ss.Y, root.Y), Z = one(ss.Z, root.Z);
   return { X, Y, Z, max: Math.max(X, Y, Z) };
@@ -106,6 +123,7 @@ export function stateSpaceAnalysis(
     cellWidths: widths,
     response,
     agreement,
+    relativeAgreement: agreementOf(response.responseFactors, root, uValue, true),
     ctfCandidate,
     ctfAccepted: ctfAccepted(ctfCandidate),
     ctfVersusRoot,

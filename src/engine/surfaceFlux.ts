@@ -1,4 +1,5 @@
 import { periodicFromModes } from "./periodic.ts";
+import { insideFluxBound, type RepeatedDayBound } from "./periodicStart.ts";
 import type { PulseModes } from "./pulseModes.ts";
 
 /** The modal form of X, Y and Z of one construction at the scenario timestep (air to air). */
@@ -109,30 +110,42 @@ export class SurfaceRecursion {
   }
 }
 
-/** Result of repeating a design day until its peak settles. */
+/** Result of repeating a design day until the whole day settles. */
 export interface RepeatedDay extends SurfaceFlux {
   readonly days: number;
   /** Relative change of the daily peak inside flux between the last two days. */
   readonly peakChange: number;
+  /** max over all steps of |q_i(last day) − q_i(day before)| / scale (scale: max(peak |q_i|, floor)). */
+  readonly dayChange: number;
+  /**
+   * Bound of the last day's distance from the steady-periodic day at any step, relative to scale (`periodicStart.ts`:
+   * a priori, from the modes and the day's inputs); NaN if it never came below the tolerance.
+   */
+  readonly remainingEstimate: number;
 }
 
+/** Largest number of repeated days; never reached by the constructions the pole budget admits (sweep test). */
+export const MAX_REPEATED_DAYS = 20000;
+
 /**
- * Runs the design day again and again through the modal recursion (starting from a steady state at the
- * daily means) until the daily peak inside flux changes by less than `relativeTolerance`.
+ * Runs the design day again and again through the modal recursion (starting from a steady state at the daily
+ * means) until the bound of the whole day's distance from the steady-periodic day (`insideFluxBound`) and the last
+ * day-to-day change are both below `relativeTolerance` of max(peak |q_i|, `scaleFloor`) (W/m², e.g. U × 1 K).
  */
 export function repeatedDayFlux(
   modes: FluxModes,
   solAirC: readonly number[],
   indoorC: readonly number[],
   relativeTolerance = 1e-4,
-  maxDays = 2000,
+  maxDays = MAX_REPEATED_DAYS,
+  scaleFloor = 0,
 ): RepeatedDay {
   const run = new SurfaceRecursion(modes, meanOf(solAirC), meanOf(indoorC));
   return repeatUntilSettled(
     solAirC.length,
     (k) => run.step(solAirC[k]!, indoorC[k]!),
-    relativeTolerance,
-    maxDays,
+    { tolerance: relativeTolerance, maxDays, scaleFloor },
+    insideFluxBound(modes, solAirC, indoorC),
   );
 }
 
@@ -155,7 +168,9 @@ export function ctfRepeatedDayFlux(
   solAirC: readonly number[],
   indoorC: readonly number[],
   relativeTolerance = 1e-4,
-  maxDays = 2000,
+  maxDays = MAX_REPEATED_DAYS,
+  scaleFloor = 0,
+  modes?: FluxModes,
 ): RepeatedDay {
   const meanOut = meanOf(solAirC);
   const meanIn = meanOf(indoorC);
@@ -187,20 +202,33 @@ export function ctfRepeatedDayFlux(
     qOut.length = history;
     return [qi, qo];
   };
-  return repeatUntilSettled(solAirC.length, step, relativeTolerance, maxDays);
+  // The CTF reproduces the response of the modal form it was built from (resynthesis to 1e-6 U, the same slowest
+  // poles), so that form's bound tells how many days the CTF's start needs too; without it, the change alone decides.
+  const bound = modes === undefined ? { after: () => 0 } : insideFluxBound(modes, solAirC, indoorC);
+  return repeatUntilSettled(
+    solAirC.length,
+    step,
+    { tolerance: relativeTolerance, maxDays, scaleFloor },
+    bound,
+  );
 }
 
-/** Repeats a day (one call of `step` per time step) until the daily peak |inside flux| settles. */
+/**
+ * Repeats a day (one call of `step` per time step) until the a priori bound of the day's distance from the
+ * steady-periodic day and the day-to-day change over all steps are both below the tolerance (relative to
+ * max(peak |q_i|, floor)); at least two days.
+ */
 function repeatUntilSettled(
   steps: number,
   step: (k: number) => [number, number],
-  relativeTolerance: number,
-  maxDays: number,
+  options: { readonly tolerance: number; readonly maxDays: number; readonly scaleFloor: number },
+  bound: RepeatedDayBound,
 ): RepeatedDay {
-  let previousPeak = NaN;
+  let previous: number[] = [];
   let inside: number[] = [];
   let outside: number[] = [];
-  for (let day = 1; day <= maxDays; day++) {
+  let last = { peakChange: NaN, dayChange: NaN };
+  for (let day = 1; day <= options.maxDays; day++) {
     inside = [];
     outside = [];
     for (let k = 0; k < steps; k++) {
@@ -209,13 +237,26 @@ function repeatUntilSettled(
       outside.push(qo);
     }
     const peak = Math.max(...inside.map(Math.abs));
-    const change = Math.abs(peak - previousPeak) / Math.max(peak, 1e-12);
-    if (day >= 2 && change < relativeTolerance) {
-      return { insideWPerM2: inside, outsideWPerM2: outside, days: day, peakChange: change };
+    const scale = Math.max(peak, options.scaleFloor, 1e-300);
+    if (day >= 2) {
+      let change = 0;
+      for (let k = 0; k < steps; k++) change = Math.max(change, Math.abs(inside[k]! - previous[k]!));
+      const previousPeak = Math.max(...previous.map(Math.abs));
+      last = { peakChange: Math.abs(peak - previousPeak) / Math.max(peak, 1e-12), dayChange: change / scale };
+      const remainingEstimate = bound.after(day) / scale;
+      if (last.dayChange <= options.tolerance && remainingEstimate <= options.tolerance) {
+        return { insideWPerM2: inside, outsideWPerM2: outside, days: day, ...last, remainingEstimate };
+      }
     }
-    previousPeak = peak;
+    previous = inside;
   }
-  return { insideWPerM2: inside, outsideWPerM2: outside, days: maxDays, peakChange: NaN };
+  return {
+    insideWPerM2: inside,
+    outsideWPerM2: outside,
+    days: options.maxDays,
+    ...last,
+    remainingEstimate: NaN,
+  };
 }
 
 function meanOf(xs: readonly number[]): number {

@@ -74,6 +74,7 @@ function constructionOutput(block: BlockSegment, ctx: RenderContext): Trusted {
     anchor,
     ctx.display,
     compact,
+    ctx.input.results.methodNotes ?? [],
   );
 }
 

@@ -50,6 +50,28 @@ function checksTable(ctx: RenderContext): Trusted {
   `;
 }
 
+function methodNotesTable(ctx: RenderContext): Trusted {
+  const notes = ctx.input.results.methodNotes ?? [];
+  if (notes.length === 0) return html``;
+  const rows = notes.map((n) =>
+    html`<tr><td>${n.id}</td>${subjectCell(n.subject, ctx)}<td>${n.text}</td><td class="note">NOTE</td></tr>`
+  );
+  return html`
+    <p>Method notes: choices of numerical form, not checks. A polynomial CTF that is not published is replaced by the modal form, which every computed flux uses; its acceptance figures are in results.json <code>methodNotes</code> and, for the air-to-air CTFs, with the construction.</p>
+    <table class="method-notes">
+      <thead>
+        <tr>
+          <th>Note</th>
+          <th>Subject</th>
+          <th>Choice and reason</th>
+          <th>Result</th>
+        </tr>
+      </thead>
+      <tbody>${rows}</tbody>
+    </table>
+  `;
+}
+
 function findingsTable(ctx: RenderContext): Trusted {
   const findings = sortDiagnostics(ctx.input.findings);
   if (findings.length === 0) return html`<p>No findings were raised on the inputs.</p>`;
@@ -85,6 +107,7 @@ export function renderChecksSection(ctx: RenderContext): Trusted {
   return html`<section id="s-4"><h2>4 Checks and findings</h2>
 <h3 id="s-4-1">4.1 Automated checks</h3>
 ${checksTable(ctx)}
+${methodNotesTable(ctx)}
 <h3 id="s-4-2">4.2 Review findings on the inputs</h3>
 ${findingsTable(ctx)}
 </section>`;

@@ -1,6 +1,6 @@
 /** The computed output shown after a construction block: layer table, R and U, checks, section drawing. */
 import type { Construction, ResolvedLayer } from "../project/model.ts";
-import type { CheckResult, ConstructionResults } from "../results/types.ts";
+import type { CheckResult, ConstructionResults, MethodNoteResult } from "../results/types.ts";
 import { type DisplayUnits, siEquivalent, toDisplay, unitLabel } from "./displayUnits.ts";
 import { formatSig, formatTrim } from "./format.ts";
 import { html, type Trusted } from "./html.ts";
@@ -181,6 +181,7 @@ export function renderConstructionOutput(
   anchor: string,
   d: DisplayUnits,
   compact = false,
+  notes: readonly MethodNoteResult[] = [],
 ): Trusted {
   const countMismatch = results !== undefined && results.steady.layers.length !== construction.layers.length
     ? html`
@@ -230,7 +231,7 @@ export function renderConstructionOutput(
     ${renderDynamicResponse(
       construction,
       results,
-      checks,
+      notes,
       anchor,
       compact
         ? compactChecks(checks, `construction:${construction.id}`)

@@ -40,15 +40,19 @@ export function checkSummary(input: PackageInput): Trusted {
   if (checks.length === 0) {
     return html`<p class="check-summary">Automated checks: none apply yet (see section 4).</p>`;
   }
+  const notes = input.results.methodNotes?.length ?? 0;
+  const noteLine = notes === 0 ? "" : ` Method notes: ${notes} (a numerical form chosen, not a failure).`;
   if (failed.length === 0) {
     return html`<p class="check-summary">Automated checks: all ${
       String(checks.length)
-    } passed (see section 4).</p>`;
+    } passed (see section 4).${noteLine}</p>`;
   }
   const names = failed.map((c) => html`<li>${c.id} on ${c.subject}</li>`);
   return html`
     <div class="check-summary has-failures">
-      <p>Automated checks: ${String(failed.length)} of ${String(checks.length)} FAILED (see section 4).</p>
+      <p>Automated checks: ${String(failed.length)} of ${String(
+        checks.length,
+      )} FAILED (see section 4).${noteLine}</p>
       <ul>${names}</ul>
     </div>
   `;

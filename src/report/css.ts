@@ -55,7 +55,7 @@ table.subject-checks tr.fail td { color: var(--fail); font-weight: bold; }
 table.subject-checks td.result { font-weight: bold; }
 table.subject-checks tr.pass td { color: var(--ink); }
 table.subject-checks tr.pass td.result { color: var(--pass); }
-.ctf-rejected { border: 1px solid var(--fail); padding: 1mm 2mm; margin: 3mm 0; }
+.ctf-method-note { border: 1px solid var(--rule); padding: 1mm 2mm; margin: 3mm 0; }
 .equation { font-family: "Cambria Math", "STIX Two Math", Georgia, serif; margin: 1.5mm 0 1.5mm 6mm; }
 figure.plot-figure svg { display: block; width: 100%; max-width: 160mm; height: auto; }
 figure.plot-figure svg text { white-space: pre; }

@@ -1,5 +1,5 @@
 /** CTF coefficients of a construction by both methods, or the reason a polynomial form was rejected. */
-import type { CheckResult } from "../results/types.ts";
+import type { MethodNoteResult } from "../results/types.ts";
 import type { DynamicView } from "./dynamicData.ts";
 import { type DisplayUnits, toDisplay, unitLabel } from "./displayUnits.ts";
 import { formatSig, formatTrim } from "./format.ts";
@@ -10,17 +10,10 @@ type CtfJson = NonNullable<DynamicView["ctf"]>;
 /** Significant digits of printed CTF coefficients (Φ must be known closely for the recursion). */
 export const CTF_DIGITS = 6;
 
-/** Check ids that decide whether the root-method or the state-space CTF is accepted. */
-const ACCEPTANCE_CHECKS = {
-  root: ["ctf-resynthesis", "ctf-coefficient-bound", "ctf-identity"],
-  stateSpace: [
-    "ctf-state-space-resynthesis",
-    "ctf-state-space-coefficient-bound",
-    "ctf-state-space-identity",
-  ],
-} as const;
+/** Method-note ids (results.json `methodNotes`) that record why a method's polynomial CTF is not published. */
+const MODAL_FORM_NOTES = { root: "ctf-modal-form", stateSpace: "ctf-state-space-modal-form" } as const;
 
-type Method = keyof typeof ACCEPTANCE_CHECKS;
+type Method = keyof typeof MODAL_FORM_NOTES;
 
 interface MethodCtf {
   readonly label: string;
@@ -71,26 +64,31 @@ function coefficientTable(methods: readonly MethodCtf[], caption: Trusted, d: Di
   `;
 }
 
-function failedChecks(checks: readonly CheckResult[], subject: string, method: Method): Trusted {
-  const ids: readonly string[] = ACCEPTANCE_CHECKS[method];
-  const failed = checks.filter((c) => c.subject === subject && ids.includes(c.id) && !c.pass);
-  if (failed.length === 0) {
-    return html`<p class="fail">No failed acceptance check is recorded for it in results.json.</p>`;
+function noteFigures(notes: readonly MethodNoteResult[], subject: string, method: Method): Trusted {
+  const note = notes.find((n) => n.subject === subject && n.id === MODAL_FORM_NOTES[method]);
+  if (note === undefined) {
+    return html`<p class="fail">No method note is recorded for it in results.json.</p>`;
   }
-  return html`<ul class="rejection-checks">${
-    failed.map((c) =>
-      html`<li class="fail">FAIL: ${c.id} (${c.description}): value ${formatSig(c.value, 3)}, limit ${
-        formatSig(c.limit, 3)
+  return html`
+    <p>${note.text}.</p>
+    <ul class="rejection-figures">${note.figures.map((f) =>
+      html`<li>${f.id} (${f.description}): value ${formatSig(f.value, 3)}, limit ${formatSig(f.limit, 3)}${
+        Math.abs(f.value) <= f.limit ? "" : " (over)"
       }</li>`
-    )
-  }</ul>`;
+    )}</ul>
+  `;
 }
 
-function rejection(label: string, checks: readonly CheckResult[], subject: string, method: Method): Trusted {
+function modalFormNote(
+  label: string,
+  notes: readonly MethodNoteResult[],
+  subject: string,
+  method: Method,
+): Trusted {
   return html`
-    <div class="ctf-rejected">
-      <p><strong>${label}: polynomial CTF rejected.</strong> Its coefficients failed the acceptance checks below, so results.json holds <code>null</code> for it and the modal form (one first-order recursion per pole, <code>modal</code> in Appendix B) is to be used instead.</p>
-      ${failedChecks(checks, subject, method)}
+    <div class="ctf-method-note">
+      <p><strong>${label}: method choice, modal form used.</strong> The polynomial CTF of this method is not published (results.json holds <code>null</code> for it); the modal form (one first-order recursion per pole, <code>modal</code> in Appendix B) gives the same response factors and is what every computed flux uses. This is a choice of numerical form, not a failed check.</p>
+      ${noteFigures(notes, subject, method)}
     </div>
   `;
 }
@@ -135,12 +133,12 @@ function coefficients(view: DynamicView, d: DisplayUnits): Trusted {
 }
 
 /**
- * Both CTF sets side by side (X, Y, Z in the display unit of U, Φ without unit), each replaced by its
- * rejection note and failed checks when null.
+ * Both CTF sets side by side (X, Y, Z in the display unit of U, Φ without unit), each replaced by its method note
+ * (modal form used, with the acceptance figures) when null.
  */
 export function ctfSection(
   view: DynamicView,
-  checks: readonly CheckResult[],
+  notes: readonly MethodNoteResult[],
   subject: string,
   d: DisplayUnits,
 ): Trusted {
@@ -154,8 +152,10 @@ export function ctfSection(
       CTF_DIGITS,
     )} significant figures; full precision in Appendix B.</p>
     ${coefficients(view, d)}
-    ${view.ctf === null ? rejection("Root method", checks, subject, "root") : html``}
-    ${view.ctfStateSpace === null ? rejection("State-space method", checks, subject, "stateSpace") : html``}
+    ${view.ctf === null ? modalFormNote("Root method", notes, subject, "root") : html``}
+    ${view.ctfStateSpace === null
+      ? modalFormNote("State-space method", notes, subject, "stateSpace")
+      : html``}
     ${modal}
   `;
 }

@@ -1,6 +1,6 @@
 /** The "Dynamic response" part after a construction's steady-state output: tables, CTFs, plots and checks. */
 import type { Construction } from "../project/model.ts";
-import type { CheckResult, ConstructionResults } from "../results/types.ts";
+import type { ConstructionResults, MethodNoteResult } from "../results/types.ts";
 import { COMPACT_ABOVE_CONSTRUCTIONS } from "./compact.ts";
 import { ctfSection } from "./ctfTables.ts";
 import { type DynamicView, readDynamic, seriesSum, stepResponse } from "./dynamicData.ts";
@@ -74,19 +74,20 @@ function surfaceLine(view: DynamicView, d: DisplayUnits): Trusted {
         s.responseFactors.truncationResidual,
         2,
       )}, polynomial CTF ${s.ctf === null
-        ? "rejected (see checks ending -surface)"
+        ? "not published, modal form used (method note ctf-modal-form-surface, section 4)"
         : "accepted"}; series in Appendix B.</p>
   `;
 }
 
 /**
  * Renders the dynamic response of one construction from its results.json entry in the display units `d`;
- * `anchor` prefixes the plots' ids, `checksList` is the construction's list of checks, shown at the end.
+ * `notes` are results.json `methodNotes` (why a polynomial CTF is not published), `anchor` prefixes the plots'
+ * ids, `checksList` is the construction's list of checks, shown at the end.
  */
 export function renderDynamicResponse(
   construction: Construction,
   results: ConstructionResults | undefined,
-  checks: readonly CheckResult[],
+  notes: readonly MethodNoteResult[],
   anchor: string,
   checksList: Trusted,
   d: DisplayUnits,
@@ -111,7 +112,7 @@ export function renderDynamicResponse(
       ${responseFactorTable(view, d)}
       ${surfaceLine(view, d)}
       <h5>Conduction transfer functions</h5>
-      ${ctfSection(view, checks, subject, d)}
+      ${ctfSection(view, notes, subject, d)}
       <h5>Periodic response factors and conduction time series</h5>
       ${periodicTable(view, d)}
       ${plots(construction, view, `${anchor}-fig`, d)}

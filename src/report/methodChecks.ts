@@ -14,7 +14,7 @@ const CHECK_MEANING: readonly (readonly [id: string, meaning: string])[] = [
   ],
   [
     "ctf-identity",
-    "Steady-state identity of the root CTF: max |Σ CTF / (1 − Σ Φ) − U| / U over X, Y, Z (3.5).",
+    "Steady-state identity of the root CTF: max |Σ CTF / (1 − Σ Φ) − U| / U over X, Y, Z; limit max(10⁻⁶, its roundoff bound) (3.5).",
   ],
   ["ctf-resynthesis", "Long division of the root CTF against the response factors, max error / U (3.5)."],
   [
@@ -31,7 +31,10 @@ const CHECK_MEANING: readonly (readonly [id: string, meaning: string])[] = [
     "periodic-fold",
     "Closed-form periodic factors against the folded hourly response factors, max / U (3.7).",
   ],
-  ["state-space-agreement", "State-space response factors against those of the root method, max / U (3.6)."],
+  [
+    "state-space-agreement",
+    "State-space response factors against those of the root method, max / max(U, largest |RF| of the series) (3.6).",
+  ],
   [
     "state-space-reciprocity",
     "Cross responses of the state-space model in the two directions agree, max / U (3.6).",

@@ -60,8 +60,11 @@ from Z); Φ_n = −d_n. The recurrence is</p>
 <p class="equation">q_i,t = Σ_n Y_n T_o,t−n − Σ_n Z_n T_i,t−n + Σ_(n≥1) Φ_n q_i,t−n.</p>
 <p>Poles are added slowest first; the smallest set whose long division b(z)/d(z) reproduces the response factors within
 10⁻⁹·U is kept (or the best set found). The polynomial form is accepted only when it passes the resynthesis and
-coefficient-size checks (limits in 3.10); a rejected form is written as <code>null</code> and the modal form is used,
-one first-order recursion per pole with no polynomial expansion and hence no loss of significance:</p>
+coefficient-size checks (limits in 3.10) and its coefficients are well conditioned (roundoff bound of its steady-state
+gain, γ_(2N+5) Π(1 + q_n)/Π(1 − q_n) (1 + Σ|RF_j|/U), at most 10⁻⁴; the identity limit is the larger of 10⁻⁶ and
+that bound). Otherwise it is not published (<code>null</code>, with a method note in section 4 — a choice of form,
+not a failed check) and the modal form is used, one first-order recursion per pole with no polynomial expansion and
+hence no loss of significance:</p>
 <p class="equation">q_t = RF_0 x_t + RF_1 x_(t−1) + Σ_n c_n q_n s_(n,t),&emsp; s_(n,t) = q_n s_(n,t−1) + x_(t−2),&emsp;
 c_n = a_n (1 − q_n)² / Δ.</p>`,
 );

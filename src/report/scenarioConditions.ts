@@ -86,9 +86,11 @@ function designDayRows(
     }`;
   const convergence = results.convergence === undefined
     ? "Not recorded."
-    : `Day repeated ${String(results.convergence.days)} times from rest until the daily peak changed by ${
+    : `Day repeated ${
+      String(results.convergence.days)
+    } times from rest until the whole day settled (every step within the bound of the periodic-convergence check; last change of the daily peak ${
       formatSig(results.convergence.peakChange, 2)
-    } (relative); see the periodic-convergence checks.`;
+    }, relative); see the periodic-convergence checks.`;
   return [
     row("Kind", "Design day, steady-periodic: the same day repeats, indoor temperature held throughout."),
     row("Date", `${MONTH_NAMES[scenario.month - 1] ?? String(scenario.month)} ${String(scenario.day)}.`),

@@ -3,6 +3,7 @@ import {
   analyseConstruction,
   constructionChecksJson,
   constructionDynamicJson,
+  constructionMethodNotesJson,
   type DynamicAnalysis,
 } from "../engine/mod.ts";
 import type { SteadyState } from "../engine/steady.ts";
@@ -25,6 +26,7 @@ import type {
   ConstructionResults,
   InputFileRecord,
   LayerResult,
+  MethodNoteResult,
   ResultsJson,
   ScenarioResults,
 } from "./types.ts";
@@ -57,6 +59,7 @@ export function computeProject(
   const analyses: Record<string, DynamicAnalysis> = {};
   const constructions: Record<string, ConstructionResults> = {};
   const checks: CheckResult[] = [];
+  const methodNotes: MethodNoteResult[] = [];
   const problems: Diagnostic[] = [];
   const ownLimitsById = ownLimits(model);
   const designAssumptions: Assumption[] = [];
@@ -90,6 +93,7 @@ export function computeProject(
     constructions[construction.id] = { ...base, ...design.keys };
     correctedU.set(construction.id, design.keys.correctedU);
     checks.push(...constructionChecksJson(construction.id, analysis), ...design.checks);
+    methodNotes.push(...constructionMethodNotesJson(construction.id, analysis));
     designAssumptions.push(...design.assumptions);
     designWarnings.push(...design.warnings);
   }
@@ -97,6 +101,7 @@ export function computeProject(
   const scenarioParts = computeScenarios(model, analyses, dataTexts, progress);
   if (scenarioParts.problems.length > 0) return { ok: false, diagnostics: scenarioParts.problems };
   checks.push(...scenarioParts.checks);
+  methodNotes.push(...scenarioParts.methodNotes);
   const heating = (model.heatingScenarios ?? []).map((s) =>
     [
       s.id,
@@ -115,6 +120,7 @@ export function computeProject(
     constructions,
     scenarios: scenarioParts.scenarios,
     checks,
+    methodNotes,
     assumptions: [
       ...model.assumptions,
       ...designAssumptions,
@@ -139,6 +145,7 @@ export function computeProject(
 interface ScenarioParts {
   readonly scenarios: Record<string, ScenarioResults>;
   readonly checks: CheckResult[];
+  readonly methodNotes: MethodNoteResult[];
   readonly assumptions: Assumption[];
   readonly warnings: { at: string; message: string }[];
   readonly csvFiles: { path: string; readonly text: string; chunks?: () => Iterable<string> }[];
@@ -156,6 +163,7 @@ function computeScenarios(
   const parts: ScenarioParts = {
     scenarios: {},
     checks: [],
+    methodNotes: [],
     assumptions: [],
     warnings: [],
     csvFiles: [],
@@ -179,6 +187,12 @@ function computeScenarios(
         ...constructionChecksJson(constructionId, analysis).map((c) => ({
           ...c,
           description: `At the scenario time step ${timestepS / 60} min: ${c.description}`,
+        })),
+      );
+      parts.methodNotes.push(
+        ...constructionMethodNotesJson(constructionId, analysis).map((n) => ({
+          ...n,
+          text: `At the scenario time step ${timestepS / 60} min: ${n.text}`,
         })),
       );
       return analysis;

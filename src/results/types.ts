@@ -18,6 +18,25 @@ export interface CheckResult {
   readonly pass: boolean;
 }
 
+/**
+ * Extension: a method choice (results.json `methodNotes`), e.g. a polynomial CTF not published because its
+ * coefficients are numerically unfit, so the modal form is used. Not a check and never a failure; `figures` are
+ * the acceptance figures behind the choice (value against limit).
+ */
+export interface MethodNoteResult {
+  /** Stable id, e.g. `ctf-modal-form`. */
+  readonly id: string;
+  /** `construction:<id>` */
+  readonly subject: string;
+  readonly text: string;
+  readonly figures: readonly {
+    readonly id: string;
+    readonly description: string;
+    readonly value: number;
+    readonly limit: number;
+  }[];
+}
+
 export interface LayerResult {
   readonly name: string;
   readonly kind: "massive" | "resistive";
@@ -57,6 +76,8 @@ export interface ResultsJson {
   readonly constructions: Readonly<Record<string, ConstructionResults>>;
   readonly scenarios: Readonly<Record<string, ScenarioResults>>;
   readonly checks: readonly CheckResult[];
+  /** Extension: method choices (see `MethodNoteResult`); absent in packages written before it. */
+  readonly methodNotes?: readonly MethodNoteResult[];
   readonly assumptions: readonly { id: string; text: string; source: string; at: string }[];
   readonly warnings: readonly { at: string; message: string }[];
   /** Extension: the optional sensitivity study (front matter `sensitivity: { variation }`). */

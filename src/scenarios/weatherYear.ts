@@ -12,12 +12,7 @@ import type { ScenarioContext, ScenarioOutcome } from "./designDay.ts";
 import { surfaceParameters, type SurfaceWarning } from "./surfaceParameters.ts";
 import { coverageNotes, impliedCoverage, type PeriodJson, type WeatherCoverage } from "./weatherPeriod.ts";
 import { weatherBoundary, type WeatherSurfaceInput } from "./weatherBoundary.ts";
-import {
-  energyBalanceCheck,
-  WARM_UP_LIMIT,
-  warmUpCheck,
-  WEATHER_ENERGY_BALANCE_LIMIT,
-} from "./weatherChecks.ts";
+import { energyBalanceCheck, WARM_UP_LIMIT, warmUpCheck } from "./weatherChecks.ts";
 import {
   forEachInsideFlux,
   MIN_WARM_UP_DAYS,
@@ -37,7 +32,7 @@ import {
   weatherSummary,
 } from "./weatherSummary.ts";
 
-export { WARM_UP_LIMIT, WEATHER_ENERGY_BALANCE_LIMIT };
+export { WARM_UP_LIMIT };
 
 type WeatherScenario = Extract<Scenario, { kind: "weather" }>;
 
@@ -123,7 +118,7 @@ export function computeWeatherYear(
     for (let k = 0; k < n; k++) total[k] = total[k]! + heatGain[k]!;
     const subject = `scenario:${scenario.id}/${surface.id}`;
     checks.push(
-      energyBalanceCheck(subject, insideWPerM2, solAirC, boundary.indoorC, uValue),
+      energyBalanceCheck(subject, insideWPerM2, solAirC, boundary.indoorC, uValue, modes, warmUpSteps),
       warmUpCheck(
         subject,
         modes,

@@ -133,13 +133,14 @@ Deno.test("analyseConstruction() extreme properties: 1 mm–1 m, k 0.02–230, �
       const c = a.checks.find((x) => x.id === id)!;
       assert.ok(c.pass, `${JSON.stringify(layer)} ${id} = ${c.value}`);
     }
-    // Sum rules pass unless the term cap was reached (1 m, k 0.02, ρc 1.6e7: τ1 ≈ 2e4 h); then they fail with
-    // the residual reported — never a silent truncation.
+    // Sum rules (listed terms plus the closed-form tail) hold whether or not the term cap was reached (1 m,
+    // k 0.02, ρc 1.6e7: τ1 ≈ 2e4 h); a cut listing is reported as its truncation residual — never hidden.
     const capped = a.airToAir.responseFactors.termCount === MAX_RESPONSE_FACTOR_TERMS;
     for (const id of ["sum-rule-X", "sum-rule-Y", "sum-rule-Z"]) {
       const c = a.checks.find((x) => x.id === id)!;
-      assert.equal(c.pass, !capped, `${JSON.stringify(layer)} ${id} = ${c.value}`);
+      assert.ok(c.pass, `${JSON.stringify(layer)} ${id} = ${c.value}`);
     }
+    if (capped) assert.ok(a.airToAir.responseFactors.truncationResidual > 1e-8, "the cut is reported");
   }
 });
 

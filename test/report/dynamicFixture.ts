@@ -7,16 +7,19 @@ import {
   analyseConstruction,
   constructionChecksJson,
   constructionDynamicJson,
+  constructionMethodNotesJson,
 } from "../../src/engine/mod.ts";
 import type { Layer } from "../../src/engine/layer.ts";
 import type { Construction } from "../../src/project/model.ts";
 import { renderConstructionOutput } from "../../src/report/constructionOutput.ts";
-import type { CheckResult, ConstructionResults } from "../../src/results/types.ts";
+import type { CheckResult, ConstructionResults, MethodNoteResult } from "../../src/results/types.ts";
 
 const at = (line: number) => ({ file: "walls.md", line, col: 1 });
 
 /** The engine's results.json entry (steady part as the build writes it) and checks for a construction. */
-export function engineEntry(c: Construction): { results: ConstructionResults; checks: CheckResult[] } {
+export function engineEntry(
+  c: Construction,
+): { results: ConstructionResults; checks: CheckResult[]; notes: MethodNoteResult[] } {
   const analysis = analyseConstruction(c, c.timestepS);
   if (analysis.kind !== "analysis") throw new Error(`Cannot analyse ${c.id}: ${analysis.message}`);
   const s = analysis.steady;
@@ -38,7 +41,11 @@ export function engineEntry(c: Construction): { results: ConstructionResults; ch
     },
     ...constructionDynamicJson(analysis),
   };
-  return { results, checks: constructionChecksJson(c.id, analysis) };
+  return {
+    results,
+    checks: constructionChecksJson(c.id, analysis),
+    notes: constructionMethodNotesJson(c.id, analysis),
+  };
 }
 
 /** An invented construction from engine layers, with made-up names and positions. */
@@ -93,8 +100,9 @@ export function bareSlab(): Construction {
 /** Renders one construction's output (steady and dynamic) with the engine's results and checks. */
 export function renderWithEngine(
   c: Construction,
-): { markup: string; results: ConstructionResults; checks: CheckResult[] } {
-  const { results, checks } = engineEntry(c);
-  const markup = renderConstructionOutput(c, results, checks, `c-${c.id.toLowerCase()}`, SI_DISPLAY).markup;
-  return { markup, results, checks };
+): { markup: string; results: ConstructionResults; checks: CheckResult[]; notes: MethodNoteResult[] } {
+  const { results, checks, notes } = engineEntry(c);
+  const markup =
+    renderConstructionOutput(c, results, checks, `c-${c.id.toLowerCase()}`, SI_DISPLAY, false, notes).markup;
+  return { markup, results, checks, notes };
 }

@@ -92,25 +92,29 @@ Deno.test("renderConstructionOutput() shows both CTF sets side by side, with the
   assert.equal(rows.length, 2 * longest);
 });
 
-Deno.test("renderConstructionOutput() says why a rejected CTF is null and names the failed check", () => {
-  const { markup, results, checks } = renderWithEngine(ctfRejectingWall());
+Deno.test("renderConstructionOutput() reports a rejected polynomial CTF as a method choice, not a failure", () => {
+  const { markup, results, checks, notes } = renderWithEngine(ctfRejectingWall());
   assert.equal(readDynamic(results)?.ctf, null, "the engine rejects this wall's polynomial CTF");
   const root = parseFragment(markup);
-  const notes = Array.from(root.querySelectorAll(".ctf-rejected"));
-  assert.ok(notes.length >= 1);
-  assert.match(notes[0]?.textContent ?? "", /Root method: polynomial CTF rejected/);
-  assert.match(notes[0]?.textContent ?? "", /modal form/);
+  const boxes = Array.from(root.querySelectorAll(".ctf-method-note"));
+  assert.ok(boxes.length >= 1);
+  const text = boxes[0]?.textContent ?? "";
+  assert.match(text, /Root method: method choice, modal form used/);
+  assert.match(text, /not a failed check/);
   const acceptance = ["ctf-resynthesis", "ctf-coefficient-bound", "ctf-identity"];
-  const failed = checks.filter((c) => acceptance.includes(c.id) && !c.pass);
-  assert.ok(failed.length >= 1, "the engine records why it rejected the CTF");
-  const text = notes[0]?.textContent ?? "";
-  for (const c of failed) {
-    assert.ok(text.includes(`FAIL: ${c.id} (`) && text.includes(formatSig(c.value, 3)), c.id);
+  assert.equal(
+    checks.filter((c) => acceptance.includes(c.id)).length,
+    0,
+    "no acceptance row among the checks",
+  );
+  assert.ok(checks.every((c) => c.pass), JSON.stringify(checks.filter((c) => !c.pass)));
+  const note = notes.find((n) => n.id === "ctf-modal-form")!;
+  const over = note.figures.filter((f) => !(Math.abs(f.value) <= f.limit));
+  assert.ok(over.length >= 1, "the note records the figure over its limit");
+  for (const f of over) {
+    assert.ok(text.includes(`${f.id} (`) && text.includes(`value ${formatSig(f.value, 3)}`), f.id);
   }
-  const passed = checks.filter((c) => acceptance.includes(c.id) && c.pass);
-  for (const c of passed) {
-    assert.ok(!text.includes(`: ${c.id} (`), `passing ${c.id} is not given as a reason`);
-  }
+  assert.ok(!/FAIL/.test(text), "no FAIL wording in the note");
   assert.equal(root.querySelectorAll(".ctf-table").length, 0);
 });
 

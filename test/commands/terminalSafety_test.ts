@@ -11,6 +11,7 @@ import { main } from "../../src/cli.ts";
 import { parseHTML } from "linkedom";
 import { runBuild } from "../../src/commands/build.ts";
 import { oneLine, shortened, terminalSafe } from "../../src/project/displayText.ts";
+import { weatherScenarioBlock } from "../scenarios/_scenarioBlocks.ts";
 
 const GOOD = new URL("../fixtures/good/minimal/", import.meta.url).pathname;
 const quiet = { stdout: () => {}, stderr: () => {} };
@@ -25,20 +26,6 @@ async function run(args: string[]): Promise<{ code: number; out: string; err: st
   const code = await main(args, { stdout: (l) => (out += `${l}\n`), stderr: (l) => (err += `${l}\n`) });
   return { code, out, err };
 }
-
-const WEATHER_SCENARIO = (path: string) =>
-  [
-    "```scenario",
-    "id: year",
-    "kind: weather",
-    `weather: ${path}`,
-    "indoor: 21 degC",
-    "site: { latitude: 52.4 deg, longitude: -1.9 deg, time-zone: 0 h }",
-    "surfaces:",
-    "  - { id: s1, construction: EW-1, azimuth: 180 deg, tilt: 90 deg, area: 10 m^2, absorptance: 0.6 }",
-    "```",
-    "",
-  ].join("\n");
 
 /** Writes the minimal good project with edits into a new temp folder and returns it. */
 async function project(edit: (files: Record<string, string>) => void): Promise<string> {
@@ -79,7 +66,7 @@ const CASES: readonly { name: string; edit: (files: Record<string, string>) => v
   },
   {
     name: "the weather path",
-    edit: (f) => (f["walls.md"] = `${f["walls.md"]}\n${WEATHER_SCENARIO(`"w${PAYLOAD}.csv"`)}`),
+    edit: (f) => (f["walls.md"] = `${f["walls.md"]}\n${weatherScenarioBlock(`"w${PAYLOAD}.csv"`)}`),
     shows: "Cannot use the control character U+001B",
   },
   {
@@ -101,7 +88,7 @@ const CASES: readonly { name: string; edit: (files: Record<string, string>) => v
   {
     name: "a weather cell",
     edit: (f) => {
-      f["walls.md"] = `${f["walls.md"]}\n${WEATHER_SCENARIO("weather.csv")}`;
+      f["walls.md"] = `${f["walls.md"]}\n${weatherScenarioBlock("weather.csv")}`;
       f["weather.csv"] = "time,dry-bulb,global-horizontal,diffuse-horizontal\n" +
         "2031-01-01T01:00,\u001b]0;owned\u0007\u001b[2J\u009b31m\u202e,0,0\n";
     },
@@ -137,7 +124,7 @@ for (const c of CASES) {
 
 Deno.test("a 10 MB weather cell is shortened in the message, not echoed whole", async () => {
   const folder = await project((f) => {
-    f["walls.md"] = `${f["walls.md"]}\n${WEATHER_SCENARIO("weather.csv")}`;
+    f["walls.md"] = `${f["walls.md"]}\n${weatherScenarioBlock("weather.csv")}`;
   });
   try {
     const cell = "x".repeat(10 * 1024 * 1024);

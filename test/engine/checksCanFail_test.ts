@@ -3,27 +3,12 @@
  * deliberately corrupted input: a check that cannot fail is no check.
  */
 import assert from "node:assert/strict";
-import { analyseConstruction, type ConstructionInput, type DynamicAnalysis } from "../../src/engine/mod.ts";
+import type { ConstructionInput } from "../../src/engine/mod.ts";
 import { periodicFoldError, sumRuleWithTail } from "../../src/engine/analyse.ts";
 import { ctfIdentityError } from "../../src/engine/ctf.ts";
 import { agreementOf, STATE_SPACE_AGREEMENT_LIMIT } from "../../src/engine/stateSpaceAnalysis.ts";
-import { massive } from "./walls.ts";
-
-function analyse(c: ConstructionInput, timestepS: number, stateSpace = true): DynamicAnalysis {
-  const a = analyseConstruction(c, timestepS, { stateSpace });
-  if (a.kind !== "analysis") throw new Error(a.message);
-  return a;
-}
-
-function failedChecks(a: DynamicAnalysis): string[] {
-  return a.checks.filter((c) => !c.pass).map((c) => `${c.id} = ${c.value} > ${c.limit}`);
-}
-
-const FILMS = { outsideResistance: 0.04, insideResistance: 0.13 };
-
-// Invented but ordinary wall and roof build-ups (typical property values, common practice, no source).
-const EPS = massive(0.1, 0.035, 20, 1450);
-const CONCRETE = massive(0.2, 2.3, 2300, 1000);
+import { analyse, failedChecks } from "./analysed.ts";
+import { CONCRETE, EPS, FILMS, massive } from "./walls.ts";
 
 Deno.test("ctf-identity: a roundoff-bound limit; ill-conditioned CTFs are noted; a perturbed coefficient fails", () => {
   // EW-2 of the demo at 5 min: 38 poles, Σd ≈ 1.4e-7 — its identity error (1.4e-6) was over the fixed 1e-6 limit

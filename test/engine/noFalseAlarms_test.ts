@@ -1,28 +1,10 @@
 /** Valid constructions at valid time steps build without a failed check (a tool that cries wolf is not used). */
 import assert from "node:assert/strict";
-import {
-  analyseConstruction,
-  constructionDynamicJson,
-  type ConstructionInput,
-  type DynamicAnalysis,
-} from "../../src/engine/mod.ts";
-import { massive } from "./walls.ts";
-
-function analyse(c: ConstructionInput, timestepS: number, stateSpace = true): DynamicAnalysis {
-  const a = analyseConstruction(c, timestepS, { stateSpace });
-  if (a.kind !== "analysis") throw new Error(a.message);
-  return a;
-}
-
-function failedChecks(a: DynamicAnalysis): string[] {
-  return a.checks.filter((c) => !c.pass).map((c) => `${c.id} = ${c.value} > ${c.limit}`);
-}
-
-const FILMS = { outsideResistance: 0.04, insideResistance: 0.13 };
+import { constructionDynamicJson, type ConstructionInput } from "../../src/engine/mod.ts";
+import { analyse, failedChecks } from "./analysed.ts";
+import { CONCRETE, EPS, FILMS, massive } from "./walls.ts";
 
 // Invented but ordinary wall and roof build-ups (typical property values, common practice, no source).
-const EPS = massive(0.1, 0.035, 20, 1450);
-const CONCRETE = massive(0.2, 2.3, 2300, 1000);
 const BRICK = massive(0.215, 0.77, 1700, 800);
 const MINERAL_WOOL = massive(0.12, 0.035, 30, 1030);
 const TIMBER = massive(0.1, 0.13, 500, 1600);

@@ -15,6 +15,18 @@ export function resistive(resistance: number): Layer {
   return { kind: "resistive", resistance };
 }
 
+/**
+ * Wall surface films: outside 0.04, inside 0.13 m² K/W
+ * (ISO 6946 conventional values, horizontal flow; from memory).
+ */
+export const FILMS = { outsideResistance: 0.04, insideResistance: 0.13 };
+
+// Invented but ordinary layers (typical property values, common practice, no source).
+/** 100 mm EPS insulation. */
+export const EPS = massive(0.1, 0.035, 20, 1450);
+/** 200 mm dense concrete. */
+export const CONCRETE = massive(0.2, 2.3, 2300, 1000);
+
 /** Homogeneous slab: L 0.2 m, k 1 W/(m K), ρc 2e6 J/(m³ K) (α = 5e-7 m²/s), no films. */
 export const SLAB: ConstructionInput = {
   layers: [massive(0.2, 1, 2000, 1000)],

@@ -1,4 +1,5 @@
 /** A small valid project whose every free-text place holds a given text, for the XSS corpus and fuzzing. */
+import { designDayBlock, SOUTH_WALL } from "../scenarios/_scenarioBlocks.ts";
 
 /** Places a text can go in a project. */
 export interface HostileTexts {
@@ -69,21 +70,7 @@ export function hostileProjectFiles(t: HostileTexts): Record<string, string> {
       "```",
       "",
     ].join("\n"),
-    "zz-scenario.md": [
-      "# Design day",
-      prose,
-      "```scenario",
-      "id: july",
-      "kind: design-day",
-      "indoor: 24 degC",
-      "outdoor: { max-dry-bulb: 30 degC, daily-range: 10 K }",
-      "date: 07-21",
-      "sky: none",
-      "surfaces:",
-      "  - { id: s1, construction: EW-1, azimuth: 180 deg, tilt: 90 deg, area: 10 m^2, absorptance: 0.6 }",
-      "```",
-      "",
-    ].join("\n"),
+    "zz-scenario.md": ["# Design day", prose, designDayBlock("july", [SOUTH_WALL])].join("\n"),
   };
 }
 

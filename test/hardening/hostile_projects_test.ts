@@ -14,6 +14,7 @@ import { loadProject } from "../../src/commands/loadProject.ts";
 import { produceOutputs } from "../../src/commands/produce.ts";
 import { MAX_MARKDOWN_BYTES, MAX_WEATHER_BYTES } from "../../src/project/readProject.ts";
 import { BoundedBuilds, type BuildReport, copyTree, listing } from "./bounded.ts";
+import { weatherScenarioBlock } from "../scenarios/_scenarioBlocks.ts";
 
 const FIXTURES = new URL("../fixtures/", import.meta.url).pathname;
 const GOOD = join(FIXTURES, "good/minimal");
@@ -83,18 +84,7 @@ function withFiles(projectMd: string, list: string): string {
   return projectMd.replace("units: SI\n", `units: SI\nfiles: ${list}\n`);
 }
 
-const WEATHER_SCENARIO = [
-  "```scenario",
-  "id: year",
-  "kind: weather",
-  "weather: weather.csv",
-  "indoor: 21 degC",
-  "site: { latitude: 52.4 deg, longitude: -1.9 deg, time-zone: 0 h }",
-  "surfaces:",
-  "  - { id: s1, construction: EW-1, azimuth: 180 deg, tilt: 90 deg, area: 10 m^2, absorptance: 0.6 }",
-  "```",
-  "",
-].join("\n");
+const WEATHER_SCENARIO = weatherScenarioBlock("weather.csv");
 
 /** A case made at test time: `make` fills the empty project folder; `expected` is the exact diagnostics. */
 interface GeneratedCase {

@@ -62,88 +62,81 @@ Deno.test("boundProseNesting() accepts ordinary nesting, thematic breaks and fen
   assert.deepEqual(findings(text), []);
 });
 
-Deno.test({
-  name:
-    "runCheck() and runBuild() refuse quotes nested 3,000 deep with file:line instead of overflowing the stack",
-  sanitizeOps: false,
-  sanitizeResources: false,
-  async fn() {
-    const base = await Deno.makeTempDir({ prefix: "fluxnote-prose-" });
-    const builds = new BoundedBuilds();
-    try {
-      const folder = join(base, "p");
-      writeProject(folder, hostileProjectFiles({ prose: "> ".repeat(3000) + "deep" }));
-      const expected = new RegExp(
-        `^project\\.md:${PROSE_LINE}:65: error: Lists or quotes nest 3000 levels deep`,
-      );
-      const stderr: string[] = [];
-      const code = await runCheck({ project: folder, format: "text", strict: false }, {
-        stdout: () => {},
-        stderr: (line) => stderr.push(line),
-      });
-      assert.equal(code, 1);
-      assert.ok(stderr.some((line) => expected.test(line)), stderr.join("\n"));
-      const report = await builds.build({ project: folder, out: join(base, "out") });
-      assert.equal(report.thrown, undefined, report.thrown);
-      assert.equal(report.code, 1);
-      assert.ok(report.stderr.some((line) => expected.test(line)), report.stderr.join("\n"));
-    } finally {
-      builds.close();
-      await Deno.remove(base, { recursive: true });
-    }
-  },
-});
+/**
+ * Registers a test that writes the hostile project with `prose` into a temp folder (`folder`, package to `out`)
+ * and runs `body` on it with a bounded build worker; the worker and the folder are removed afterwards.
+ */
+function proseBuildTest(
+  name: string,
+  prose: string,
+  body: (paths: { folder: string; out: string }, builds: BoundedBuilds) => Promise<void>,
+): void {
+  Deno.test({
+    name,
+    sanitizeOps: false,
+    sanitizeResources: false,
+    async fn() {
+      const base = await Deno.makeTempDir({ prefix: "fluxnote-prose-" });
+      const builds = new BoundedBuilds();
+      try {
+        const folder = join(base, "p");
+        writeProject(folder, hostileProjectFiles({ prose }));
+        await body({ folder, out: join(base, "out") }, builds);
+      } finally {
+        builds.close();
+        await Deno.remove(base, { recursive: true });
+      }
+    },
+  });
+}
 
-Deno.test({
-  name: "runBuild() refuses a 1,000-level nested list with file:line within 10 s",
-  sanitizeOps: false,
-  sanitizeResources: false,
-  async fn() {
-    const base = await Deno.makeTempDir({ prefix: "fluxnote-prose-" });
-    const builds = new BoundedBuilds();
-    try {
-      const folder = join(base, "p");
-      writeProject(folder, hostileProjectFiles({ prose: nestedList(1000) }));
-      // Before the limit this build took 30 s and 1.2 GB (issue 10, item 12).
-      const report = await builds.build({ project: folder, out: join(base, "out") }, 10_000);
-      assert.equal(report.thrown, undefined, report.thrown);
-      assert.equal(report.code, 1);
-      const line = PROSE_LINE + MAX_PROSE_NESTING;
-      assert.ok(
-        report.stderr.some((l) =>
-          l.startsWith(`project.md:${line}:65: error: Lists or quotes nest 33 levels deep`)
-        ),
-        report.stderr.join("\n"),
-      );
-    } finally {
-      builds.close();
-      await Deno.remove(base, { recursive: true });
-    }
+proseBuildTest(
+  "runCheck() and runBuild() refuse quotes nested 3,000 deep with file:line instead of overflowing the stack",
+  "> ".repeat(3000) + "deep",
+  async ({ folder, out }, builds) => {
+    const expected = new RegExp(
+      `^project\\.md:${PROSE_LINE}:65: error: Lists or quotes nest 3000 levels deep`,
+    );
+    const stderr: string[] = [];
+    const code = await runCheck({ project: folder, format: "text", strict: false }, {
+      stdout: () => {},
+      stderr: (line) => stderr.push(line),
+    });
+    assert.equal(code, 1);
+    assert.ok(stderr.some((line) => expected.test(line)), stderr.join("\n"));
+    const report = await builds.build({ project: folder, out });
+    assert.equal(report.thrown, undefined, report.thrown);
+    assert.equal(report.code, 1);
+    assert.ok(report.stderr.some((line) => expected.test(line)), report.stderr.join("\n"));
   },
-});
+);
 
-Deno.test({
-  name: "runBuild() renders a task list with no form control in the package",
-  sanitizeOps: false,
-  sanitizeResources: false,
-  async fn() {
-    const base = await Deno.makeTempDir({ prefix: "fluxnote-prose-" });
-    const builds = new BoundedBuilds();
-    try {
-      const folder = join(base, "p");
-      const out = join(base, "out");
-      writeProject(
-        folder,
-        hostileProjectFiles({ prose: "- [ ] check the U-value\n- [x] read the drawings" }),
-      );
-      const report = await builds.build({ project: folder, out });
-      assert.equal(report.code, 0, report.stderr.join("\n"));
-      const page = Deno.readTextFileSync(join(out, "package.html"));
-      assertInertPage(page, "task list");
-      assert.ok(page.includes("[x]</span> read the drawings"));
-    } finally {
-      builds.close();
-      await Deno.remove(base, { recursive: true });
-    }
+proseBuildTest(
+  "runBuild() refuses a 1,000-level nested list with file:line within 10 s",
+  nestedList(1000),
+  async ({ folder, out }, builds) => {
+    // Before the limit this build took 30 s and 1.2 GB (issue 10, item 12).
+    const report = await builds.build({ project: folder, out }, 10_000);
+    assert.equal(report.thrown, undefined, report.thrown);
+    assert.equal(report.code, 1);
+    const line = PROSE_LINE + MAX_PROSE_NESTING;
+    assert.ok(
+      report.stderr.some((l) =>
+        l.startsWith(`project.md:${line}:65: error: Lists or quotes nest 33 levels deep`)
+      ),
+      report.stderr.join("\n"),
+    );
   },
-});
+);
+
+proseBuildTest(
+  "runBuild() renders a task list with no form control in the package",
+  "- [ ] check the U-value\n- [x] read the drawings",
+  async ({ folder, out }, builds) => {
+    const report = await builds.build({ project: folder, out });
+    assert.equal(report.code, 0, report.stderr.join("\n"));
+    const page = Deno.readTextFileSync(join(out, "package.html"));
+    assertInertPage(page, "task list");
+    assert.ok(page.includes("[x]</span> read the drawings"));
+  },
+);

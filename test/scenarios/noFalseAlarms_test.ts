@@ -10,11 +10,10 @@ import { computeDesignDay, PERIODIC_CONVERGENCE_LIMIT } from "../../src/scenario
 import { energyBalanceCheck } from "../../src/scenarios/weatherChecks.ts";
 import { fluxesAfterWarmUp, warmUpDays } from "../../src/scenarios/weatherRecursion.ts";
 import { computeWeatherYear } from "../../src/scenarios/weatherYear.ts";
-import { massive } from "../engine/walls.ts";
+import { FILMS, massive } from "../engine/walls.ts";
 import { designDay, surface as designSurface } from "../report/scenarioFixture.ts";
 import { construction, context, surface, weatherScenario } from "./_weatherFixture.ts";
 
-const FILMS = { outsideResistance: 0.04, insideResistance: 0.13 };
 /** 2 m of stone (λ 2.3, ρ 2600, c 900; typical values, common practice): τ1 ≈ 160 h. */
 const STONE_2M: ConstructionInput = { layers: [massive(2, 2.3, 2600, 900)], ...FILMS };
 

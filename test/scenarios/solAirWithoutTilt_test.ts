@@ -8,6 +8,7 @@ import assert from "node:assert/strict";
 import { join } from "node:path";
 import { loadProject } from "../../src/commands/loadProject.ts";
 import { computeProject } from "../../src/results/buildResults.ts";
+import { designDayBlock } from "./_scenarioBlocks.ts";
 
 const GOOD = new URL("../fixtures/good/minimal/", import.meta.url).pathname;
 const SOL_AIR = `[${
@@ -19,21 +20,7 @@ async function computed(surfaces: string[]) {
   for (const name of ["project.md", "walls.md"]) Deno.copyFileSync(join(GOOD, name), join(project, name));
   Deno.writeTextFileSync(
     join(project, "day.md"),
-    [
-      "# Day",
-      "",
-      "```scenario",
-      "id: day",
-      "kind: design-day",
-      "indoor: 24 degC",
-      "outdoor: { max-dry-bulb: 30 degC, daily-range: 10 K }",
-      "date: 07-21",
-      "sky: none",
-      "surfaces:",
-      ...surfaces.map((s) => `  - ${s}`),
-      "```",
-      "",
-    ].join("\n"),
+    `# Day\n\n${designDayBlock("day", surfaces)}`,
   );
   const loaded = await loadProject(project);
   assert.ok(loaded.model !== undefined, loaded.diagnostics.map((d) => d.message).join("\n"));

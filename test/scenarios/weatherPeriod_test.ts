@@ -13,6 +13,7 @@ import { formatDiagnostic } from "../../src/project/diagnostic.ts";
 import { computeProject } from "../../src/results/buildResults.ts";
 import { computeWeatherYear } from "../../src/scenarios/weatherYear.ts";
 import { parseDocument } from "../report/dom.ts";
+import { weatherScenarioBlock } from "./_scenarioBlocks.ts";
 import { construction, context, surface, weather, weatherScenario, yearCsv } from "./_weatherFixture.ts";
 
 const GOOD = new URL("../fixtures/good/minimal/", import.meta.url).pathname;
@@ -42,21 +43,7 @@ async function project(csv: string, extra = ""): Promise<string> {
   Deno.writeTextFileSync(join(folder, "weather.csv"), csv);
   Deno.writeTextFileSync(
     join(folder, "short.md"),
-    [
-      "# Short",
-      "",
-      "```scenario",
-      "id: short",
-      "kind: weather",
-      "weather: weather.csv",
-      ...(extra === "" ? [] : [extra]),
-      "indoor: 21 degC",
-      "site: { latitude: 52.4 deg, longitude: -1.9 deg, time-zone: 0 h }",
-      "surfaces:",
-      "  - { id: s1, construction: EW-1, azimuth: 180 deg, tilt: 90 deg, area: 10 m^2, absorptance: 0.6 }",
-      "```",
-      "",
-    ].join("\n"),
+    `# Short\n\n${weatherScenarioBlock("weather.csv", { id: "short", extra: extra === "" ? [] : [extra] })}`,
   );
   return folder;
 }

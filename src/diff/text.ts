@@ -8,6 +8,12 @@ import {
   quantityName,
 } from "./display.ts";
 import type { Change, ChangeSection, ProjectDiff, SideSummary } from "./types.ts";
+import { oneLine, shortened } from "../project/displayText.ts";
+
+/** A value from either side, kept on its own line of the output and shortened when long. */
+function inLine(text: string): string {
+  return oneLine(shortened(text));
+}
 
 /** Section titles of the input changes, in the order they are printed. */
 export const SECTION_TITLES: readonly (readonly [ChangeSection, string])[] = [
@@ -29,7 +35,7 @@ function pad(text: string, size: number, right = false): string {
 /** A side as one line: label, kind, revision and date. */
 export function sideLine(s: SideSummary): string {
   const kind = s.kind === "package" ? "package" : "project folder";
-  return `${s.label} (${kind}, revision ${s.revision}, ${s.date})`;
+  return `${inLine(s.label)} (${kind}, revision ${inLine(s.revision)}, ${inLine(s.date)})`;
 }
 
 /** Where a change is on each side, `a file:line:col, b file:line:col`. */
@@ -44,7 +50,7 @@ function changeLines(changes: readonly Change[]): string[] {
     if (list.length === 0) continue;
     out.push("", `${title}: ${list.length} change(s)`);
     for (const c of list) {
-      out.push(`  ${changeLabel(c)}: ${changeText(c)}`, `      ${placesText(c)}`);
+      out.push(`  ${inLine(changeLabel(c))}: ${inLine(changeText(c))}`, `      ${inLine(placesText(c))}`);
     }
   }
   return out;
@@ -81,7 +87,7 @@ export function renderDiffText(diff: ProjectDiff): string {
         : f.proseChanged === false
         ? "  (prose unchanged)"
         : "";
-      out.push(`  ${pad(f.status, 8)} ${f.path}${prose}`);
+      out.push(`  ${pad(f.status, 8)} ${inLine(f.path)}${prose}`);
     }
   }
   out.push(...changeLines(diff.changes));

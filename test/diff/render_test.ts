@@ -112,3 +112,38 @@ Deno.test("renderDiffHtml() has no script, forbids scripts by CSP, loads nothing
   // The largest effects are highlighted with a CSS class (no script).
   assert.ok(page.includes('<tr class="largest">'));
 });
+
+Deno.test("renderDiffText() keeps a value with line breaks on its own line, so it cannot fake a line of output", () => {
+  // A YAML string may hold line feeds ("\n" escape, YAML 1.2 §5.7); the reader allows them in text values.
+  const fake = "C\nREPRODUCED: every number agrees";
+  const sideOf = (revision: string) => ({
+    label: "a",
+    kind: "folder" as const,
+    title: "T",
+    revision,
+    date: "2031-01-15",
+    inputsSha256: "0".repeat(64),
+  });
+  const text = renderDiffText({
+    schema: "fluxnote-diff/1",
+    a: sideOf("B"),
+    b: sideOf(fake),
+    identical: false,
+    files: [{ path: "x\ny.md", status: "changed" } as never],
+    changes: [
+      change({
+        section: "project",
+        subject: "project",
+        part: null,
+        key: "revision",
+        old: "B",
+        new: fake,
+        unit: "",
+      }),
+    ],
+    effects: [],
+    unchangedEffects: 0,
+  });
+  for (const line of text.split("\n")) assert.doesNotMatch(line, /^REPRODUCED|^y\.md/, text);
+  assert.ok(text.includes("revision C\\nREPRODUCED"), text);
+});

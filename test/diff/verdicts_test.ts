@@ -2,6 +2,9 @@ import assert from "node:assert/strict";
 import { effectAbsolute, effectSide, effectValue } from "../../src/diff/display.ts";
 import { compareResults } from "../../src/diff/effects.ts";
 import { compareChecks, compareVerdicts } from "../../src/diff/verdicts.ts";
+import { renderDiffHtml } from "../../src/diff/page.ts";
+import { renderDiffText } from "../../src/diff/text.ts";
+import type { ProjectDiff, SideSummary } from "../../src/diff/types.ts";
 import type { CheckResult, ResultsJson } from "../../src/results/types.ts";
 import type { Effect } from "../../src/diff/types.ts";
 
@@ -207,4 +210,45 @@ Deno.test("compareChecks() lists checks that newly fail first, then those that n
     ["sum-rule", "fail", "pass"],
   ]);
   assert.deepEqual(compareChecks(a, a), []);
+});
+
+Deno.test("a newly failing check and a weather peak's date lead the text and the page before files and effects", () => {
+  const a = results({
+    scenarios: { year: JULY_21_14 },
+    checks: [check("energy-balance", true, 1e-9)],
+  });
+  const b = results({
+    scenarios: { year: weatherYear("2031-07-22T09:00", 4856) },
+    checks: [check("energy-balance", false, 1e-2)],
+  });
+  const sideOf = (revision: string): SideSummary => ({
+    label: revision,
+    kind: "folder",
+    title: "T",
+    revision,
+    date: "2031-01-15",
+    inputsSha256: "0".repeat(64),
+  });
+  const { effects, unchanged } = compareResults(a, b);
+  const diff: ProjectDiff = {
+    schema: "fluxnote-diff/1",
+    a: sideOf("A"),
+    b: sideOf("B"),
+    identical: false,
+    verdicts: compareVerdicts(a, b),
+    checks: compareChecks(a, b),
+    files: [{ path: "walls.md", status: "changed", proseChanged: false }],
+    changes: [],
+    effects,
+    unchangedEffects: unchanged,
+  };
+  const text = renderDiffText(diff);
+  const flipped = text.indexOf("construction EW-1 · energy-balance: pass → fail");
+  assert.ok(flipped > 0, text);
+  assert.ok(flipped < text.indexOf("Files:") && flipped < text.indexOf("Effects on results"), text);
+  assert.match(text, /scenario year\s+hour of peak\s+2031-07-21 14:00\s+2031-07-22 09:00\s+\+19\.0\u2009h/);
+  const page = renderDiffHtml(diff);
+  const heading = page.indexOf("<h2>Calculation checks changed</h2>");
+  assert.ok(heading > 0 && heading < page.indexOf("<h2>Files</h2>"));
+  assert.ok(page.includes("2031-07-21 14:00") && !page.includes(">13:00<"));
 });

@@ -2,6 +2,7 @@ import type { Model } from "../project/model.ts";
 import type { ResultsJson } from "../results/types.ts";
 import { compareInputs } from "./compareInputs.ts";
 import { compareResults } from "./effects.ts";
+import { compareChecks, compareVerdicts } from "./verdicts.ts";
 import { compareFiles } from "./files.ts";
 import { sourceLines } from "./locate.ts";
 import type { ProjectDiff, SideSummary } from "./types.ts";
@@ -39,11 +40,16 @@ export function diffProjects(a: DiffSide, b: DiffSide): ProjectDiff {
     { model: b.model, records: b.results.inputs?.files ?? [] },
   );
   const { effects, unchanged } = compareResults(a.results, b.results);
+  const verdicts = compareVerdicts(a.results, b.results);
+  const checks = compareChecks(a.results, b.results);
   return {
     schema: "fluxnote-diff/1",
     a: summary(a, "a"),
     b: summary(b, "b"),
-    identical: changes.length === 0 && files.length === 0 && effects.length === 0,
+    identical: changes.length === 0 && files.length === 0 && effects.length === 0 &&
+      verdicts.length === 0 && checks.length === 0,
+    verdicts,
+    checks,
     files,
     changes,
     effects,

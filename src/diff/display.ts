@@ -1,4 +1,5 @@
 import { formatFixed, formatSig, formatTrim, MINUS, withUnit } from "../report/format.ts";
+import { weatherTime } from "../report/scenarioData.ts";
 import type { Change, Effect, EffectQuantity, FieldValue } from "./types.ts";
 
 const LONG_TEXT = 90;
@@ -84,18 +85,33 @@ function clock(hours: number): string {
   return `${String(Math.floor(minutes / 60)).padStart(2, "0")}:${String(minutes % 60).padStart(2, "0")}`;
 }
 
-/** Prints one side of an effect; energies in kWh (1 kWh = 3.6 MJ), peak hours as a clock time. */
+/** Result quantities that count things: printed as whole numbers. */
+const COUNTS: ReadonlySet<EffectQuantity> = new Set(["limitsNotMet"]);
+
+/** Prints one side of an effect; energies in kWh (1 kWh = 3.6 MJ), peak hours as a clock time, counts whole. */
 export function effectValue(e: Effect, value: number | null): string {
   if (value === null) return "—";
+  if (COUNTS.has(e.quantity)) return String(Math.round(value));
   if (e.quantity === "peakTime_h" || e.quantity === "peakCoolingLoadTime_h") return clock(value);
   if (e.unit === "J") return withUnit(formatSig(value / 3.6e6, 4), "kWh");
   return withUnit(formatSig(value, 4), e.unit);
 }
 
-/** Prints the absolute change of an effect with its sign. */
+/**
+ * Prints side a (`old`) or b (`new`) of an effect: a weather-year peak as the local date and time the package
+ * prints (`2031-07-21 14:00`), anything else as `effectValue`.
+ */
+export function effectSide(e: Effect, side: "old" | "new"): string {
+  const time = side === "old" ? e.oldTime : e.newTime;
+  if (typeof time === "string") return weatherTime(time);
+  return effectValue(e, e[side]);
+}
+
+/** Prints the absolute change of an effect with its sign; counts as whole numbers. */
 export function effectAbsolute(e: Effect): string {
   if (e.absolute === null) return "—";
   const sign = e.absolute > 0 ? "+" : "";
+  if (COUNTS.has(e.quantity)) return sign + String(Math.round(e.absolute)).replace("-", MINUS);
   if (e.unit === "J") return sign + withUnit(formatSig(e.absolute / 3.6e6, 3), "kWh");
   return sign + withUnit(formatSig(e.absolute, 3), e.unit);
 }

@@ -9,6 +9,28 @@ interface Quantity {
   readonly value: number | null;
   /** False for a clock time, whose relative change means nothing. */
   readonly ratio: boolean;
+  /** A clock hour of a design day: its change is taken the shortest way round the clock. */
+  readonly clock?: boolean;
+  /** A weather-year peak: its local time `YYYY-MM-DDTHH:MM` as results.json and the package give it. */
+  readonly time?: string | null;
+}
+
+function text(value: unknown): string | null {
+  return typeof value === "string" && value !== "" ? value : null;
+}
+
+/** Hours from one local time `YYYY-MM-DDTHH:MM` to another, or null when either is not such a time. */
+export function hoursBetween(from: string, to: string): number | null {
+  const pattern = /^\d{4}-\d\d-\d\dT\d\d:\d\d$/;
+  if (!pattern.test(from) || !pattern.test(to)) return null;
+  const ms = Date.parse(`${to}:00Z`) - Date.parse(`${from}:00Z`);
+  return Number.isFinite(ms) ? ms / 3.6e6 : null;
+}
+
+/** The signed shortest change between two clock hours, in [−12, 12): 23:00 → 00:00 is +1 h, 02:00 → 22:00 is −4 h. */
+export function clockChange(oldHour: number, newHour: number): number {
+  const d = (((newHour - oldHour) % 24) + 24) % 24;
+  return d >= 12 ? d - 24 : d;
 }
 
 function finite(value: unknown): number | null {
@@ -20,14 +42,22 @@ function dynamicOf(c: ConstructionResults): Record<string, unknown> {
   return typeof d === "object" && d !== null ? d as Record<string, unknown> : {};
 }
 
-function constructionQuantities(id: string, c: ConstructionResults): Quantity[] {
+/** True when the construction's U carries a correction (ΔU for air gaps, fixings, ...), so U_c can differ from U. */
+function hasCorrection(c: ConstructionResults | undefined): boolean {
+  return c !== undefined && c.corrections !== undefined && c.corrections !== null;
+}
+
+function constructionQuantities(id: string, c: ConstructionResults, corrected: boolean): Quantity[] {
   const subject = `construction:${id}`;
   const dynamic = dynamicOf(c);
+  const correctedU: Quantity[] = corrected
+    ? [{ subject, quantity: "correctedU", unit: "W/(m²·K)", value: finite(c.correctedU), ratio: true }]
+    : [];
   return [
     { subject, quantity: "U", unit: "W/(m²·K)", value: finite(c.U), ratio: true },
     { subject, quantity: "decrementFactor", unit: "", value: finite(dynamic.decrementFactor), ratio: true },
     { subject, quantity: "timeLag_h", unit: "h", value: finite(dynamic.timeLag_h), ratio: true },
-    { subject, quantity: "correctedU", unit: "W/(m²·K)", value: finite(c.correctedU), ratio: true },
+    ...correctedU,
     { subject, quantity: "temperatureFactor", unit: "", value: finite(c.temperatureFactor), ratio: true },
     {
       subject,
@@ -73,10 +103,21 @@ function heatingQuantities(id: string, h: HeatingResults): Quantity[] {
 
 function scenarioQuantities(id: string, s: ScenarioResults): Quantity[] {
   const subject = `scenario:${id}`;
-  const period = s.kind === "weather" ? "annual" : "daily";
+  const weather = s.kind === "weather";
+  const period = weather ? "annual" : "daily";
+  // A weather peak is a moment of the year (the package prints its local time); a design-day peak a clock hour.
+  const when = (owner: unknown) =>
+    weather ? { time: text((owner as Record<string, unknown>)?.peakTime) } : { clock: true };
   const own: Quantity[] = [
     { subject, quantity: "peakHeatGain", unit: "W", value: finite(s.peak?.heatGain), ratio: true },
-    { subject, quantity: "peakTime_h", unit: "h", value: finite(s.peak?.time_h), ratio: false },
+    {
+      subject,
+      quantity: "peakTime_h",
+      unit: "h",
+      value: finite(s.peak?.time_h),
+      ratio: false,
+      ...when(s),
+    },
     { subject, quantity: `${period}Gain_J`, unit: "J", value: finite(s.totals?.gain_J), ratio: true },
     { subject, quantity: `${period}Loss_J`, unit: "J", value: finite(s.totals?.loss_J), ratio: true },
   ];
@@ -94,6 +135,7 @@ function scenarioQuantities(id: string, s: ScenarioResults): Quantity[] {
       unit: "h",
       value: finite(surface.peak?.time_h),
       ratio: false,
+      ...when(surface),
     },
   ]);
   const cooling = s.coolingLoad === undefined ? [] : [
@@ -110,14 +152,19 @@ function scenarioQuantities(id: string, s: ScenarioResults): Quantity[] {
       unit: "h",
       value: finite(s.coolingLoad.peak.time_h),
       ratio: false,
+      clock: true,
     },
   ];
   return [...own, ...cooling, ...surfaces];
 }
 
-function quantitiesOf(results: ResultsJson): Quantity[] {
+function quantitiesOf(results: ResultsJson, other: ResultsJson): Quantity[] {
+  const corrected = (id: string, c: ConstructionResults) =>
+    hasCorrection(c) || hasCorrection(other.constructions?.[id]);
   return [
-    ...Object.entries(results.constructions ?? {}).flatMap(([id, c]) => constructionQuantities(id, c)),
+    ...Object.entries(results.constructions ?? {}).flatMap(([id, c]) =>
+      constructionQuantities(id, c, corrected(id, c))
+    ),
     ...Object.entries(results.scenarios ?? {}).flatMap(([id, s]) => scenarioQuantities(id, s)),
     ...Object.entries(results.heating ?? {}).flatMap(([id, h]) => heatingQuantities(id, h)),
   ];
@@ -136,28 +183,40 @@ export function relativeChange(oldValue: number | null, newValue: number | null)
  */
 export function compareResults(a: ResultsJson, b: ResultsJson): { effects: Effect[]; unchanged: number } {
   const key = (q: Quantity) => `${q.subject}\u0000${q.quantity}`;
-  const oldQ = new Map(quantitiesOf(a).map((q) => [key(q), q]));
-  const newQ = quantitiesOf(b);
+  const oldQ = new Map(quantitiesOf(a, b).map((q) => [key(q), q]));
+  const newQ = quantitiesOf(b, a);
   const newKeys = new Set(newQ.map(key));
   const merged = [
-    ...newQ.map((n) => ({ q: n, old: oldQ.get(key(n))?.value ?? null, new: n.value })),
-    ...[...oldQ.values()].filter((o) => !newKeys.has(key(o))).map((o) => ({ q: o, old: o.value, new: null })),
+    ...newQ.map((n) => ({ q: n, o: oldQ.get(key(n)), n: n as Quantity | undefined })),
+    ...[...oldQ.values()].filter((o) => !newKeys.has(key(o))).map((o) => ({ q: o, o, n: undefined })),
   ];
   let unchanged = 0;
   const effects: Effect[] = [];
   for (const m of merged) {
-    if (m.old === m.new) {
+    const old = m.o?.value ?? null;
+    const now = m.n?.value ?? null;
+    const oldTime = m.o?.time ?? null;
+    const newTime = m.n?.time ?? null;
+    const timed = m.q.time !== undefined;
+    if (timed && oldTime !== null && newTime !== null ? oldTime === newTime : old === now) {
       unchanged++;
       continue;
     }
+    const between = oldTime !== null && newTime !== null ? hoursBetween(oldTime, newTime) : null;
+    const absolute = old === null || now === null
+      ? between
+      : m.q.clock === true
+      ? clockChange(old, now)
+      : between ?? now - old;
     effects.push({
       subject: m.q.subject,
       quantity: m.q.quantity,
       unit: m.q.unit,
-      old: m.old,
-      new: m.new,
-      absolute: m.old === null || m.new === null ? null : m.new - m.old,
-      relative: m.q.ratio ? relativeChange(m.old, m.new) : null,
+      old,
+      new: now,
+      absolute,
+      relative: m.q.ratio ? relativeChange(old, now) : null,
+      ...(timed ? { oldTime, newTime } : {}),
     });
   }
   return { effects: sortEffects(effects), unchanged };

@@ -5,10 +5,18 @@ import {
   changeText,
   effectAbsolute,
   effectRelative,
+  effectSide,
   effectSubject,
-  effectValue,
   quantityName,
 } from "./display.ts";
+import {
+  checkFigures,
+  checkLabel,
+  checkMove,
+  verdictFigures,
+  verdictLabel,
+  verdictMove,
+} from "./verdictDisplay.ts";
 import { SECTION_TITLES, sideLine } from "./text.ts";
 import type { Effect, ProjectDiff, SideSummary } from "./types.ts";
 
@@ -97,6 +105,56 @@ function changeTables(diff: ProjectDiff): Trusted {
   return diff.changes.length === 0 ? html`` : html`<h2>Inputs</h2>${parts}`;
 }
 
+function verdictTables(diff: ProjectDiff): Trusted {
+  const verdictRows = diff.verdicts.map((v) =>
+    html`
+      <tr class="${v.new === "NOT MET" ? "fail" : "pass"}">
+        <td>${verdictLabel(v)}</td>
+        <td class="result">${verdictMove(v)}</td>
+        <td>${verdictFigures(v)}</td>
+      </tr>
+    `
+  );
+  const checkRows = diff.checks.map((c) =>
+    html`
+      <tr class="${c.new === "fail" ? "fail" : "pass"}">
+        <td>${checkLabel(c)}</td>
+        <td class="result">${checkMove(c)}</td>
+        <td>${checkFigures(c)}</td>
+      </tr>
+    `
+  );
+  const verdicts = diff.verdicts.length === 0 ? html`` : html`
+    <h2>Verdicts changed</h2>
+    <p class="muted">Limits whose verdict moved, newly NOT MET first.</p>
+    <table class="verdicts">
+      <thead>
+        <tr>
+          <th>limit</th>
+          <th>a → b</th>
+          <th>figures</th>
+        </tr>
+      </thead>
+      <tbody>${verdictRows}</tbody>
+    </table>
+  `;
+  const checks = diff.checks.length === 0 ? html`` : html`
+    <h2>Calculation checks changed</h2>
+    <p class="muted">Checks that newly fail first, then those that no longer fail.</p>
+    <table class="checks">
+      <thead>
+        <tr>
+          <th>check</th>
+          <th>a → b</th>
+          <th>figures</th>
+        </tr>
+      </thead>
+      <tbody>${checkRows}</tbody>
+    </table>
+  `;
+  return joinHtml([verdicts, checks]);
+}
+
 function barClass(e: Effect, largest: number): string {
   if (e.relative === null || largest === 0) return "";
   const step = Math.max(1, Math.min(10, Math.ceil((Math.abs(e.relative) / largest) * 10)));
@@ -113,8 +171,8 @@ function effectsTable(diff: ProjectDiff): Trusted {
       <tr class="${highlight}">
         <td>${effectSubject(e)}</td>
         <td>${quantityName(e.quantity)}</td>
-        <td class="num old">${effectValue(e, e.old)}</td>
-        <td class="num new">${effectValue(e, e.new)}</td>
+        <td class="num old">${effectSide(e, "old")}</td>
+        <td class="num new">${effectSide(e, "new")}</td>
         <td class="num">${effectAbsolute(e)}</td>
         <td class="num">${effectRelative(e)}${bar === "" ? html`` : html`<span class="${bar}"></span>`}</td>
       </tr>
@@ -147,7 +205,7 @@ export function renderDiffHtml(diff: ProjectDiff): string {
   const css = joinHtml([packageCss({ left: title, right: heading }, undefined), DIFF_CSS]);
   const body = diff.identical
     ? html`<p class="no-differences">No differences: the inputs and the results are the same.</p>`
-    : joinHtml([filesTable(diff), changeTables(diff), effectsTable(diff)]);
+    : joinHtml([verdictTables(diff), filesTable(diff), changeTables(diff), effectsTable(diff)]);
   const page = html`
     <!DOCTYPE html>
     <html lang="en">

@@ -3,10 +3,18 @@ import {
   changeText,
   effectAbsolute,
   effectRelative,
+  effectSide,
   effectSubject,
-  effectValue,
   quantityName,
 } from "./display.ts";
+import {
+  checkFigures,
+  checkLabel,
+  checkMove,
+  verdictFigures,
+  verdictLabel,
+  verdictMove,
+} from "./verdictDisplay.ts";
 import type { Change, ChangeSection, ProjectDiff, SideSummary } from "./types.ts";
 import { oneLine, shortened } from "../project/displayText.ts";
 
@@ -61,8 +69,8 @@ function effectTable(diff: ProjectDiff): string[] {
   const rows = diff.effects.map((e) => [
     effectSubject(e),
     quantityName(e.quantity),
-    effectValue(e, e.old),
-    effectValue(e, e.new),
+    effectSide(e, "old"),
+    effectSide(e, "new"),
     effectAbsolute(e),
     effectRelative(e),
   ]);
@@ -72,13 +80,41 @@ function effectTable(diff: ProjectDiff): string[] {
   return [line(head), line(sizes.map((s) => "-".repeat(s))), ...rows.map(line)];
 }
 
-/** Renders the comparison for the terminal: sides, changed files, changed inputs by section, effects table. */
+/** The verdicts that moved and the checks that flipped, printed before anything else. */
+function verdictLines(diff: ProjectDiff): string[] {
+  const out: string[] = [];
+  if (diff.verdicts.length > 0) {
+    out.push("", `Verdicts changed: ${diff.verdicts.length} limit(s), newly NOT MET first`);
+    for (const v of diff.verdicts) {
+      out.push(`  ${inLine(verdictLabel(v))}: ${verdictMove(v)}`, `      ${inLine(verdictFigures(v))}`);
+    }
+  }
+  if (diff.checks.length > 0) {
+    const failing = diff.checks.filter((c) => c.new === "fail").length;
+    out.push(
+      "",
+      `Calculation checks changed: ${failing} newly failing, ${
+        diff.checks.length - failing
+      } no longer failing`,
+    );
+    for (const c of diff.checks) {
+      out.push(`  ${inLine(checkLabel(c))}: ${checkMove(c)}`, `      ${inLine(checkFigures(c))}`);
+    }
+  }
+  return out;
+}
+
+/**
+ * Renders the comparison for the terminal: sides, verdicts and checks that changed, changed files, changed
+ * inputs by section, effects table.
+ */
 export function renderDiffText(diff: ProjectDiff): string {
   const out: string[] = [`a: ${sideLine(diff.a)}`, `b: ${sideLine(diff.b)}`];
   if (diff.identical) {
     out.push("", "no differences: the inputs and the results are the same");
     return out.join("\n");
   }
+  out.push(...verdictLines(diff));
   if (diff.files.length > 0) {
     out.push("", `Files: ${diff.files.length} differ`);
     for (const f of diff.files) {

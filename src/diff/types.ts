@@ -8,6 +8,11 @@
  *   "a": { "label", "kind": "folder" | "package", "title", "revision", "date", "inputsSha256" },
  *   "b": { same },
  *   "identical": true when nothing below differs,
+ *   "verdicts": [ { "subject": "construction:<id>", "limit": "max-u" | "max-periodic-transmittance" | ...,
+ *                   "clause", "unit", "old": "MET" | "NOT MET" | null, "new": same (null: no such limit),
+ *                   "oldValue", "newValue", "oldLimit", "newLimit": number | null } ],
+ *   "checks": [ { "subject", "id", "description", "old": "pass" | "fail" | null, "new": same,
+ *                 "oldValue", "newValue": number | null, "limit" } ],
  *   "files": [ { "path", "status": "added" | "removed" | "changed", "proseChanged": bool | null } ],
  *   "changes": [ { "section": "project" | "material" | "construction" | "scenario",
  *                  "subject": id ("project.md" for the front matter),
@@ -20,11 +25,18 @@
  *   "effects": [ { "subject": "construction:<id>" | "scenario:<id>" | "scenario:<id>/<surface>",
  *                  "quantity": one of EffectQuantity, "unit",
  *                  "old": number | null, "new": number | null,
- *                  "absolute": new − old | null, "relative": (new − old) / |old| | null } ],
+ *                  "absolute": new − old | null, "relative": (new − old) / |old| | null,
+ *                  "oldTime", "newTime": "YYYY-MM-DDTHH:MM" (weather-year peaks only) } ],
  *   "unchangedEffects": count of compared result quantities that are equal on both sides }
  * ```
+ * `verdicts` and `checks` (extensions, read them first) list the code limits whose verdict moved and the
+ * calculation checks that newly fail or no longer fail; newly NOT MET / failing ones come first.
  * Effects list only quantities that differ, largest |relative| first; entries without a relative change
  * (one side missing, old = 0, or a clock time such as the hour of the peak) follow in input order.
+ * The hour of a design-day peak is a clock hour: its `absolute` change is the signed shortest way round the
+ * clock (23:00 → 00:00 is +1 h). A weather-year peak carries its local time as in the package
+ * (`oldTime`/`newTime`; `old`/`new` are hours after the first row) and `absolute` is the hours between the two
+ * times. "U with corrections" (`correctedU`) is compared only when a side has a correction.
  * `proseChanged` is null for files that are not Markdown documents of both sides.
  */
 
@@ -77,6 +89,41 @@ export interface Effect {
   readonly new: number | null;
   readonly absolute: number | null;
   readonly relative: number | null;
+  /** Weather-year peaks: the local time of the peak as the package prints it, `YYYY-MM-DDTHH:MM`. */
+  readonly oldTime?: string | null;
+  readonly newTime?: string | null;
+}
+
+/** The verdict on a code limit, as the package prints it. */
+export type Verdict = "MET" | "NOT MET";
+
+/** A code limit of a construction whose verdict differs between the sides (null: no such limit there). */
+export interface VerdictChange {
+  readonly subject: string;
+  readonly limit: string;
+  readonly clause: string;
+  readonly unit: string;
+  readonly old: Verdict | null;
+  readonly new: Verdict | null;
+  readonly oldValue: number | null;
+  readonly newValue: number | null;
+  readonly oldLimit: number | null;
+  readonly newLimit: number | null;
+}
+
+/** The outcome of a calculation check. */
+export type CheckStatus = "pass" | "fail";
+
+/** A calculation check that newly fails on b, or failed on a and no longer does (null: absent on that side). */
+export interface CheckChange {
+  readonly subject: string;
+  readonly id: string;
+  readonly description: string;
+  readonly old: CheckStatus | null;
+  readonly new: CheckStatus | null;
+  readonly oldValue: number | null;
+  readonly newValue: number | null;
+  readonly limit: number;
 }
 
 /** An input file present on only one side or with different bytes. */
@@ -102,6 +149,10 @@ export interface ProjectDiff {
   readonly a: SideSummary;
   readonly b: SideSummary;
   readonly identical: boolean;
+  /** Extension: limits whose verdict moved, newly NOT MET first. */
+  readonly verdicts: readonly VerdictChange[];
+  /** Extension: calculation checks that newly fail or no longer fail, newly failing first. */
+  readonly checks: readonly CheckChange[];
   readonly files: readonly FileChange[];
   readonly changes: readonly Change[];
   readonly effects: readonly Effect[];

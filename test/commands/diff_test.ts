@@ -156,3 +156,60 @@ Deno.test({
     }
   },
 });
+
+const BRIDGED = new URL("../fixtures/bridged/", import.meta.url).pathname;
+
+/** A copy of the bridged fixture with the homogeneous wall's board thinned from 100 mm to `mm`. */
+async function bridgedWithBoard(mm: number): Promise<string> {
+  const dir = await Deno.makeTempDir();
+  for (const entry of Deno.readDirSync(BRIDGED)) {
+    Deno.copyFileSync(join(BRIDGED, entry.name), join(dir, entry.name));
+  }
+  const walls = join(dir, "walls.md");
+  const text = Deno.readTextFileSync(walls);
+  const edited = text.replace("{ name: board, thickness: 100 mm", `{ name: board, thickness: ${mm} mm`);
+  assert.notEqual(edited, text, "the fixture still has the board line");
+  Deno.writeTextFileSync(walls, edited);
+  return dir;
+}
+
+Deno.test("runDiff() puts a limit going MET → NOT MET first, with its clause, in text, JSON and HTML", async () => {
+  // EW-H: U = 1/(0.04 + d/0.04 + 0.13) (ISO 6946 layer sum). 100 mm: 1/2.67 = 0.375 ≤ 0.60, MET; 50 mm:
+  // 1/1.42 = 0.704 > 0.60 (project-wide max-u, "Invented test brief, cl. 1"), NOT MET.
+  const thin = await bridgedWithBoard(50);
+  const { out, io } = capture();
+  assert.equal(await runDiff({ a: BRIDGED, b: thin, format: "text" }, io), 0);
+  const text = out.join("\n");
+  const verdict = text.indexOf(
+    "construction EW-H · max-u (Invented test brief, cl. 1 (project-wide)): MET → NOT MET",
+  );
+  assert.ok(verdict > 0, text);
+  for (const later of ["Files:", "Constructions:", "Effects on results:"]) {
+    assert.ok(text.indexOf(later) > verdict, `${later} comes after the verdict\n${text}`);
+  }
+  // Counts are whole numbers: limits not met 0 → 1.
+  assert.match(text, /construction EW-H\s+limits not met\s+0\s+1\s+\+1\s+—/);
+  // EW-H has no correction on either side: no "U-value with corrections" line for it; U is there.
+  assert.ok(!/construction EW-H\s+U-value with corrections/.test(text), text);
+  assert.match(text, /construction EW-H\s+U-value\s/);
+
+  const json = await diffJson(BRIDGED, thin);
+  const keys = Object.keys(json);
+  assert.ok(
+    keys.indexOf("verdicts") < keys.indexOf("files") && keys.indexOf("checks") < keys.indexOf("effects"),
+  );
+  assert.deepEqual(json.verdicts.map((v) => [v.subject, v.limit, v.old, v.new]), [
+    ["construction:EW-H", "max-u", "MET", "NOT MET"],
+  ]);
+  assert.ok(Math.abs((json.verdicts[0]!.newValue ?? NaN) - 1 / 1.42) < 1e-9);
+  assert.deepEqual(json.checks, []);
+
+  const page = capture();
+  assert.equal(await runDiff({ a: BRIDGED, b: thin, format: "html" }, page.io), 0);
+  const html = page.out.join("\n");
+  const first = html.indexOf("<h2>Verdicts changed</h2>");
+  assert.ok(
+    first > 0 && first < html.indexOf("<h2>Inputs</h2>") && first < html.indexOf("<h2>Effects on results"),
+  );
+  assert.ok(html.includes("MET → NOT MET"));
+});

@@ -129,6 +129,8 @@ Deno.test("renderDiffText() keeps a value with line breaks on its own line, so i
     a: sideOf("B"),
     b: sideOf(fake),
     identical: false,
+    verdicts: [],
+    checks: [],
     files: [{ path: "x\ny.md", status: "changed" } as never],
     changes: [
       change({

@@ -6,6 +6,7 @@ import { renderCover, STATUS_LABEL, watermarkFor } from "./cover.ts";
 import { packageCss } from "./css.ts";
 import { renderCautionsSection, renderScopeSection } from "./fixedSections.ts";
 import { renderMethodSection } from "./methodSection.ts";
+import { outsideFilmCautions } from "../results/outsideFilmCautions.ts";
 import { html, type Trusted } from "./html.ts";
 import { makeRenderContext, type PackageInput, type RenderContext } from "./packageInput.ts";
 import { renderReproducibilitySection, renderRevisionSection } from "./recordSections.ts";
@@ -99,7 +100,7 @@ export function renderPackage(input: PackageInput): string {
     ${renderAssumptionsSection(ctx)}
     ${renderMaterialsSection(ctx)}
     ${renderSourcesSection(ctx)}
-    ${renderCautionsSection()}
+    ${renderCautionsSection(outsideFilmCautions(input.results.scenarios))}
     ${renderRevisionSection(ctx)}
     ${renderReproducibilitySection(ctx)}
     ${renderInputsAppendix(ctx)}

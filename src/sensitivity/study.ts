@@ -141,11 +141,16 @@ function peakOf(
 ): number {
   const context: ScenarioContext = {
     constructions,
-    analysisAt(id, timestepS) {
+    analysisAt(id, timestepS, outsideResistance) {
       const a = lookup(id);
-      if (a !== undefined && a.timestepS === timestepS) return a;
       const c = constructions.get(id)!;
-      const fresh = analyseConstruction(c, timestepS, { stateSpace: false });
+      const ownFilm = outsideResistance === undefined || outsideResistance === c.outsideResistance;
+      if (a !== undefined && a.timestepS === timestepS && ownFilm) return a;
+      const fresh = analyseConstruction(
+        ownFilm ? c : { ...c, outsideResistance: outsideResistance! },
+        timestepS,
+        { stateSpace: false },
+      );
       if (fresh.kind !== "analysis") throw new Error(fresh.message);
       return fresh;
     },

@@ -37,8 +37,11 @@ Deno.test("sensitivityStudy() gives the closed-form change of U and equal effect
   assert.ok(conductivity !== undefined);
   assert.ok(Math.abs(conductivity.minus - (u(0.4) - u(0.5))) < 1e-12);
   assert.ok(Math.abs(conductivity.plus - (u(0.6) - u(0.5))) < 1e-12);
-  // U does not depend on density or specific heat (steady state).
-  assert.equal(byProperty.get("density")?.plus, 0);
+  // U does not depend on density or specific heat (steady state): both effects are zero, below the threshold,
+  // left out of the list and counted.
+  assert.equal(byProperty.has("density"), false);
+  assert.equal(byProperty.has("specificHeat"), false);
+  assert.equal(study.constructions.W?.dropped.U, 2);
   // The transient response depends on ρ and c only through ρc (Fourier equation), so their effects on the lag agree.
   const lag = new Map(study.constructions.W?.timeLag_h.map((e) => [e.property, e]));
   assert.ok(Math.abs((lag.get("density")?.plus ?? NaN) - (lag.get("specificHeat")?.plus ?? NaN)) < 1e-9);

@@ -73,8 +73,8 @@ rests on these simplifications:</p>
 </section>`;
 }
 
-/** Section 8: cautions on the use of the results. */
-export function renderCautionsSection(): Trusted {
+/** Section 8: cautions on the use of the results; `extra` holds cautions produced with the results. */
+export function renderCautionsSection(extra: readonly string[] = []): Trusted {
   return html`<section id="s-8"><h2>8 Cautions</h2>
 ${
     raw(`<ul>
@@ -87,6 +87,8 @@ and unverified assumptions carry their uncertainty into every result.</li>
 <li>The exclusions in section 1 apply. Where an excluded effect matters (thermal bridges, moisture, non-linear
 surface exchange), assess it separately.</li>
 </ul>`)
+  }${
+    extra.length === 0 ? "" : html`<ul class="result-cautions">${extra.map((c) => html`<li>${c}</li>`)}</ul>`
   }
 </section>`;
 }

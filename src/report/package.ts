@@ -6,6 +6,9 @@ import { renderCover, STATUS_LABEL, watermarkFor } from "./cover.ts";
 import { packageCss } from "./css.ts";
 import { renderCautionsSection, renderScopeSection } from "./fixedSections.ts";
 import { renderMethodSection } from "./methodSection.ts";
+import { outsideFilmCautions } from "../results/outsideFilmCautions.ts";
+import { toDisplay, unitLabel } from "./displayUnits.ts";
+import { formatTrim } from "./format.ts";
 import { html, type Trusted } from "./html.ts";
 import { makeRenderContext, type PackageInput, type RenderContext } from "./packageInput.ts";
 import { renderReproducibilitySection, renderRevisionSection } from "./recordSections.ts";
@@ -99,7 +102,15 @@ export function renderPackage(input: PackageInput): string {
     ${renderAssumptionsSection(ctx)}
     ${renderMaterialsSection(ctx)}
     ${renderSourcesSection(ctx)}
-    ${renderCautionsSection()}
+    ${renderCautionsSection(
+      outsideFilmCautions(
+        input.results.scenarios,
+        (w) =>
+          `${formatTrim(toDisplay(ctx.display, "transmittance", w), 3)} ${
+            unitLabel(ctx.display, "transmittance")
+          }`,
+      ),
+    )}
     ${renderRevisionSection(ctx)}
     ${renderReproducibilitySection(ctx)}
     ${renderInputsAppendix(ctx)}

@@ -1,6 +1,6 @@
 /** The sensitivity study in the package: which material property moves U, time lag and the peak heat gain most. */
 import * as Plot from "@observablehq/plot";
-import type { SensitivityEffect, SensitivityResults } from "../sensitivity/study.ts";
+import type { ConditionEffect, SensitivityEffect, SensitivityResults } from "../sensitivity/study.ts";
 import { type DisplayUnits, type QuantityKind, toDisplay, unitLabel } from "./displayUnits.ts";
 import { formatSig, formatTrim } from "./format.ts";
 import { html, type Trusted } from "./html.ts";
@@ -15,6 +15,59 @@ const PROPERTY_NAMES: Readonly<Record<SensitivityEffect["property"], string>> = 
 };
 const SHOWN = 10;
 
+const CONDITION_NAMES: Readonly<Record<ConditionEffect["condition"], string>> = {
+  absorptance: "solar absorptance α of every sunlit surface",
+  outsideCoefficient: "outside film h_o of every sunlit surface (and its R_se = 1/h_o)",
+  maxDryBulb: "design maximum dry bulb (the whole outdoor profile shifted)",
+  dailyRange: "daily range of the outdoor dry bulb",
+  indoor: "indoor temperature",
+};
+
+/** The sentence on the effects left out: how many and the threshold. */
+function droppedText(count: number, study: SensitivityResults, what: string): string {
+  const threshold = formatTrim(study.threshold * 100, 3);
+  return count === 0
+    ? `No ${what} is below the threshold of ${threshold} % of the base value.`
+    : `${count} ${what}${
+      count === 1 ? " is" : "s are"
+    } left out: both changes below ${threshold} % of the base value.`;
+}
+
+function conditionTable(
+  id: string,
+  effects: readonly ConditionEffect[],
+  dropped: number,
+  study: SensitivityResults,
+  display: DisplayUnits,
+): Trusted {
+  const unit = unitLabel(display, "heatGain");
+  const rows = effects.map((e) =>
+    html`
+      <tr>
+        <td>${CONDITION_NAMES[e.condition]}</td>
+        <td>${e.step}</td>
+        <td class="num">${signed(e.minus, display, "heatGain")}</td>
+        <td class="num">${signed(e.plus, display, "heatGain")}</td>
+      </tr>
+    `
+  );
+  return html`
+    <table>
+      <caption>Effect of the design-day conditions on the peak total heat gain of ${id}, largest first</caption>
+      <thead>
+        <tr>
+          <th>Condition varied</th>
+          <th>Step</th>
+          <th>Change at − step (${unit})</th>
+          <th>Change at + step (${unit})</th>
+        </tr>
+      </thead>
+      <tbody>${rows}</tbody>
+    </table>
+    <p class="muted">${droppedText(dropped, study, "condition effect")}</p>
+  `;
+}
+
 function materialLabel(key: string): string {
   return key.startsWith("inline:") ? `${key.slice(7)} (inline layer)` : key;
 }
@@ -28,6 +81,7 @@ function signed(value: number, display: DisplayUnits, kind: QuantityKind): strin
 function effectTable(
   caption: string,
   allEffects: readonly SensitivityEffect[],
+  dropped: number,
   study: SensitivityResults,
   display: DisplayUnits,
   kind: QuantityKind,
@@ -35,7 +89,10 @@ function effectTable(
   const percent = formatTrim(study.variation * 100, 3);
   const unit = kind === "time" ? "h" : unitLabel(display, kind);
   const effects = allEffects.filter((e) => Math.max(Math.abs(e.minus), Math.abs(e.plus)) > 1e-12);
-  if (effects.length === 0) return html`<p class="muted">${caption}: no material property changes it.</p>`;
+  const droppedNote = droppedText(dropped, study, "material property effect");
+  if (effects.length === 0) {
+    return html`<p class="muted">${caption}: no material property changes it by the threshold. ${droppedNote}</p>`;
+  }
   const rows = effects.slice(0, SHOWN).map((e, i) =>
     html`
       <tr>
@@ -52,7 +109,7 @@ function effectTable(
       <p
         class="muted">${String(
           effects.length - SHOWN,
-        )} smaller effects are in Appendix B (results.json, key sensitivity); properties with no effect are not listed.</p>
+        )} smaller effects are in Appendix B (results.json, key sensitivity).</p>
     `
     : html``;
   return html`
@@ -68,7 +125,7 @@ function effectTable(
         </tr>
       </thead>
       <tbody>${rows}</tbody>
-    </table>${more}
+    </table>${more}<p class="muted">${droppedNote}</p>
   `;
 }
 
@@ -111,15 +168,27 @@ export function renderSensitivity(ctx: RenderContext, sectionId: string, number:
 <figure>${
       tornado(id, s.peakHeatGain, display)
     }<figcaption>Change of the peak total heat gain of ${id} when one property of one material is lowered (blue) or raised (red) by ${percent} %, largest effects first; ranks as in the table below.</figcaption></figure>
-${effectTable(`Effect on the peak total heat gain of ${id}`, s.peakHeatGain, study, display, "heatGain")}`
+${
+      effectTable(
+        `Effect on the peak total heat gain of ${id}`,
+        s.peakHeatGain,
+        s.dropped.peakHeatGain,
+        study,
+        display,
+        "heatGain",
+      )
+    }
+${conditionTable(id, s.conditions, s.dropped.conditions, study, display)}`
   );
   const constructions = Object.entries(study.constructions).map(([id, c]) =>
     html`<h4>Construction ${id}</h4>
-${effectTable(`Effect on the U-value of ${id}`, c.U, study, display, "transmittance")}
-${effectTable(`Effect on the time lag of ${id}`, c.timeLag_h, study, display, "time")}`
+${effectTable(`Effect on the U-value of ${id}`, c.U, c.dropped.U, study, display, "transmittance")}
+${effectTable(`Effect on the time lag of ${id}`, c.timeLag_h, c.dropped.timeLag_h, study, display, "time")}`
   );
   return html`<section class="document"><h3 id="${sectionId}">${number} Sensitivity study</h3>
-<p>Each material property was lowered and raised by ${percent} % in every layer that uses the material, one property at a time, with all else held; the affected constructions were recomputed (root method) and so was each design day. The study shows which inputs the results depend on most, so that their sources can be checked first; it is not a statement of uncertainty.</p>
+<p>Each material property was lowered and raised by ${percent} % in every layer that uses the material, one property at a time, with all else held; the affected constructions were recomputed (root method) and so was each design day. Each design day's conditions were varied the same way, one at a time, by the steps stated in its table (absorptance ±0.1, h_o ±${percent} %, design maximum dry bulb and daily range ±2 K, indoor temperature ±1 K: our stated steps, common practice, no source). Effects whose changes are both below ${
+    formatTrim(study.threshold * 100, 3)
+  } % of the base value are left out and counted. The study shows which inputs the results depend on most, so that their sources can be checked first; it is not a statement of uncertainty.</p>
 ${scenarios}
 ${constructions}
 </section>`;

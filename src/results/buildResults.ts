@@ -171,28 +171,39 @@ function computeScenarios(
   };
   const context: ScenarioContext = {
     constructions,
-    analysisAt(constructionId, timestepS) {
+    analysisAt(constructionId, timestepS, outsideResistance) {
       const own = analyses[constructionId];
-      if (own !== undefined && own.timestepS === timestepS) return own;
-      const key = `${constructionId}@${timestepS}`;
+      const construction = constructions.get(constructionId)!;
+      const film = outsideResistance === undefined || outsideResistance === construction.outsideResistance
+        ? undefined
+        : outsideResistance;
+      if (own !== undefined && own.timestepS === timestepS && film === undefined) return own;
+      const key = `${constructionId}@${timestepS}@${film ?? "own"}`;
       const cached = cache.get(key);
       if (cached !== undefined) return cached;
-      const construction = constructions.get(constructionId)!;
-      const analysis = analyseConstruction(construction, timestepS);
+      const analysis = analyseConstruction(
+        film === undefined ? construction : { ...construction, outsideResistance: film },
+        timestepS,
+      );
       if (analysis.kind === "unresolvable") {
         throw new Error(`construction ${constructionId} at ${timestepS} s: ${analysis.message}`);
       }
+      const at = `At the scenario time step ${timestepS / 60} min${
+        film === undefined
+          ? ""
+          : ` with the design-day outside film R_se = ${Number(film.toPrecision(4))} m²·K/W`
+      }`;
       cache.set(key, analysis);
       parts.checks.push(
         ...constructionChecksJson(constructionId, analysis).map((c) => ({
           ...c,
-          description: `At the scenario time step ${timestepS / 60} min: ${c.description}`,
+          description: `${at}: ${c.description}`,
         })),
       );
       parts.methodNotes.push(
         ...constructionMethodNotesJson(constructionId, analysis).map((n) => ({
           ...n,
-          text: `At the scenario time step ${timestepS / 60} min: ${n.text}`,
+          text: `${at}: ${n.text}`,
         })),
       );
       return analysis;

@@ -128,6 +128,18 @@ export interface EnergyTotals {
   readonly monthly?: readonly { readonly gain_J: number; readonly loss_J: number }[];
 }
 
+/**
+ * Extension (design day): the outside film used. `h_o` is the summer design film in W/(m²K) with its `source`; the
+ * construction response of the day is computed with `response` (R_se = 1/h_o); `overridden` lists the surfaces that
+ * give their own `outside-coefficient` (W/(m²K)), which then is their h_o and their 1/R_se.
+ */
+export interface OutsideFilmResults {
+  readonly h_o: number;
+  readonly source: string;
+  readonly response: "R_se = 1/h_o";
+  readonly overridden: readonly { readonly surface: string; readonly h_o: number }[];
+}
+
 /** A scenario in results.json (DESIGN.md §4). */
 export interface ScenarioResults {
   readonly kind: "design-day" | "weather";
@@ -142,6 +154,8 @@ export interface ScenarioResults {
   readonly convergence?: { readonly days: number; readonly peakChange: number };
   /** Extension: sun position at each step (design day). */
   readonly sun?: readonly { readonly altitude_deg: number; readonly azimuth_deg: number }[];
+  /** Extension (design day): the outside film used, see `OutsideFilmResults`. */
+  readonly outsideFilm?: OutsideFilmResults;
   /** Extension: statements of the conventions and rules applied. */
   readonly notes: readonly string[];
   /** Extension (design day with a radiant time series): total cooling load per full hour and its peak. */

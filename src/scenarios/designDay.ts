@@ -11,12 +11,16 @@ import type { Assumption, Construction, Scenario, TemperatureProfile } from "../
 import type { CheckResult, ScenarioResults, SurfaceResults } from "../results/types.ts";
 import { coolingLoadNotes, designDayCoolingLoad } from "./coolingLoad.ts";
 import { gainAndLoss, meanOf, peakOf, sumSeries } from "./seriesStats.ts";
+import { outsideFilmNote, outsideFilmOf } from "./outsideFilm.ts";
 import { type SurfaceParameters, surfaceParameters, type SurfaceWarning } from "./surfaceParameters.ts";
 
-/** What a scenario computation needs: the constructions and their analyses at a timestep (cached by the caller). */
+/**
+ * What a scenario computation needs: the constructions and their analyses at a timestep, optionally with another
+ * outside surface resistance R_se in m²K/W (the design day's summer film), cached by the caller.
+ */
 export interface ScenarioContext {
   readonly constructions: ReadonlyMap<string, Construction>;
-  analysisAt(constructionId: string, timestepS: number): DynamicAnalysis;
+  analysisAt(constructionId: string, timestepS: number, outsideResistance?: number): DynamicAnalysis;
 }
 
 /** A computed scenario with the checks, assumptions and warnings it adds. */
@@ -60,7 +64,10 @@ export function computeDesignDay(scenario: DesignDayScenario, context: ScenarioC
   for (const surface of scenario.surfaces) {
     const construction = context.constructions.get(surface.construction);
     if (construction === undefined) continue;
-    parameters.set(surface.id, surfaceParameters(scenario.id, surface, construction, assumptions, warnings));
+    parameters.set(
+      surface.id,
+      surfaceParameters(scenario.id, surface, construction, assumptions, warnings, "summer-design"),
+    );
   }
   const boundarySurfaces: BoundarySurface[] = scenario.surfaces.map((surface) => {
     const p = parameters.get(surface.id)!;
@@ -95,8 +102,8 @@ export function computeDesignDay(scenario: DesignDayScenario, context: ScenarioC
   let convergenceDays = 0;
   let convergenceChange = 0;
   for (const [index, surface] of scenario.surfaces.entries()) {
-    const analysis = context.analysisAt(surface.construction, timestepS);
     const p = parameters.get(surface.id)!;
+    const analysis = context.analysisAt(surface.construction, timestepS, p.responseOutsideResistance);
     const bound = boundary.surfaces[index]!;
     const solAir = bound.solAirC;
     const subject = `scenario:${scenario.id}/${surface.id}`;
@@ -134,6 +141,7 @@ export function computeDesignDay(scenario: DesignDayScenario, context: ScenarioC
     : designDayCoolingLoad(surfaces, scenario.radiantTimeSeries, timestepS);
   const totalHeatGain = sumSeries(Object.values(surfaces).map((s) => s.heatGain), indoor.length);
   const totalPeak = peakOf(totalHeatGain);
+  const outsideFilm = outsideFilmOf(scenario.surfaces, parameters);
   const results: ScenarioResults = {
     kind: "design-day",
     timestep_h: timestepS / 3600,
@@ -147,7 +155,9 @@ export function computeDesignDay(scenario: DesignDayScenario, context: ScenarioC
     ...(scenario.site === undefined ? {} : {
       sun: boundary.sunPosition.map((s) => ({ altitude_deg: s.altitudeDeg, azimuth_deg: s.azimuthDeg })),
     }),
+    ...(outsideFilm === undefined ? {} : { outsideFilm }),
     notes: [
+      ...(outsideFilm === undefined ? [] : [outsideFilmNote(outsideFilm)]),
       ...boundary.notes.filter((note) => !note.startsWith('Surface "')),
       ...scenario.surfaces.filter((surface) => surface.solAirC === undefined).map((surface) => {
         const correction = parameters.get(surface.id)?.longwaveCorrectionK ?? 0;

@@ -10,6 +10,17 @@ export const DEFAULT_GROUND_REFLECTANCE = 0.2;
  * 3.9 K of ASHRAE Handbook—Fundamentals Ch. 18 (sol-air temperature, from memory) for ε = 1 and h_o = 17 W/(m²K).
  */
 export const HORIZONTAL_LONGWAVE_DEFICIT_W_PER_M2 = 3.9 * 17;
+/**
+ * Summer design outside film h_o for design days, W/(m²K): 17 W/(m²K) (3.0 Btu/(h·ft²·°F)), the coefficient of the
+ * sol-air temperature in ASHRAE Handbook—Fundamentals, Ch. 18, sol-air temperature (from memory). ISO 6946's
+ * R_se = 0.04 m²K/W (h_o = 25) is a conventional film for U-values, not a summer design condition.
+ */
+export const SUMMER_DESIGN_OUTSIDE_COEFFICIENT = 17;
+/** Where the summer design film comes from, as stated in the package. */
+export const SUMMER_DESIGN_FILM_SOURCE =
+  "ASHRAE Handbook—Fundamentals, Ch. 18, sol-air temperature (from memory)";
+/** Which outside film a scenario uses by default: the construction's R_se (weather years) or the summer design film. */
+export type OutsideFilmRule = "construction" | "summer-design";
 /** Radiant fractions of conduction heat gain, ASHRAE Handbook—Fundamentals 2009–2021, Ch. 18 Table 14 (from memory). */
 export const RADIANT_FRACTION_WALL = 0.46;
 export const RADIANT_FRACTION_ROOF = 0.60;
@@ -23,6 +34,13 @@ export interface SurfaceParameters {
   readonly groundReflectance: number;
   /** h_o, W/(m² K) */
   readonly outsideCoefficient: number;
+  /**
+   * R_se of the construction response this surface uses, m²K/W: 1/h_o under the summer design film (sol-air and
+   * response factors on one film), else the construction's own R_se.
+   */
+  readonly responseOutsideResistance: number;
+  /** True when the surface gives its own `outside-coefficient`. */
+  readonly outsideCoefficientGiven: boolean;
   /** ε ΔR / h_o, K */
   readonly longwaveCorrectionK: number;
   readonly radiantFraction: number;
@@ -43,6 +61,7 @@ export function surfaceParameters(
   construction: Construction,
   assumptions: Assumption[],
   warnings: SurfaceWarning[],
+  filmRule: OutsideFilmRule = "construction",
 ): SurfaceParameters {
   const at = formatPosition(surface.at);
   const tag = `${scenarioId}/${surface.id}`;
@@ -65,36 +84,10 @@ export function surfaceParameters(
       at,
     });
   }
-  const filmCoefficient = construction.outsideResistance > 0 ? 1 / construction.outsideResistance : Infinity;
-  let outsideCoefficient = filmCoefficient;
-  if (surface.outsideCoefficient !== undefined) {
-    outsideCoefficient = surface.outsideCoefficient;
-    if (Math.abs(outsideCoefficient - filmCoefficient) > 1e-9 * outsideCoefficient) {
-      const message =
-        `Surface ${surface.id} sets h_o = ${
-          round(outsideCoefficient)
-        } W/(m²·K) for its sol-air temperature, ` +
-        `but the response factors of ${construction.id} use R_se = ${construction.outsideResistance} m²·K/W (1/R_se = ${
-          round(filmCoefficient)
-        })`;
-      warnings.push({ at, message });
-      assumptions.push({
-        id: `override:outside-coefficient:${tag}`,
-        text: message,
-        source: "project input",
-        at,
-      });
-    }
-  } else if (surface.solAirC === undefined) {
-    assumptions.push({
-      id: `default:outside-coefficient:${tag}`,
-      text: `Outside coefficient of ${surface.id}: h_o = 1/R_se of ${construction.id} = ${
-        round(filmCoefficient)
-      } W/(m²·K), the same film as in the response factors`,
-      source: "DESIGN rule: sol-air temperature and conduction use one outside film",
-      at,
-    });
-  }
+  const film = filmRule === "summer-design" && surface.solAirC === undefined
+    ? summerDesignFilm(surface, construction, tag, at, assumptions)
+    : constructionFilm(surface, construction, tag, at, assumptions, warnings);
+  const outsideCoefficient = film.outsideCoefficient;
   let longwaveCorrectionK = surface.longwaveCorrectionK ?? 0;
   if (surface.longwaveCorrectionK === undefined && surface.solAirC === undefined) {
     const skyView = tiltDeg < 90 ? Math.cos((tiltDeg * Math.PI) / 180) : 0;
@@ -137,11 +130,100 @@ export function surfaceParameters(
     emittance,
     groundReflectance,
     outsideCoefficient,
+    responseOutsideResistance: film.responseOutsideResistance,
+    outsideCoefficientGiven: surface.outsideCoefficient !== undefined,
     longwaveCorrectionK,
     radiantFraction,
     tiltDeg,
     azimuthDeg: surface.azimuthDeg ?? 180,
   };
+}
+
+interface OutsideFilm {
+  readonly outsideCoefficient: number;
+  readonly responseOutsideResistance: number;
+}
+
+/**
+ * Design days: h_o is the summer design film (or the surface's `outside-coefficient`), and the construction response
+ * of this surface is computed with R_se = 1/h_o, so sol-air and response factors use one film; U for limits keeps the
+ * construction's ISO 6946 R_se.
+ */
+function summerDesignFilm(
+  surface: ScenarioSurface,
+  construction: Construction,
+  tag: string,
+  at: string,
+  assumptions: Assumption[],
+): OutsideFilm {
+  const given = surface.outsideCoefficient;
+  const outsideCoefficient = given ?? SUMMER_DESIGN_OUTSIDE_COEFFICIENT;
+  const response = `the response of ${construction.id} for this design day uses R_se = 1/h_o = ${
+    round(1 / outsideCoefficient)
+  } m²·K/W (its U-value for limits keeps R_se = ${construction.outsideResistance} m²·K/W)`;
+  assumptions.push(
+    given === undefined
+      ? {
+        id: `default:outside-coefficient:${tag}`,
+        text:
+          `Outside coefficient of ${surface.id}: summer design film h_o = ${outsideCoefficient} W/(m²·K); ${response}`,
+        source: SUMMER_DESIGN_FILM_SOURCE,
+        at,
+      }
+      : {
+        id: `override:outside-coefficient:${tag}`,
+        text: `Surface ${surface.id} sets h_o = ${
+          round(outsideCoefficient)
+        } W/(m²·K) instead of the summer design film ${SUMMER_DESIGN_OUTSIDE_COEFFICIENT} W/(m²·K); ${response}`,
+        source: "project input",
+        at,
+      },
+  );
+  return { outsideCoefficient, responseOutsideResistance: 1 / outsideCoefficient };
+}
+
+/** Weather years and given sol-air lists: h_o = 1/R_se of the construction unless the surface overrides it. */
+function constructionFilm(
+  surface: ScenarioSurface,
+  construction: Construction,
+  tag: string,
+  at: string,
+  assumptions: Assumption[],
+  warnings: SurfaceWarning[],
+): OutsideFilm {
+  const responseOutsideResistance = construction.outsideResistance;
+  const filmCoefficient = construction.outsideResistance > 0 ? 1 / construction.outsideResistance : Infinity;
+  if (surface.outsideCoefficient !== undefined) {
+    const outsideCoefficient = surface.outsideCoefficient;
+    if (Math.abs(outsideCoefficient - filmCoefficient) > 1e-9 * outsideCoefficient) {
+      const message =
+        `Surface ${surface.id} sets h_o = ${
+          round(outsideCoefficient)
+        } W/(m²·K) for its sol-air temperature, ` +
+        `but the response factors of ${construction.id} use R_se = ${construction.outsideResistance} m²·K/W (1/R_se = ${
+          round(filmCoefficient)
+        })`;
+      warnings.push({ at, message });
+      assumptions.push({
+        id: `override:outside-coefficient:${tag}`,
+        text: message,
+        source: "project input",
+        at,
+      });
+    }
+    return { outsideCoefficient, responseOutsideResistance };
+  }
+  if (surface.solAirC === undefined) {
+    assumptions.push({
+      id: `default:outside-coefficient:${tag}`,
+      text: `Outside coefficient of ${surface.id}: h_o = 1/R_se of ${construction.id} = ${
+        round(filmCoefficient)
+      } W/(m²·K), the same film as in the response factors`,
+      source: "DESIGN rule: sol-air temperature and conduction use one outside film",
+      at,
+    });
+  }
+  return { outsideCoefficient: filmCoefficient, responseOutsideResistance };
 }
 
 /**

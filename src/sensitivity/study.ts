@@ -1,6 +1,9 @@
 import { analyseConstruction, type DynamicAnalysis } from "../engine/mod.ts";
 import type { Construction, Model, ResolvedLayer } from "../project/model.ts";
 import { computeDesignDay, type ScenarioContext } from "../scenarios/designDay.ts";
+import { type ConditionEffect, conditionEffects, EFFECT_THRESHOLD, isShown } from "./conditions.ts";
+
+export type { ConditionEffect, VariedCondition } from "./conditions.ts";
 
 /** A material property a sensitivity study varies. */
 export type VariedProperty = "conductivity" | "density" | "specificHeat" | "resistance";
@@ -13,16 +16,37 @@ export interface SensitivityEffect {
   readonly plus: number;
 }
 
-/** results.json `sensitivity` (extension): per construction U and time lag, per design day the peak heat gain. */
+/**
+ * results.json `sensitivity` (extension): per construction U and time lag, per design day the peak heat gain, for
+ * the material properties and (`conditions`) the design-day conditions. Effects below `threshold` × |base| are
+ * dropped from the lists and counted in `dropped`.
+ */
 export interface SensitivityResults {
   readonly variation: number;
+  /** Fraction of the base value below which an effect is dropped (both its changes smaller). */
+  readonly threshold: number;
   readonly constructions: Readonly<
     Record<
       string,
-      { readonly U: readonly SensitivityEffect[]; readonly timeLag_h: readonly SensitivityEffect[] }
+      {
+        readonly U: readonly SensitivityEffect[];
+        readonly timeLag_h: readonly SensitivityEffect[];
+        readonly dropped: { readonly U: number; readonly timeLag_h: number };
+      }
     >
   >;
-  readonly scenarios: Readonly<Record<string, { readonly peakHeatGain: readonly SensitivityEffect[] }>>;
+  readonly scenarios: Readonly<
+    Record<
+      string,
+      {
+        /** Base peak total heat gain, W. */
+        readonly basePeakHeatGain: number;
+        readonly peakHeatGain: readonly SensitivityEffect[];
+        readonly conditions: readonly ConditionEffect[];
+        readonly dropped: { readonly peakHeatGain: number; readonly conditions: number };
+      }
+    >
+  >;
 }
 
 /** A layer's material key for the study: the material id, or the inline layer's name. */
@@ -72,8 +96,10 @@ export function sensitivityStudy(
   const constructions: Record<string, { U: SensitivityEffect[]; timeLag_h: SensitivityEffect[] }> = {};
   const scenarios: Record<string, { peakHeatGain: SensitivityEffect[] }> = {};
   const designDays = model.scenarios.filter((s) => s.kind === "design-day");
+  const cache: AnalysisCache = new WeakMap();
+  const baseConstructions = byId(model.constructions);
   const basePeaks = new Map(
-    designDays.map((s) => [s.id, peakOf(s, byId(model.constructions), (id) => base.get(id))]),
+    designDays.map((s) => [s.id, peakOf(s, baseConstructions, (id) => base.get(id), cache)]),
   );
   for (const { key, property } of variedProperties(model)) {
     const variants = [1 - variation, 1 + variation].map((factor) => {
@@ -118,35 +144,79 @@ export function sensitivityStudy(
       entry.peakHeatGain.push({
         material: key,
         property,
-        minus: peakOf(scenario, byId(model.constructions, down.changed), look(down)) - basePeak,
-        plus: peakOf(scenario, byId(model.constructions, up.changed), look(up)) - basePeak,
+        minus: peakOf(scenario, byId(model.constructions, down.changed), look(down), cache) - basePeak,
+        plus: peakOf(scenario, byId(model.constructions, up.changed), look(up), cache) - basePeak,
       });
       scenarios[scenario.id] = entry;
     }
   }
-  const byEffect = (a: SensitivityEffect, b: SensitivityEffect) =>
+  const byEffect = (a: { minus: number; plus: number }, b: { minus: number; plus: number }) =>
     Math.max(Math.abs(b.minus), Math.abs(b.plus)) - Math.max(Math.abs(a.minus), Math.abs(a.plus));
-  for (const entry of Object.values(constructions)) {
-    entry.U.sort(byEffect);
-    entry.timeLag_h.sort(byEffect);
-  }
-  for (const entry of Object.values(scenarios)) entry.peakHeatGain.sort(byEffect);
-  return { variation, constructions, scenarios };
+  const kept = <T extends { minus: number; plus: number }>(effects: readonly T[], baseValue: number) => {
+    const shown = effects.filter((e) => isShown(e, baseValue)).sort(byEffect);
+    return { shown, dropped: effects.length - shown.length };
+  };
+  const constructionResults: SensitivityResults["constructions"] = Object.fromEntries(
+    Object.entries(constructions).map(([id, entry]) => {
+      const b = base.get(id)!;
+      const u = kept(entry.U, b.steady.uValue);
+      const lag = kept(entry.timeLag_h, b.iso13786.timeLag_h);
+      return [id, { U: u.shown, timeLag_h: lag.shown, dropped: { U: u.dropped, timeLag_h: lag.dropped } }];
+    }),
+  );
+  const scenarioResults: SensitivityResults["scenarios"] = Object.fromEntries(
+    designDays.map((scenario) => {
+      const basePeak = basePeaks.get(scenario.id) ?? NaN;
+      const materials = kept(scenarios[scenario.id]?.peakHeatGain ?? [], basePeak);
+      const conditions = kept(
+        conditionEffects(
+          scenario,
+          variation,
+          basePeak,
+          (variant) => peakOf(variant, baseConstructions, (id) => base.get(id), cache),
+        ),
+        basePeak,
+      );
+      return [scenario.id, {
+        basePeakHeatGain: basePeak,
+        peakHeatGain: materials.shown,
+        conditions: conditions.shown,
+        dropped: { peakHeatGain: materials.dropped, conditions: conditions.dropped },
+      }];
+    }),
+  );
+  return {
+    variation,
+    threshold: EFFECT_THRESHOLD,
+    constructions: constructionResults,
+    scenarios: scenarioResults,
+  };
 }
+
+/** Analyses of the design days' films, per construction object, by "timestep|R_se". */
+type AnalysisCache = WeakMap<Construction, Map<string, DynamicAnalysis>>;
 
 function peakOf(
   scenario: Extract<Model["scenarios"][number], { kind: "design-day" }>,
   constructions: ReadonlyMap<string, Construction>,
   lookup: (id: string) => DynamicAnalysis | undefined,
+  cache: AnalysisCache,
 ): number {
   const context: ScenarioContext = {
     constructions,
-    analysisAt(id, timestepS) {
+    analysisAt(id, timestepS, outsideResistance) {
       const a = lookup(id);
-      if (a !== undefined && a.timestepS === timestepS) return a;
       const c = constructions.get(id)!;
-      const fresh = analyseConstruction(c, timestepS, { stateSpace: false });
+      const film = outsideResistance ?? c.outsideResistance;
+      if (a !== undefined && a.timestepS === timestepS && film === c.outsideResistance) return a;
+      const byKey = cache.get(c) ?? new Map<string, DynamicAnalysis>();
+      cache.set(c, byKey);
+      const key = `${timestepS}|${film}`;
+      const cached = byKey.get(key);
+      if (cached !== undefined) return cached;
+      const fresh = analyseConstruction({ ...c, outsideResistance: film }, timestepS, { stateSpace: false });
       if (fresh.kind !== "analysis") throw new Error(fresh.message);
+      byKey.set(key, fresh);
       return fresh;
     },
   };

@@ -32,7 +32,12 @@ function unitRows(d: DisplayUnits): Trusted {
         u("specificHeat")
       }.`,
     ),
-    conventionRow("Areal heat capacity", `ρ·c·d of a layer, ${u("arealHeatCapacity")}.`),
+    conventionRow(
+      "ρ·c·d",
+      `Heat capacity per area of a layer (its total Σ ρ·c·d in the layer table), ${
+        u("arealHeatCapacity")
+      }; not the ISO 13786 areal heat capacity κ, which is given with the dynamic characteristics.`,
+    ),
   ];
   return joinHtml([...rows, raw("")], raw("\n"));
 }

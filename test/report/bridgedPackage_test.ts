@@ -86,3 +86,13 @@ Deno.test("build of a bridged wall: the package shows the combined-method and Re
   assert.deepStrictEqual(rows, ["NOT MET", "NOT MET", "MET", "MET"]);
   assert.match(doc.querySelector(".limits-summary")?.textContent ?? "", /2 of 4 limits NOT MET/);
 });
+
+Deno.test("layer table: the framed layer's row is the equivalent of its two materials; Σρcd is not called areal heat capacity", async () => {
+  const { doc } = await built();
+  const rows = Array.from(doc.querySelectorAll("table.layer-table tbody tr")).map((r) => r.textContent ?? "");
+  assert.ok(rows.some((t) => /Equivalent of insulation 80 % \+ studs 20 %/.test(t)), rows.join("\n"));
+  const heads = Array.from(doc.querySelectorAll("table.layer-table th")).map((th) => th.textContent ?? "");
+  // "Areal heat capacity" is the ISO 13786 κ (ISO 13786:2017, clause 3, from memory), not Σ ρ·c·d.
+  assert.ok(heads.every((h) => !/areal heat capacity/i.test(h)), heads.join(" | "));
+  assert.ok(heads.some((h) => /ρ·c·d, heat capacity per area/.test(h)));
+});

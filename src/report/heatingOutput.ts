@@ -166,8 +166,7 @@ export function renderHeatingOutput(input: HeatingOutputInput): Trusted {
           : `surface temperatures use R_si = ${formatSig(toDisplay(d, "resistance", rsi), 3)} ${
             unitLabel(d, "resistance")
           }; `}thermal bridges, corners, ground contact, air leakage and interstitial condensation are not assessed, and the heat loss excludes ventilation and infiltration. The ISO 13788 constants used are logged in the assumptions register, with the clauses named from memory where so.</p>
-        <p>The results support, and do not replace, the professional judgment of the engineer responsible.</p>
-      </div>
+        </div>
     </div>
   `;
 }

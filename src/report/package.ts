@@ -4,7 +4,8 @@ import { renderCalculationSection } from "./calculationSection.ts";
 import { renderChecksSection } from "./checksSection.ts";
 import { renderCover, STATUS_LABEL, watermarkFor } from "./cover.ts";
 import { packageCss } from "./css.ts";
-import { renderCautionsSection, renderScopeSection } from "./fixedSections.ts";
+import { renderCautionsSection } from "./cautionsSection.ts";
+import { renderScopeSection } from "./fixedSections.ts";
 import { renderMethodSection } from "./methodSection.ts";
 import { html, type Trusted } from "./html.ts";
 import { makeRenderContext, type PackageInput, type RenderContext } from "./packageInput.ts";
@@ -24,7 +25,7 @@ export const PACKAGE_CSP = "default-src 'none'; img-src data:; style-src 'unsafe
 const CONTENTS: readonly (readonly [string, string])[] = [
   ["s-1", "1 Scope and exclusions"],
   ["s-2", "2 Calculation"],
-  ["s-3", "3 Method statement"],
+  ["s-3", "3 Calculation methods"],
   ["s-4", "4 Checks and findings"],
   ["s-5", "5 Assumptions register"],
   ["s-6", "6 Materials and their sources"],
@@ -99,7 +100,7 @@ export function renderPackage(input: PackageInput): string {
     ${renderAssumptionsSection(ctx)}
     ${renderMaterialsSection(ctx)}
     ${renderSourcesSection(ctx)}
-    ${renderCautionsSection()}
+    ${renderCautionsSection(input)}
     ${renderRevisionSection(ctx)}
     ${renderReproducibilitySection(ctx)}
     ${renderInputsAppendix(ctx)}

@@ -91,7 +91,8 @@ export function surfaceParameters(
       text: `Outside coefficient of ${surface.id}: h_o = 1/R_se of ${construction.id} = ${
         round(filmCoefficient)
       } W/(m²·K), the same film as in the response factors`,
-      source: "DESIGN rule: sol-air temperature and conduction use one outside film",
+      source:
+        "Method choice of this package: the sol-air temperature and the conduction use the same outside film",
       at,
     });
   }
@@ -107,7 +108,7 @@ export function surfaceParameters(
         round(longwaveCorrectionK)
       } K with ΔR = ${
         round(HORIZONTAL_LONGWAVE_DEFICIT_W_PER_M2)
-      } W/m² for a horizontal surface, cos Σ for tilts below 90°, 0 for vertical and downward-facing surfaces (our stated rule for tilted surfaces)`,
+      } W/m² for a horizontal surface, cos Σ for tilts below 90°, 0 for vertical and downward-facing surfaces (the cos Σ scaling of tilted surfaces is a method choice of this package)`,
       source:
         "ASHRAE Handbook—Fundamentals Ch. 18, sol-air temperature: 3.9 K horizontal, 0 vertical (from memory; common practice)",
       at,

@@ -6,6 +6,7 @@
 import assert from "node:assert/strict";
 import { join } from "node:path";
 import { runBuild } from "../../src/commands/build.ts";
+import { quantityName } from "../../src/diff/display.ts";
 import type { ResultsJson } from "../../src/results/types.ts";
 import { parseDocument } from "../report/dom.ts";
 
@@ -123,4 +124,8 @@ Deno.test("heating scenarios with different R_si: the construction's f_Rsi uses 
   assert.ok(
     results.assumptions.some((a) => a.id === "temperature-factor-rsi:SW-1" && /mild, severe/.test(a.text)),
   );
+});
+
+Deno.test("diff names f_Rsi with its moisture R_si, so one label means one quantity", () => {
+  assert.match(quantityName("temperatureFactor"), /f_Rsi \(moisture R_si, ISO 13788 default 0\.25 m²·K\/W\)/);
 });

@@ -7,6 +7,13 @@ import { type SkyDiffuseModel } from "./skyDiffuse.ts";
 import { type LongwaveCorrection, longwaveCorrectionK, type SolAirTerms, solAirTerms } from "./solAir.ts";
 import { type SolarPosition, solarPosition, type SolarPositionMethod } from "./solarPosition.ts";
 
+/** How each sky-diffuse model is named in the package (in words, not by its input value). */
+const SKY_DIFFUSE_WORDS: Readonly<Record<SkyDiffuseModel, string>> = {
+  handbook:
+    "by the ASHRAE Handbook—Fundamentals ratio Y for vertical surfaces and its rule for other tilts (from memory)",
+  isotropic: "isotropic (Liu & Jordan 1963)",
+};
+
 /** Outdoor dry bulb of a design day: from maximum and daily range, or 24 hourly values (index k = k:00). */
 export type OutdoorProfile =
   | { readonly kind: "daily-range"; readonly maxDryBulbC: number; readonly dailyRangeK: number }
@@ -109,7 +116,9 @@ export function designDayBoundary(input: DesignDayInput): DesignDayBoundary {
   switch (sky.kind) {
     case "clear-sky":
       notes.push(
-        `Irradiance: ASHRAE clear-sky model, ${sky.edition} exponents, sky diffuse "${sky.skyDiffuseModel}".`,
+        `Irradiance: ASHRAE clear-sky model, ${sky.edition} exponents, sky diffuse ${
+          SKY_DIFFUSE_WORDS[sky.skyDiffuseModel]
+        }.`,
       );
       break;
     case "none":
@@ -145,7 +154,7 @@ export function designDayBoundary(input: DesignDayInput): DesignDayBoundary {
         notes.push(
           `Surface "${surface.id}": long-wave correction ${correctionK.toFixed(2)} K (${
             surface.longwave.kind === "by-tilt"
-              ? "3.9 K × cos tilt below 90°, else 0: our stated rule"
+              ? "3.9 K × cos tilt below 90°, else 0: a method choice of this package"
               : "given"
           }).`,
         );

@@ -69,7 +69,9 @@ export async function runBuild(options: BuildOptions, io: CommandIo): Promise<nu
   io.stdout(
     `wrote ${join(outDir, "package.html")}, results.json and csv/ (${
       loaded.model?.constructions.length ?? 0
-    } constructions, ${Object.keys(results.scenarios).length} scenarios)`,
+    } constructions, ${
+      Object.keys(results.scenarios).length + Object.keys(results.heating ?? {}).length
+    } scenarios)`,
   );
   const failed = results.checks.filter((c) => !c.pass);
   if (failed.length > 0) {

@@ -60,7 +60,7 @@ const QUANTITY_NAMES: Readonly<Record<EffectQuantity, string>> = {
   annualGain_J: "heat gain over the weather year or stated period",
   annualLoss_J: "heat loss over the weather year or stated period",
   correctedU: "U-value with corrections",
-  temperatureFactor: "temperature factor f_Rsi",
+  temperatureFactor: "temperature factor f_Rsi (moisture R_si, ISO 13788 default 0.25 m²·K/W)",
   limitsNotMet: "limits not met",
   peakCoolingLoad: "peak cooling load",
   peakCoolingLoadTime_h: "hour of peak cooling load",

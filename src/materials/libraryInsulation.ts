@@ -12,8 +12,8 @@ export const INSULATION_MATERIALS: readonly LibraryMaterial[] = [
     conductivity: 0.04,
     density: 12,
     specificHeat: 840,
-    source:
-      'from memory (believed ANSI/ASHRAE Standard 140, case 600 lightweight wall, layer "fiberglass quilt")',
+    source: "from memory (believed ASHRAE Handbook—Fundamentals (2017), Ch. 26, Table 1, glass-fibre " +
+      "blanket insulation; no table row checked: confirm against the product declaration)",
   },
   {
     id: "mineral-wool-25",

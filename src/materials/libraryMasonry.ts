@@ -95,8 +95,8 @@ export const MASONRY_MATERIALS: readonly LibraryMaterial[] = [
     conductivity: 0.51,
     density: 1400,
     specificHeat: 1000,
-    source:
-      'from memory (believed ANSI/ASHRAE Standard 140, case 900 heavyweight wall, layer "concrete block")',
+    source: 'from memory (believed CIBSE Guide A (2006), Table 3.38 "inorganic porous materials", row ' +
+      '"concrete block (medium weight)"; no table row checked: confirm against the product declaration)',
   },
   {
     id: "concrete-block-dense-2000",

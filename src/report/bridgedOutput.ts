@@ -8,6 +8,16 @@ import { html, type Trusted } from "./html.ts";
 
 const pct = (f: number) => `${Math.round(f * 1000) / 10} %`;
 
+/**
+ * The layer-table name of a bridged layer: the equivalent of its two materials with their area fractions, e.g.
+ * `Equivalent of Glass-wool batt 85 % + Sawn softwood 15 %` (not the name of the insulation alone).
+ */
+export function bridgedLayerName(layer: ResolvedLayer): string | undefined {
+  const b = layer.bridge;
+  if (b === undefined) return undefined;
+  return `Equivalent of ${b.base.name} ${pct(1 - b.fraction)} + ${b.bridge.name} ${pct(b.fraction)}`;
+}
+
 /** The layer-table label of a bridged layer, e.g. `(mineral-wool-25 85 % / timber-softwood-500 15 %)`. */
 export function bridgedLayerLabel(layer: ResolvedLayer): Trusted | undefined {
   const b = layer.bridge;
@@ -15,7 +25,9 @@ export function bridgedLayerLabel(layer: ResolvedLayer): Trusted | undefined {
   return html`
     <span
       class="muted">(${b.base.materialId ?? b.base.name} ${pct(1 - b.fraction)} / ${b.bridge.materialId ??
-        b.bridge.name} ${pct(b.fraction)}; equivalent homogeneous layer, see the combined-method table)</span>
+        b.bridge.name} ${pct(
+          b.fraction,
+        )}; one homogeneous layer with the R of the ISO 6946 combined method and the area-weighted ρ·c, see the combined-method table)</span>
   `;
 }
 

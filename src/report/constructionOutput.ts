@@ -6,7 +6,7 @@ import { formatSig, formatTrim } from "./format.ts";
 import { html, type Trusted } from "./html.ts";
 import { renderDynamicResponse } from "./dynamicOutput.ts";
 import { renderSectionSvg } from "./sectionSvg.ts";
-import { bridgedLayerLabel, renderBridgedOutput } from "./bridgedOutput.ts";
+import { bridgedLayerLabel, bridgedLayerName, renderBridgedOutput } from "./bridgedOutput.ts";
 import { renderLimitsOutput } from "./limitsOutput.ts";
 
 const DASH = "—";
@@ -48,9 +48,9 @@ function layerRow(
     : html`
       <span class="muted">(${layer.materialId})</span>
     `);
-  return html`<tr><td class="num">${String(index + 1)}</td><td>${layer.name}${material}</td>${
-    layerCells(layer, d)
-  }<td class="num">${r}</td><td class="num">${kappa}</td></tr>`;
+  return html`<tr><td class="num">${String(index + 1)}</td><td>${
+    bridgedLayerName(layer) ?? layer.name
+  }${material}</td>${layerCells(layer, d)}<td class="num">${r}</td><td class="num">${kappa}</td></tr>`;
 }
 
 function surfaceRow(label: string, value: number, defaulted: boolean, d: DisplayUnits): Trusted {
@@ -204,7 +204,7 @@ export function renderConstructionOutput(
           <th>ρ ${unitLabel(d, "density")}</th>
           <th>c ${unitLabel(d, "specificHeat")}</th>
           <th>R ${unitLabel(d, "resistance")}</th>
-          <th>Areal heat capacity ${unitLabel(d, "arealHeatCapacity")}</th>
+          <th>ρ·c·d, heat capacity per area ${unitLabel(d, "arealHeatCapacity")} (total row: Σ ρ·c·d)</th>
         </tr>
       </thead>
       <tbody>

@@ -32,7 +32,12 @@ function unitRows(d: DisplayUnits): Trusted {
         u("specificHeat")
       }.`,
     ),
-    conventionRow("Areal heat capacity", `ρ·c·d of a layer, ${u("arealHeatCapacity")}.`),
+    conventionRow(
+      "ρ·c·d",
+      `Heat capacity per area of a layer (its total Σ ρ·c·d in the layer table), ${
+        u("arealHeatCapacity")
+      }; not the ISO 13786 areal heat capacity κ, which is given with the dynamic characteristics.`,
+    ),
   ];
   return joinHtml([...rows, raw("")], raw("\n"));
 }
@@ -69,26 +74,6 @@ rests on these simplifications:</p>
 </tbody>
 </table>`,
     )
-  }
-</section>`;
-}
-
-/** Section 8: cautions on the use of the results; `extra` holds cautions produced with the results. */
-export function renderCautionsSection(extra: readonly string[] = []): Trusted {
-  return html`<section id="s-8"><h2>8 Cautions</h2>
-${
-    raw(`<ul>
-<li>These results support professional judgment; they do not replace it. The applicable local codes and the
-review of a licensed professional govern any design decision.</li>
-<li>Errors in heat-transfer inputs can lead to undersized cooling plant, overheating of occupied spaces, or
-surface and interstitial condensation. Review the inputs, the assumptions register and the findings before use.</li>
-<li>The quality of the inputs bounds the quality of the outputs: material values without a cited source, defaults
-and unverified assumptions carry their uncertainty into every result.</li>
-<li>The exclusions in section 1 apply. Where an excluded effect matters (thermal bridges, moisture, non-linear
-surface exchange), assess it separately.</li>
-</ul>`)
-  }${
-    extra.length === 0 ? "" : html`<ul class="result-cautions">${extra.map((c) => html`<li>${c}</li>`)}</ul>`
   }
 </section>`;
 }

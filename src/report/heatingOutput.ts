@@ -64,6 +64,14 @@ function conditions(r: HeatingResults, d: DisplayUnits): Trusted {
   `;
 }
 
+/** " (R_si = 0.25 m²·K/W)": the one moisture R_si of the scenario's surfaces, shown with every f_Rsi. */
+function rsiLabel(r: HeatingResults, d: DisplayUnits): string {
+  const rsi = Object.values(r.surfaces)[0]?.moistureSurfaceResistance;
+  return rsi === undefined
+    ? ""
+    : ` (R_si = ${formatSig(toDisplay(d, "resistance", rsi), 3)} ${unitLabel(d, "resistance")})`;
+}
+
 function surfaceTable(id: string, r: HeatingResults, d: DisplayUnits): Trusted {
   const t = (c: number) => formatFixed(toDisplay(d, "temperature", c), 1);
   const w = (v: number) => formatFixed(toDisplay(d, "heatGain", v), 0);
@@ -102,7 +110,7 @@ function surfaceTable(id: string, r: HeatingResults, d: DisplayUnits): Trusted {
           <th>Area ${unitLabel(d, "area")}</th>
           <th>Heat loss ${unitLabel(d, "heatGain")}</th>
           <th>θ<sub>si</sub> ${unitLabel(d, "temperature")}</th>
-          <th>f<sub>Rsi</sub></th>
+          <th>f<sub>Rsi</sub>${rsiLabel(r, d)}</th>
           <th>f<sub>Rsi,min</sub></th>
           <th>Dew point ${unitLabel(d, "temperature")}</th>
           <th>Surface condensation</th>
@@ -158,8 +166,7 @@ export function renderHeatingOutput(input: HeatingOutputInput): Trusted {
           : `surface temperatures use R_si = ${formatSig(toDisplay(d, "resistance", rsi), 3)} ${
             unitLabel(d, "resistance")
           }; `}thermal bridges, corners, ground contact, air leakage and interstitial condensation are not assessed, and the heat loss excludes ventilation and infiltration. The ISO 13788 constants used are logged in the assumptions register, with the clauses named from memory where so.</p>
-        <p>The results support, and do not replace, the professional judgment of the engineer responsible.</p>
-      </div>
+        </div>
     </div>
   `;
 }

@@ -10,8 +10,18 @@ const LABEL: Readonly<Record<LimitResult["limitKey"], string>> = {
   "max-u": "U (incl. ΔU corrections) ≤",
   "max-periodic-transmittance": "Periodic thermal transmittance |Y12| ≤",
   "min-time-lag": "Time lag ≥",
-  "min-temperature-factor": "Temperature factor f_Rsi = 1 − U·R_si ≥",
+  "min-temperature-factor": "Temperature factor f_Rsi ≥",
 };
+
+/** The row label; f_Rsi names the moisture R_si it was computed with (results.json `temperatureFactorRsi`). */
+function labelOf(l: LimitResult, results: ConstructionResults | undefined, d: DisplayUnits): string {
+  if (l.limitKey !== "min-temperature-factor") return LABEL[l.limitKey];
+  const rsi = results?.["temperatureFactorRsi"];
+  if (typeof rsi !== "number") return LABEL[l.limitKey];
+  return `Temperature factor f_Rsi (R_si = ${formatSig(toDisplay(d, "resistance", rsi), 3)} ${
+    unitLabel(d, "resistance")
+  }, ISO 13788) ≥`;
+}
 
 /** The limits of one construction in results.json (empty when none). */
 export function limitsOf(results: ConstructionResults | undefined): readonly LimitResult[] {
@@ -36,7 +46,7 @@ export function renderLimitsOutput(results: ConstructionResults | undefined, d: 
   const rows = limits.map((l) =>
     html`
       <tr class="${l.pass ? "pass" : "fail"}">
-        <td>${LABEL[l.limitKey]}</td>
+        <td>${labelOf(l, results, d)}</td>
         <td class="num">${l.value === null ? "not computed" : withUnit(l.value, l.unit)}</td>
         <td class="num">${withUnit(l.limit, l.unit)}</td>
         <td>${l.clause} <span class="muted">(${l.scope === "project"

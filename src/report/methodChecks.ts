@@ -1,4 +1,4 @@
-/** The list of automated checks for the method statement: what each verifies, with its limit from results.json. */
+/** The list of automated checks for the calculation methods section: what each verifies, with its limit from results.json. */
 import type { CheckResult } from "../results/types.ts";
 import { formatSig } from "./format.ts";
 import { html, type Trusted } from "./html.ts";

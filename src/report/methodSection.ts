@@ -1,4 +1,4 @@
-/** Section 3: the method statement, with the equations, truncation rules and the limits of every check. */
+/** Section 3: the calculation methods section, with the equations, truncation rules and the limits of every check. */
 import { formatSig } from "./format.ts";
 import { html, raw, type Trusted } from "./html.ts";
 import { methodChecksTable } from "./methodChecks.ts";
@@ -113,7 +113,7 @@ frequency-domain quantities of 3.8 by an independent route.</p>`;
 
 /** Renders section 3, reading the limit of each check from results.json. */
 export function renderMethodSection(ctx: RenderContext): Trusted {
-  return html`<section id="s-3"><h2>3 Method statement</h2>
+  return html`<section id="s-3"><h2>3 Calculation methods</h2>
 <p>Each construction's steady state follows ISO 6946:2017 (R = d/λ per layer, surface resistances, U = 1/R). Its
 dynamic response, printed after its steady-state output in section 2, is computed from the same layers by the methods
 below; the equations are written in plain text, with subscripts after an underscore.</p>

@@ -4,7 +4,8 @@ import { renderCalculationSection } from "./calculationSection.ts";
 import { renderChecksSection } from "./checksSection.ts";
 import { renderCover, STATUS_LABEL, watermarkFor } from "./cover.ts";
 import { packageCss } from "./css.ts";
-import { renderCautionsSection, renderScopeSection } from "./fixedSections.ts";
+import { renderCautionsSection } from "./cautionsSection.ts";
+import { renderScopeSection } from "./fixedSections.ts";
 import { renderMethodSection } from "./methodSection.ts";
 import { outsideFilmCautions } from "../results/outsideFilmCautions.ts";
 import { toDisplay, unitLabel } from "./displayUnits.ts";
@@ -27,7 +28,7 @@ export const PACKAGE_CSP = "default-src 'none'; img-src data:; style-src 'unsafe
 const CONTENTS: readonly (readonly [string, string])[] = [
   ["s-1", "1 Scope and exclusions"],
   ["s-2", "2 Calculation"],
-  ["s-3", "3 Method statement"],
+  ["s-3", "3 Calculation methods"],
   ["s-4", "4 Checks and findings"],
   ["s-5", "5 Assumptions register"],
   ["s-6", "6 Materials and their sources"],
@@ -103,6 +104,7 @@ export function renderPackage(input: PackageInput): string {
     ${renderMaterialsSection(ctx)}
     ${renderSourcesSection(ctx)}
     ${renderCautionsSection(
+      input,
       outsideFilmCautions(
         input.results.scenarios,
         (w) =>

@@ -29,6 +29,7 @@ export interface PackageInput {
   readonly libraryEntries: readonly LibraryEntry[];
   readonly findings: readonly Diagnostic[];
   readonly toolVersion: string;
+  /** The runtime with its name, e.g. `Deno 2.9.6` (printed as given). */
   readonly runtimeVersion: string;
   /** The exact text written as results.json. */
   readonly resultsJsonText: string;

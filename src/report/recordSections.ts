@@ -70,7 +70,7 @@ export function renderReproducibilitySection(ctx: RenderContext): Trusted {
   return html`<section id="s-10"><h2>10 Reproducibility</h2>
 <table>
 <tr><th scope="row">Tool</th><td>fluxnote ${toolVersion}</td></tr>
-<tr><th scope="row">Runtime</th><td>Deno ${runtimeVersion}</td></tr>
+<tr><th scope="row">Runtime</th><td>${runtimeVersion}</td></tr>
 <tr><th scope="row">Results schema</th><td>${results.schema}</td></tr>
 <tr><th scope="row">SHA-256 of the whole input</th><td class="hash">${results.inputs.sha256}</td></tr>
 </table>

@@ -140,7 +140,6 @@ function caution(results: ScenarioResults): Trusted {
   return html`
     <div class="caution-box" role="note">
       <p><strong>Heat gain is not cooling load:</strong> the radiant part reaches the room air later, after the room's surfaces absorb and release it, so the load on the plant peaks later and lower than the heat gain shown; ${basis}. Set-back, intermittent plant, glazing, ventilation and internal gains are outside these figures.</p>
-      <p>The results support, and do not replace, the professional judgment of the engineer responsible.</p>
     </div>
   `;
 }

@@ -21,6 +21,7 @@ import { parseWeatherCsv } from "../climate/weatherCsv.ts";
 import { TOOL_VERSION } from "../version.ts";
 import { limitsFor, ownLimits } from "../project/constructionLimits.ts";
 import { designResults } from "./designResults.ts";
+import { moistureResistances } from "./moistureResistance.ts";
 import type {
   CheckResult,
   ConstructionResults,
@@ -62,6 +63,7 @@ export function computeProject(
   const methodNotes: MethodNoteResult[] = [];
   const problems: Diagnostic[] = [];
   const ownLimitsById = ownLimits(model);
+  const moistureRsi = moistureResistances(model);
   const designAssumptions: Assumption[] = [];
   const designWarnings: { at: string; message: string }[] = [];
   const correctedU = new Map<string, number>();
@@ -89,6 +91,7 @@ export function computeProject(
       construction,
       base,
       limitsFor(ownLimitsById.get(construction.id), model.info.limits),
+      moistureRsi(construction.id),
     );
     constructions[construction.id] = { ...base, ...design.keys };
     correctedU.set(construction.id, design.keys.correctedU);

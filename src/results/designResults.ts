@@ -1,7 +1,8 @@
 /**
  * Design figures of a construction added to results.json under new keys: the combined method of a bridged
  * layer (`combinedMethod`), user corrections (`corrections`, `correctedU`), the temperature factor
- * (`temperatureFactor`) and the code limits with pass/fail (`limits`).
+ * (`temperatureFactor`, f_Rsi with the moisture R_si of ISO 13788 given in `temperatureFactorRsi`) and the code
+ * limits with pass/fail (`limits`).
  */
 import {
   airGapCorrection,
@@ -15,6 +16,8 @@ import type { Assumption, Construction, LimitSpec } from "../project/model.ts";
 import { formatPosition } from "../project/position.ts";
 import { bridgedAssumption, correctionAssumption } from "./designAssumptions.ts";
 import { evaluateLimits, type LimitResult } from "./limitResults.ts";
+import type { MoistureResistance } from "./moistureResistance.ts";
+import { ISO13788_INSIDE_SURFACE_RESISTANCE } from "../scenarios/iso13788.ts";
 import type { CheckResult, ConstructionResults } from "./types.ts";
 
 /** Relative tolerance within which the equivalent layer must reproduce the combined method's R_T. */
@@ -68,7 +71,10 @@ export interface DesignParts {
     readonly combinedMethod?: CombinedMethodJson;
     readonly corrections?: CorrectionsJson;
     readonly correctedU: number;
+    /** f_Rsi = 1 − R_si/R_T with R_si = `temperatureFactorRsi` in place of the construction's own R_si */
     readonly temperatureFactor: number;
+    /** m²·K/W, the moisture inside surface resistance used for `temperatureFactor` (ISO 13788 default 0.25) */
+    readonly temperatureFactorRsi: number;
     readonly limits: readonly LimitResult[];
   };
   readonly checks: readonly CheckResult[];
@@ -81,6 +87,11 @@ export function designResults(
   construction: Construction,
   results: ConstructionResults,
   limits: readonly LimitSpec[],
+  moisture: MoistureResistance = {
+    value: ISO13788_INSIDE_SURFACE_RESISTANCE,
+    scenarios: [],
+    mostOnerous: false,
+  },
 ): DesignParts {
   const checks: CheckResult[] = [];
   const assumptions: Assumption[] = [];
@@ -134,13 +145,29 @@ export function designResults(
   const corrections = correctionsOf(construction, results.R);
   if (corrections !== undefined) assumptions.push(correctionAssumption(construction, corrections, results.U));
   const correctedU = results.U + (corrections?.deltaU ?? 0);
-  const fRsi = temperatureFactor(results.U, construction.insideResistance);
+  // U with the moisture R_si in place of the construction's own: the U of R_T' = 1/U − R_si,own + R_si,moist.
+  const rsi = moisture.value;
+  const fRsi = temperatureFactor(1 / (1 / results.U - construction.insideResistance + rsi), rsi);
+  if (moisture.mostOnerous) {
+    assumptions.push({
+      id: `temperature-factor-rsi:${construction.id}`,
+      text:
+        `f_Rsi of ${construction.id} uses R_si = ${rsi} m²·K/W, the largest inside surface resistance of ` +
+        `the heating scenarios that include it (${
+          moisture.scenarios.join(", ")
+        }), so any limit on it is judged ` +
+        "at the most onerous of them; each heating table uses its own",
+      source: "ISO 13788:2012, clause 4, internal surface resistance for opaque elements (from memory)",
+      at: formatPosition(construction.at),
+    });
+  }
   return {
     keys: {
       ...(combinedMethodJson === undefined ? {} : { combinedMethod: combinedMethodJson }),
       ...(corrections === undefined ? {} : { corrections }),
       correctedU,
       temperatureFactor: fRsi,
+      temperatureFactorRsi: rsi,
       limits: evaluateLimits(construction.id, limits, { ...results, correctedU, temperatureFactor: fRsi }),
     },
     checks,

@@ -28,7 +28,11 @@ export function reviewLimits(model: Model, results: ResultsJson): Diagnostic[] {
     const limits = results.constructions[c.id]?.["limits"];
     if (!isLimitList(limits)) continue;
     for (const l of limits) {
-      const { symbol, label } = COMPARISON[l.limitKey];
+      const { symbol } = COMPARISON[l.limitKey];
+      const rsi = results.constructions[c.id]?.["temperatureFactorRsi"];
+      const label = l.limitKey === "min-temperature-factor" && typeof rsi === "number"
+        ? `${COMPARISON[l.limitKey].label} (R_si = ${num(rsi)} m²·K/W)`
+        : COMPARISON[l.limitKey].label;
       const value = l.value === null ? "not computed" : `${label} = ${withUnit(l.value, l.unit)}`;
       const where = l.scope === "project" ? "project-wide limit in project.md" : `limit at ${l.at}`;
       out.push(finding({

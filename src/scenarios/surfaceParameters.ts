@@ -24,7 +24,7 @@ export type OutsideFilmRule = "construction" | "summer-design";
 /** Radiant fractions of conduction heat gain, ASHRAE Handbook—Fundamentals 2009–2021, Ch. 18 Table 14 (from memory). */
 export const RADIANT_FRACTION_WALL = 0.46;
 export const RADIANT_FRACTION_ROOF = 0.60;
-/** Surfaces tilted less than this from the horizontal count as roofs for the radiant fraction (our stated rule). */
+/** Surfaces tilted less than this from the horizontal count as roofs for the radiant fraction (a method choice of this package). */
 export const ROOF_TILT_LIMIT_DEG = 45;
 
 /** The values used for one surface, with every default logged. */
@@ -100,7 +100,7 @@ export function surfaceParameters(
         round(longwaveCorrectionK)
       } K with ΔR = ${
         round(HORIZONTAL_LONGWAVE_DEFICIT_W_PER_M2)
-      } W/m² for a horizontal surface, cos Σ for tilts below 90°, 0 for vertical and downward-facing surfaces (our stated rule for tilted surfaces)`,
+      } W/m² for a horizontal surface, cos Σ for tilts below 90°, 0 for vertical and downward-facing surfaces (the cos Σ scaling of tilted surfaces is a method choice of this package)`,
       source:
         "ASHRAE Handbook—Fundamentals Ch. 18, sol-air temperature: 3.9 K horizontal, 0 vertical (from memory; common practice)",
       at,
@@ -219,7 +219,8 @@ function constructionFilm(
       text: `Outside coefficient of ${surface.id}: h_o = 1/R_se of ${construction.id} = ${
         round(filmCoefficient)
       } W/(m²·K), the same film as in the response factors`,
-      source: "DESIGN rule: sol-air temperature and conduction use one outside film",
+      source:
+        "Method choice of this package: the sol-air temperature and the conduction use the same outside film",
       at,
     });
   }

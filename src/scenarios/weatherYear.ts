@@ -245,7 +245,8 @@ function methodAssumptions(id: string, at: string): Assumption[] {
     text: "Irradiance on each surface from the file's global and diffuse horizontal values: isotropic sky " +
       "(Liu & Jordan), beam = global − diffuse (all diffuse with the sun below 2°), ground reflection ρg (1 − cos Σ)/2, " +
       "sun position at the middle of each interval; direct-normal, when given, is not used",
-    source: "Liu & Jordan (1963), Solar Energy 7(2) (from memory); fluxnote transposition rules",
+    source:
+      "Liu & Jordan (1963), Solar Energy 7(2) (from memory); the beam/diffuse split and the interval timing are method choices of this package",
     at,
   }];
 }

@@ -27,7 +27,7 @@ Deno.test("solAirTemperatureC() light vertical wall: T_o + 0.026·E_t, no long-w
   assertNear(solAirTemperatureC(30, 500, wall), 43, 1e-9, "light wall");
 });
 
-Deno.test("longwaveCorrectionK() 3.9 K horizontal, 0 vertical (handbook), 3.9 cos Σ between (our stated rule)", () => {
+Deno.test("longwaveCorrectionK() 3.9 K horizontal, 0 vertical (handbook), 3.9 cos Σ between (a method choice of this package)", () => {
   // Fundamentals Ch. 18 (common practice): 3.9 K horizontal, 0 vertical. Our rule: 3.9 × cos 30° = 3.3775 K.
   assertNear(longwaveCorrectionK(0, { kind: "by-tilt" }), 3.9, 1e-12, "horizontal");
   assertNear(longwaveCorrectionK(90, { kind: "by-tilt" }), 0, 1e-12, "vertical");

@@ -42,11 +42,14 @@ Deno.test("build of a bridged wall: results.json has the combined method, correc
   const deltaU = 0.02 + 0.01 * ((R_T - 0.3) / R_T) ** 2;
   close((wall["corrections"] as { deltaU: number }).deltaU, deltaU);
   close(wall["correctedU"], 1 / R_T + deltaU);
-  close(wall["temperatureFactor"], 1 - 0.13 / R_T); // f_Rsi = 1 − U·R_si, ISO 13788
+  // f_Rsi = 1 − R_si/R_T' with the moisture R_si 0.25 in place of the wall's own 0.13 (ISO 13788 default, from
+  // memory): R_T' = R_T − 0.13 + 0.25
+  close(wall["temperatureFactor"], 1 - 0.25 / (R_T - 0.13 + 0.25));
+  assert.equal(wall["temperatureFactorRsi"], 0.25);
   const limits = wall["limits"] as { id: string; pass: boolean; scope: string; limit: number }[];
   assert.deepStrictEqual(limits.map((l) => [l.id, l.pass, l.scope, l.limit]), [
     ["max-u:EW-B", false, "construction", 0.49], // U_c ≈ 0.504 > 0.49, although U ≈ 0.477 alone would pass
-    ["min-temperature-factor:EW-B", true, "project", 0.9],
+    ["min-temperature-factor:EW-B", false, "project", 0.9], // 1 − 0.25/2.217 ≈ 0.887 < 0.9
   ]);
   // The homogeneous wall inherits both project-wide limits; it has no combinedMethod key.
   const plain = results.constructions["EW-H"]!;
@@ -80,6 +83,16 @@ Deno.test("build of a bridged wall: the package shows the combined-method and Re
   const rows = Array.from(doc.querySelectorAll("table.requirements tbody tr")).map((r) =>
     r.querySelector(".result")?.textContent
   );
-  assert.deepStrictEqual(rows, ["NOT MET", "MET", "MET", "MET"]);
-  assert.match(doc.querySelector(".limits-summary")?.textContent ?? "", /1 of 4 limits NOT MET/);
+  assert.deepStrictEqual(rows, ["NOT MET", "NOT MET", "MET", "MET"]);
+  assert.match(doc.querySelector(".limits-summary")?.textContent ?? "", /2 of 4 limits NOT MET/);
+});
+
+Deno.test("layer table: the framed layer's row is the equivalent of its two materials; Σρcd is not called areal heat capacity", async () => {
+  const { doc } = await built();
+  const rows = Array.from(doc.querySelectorAll("table.layer-table tbody tr")).map((r) => r.textContent ?? "");
+  assert.ok(rows.some((t) => /Equivalent of insulation 80 % \+ studs 20 %/.test(t)), rows.join("\n"));
+  const heads = Array.from(doc.querySelectorAll("table.layer-table th")).map((th) => th.textContent ?? "");
+  // "Areal heat capacity" is the ISO 13786 κ (ISO 13786:2017, clause 3, from memory), not Σ ρ·c·d.
+  assert.ok(heads.every((h) => !/areal heat capacity/i.test(h)), heads.join(" | "));
+  assert.ok(heads.some((h) => /ρ·c·d, heat capacity per area/.test(h)));
 });

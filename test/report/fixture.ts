@@ -217,7 +217,7 @@ export function fixture(options: FixtureOptions = {}): PackageInput {
     libraryEntries: [{ id: `clay-block${t}`, canonical: `{"id":"clay-block"${t}}`, sha256: "e".repeat(64) }],
     findings,
     toolVersion: "0.1.0",
-    runtimeVersion: "2.9.6",
+    runtimeVersion: "Deno 2.9.6",
     resultsJsonText: JSON.stringify(results, null, 2) + t,
   };
 }

@@ -15,7 +15,7 @@ const J_PER_KBTU = 1055055.85262;
 
 /**
  * Parts that are not display output: SI beside IP, the exact definitions, input blocks and prose as written,
- * checks and register statements quoted from results.json (relative values, SI text), the method statement,
+ * checks and register statements quoted from results.json (relative values, SI text), the calculation methods section,
  * the sources, the scenario notes and the appendices.
  */
 const QUOTED = [

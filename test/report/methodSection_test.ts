@@ -9,21 +9,21 @@ function text(doc: Document, selector: string): string {
   return doc.querySelector(selector)?.textContent ?? "";
 }
 
-/** Limit cell of the method statement's check table for a check id. */
+/** Limit cell of the calculation methods section's check table for a check id. */
 function limitCell(doc: Document, id: string): string | undefined {
   const rows = Array.from(doc.querySelectorAll("#s-3 table.method-checks tbody tr"));
   const row = rows.find((r) => r.querySelector("td")?.textContent === id);
   return row?.querySelectorAll("td")[2]?.textContent ?? undefined;
 }
 
-Deno.test("renderPackage() places the method statement as section 3, listed in the contents", () => {
+Deno.test("renderPackage() places the calculation methods as section 3, listed in the contents", () => {
   const out = renderPackage(fixture());
   const doc = parseDocument(out);
-  assert.match(text(doc, "#s-3 h2"), /^3 Method statement$/);
+  assert.match(text(doc, "#s-3 h2"), /^3 Calculation methods$/);
   assert.ok(out.indexOf('<section id="s-2"') < out.indexOf('<section id="s-3"'));
   assert.ok(out.indexOf('<section id="s-3"') < out.indexOf('<section id="s-4"'));
   const link = doc.querySelector('nav.contents a[href="#s-3"]');
-  assert.equal(link?.textContent, "3 Method statement");
+  assert.equal(link?.textContent, "3 Calculation methods");
   assert.match(text(doc, "#s-4 h2"), /^4 Checks and findings$/);
 });
 
@@ -46,7 +46,7 @@ Deno.test("renderPackage() states the method's equations and conventions", () =>
       "Hittle 1981",
     ]
   ) {
-    assert.ok(method.includes(expected), `method statement holds "${expected}"`);
+    assert.ok(method.includes(expected), `calculation methods section holds "${expected}"`);
   }
 });
 
@@ -59,7 +59,7 @@ Deno.test("renderPackage() prints sinc²(π/24) of the harmonic cross-check corr
   assert.ok(text(doc, "#s-3").includes(`sinc²(π/24) = ${formatSig(series, 6)}`));
 });
 
-Deno.test("renderPackage() takes the limits of the method statement's checks from results.json", () => {
+Deno.test("renderPackage() takes the limits of the calculation methods section's checks from results.json", () => {
   const few = parseDocument(renderPackage(fixture({ checks: [PASSING_CHECK] })));
   assert.equal(limitCell(few, "sum-rule-Y"), formatSig(PASSING_CHECK.limit, 3));
   assert.equal(limitCell(few, "periodic-fold"), "not run");

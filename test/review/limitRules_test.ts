@@ -33,8 +33,8 @@ Deno.test("reviewProject() reports each written limit as limit-met (note) or lim
   assert.equal(unmet.source, "Brief X, cl. 1");
   const met = findings.find((f) => f.rule === "limit-met")!;
   assert.equal(met.severity, "note");
-  // f_Rsi = 1 − 0.13/2.67 = 0.9513 (ISO 13788, plane element)
-  assert.equal(met.value, "temperature factor f_Rsi = 0.9513");
+  // f_Rsi = 1 − 0.25/(2.67 − 0.13 + 0.25) = 0.9104 with the ISO 13788 default moisture R_si 0.25 (from memory)
+  assert.equal(met.value, "temperature factor f_Rsi (R_si = 0.25 m²·K/W) = 0.9104");
   assert.equal(met.expected, "≥ 0.9");
 });
 

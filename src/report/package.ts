@@ -6,6 +6,7 @@ import { renderCover, STATUS_LABEL, watermarkFor } from "./cover.ts";
 import { packageCss } from "./css.ts";
 import { renderCautionsSection, renderScopeSection } from "./fixedSections.ts";
 import { renderMethodSection } from "./methodSection.ts";
+import { renderSummarySection } from "./summary/summarySection.ts";
 import { html, type Trusted } from "./html.ts";
 import { makeRenderContext, type PackageInput, type RenderContext } from "./packageInput.ts";
 import { renderReproducibilitySection, renderRevisionSection } from "./recordSections.ts";
@@ -22,6 +23,7 @@ export const PACKAGE_CSP = "default-src 'none'; img-src data:; style-src 'unsafe
 
 /** Contents entries: fragment id and numbered title, in page order. */
 const CONTENTS: readonly (readonly [string, string])[] = [
+  ["s-summary", "Summary of results"],
   ["s-1", "1 Scope and exclusions"],
   ["s-2", "2 Calculation"],
   ["s-3", "3 Method statement"],
@@ -53,7 +55,8 @@ function renderContents(ctx: RenderContext): Trusted {
   const sensitivity = ctx.input.results.sensitivity === undefined
     ? html``
     : html`<li><a href="#s-2-${sensitivityNumber}">2.${sensitivityNumber} Sensitivity study</a></li>`;
-  const items = CONTENTS.map(([id, title]) =>
+  const shown = CONTENTS.filter(([id]) => id !== "s-summary" || ctx.input.results.summary !== undefined);
+  const items = shown.map(([id, title]) =>
     id === "s-2"
       ? html`<li><a href="#${id}">${title}</a><ol>${docs}${sensitivity}</ol></li>`
       : html`<li><a href="#${id}">${title}</a></li>`
@@ -90,6 +93,7 @@ export function renderPackage(input: PackageInput): string {
       <body class="${info.status === "issued" ? "issued" : "not-issued"}">
     <div class="running-header">${headerLeft} | ${status}</div>
     ${renderCover(input)}
+    ${renderSummarySection(ctx)}
     ${renderContents(ctx)}
     <main>
     ${renderScopeSection(ctx.display)}

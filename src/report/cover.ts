@@ -71,9 +71,13 @@ function findingSummary(input: PackageInput): Trusted {
  * A sign-off row. Checking and approval are "pending" until the package is issued (the name shows who is to
  * sign); once issued, each role carries its own date (the package date when the role gives none).
  */
-function signOffRow(role: string, name: string | undefined, signed: { date: string } | "pending"): Trusted {
+function signOffRow(
+  role: string,
+  name: string | undefined,
+  signed: { date: string } | "pending" | "undated",
+): Trusted {
   const who = name === undefined || name === "" ? "(not given)" : name;
-  const when = signed === "pending"
+  const when = signed === "undated" ? html`` : signed === "pending"
     ? html`
       <span class="role-pending">— pending</span>
     `
@@ -132,7 +136,7 @@ ${optionalRow("Project", info.project)}
 <tr><th scope="row">Revision</th><td>${info.revision}</td></tr>
 <tr><th scope="row">Status</th><td>${STATUS_LABEL[info.status]}</td></tr>
 <tr><th scope="row">Date</th><td>${info.date}</td></tr>
-${signOffRow("Prepared by", info.preparedBy, { date: info.date })}
+${signOffRow("Prepared by", info.preparedBy, "undated")}
 ${signOffRow("Checked by", info.checkedBy, issued ? { date: info.checkedDate ?? info.date } : "pending")}
 ${signOffRow("Approved by", info.approvedBy, issued ? { date: info.approvedDate ?? info.date } : "pending")}
 <tr><th scope="row">Input SHA-256</th><td class="hash">${input.results.inputs.sha256}</td></tr>

@@ -6,7 +6,14 @@
 import { type Diagnostic, error, warning } from "../project/diagnostic.ts";
 import type { Model } from "../project/model.ts";
 import { parsePosition } from "../review/finding.ts";
-import type { SummaryJson } from "./summaryTypes.ts";
+import type { OpenItemKind, SummaryJson } from "./summaryTypes.ts";
+
+/** Why each blocking kind stops issue (the item's full text is in the summary of results). */
+const BLOCKING_REASON: Partial<Record<OpenItemKind, string>> = {
+  "from-memory-source": "a source is from memory or not yet confirmed",
+  "synthetic-data": "the data are synthetic, not measured or published",
+  "failed-check": "a computed check failed",
+};
 
 /** The diagnostics of the issue gate: errors for unacknowledged blocking items once the status is issued. */
 export function issueGate(model: Model, summary: SummaryJson): Diagnostic[] {
@@ -28,7 +35,7 @@ export function issueGate(model: Model, summary: SummaryJson): Diagnostic[] {
     out.push(error(
       parsePosition(item.at),
       "issue-blocked",
-      `Cannot issue with the open item "${item.id}": ${item.text}`,
+      `Cannot issue with the open item "${item.id}": ${BLOCKING_REASON[item.kind] ?? item.kind}`,
       `resolve it, or acknowledge it in project.md: \`acknowledged: [{ item: "${item.id}", reason: <why it may stand>, by: <name> }]\`, or keep \`status: for-review\``,
     ));
   }

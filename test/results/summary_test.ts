@@ -257,3 +257,21 @@ Deno.test("open points of the front matter are open items and are listed in the 
     .querySelector("section.summary-of-results")?.textContent ?? "";
   assert.match(section, /Confirm the lining board with the contractor/);
 });
+
+Deno.test("the summary tables print in the project's display units (IP: Btu/(h·ft²·°F), Btu/h)", async () => {
+  const folder = await project();
+  const text = Deno.readTextFileSync(join(folder, "project.md")).replace("units: SI", "units: IP");
+  Deno.writeTextFileSync(join(folder, "project.md"), text);
+  const { code, out } = await build(folder);
+  assert.equal(code, 0);
+  const r = readResults(out);
+  const doc = parseDocument(Deno.readTextFileSync(join(out, "package.html")));
+  // The two tables of figures (the open items quote assumption texts as written, in SI).
+  const section = ["table.summary-constructions", "table.summary-scenarios"]
+    .map((q) => doc.querySelector(q)?.textContent?.replace(/\s+/g, " ") ?? "").join(" ");
+  // 1 Btu/(h·ft²·°F) = 5.678263 W/(m²·K) (exact from the international foot, pound and Btu_IT, as in displayUnits.ts).
+  const uIp = r.constructions["EW-1"]!.U / 5.678263;
+  assert.ok(section.includes(`${uIp.toPrecision(3)} Btu/(h·ft²·°F)`), section.slice(0, 400));
+  assert.match(section, /Btu\/h/);
+  assert.doesNotMatch(section, /W\/\(m²·K\)/);
+});

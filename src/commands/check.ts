@@ -1,5 +1,7 @@
 import { sortDiagnostics } from "../project/diagnostic.ts";
 import { computeProject } from "../results/buildResults.ts";
+import { issueGate } from "../results/issueGate.ts";
+import { buildSummary } from "../results/summary.ts";
 import { formatPosition } from "../project/position.ts";
 import { formatFinding, reviewProject } from "../review/mod.ts";
 import type { CommandIo } from "./build.ts";
@@ -20,10 +22,15 @@ export async function runCheck(options: CheckOptions, io: CommandIo): Promise<nu
   const review = loaded.model === undefined
     ? []
     : reviewProject(loaded.model, computed?.ok ? computed.computed.results : undefined);
+  const gate = loaded.model === undefined || !computed?.ok ? [] : issueGate(
+    loaded.model,
+    buildSummary(loaded.model, computed.computed.results, [...loaded.diagnostics, ...review]),
+  );
   const diagnostics = sortDiagnostics([
     ...loaded.diagnostics,
     ...(computed === undefined || computed.ok ? [] : computed.diagnostics),
     ...review,
+    ...gate,
   ]);
   const failedChecks = computed?.ok ? computed.computed.results.checks.filter((c) => !c.pass) : [];
   const errors = diagnostics.filter((d) => d.severity === "error").length + failedChecks.length;

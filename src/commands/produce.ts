@@ -4,6 +4,8 @@ import { formatPosition } from "../project/position.ts";
 import { renderPackage } from "../report/package.ts";
 import { computeProject } from "../results/buildResults.ts";
 import { resultsJsonText } from "../results/jsonText.ts";
+import { issueGate } from "../results/issueGate.ts";
+import { buildSummary } from "../results/summary.ts";
 import type { ResultsJson } from "../results/types.ts";
 import { TOOL_VERSION } from "../version.ts";
 import { constructionsCsv, designDayCsv, factorsCsv } from "./csv.ts";
@@ -34,7 +36,7 @@ export function produceOutputs(loaded: LoadedProject, progress?: (message: strin
   const outcome = computeProject(loaded.model, loaded.inputRecords, loaded.dataTexts, progress);
   if (!outcome.ok) return { ok: false, diagnostics: outcome.diagnostics };
   const computed = outcome.computed;
-  const results: ResultsJson = {
+  const computedResults: ResultsJson = {
     ...computed.results,
     warnings: [
       ...loaded.diagnostics.filter((d) => d.severity !== "error").map((d) => ({
@@ -44,6 +46,18 @@ export function produceOutputs(loaded: LoadedProject, progress?: (message: strin
       ...computed.results.warnings,
     ],
   };
+  const findings = sortDiagnostics([...loaded.diagnostics, ...reviewProject(loaded.model, computedResults)]);
+  const summary = buildSummary(loaded.model, computedResults, findings);
+  const gate = issueGate(loaded.model, summary);
+  if (gate.some((d) => d.severity === "error")) return { ok: false, diagnostics: sortDiagnostics(gate) };
+  const results: ResultsJson = {
+    ...computedResults,
+    warnings: [
+      ...computedResults.warnings,
+      ...gate.map((d) => ({ at: formatPosition(d.at), message: d.message })),
+    ],
+    summary,
+  };
   progress?.("rendering the package");
   const resultsText = resultsJsonText(results);
   const page = renderPackage({
@@ -51,7 +65,7 @@ export function produceOutputs(loaded: LoadedProject, progress?: (message: strin
     results,
     inputFiles: loaded.files,
     libraryEntries: loaded.library,
-    findings: sortDiagnostics([...loaded.diagnostics, ...reviewProject(loaded.model, results)]),
+    findings,
     toolVersion: TOOL_VERSION,
     runtimeVersion: runtimeVersion(),
     resultsJsonText: resultsText,

@@ -4,6 +4,7 @@ import type { ProjectInfo, ProjectStatus, RevisionEntry } from "./model.ts";
 import type { Position } from "./position.ts";
 import { describeCodePoints } from "./quantity.ts";
 import { readLimits } from "./limitsSyntax.ts";
+import { readAcknowledgements, readOpenPoints, requireRoleFor } from "./signOff.ts";
 import type { YamlValue } from "./yamlTree.ts";
 
 export const FRONT_MATTER_KEYS = [
@@ -20,6 +21,12 @@ export const FRONT_MATTER_KEYS = [
   "files",
   "sensitivity",
   "limits",
+  "client",
+  "project",
+  "checked-date",
+  "approved-date",
+  "open-points",
+  "acknowledged",
 ] as const;
 
 const STATUSES: readonly ProjectStatus[] = ["draft", "for-review", "issued"];
@@ -52,6 +59,13 @@ export function readFrontMatter(value: YamlValue, out: Diagnostic[]): FrontMatte
   const limits = limitsEntry === undefined
     ? undefined
     : readLimits(limitsEntry.value, "front matter of project.md", "project", out);
+  const client = readText(fields, "client", out);
+  const project = readText(fields, "project", out);
+  const checkedDate = readDate(fields, "checked-date", out, false);
+  const approvedDate = readDate(fields, "approved-date", out, false);
+  requireRoleFor(fields, "approved-date", "approved-by", out);
+  const openPoints = readOpenPoints(fields, out);
+  const acknowledged = readAcknowledgements(fields, out);
   if (
     errorCount(out) > before || title === undefined || reference === undefined || revision === undefined ||
     status === undefined || preparedBy === undefined || checkedBy === undefined || date === undefined
@@ -71,6 +85,12 @@ export function readFrontMatter(value: YamlValue, out: Diagnostic[]): FrontMatte
     ...(approvedBy === undefined ? {} : { approvedBy }),
     ...(sensitivityVariation === undefined ? {} : { sensitivityVariation }),
     ...(limits === undefined ? {} : { limits }),
+    ...(client === undefined ? {} : { client }),
+    ...(project === undefined ? {} : { project }),
+    ...(checkedDate === undefined ? {} : { checkedDate }),
+    ...(approvedDate === undefined ? {} : { approvedDate }),
+    ...(openPoints === undefined ? {} : { openPoints }),
+    ...(acknowledged === undefined ? {} : { acknowledged }),
   };
   return files === undefined ? { info } : { info, files };
 }

@@ -1,5 +1,6 @@
 import type { Layer } from "../engine/layer.ts";
 import type { Position } from "./position.ts";
+import type { Acknowledgement, OpenPoint } from "./signOff.ts";
 
 export type ProjectStatus = "draft" | "for-review" | "issued";
 export type HeatFlowDirection = "horizontal" | "upward" | "downward";
@@ -27,6 +28,16 @@ export interface ProjectInfo {
   readonly sensitivityVariation?: number;
   /** Optional project-wide code limits, applied to every construction unless it gives its own. */
   readonly limits?: readonly LimitSpec[];
+  /** Extension (issue gate): the client and the project named on the cover. */
+  readonly client?: string;
+  readonly project?: string;
+  /** ISO dates of the check and the approval, each printed beside its role once issued. */
+  readonly checkedDate?: string;
+  readonly approvedDate?: string;
+  /** The user's own open points (front matter `open-points`). */
+  readonly openPoints?: readonly OpenPoint[];
+  /** Open items accepted for issue, each with a reason and a name (front matter `acknowledged`). */
+  readonly acknowledged?: readonly Acknowledgement[];
 }
 
 /** A material as defined in a project block or taken from the built-in library. */
@@ -188,6 +199,8 @@ export type Scenario =
     readonly site?: Site;
     /** `period: <n> days` when the file covers a repeating period other than one whole year, s. */
     readonly period?: { readonly seconds: number; readonly at: Position };
+    /** Extension: `synthetic: true` (or a note) marks the weather as invented, an open item until issue. */
+    readonly synthetic?: { readonly note: string; readonly at: Position };
   });
 
 /** A radiant time series given by the user: 24 hourly fractions r_0…r_23 (Σ = 1) and where they come from. */

@@ -10,6 +10,7 @@ import {
   readNumber,
   readQuantity,
   readText,
+  textOf,
 } from "./fields.ts";
 import { isHeatingBlock, readHeatingScenario } from "./heatingBlock.ts";
 import type {
@@ -40,6 +41,7 @@ export const SCENARIO_KEYS = [
   "weather",
   "radiant-time-series",
   "period",
+  "synthetic",
 ] as const;
 export const SURFACE_KEYS = [
   "id",
@@ -96,7 +98,7 @@ export function readScenarioBlock(
     ...(site === undefined ? {} : { site }),
   };
   if (kind === "design-day") {
-    forbid(fields, ["weather", "period"], "a design-day scenario", out);
+    forbid(fields, ["weather", "period", "synthetic"], "a design-day scenario", out);
     const radiantTimeSeries = readRadiantTimeSeries(fields, out);
     const outdoor = readOutdoor(fields, out);
     const date = readMonthDay(fields, out);
@@ -135,6 +137,7 @@ export function readScenarioBlock(
     );
     const weather = readWeatherPath(fields, out);
     const period = readPeriod(fields, out);
+    const synthetic = readSynthetic(fields, out);
     if (site === undefined && !fields.entries.has("site")) {
       out.push(
         error(
@@ -154,6 +157,7 @@ export function readScenarioBlock(
       weatherPath: weather.path,
       weatherAt: weather.at,
       ...(period === undefined ? {} : { period }),
+      ...(synthetic === undefined ? {} : { synthetic }),
     };
   }
   return undefined;
@@ -404,6 +408,15 @@ function readWeatherPath(fields: Fields, out: Diagnostic[]): { path: string; at:
 }
 
 /** `period: 10 days`: the span a shorter (or longer) than one-year weather file covers, repeated for the warm-up. */
+/** `synthetic: true` or a note on how the data were made flags invented weather; `false` is the same as absent. */
+function readSynthetic(fields: Fields, out: Diagnostic[]): { note: string; at: Position } | undefined {
+  const entry = fields.entries.get("synthetic");
+  if (entry === undefined) return undefined;
+  const text = textOf(entry.value, `"synthetic" in the ${fields.what}`, out);
+  if (text === undefined || text === "false") return undefined;
+  return { note: text === "true" ? "" : text, at: entry.keyAt };
+}
+
 function readPeriod(fields: Fields, out: Diagnostic[]): { seconds: number; at: Position } | undefined {
   const seconds = readQuantity(fields, "period", "time", out);
   if (seconds === undefined) return undefined;

@@ -12,15 +12,11 @@ export const GENERAL_CAUTION =
   "regulations that apply where the building stands, and the review of a person qualified to sign under " +
   "them, govern any design decision.";
 
-/** Weather scenarios whose data is marked synthetic (a `synthetic` flag, or "synthetic" in the file name). */
+/** Weather scenarios whose data is marked synthetic by the scenario's `synthetic` key. */
 function syntheticWeather(input: PackageInput): string[] {
-  return Object.entries(input.results.scenarios).flatMap(([id, s]) => {
-    const w = (s as unknown as Record<string, unknown>)["weather"];
-    if (typeof w !== "object" || w === null) return [];
-    const { synthetic, path } = w as { synthetic?: unknown; path?: unknown };
-    const marked = synthetic === true || (typeof path === "string" && /synthetic/i.test(path));
-    return marked ? [id] : [];
-  });
+  return input.model.scenarios.flatMap((s) =>
+    s.kind === "weather" && s.synthetic !== undefined ? [s.id] : []
+  );
 }
 
 /** Built-in library materials in use whose values are recorded from memory, not checked against the source. */

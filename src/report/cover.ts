@@ -67,18 +67,61 @@ function findingSummary(input: PackageInput): Trusted {
   return html`<p class="check-summary">Review findings: ${counts} (see section 4).</p>`;
 }
 
-function signOffRow(role: string, name: string | undefined): Trusted {
+/**
+ * A sign-off row. Checking and approval are "pending" until the package is issued (the name shows who is to
+ * sign); once issued, each role carries its own date (the package date when the role gives none).
+ */
+function signOffRow(
+  role: string,
+  name: string | undefined,
+  signed: { date: string } | "pending" | "undated",
+): Trusted {
+  const who = name === undefined || name === "" ? "(not given)" : name;
+  const when = signed === "undated" ? html`` : signed === "pending"
+    ? html`
+      <span class="role-pending">— pending</span>
+    `
+    : html`
+      <span class="role-date">— ${signed.date}</span>
+    `;
   return html`
     <tr>
       <th scope="row">${role}</th>
-      <td>${name === undefined || name === "" ? "(not given)" : name}</td>
+      <td>${who}${name === undefined || name === "" ? html`` : when}</td>
     </tr>
+  `;
+}
+
+function optionalRow(label: string, value: string | undefined): Trusted {
+  return value === undefined ? html`` : html`
+    <tr>
+      <th scope="row">${label}</th>
+      <td>${value}</td>
+    </tr>
+  `;
+}
+
+/** The open items accepted for issue, each with its reason and name; nothing when none are. */
+function acknowledgedItems(input: PackageInput): Trusted {
+  const acknowledged = (input.results.summary?.openItems ?? []).filter((i) => i.acknowledged !== null);
+  if (acknowledged.length === 0) return html``;
+  const items = acknowledged.map((i) =>
+    html`<li><code>${i.id}</code>: ${i.text} — acknowledged by ${i.acknowledged?.by ?? ""}: ${
+      i.acknowledged?.reason ?? ""
+    }</li>`
+  );
+  return html`
+    <div class="check-summary acknowledged-items">
+      <p>Open items acknowledged for issue: ${String(acknowledged.length)} (see the summary of results).</p>
+      <ul>${items}</ul>
+    </div>
   `;
 }
 
 /** Renders the cover page. */
 export function renderCover(input: PackageInput): Trusted {
   const info = input.model.info;
+  const issued = info.status === "issued";
   const independence = info.preparedBy !== "" && info.preparedBy === info.checkedBy
     ? html`<p class="fail">The checker is the same person as the preparer: the check is not independent.</p>`
     : html``;
@@ -87,18 +130,21 @@ export function renderCover(input: PackageInput): Trusted {
 <h1>${info.title}</h1>
 ${statusBanner(info.status)}
 <table>
+${optionalRow("Client", info.client)}
+${optionalRow("Project", info.project)}
 <tr><th scope="row">Reference</th><td>${info.reference}</td></tr>
 <tr><th scope="row">Revision</th><td>${info.revision}</td></tr>
 <tr><th scope="row">Status</th><td>${STATUS_LABEL[info.status]}</td></tr>
 <tr><th scope="row">Date</th><td>${info.date}</td></tr>
-${signOffRow("Prepared by", info.preparedBy)}
-${signOffRow("Checked by", info.checkedBy)}
-${signOffRow("Approved by", info.approvedBy)}
+${signOffRow("Prepared by", info.preparedBy, "undated")}
+${signOffRow("Checked by", info.checkedBy, issued ? { date: info.checkedDate ?? info.date } : "pending")}
+${signOffRow("Approved by", info.approvedBy, issued ? { date: info.approvedDate ?? info.date } : "pending")}
 <tr><th scope="row">Input SHA-256</th><td class="hash">${input.results.inputs.sha256}</td></tr>
 <tr><th scope="row">Tool</th><td>fluxnote ${input.toolVersion}</td></tr>
 </table>
 ${independence}
 ${checkSummary(input)}${limitsCoverLine(input)}
 ${findingSummary(input)}
+${acknowledgedItems(input)}
 </section>`;
 }

@@ -4,6 +4,7 @@
  * definitions, and a temperature difference is never converted as an absolute temperature.
  */
 import type { ProjectInfo } from "../project/model.ts";
+import { formatTrim } from "./format.ts";
 import { html, type Trusted } from "./html.ts";
 
 /** The unit system of the display, as written in the front matter. */
@@ -178,4 +179,11 @@ export function siEquivalent(
   return ownLine
     ? html`<br><span class="si-equivalent muted">${text}</span>`
     : html`<span class="si-equivalent muted"> ${text}</span>`;
+}
+
+/** A surface coefficient h (W/(m²·K) in SI) in the display units, three significant figures, with its unit. */
+export function filmCoefficientText(display: DisplayUnits, wPerM2K: number): string {
+  return `${formatTrim(toDisplay(display, "transmittance", wPerM2K), 3)} ${
+    unitLabel(display, "transmittance")
+  }`;
 }

@@ -8,8 +8,8 @@ import { renderCautionsSection } from "./cautionsSection.ts";
 import { renderScopeSection } from "./fixedSections.ts";
 import { renderMethodSection } from "./methodSection.ts";
 import { outsideFilmCautions } from "../results/outsideFilmCautions.ts";
-import { toDisplay, unitLabel } from "./displayUnits.ts";
-import { formatTrim } from "./format.ts";
+import { filmCoefficientText } from "./displayUnits.ts";
+import { renderSummarySection } from "./summary/summarySection.ts";
 import { html, type Trusted } from "./html.ts";
 import { makeRenderContext, type PackageInput, type RenderContext } from "./packageInput.ts";
 import { renderReproducibilitySection, renderRevisionSection } from "./recordSections.ts";
@@ -26,6 +26,7 @@ export const PACKAGE_CSP = "default-src 'none'; img-src data:; style-src 'unsafe
 
 /** Contents entries: fragment id and numbered title, in page order. */
 const CONTENTS: readonly (readonly [string, string])[] = [
+  ["s-summary", "Summary of results"],
   ["s-1", "1 Scope and exclusions"],
   ["s-2", "2 Calculation"],
   ["s-3", "3 Calculation methods"],
@@ -57,7 +58,8 @@ function renderContents(ctx: RenderContext): Trusted {
   const sensitivity = ctx.input.results.sensitivity === undefined
     ? html``
     : html`<li><a href="#s-2-${sensitivityNumber}">2.${sensitivityNumber} Sensitivity study</a></li>`;
-  const items = CONTENTS.map(([id, title]) =>
+  const shown = CONTENTS.filter(([id]) => id !== "s-summary" || ctx.input.results.summary !== undefined);
+  const items = shown.map(([id, title]) =>
     id === "s-2"
       ? html`<li><a href="#${id}">${title}</a><ol>${docs}${sensitivity}</ol></li>`
       : html`<li><a href="#${id}">${title}</a></li>`
@@ -94,6 +96,7 @@ export function renderPackage(input: PackageInput): string {
       <body class="${info.status === "issued" ? "issued" : "not-issued"}">
     <div class="running-header">${headerLeft} | ${status}</div>
     ${renderCover(input)}
+    ${renderSummarySection(ctx)}
     ${renderContents(ctx)}
     <main>
     ${renderScopeSection(ctx.display)}
@@ -107,10 +110,7 @@ export function renderPackage(input: PackageInput): string {
       input,
       outsideFilmCautions(
         input.results.scenarios,
-        (w) =>
-          `${formatTrim(toDisplay(ctx.display, "transmittance", w), 3)} ${
-            unitLabel(ctx.display, "transmittance")
-          }`,
+        (w) => filmCoefficientText(ctx.display, w),
       ),
     )}
     ${renderRevisionSection(ctx)}

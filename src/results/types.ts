@@ -1,4 +1,5 @@
 import type { SensitivityResults } from "../sensitivity/study.ts";
+import type { SummaryJson } from "./summaryTypes.ts";
 import type { CoolingLoadResults, HeatingResults, PeakAt } from "./heatingTypes.ts";
 /** The machine-readable results (results.json), contract `fluxnote-results/1` (DESIGN.md §4). */
 
@@ -84,6 +85,8 @@ export interface ResultsJson {
   readonly sensitivity?: SensitivityResults;
   /** Extension: `kind: heating` scenarios (steady design heat loss, ISO 13788 surface checks), by id. */
   readonly heating?: Readonly<Record<string, HeatingResults>>;
+  /** Extension: every verdict on one page and the open items (see `summaryTypes.ts`). */
+  readonly summary?: SummaryJson;
 }
 
 /** One surface of a scenario in results.json (DESIGN.md §4); series have one value per timestep. */

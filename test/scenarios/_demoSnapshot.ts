@@ -261,5 +261,8 @@ export const DEMO_SNAPSHOT = {
     "site": { "latitudeDeg": 52.4, "longitudeDeg": -1.9, "timeZoneH": 0, "elevationM": 120 },
     "kind": "weather",
     "weatherPath": "weather/synthetic-year-2031.csv",
+    "synthetic": {
+      "note": "generated from formulas by scripts/synthetic-weather.ts, not climate data (section 45.2)",
+    },
   },
 };

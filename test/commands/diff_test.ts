@@ -187,8 +187,9 @@ Deno.test("runDiff() puts a limit going MET → NOT MET first, with its clause, 
   for (const later of ["Files:", "Constructions:", "Effects on results:"]) {
     assert.ok(text.indexOf(later) > verdict, `${later} comes after the verdict\n${text}`);
   }
-  // Counts are whole numbers: limits not met 0 → 1.
-  assert.match(text, /construction EW-H\s+limits not met\s+0\s+1\s+\+1\s+—/);
+  // Counts are whole numbers: limits not met 0 → 2 (max-u, and min-temperature-factor, whose f_Rsi uses the
+  // moisture R_si = 0.25 m²·K/W of ISO 13788: 1 − 0.25 / R_T′ falls below 0.9 with the thinner board).
+  assert.match(text, /construction EW-H\s+limits not met\s+0\s+2\s+\+2\s+—/);
   // EW-H has no correction on either side: no "U-value with corrections" line for it; U is there.
   assert.ok(!/construction EW-H\s+U-value with corrections/.test(text), text);
   assert.match(text, /construction EW-H\s+U-value\s/);
@@ -200,6 +201,7 @@ Deno.test("runDiff() puts a limit going MET → NOT MET first, with its clause, 
   );
   assert.deepEqual(json.verdicts.map((v) => [v.subject, v.limit, v.old, v.new]), [
     ["construction:EW-H", "max-u", "MET", "NOT MET"],
+    ["construction:EW-H", "min-temperature-factor", "MET", "NOT MET"],
   ]);
   assert.ok(Math.abs((json.verdicts[0]!.newValue ?? NaN) - 1 / 1.42) < 1e-9);
   assert.deepEqual(json.checks, []);

@@ -9,7 +9,7 @@ import {
   readText,
   textOf,
 } from "./fields.ts";
-import { positive } from "./materialBlock.ts";
+import { checkMassiveProperties, positive } from "./materialBlock.ts";
 import { describeCodePoints } from "./quantity.ts";
 import type { HeatFlowDirection, LimitSpec, MaterialDef, ResolvedLayer } from "./model.ts";
 import { defaultSurfaceResistances } from "../materials/surfaceResistance.ts";
@@ -306,9 +306,7 @@ function readLayer(
       ),
     );
   }
-  positive(fields.entries.get("conductivity")?.value.at, "conductivity", conductivity, out);
-  positive(fields.entries.get("density")?.value.at, "density", density, out);
-  positive(fields.entries.get("specific-heat")?.value.at, "specific-heat", specificHeat, out);
+  checkMassiveProperties(fields, conductivity, density, specificHeat, out);
   if (
     errorCount(out) > before || name === undefined || thickness === undefined || conductivity === undefined ||
     density === undefined || specificHeat === undefined

@@ -57,3 +57,72 @@ export function withinBound(
   );
   return false;
 }
+
+/** A property range no building material leaves: below `min` or above `max` the reader refuses the value. */
+interface PropertyRange {
+  readonly min: number;
+  readonly max: number;
+  readonly unit: string;
+  readonly source: string;
+  readonly hint: string;
+}
+
+/**
+ * Conductivity, density and specific heat of a massive layer, material or bridge. Outside these ranges the
+ * layer's cells get rates or capacities that no building element has, and the engine's checks (state-space
+ * reciprocity and agreement, sum rules) fail on roundoff or the build takes minutes (scratch sweep over the
+ * reader's former range, 0.1 kg/m³ and 1 J/(kg K) up, 2026-12-03).
+ */
+export const MASSIVE_PROPERTY_RANGES: Readonly<
+  Record<"conductivity" | "density" | "specific-heat", PropertyRange>
+> = {
+  conductivity: {
+    min: 0.001,
+    max: 2500,
+    unit: "W/(m K)",
+    source:
+      "from vacuum insulation panels, the least conductive building product at 0.002–0.004 W/(m K) (from memory), to diamond, the most conductive solid at about 2200 W/(m K) (from memory)",
+    hint:
+      "check the value and its unit (W/(m K), not mW/(m K)); a still air gap is a massless layer with a `resistance`",
+  },
+  density: {
+    min: 1,
+    max: 23000,
+    unit: "kg/m^3",
+    source:
+      "from silica aerogels, the lightest solid insulation, above 1 kg/m³ (from memory), to osmium, the densest element, 22 590 kg/m³ (from memory)",
+    hint: "check the value and its unit (kg/m^3); a still air gap is a massless layer with a `resistance`",
+  },
+  "specific-heat": {
+    min: 100,
+    max: 15000,
+    unit: "J/(kg K)",
+    source:
+      "from lead and gold, about 130 J/(kg K), the lowest of building metals (CIBSE Guide A (2006) Table 3.36, secondary copy), to hydrogen gas, about 14 300 J/(kg K), the highest of any substance (from memory)",
+    hint: "check the unit: a value in kJ/(kg K) is written e.g. `0.88 kJ/(kg K)` or `880 J/(kg K)`",
+  },
+};
+
+/** Pushes an out-of-range error when a massive property lies outside its range; returns whether it is inside. */
+export function withinPropertyRange(
+  value: number | undefined,
+  key: keyof typeof MASSIVE_PROPERTY_RANGES,
+  at: Position | undefined,
+  out: Diagnostic[],
+): boolean {
+  const range = MASSIVE_PROPERTY_RANGES[key];
+  if (value === undefined || at === undefined || !(value > 0) || (value >= range.min && value <= range.max)) {
+    return true;
+  }
+  out.push(
+    error(
+      at,
+      "out-of-range",
+      `Cannot use ${key} ${
+        Number(value.toPrecision(6))
+      } ${range.unit}: expected ${range.min} to ${range.max} ${range.unit}`,
+      `${range.hint}; the range runs ${range.source}`,
+    ),
+  );
+  return false;
+}

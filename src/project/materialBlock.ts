@@ -1,6 +1,6 @@
 import { type Diagnostic, error, errorCount } from "./diagnostic.ts";
 import { type Fields, readFields, readId, readQuantity, readText } from "./fields.ts";
-import { withinPropertyRange } from "./physicalBounds.ts";
+import { withinDiffusivityRange, withinPropertyRange } from "./physicalBounds.ts";
 import type { MaterialDef } from "./model.ts";
 import type { YamlValue } from "./yamlTree.ts";
 
@@ -100,9 +100,15 @@ export function checkMassiveProperties(
   out: Diagnostic[],
 ): void {
   const values = { conductivity, density, "specific-heat": specificHeat } as const;
+  let inRange = true;
   for (const key of ["conductivity", "density", "specific-heat"] as const) {
     const at = fields.entries.get(key)?.value.at;
     positive(at, key, values[key], out);
-    withinPropertyRange(values[key], key, at, out);
+    inRange = withinPropertyRange(values[key], key, at, out) && values[key] !== undefined &&
+      values[key] > 0 &&
+      inRange;
+  }
+  if (inRange && conductivity !== undefined && density !== undefined && specificHeat !== undefined) {
+    withinDiffusivityRange(conductivity, density, specificHeat, fields.at, out);
   }
 }

@@ -126,3 +126,43 @@ export function withinPropertyRange(
   );
   return false;
 }
+
+/**
+ * Thermal diffusivity λ/(ρc) of a massive layer, m²/s. Each of λ, ρ and c can lie in its range while their
+ * combination belongs to no material (2500 W/(m K) at 2 kg/m³ and 100 J/(kg K) is 12 m²/s); such a layer's
+ * cells relax 10^4 times faster than a diamond sheet of its thickness and the state-space reciprocity failed
+ * on roundoff in the scratch sweep (2026-12-03), while the same constructions without those layers passed.
+ */
+export const DIFFUSIVITY_RANGE = {
+  min: 1e-8,
+  max: 2e-3,
+  unit: "m^2/s",
+  source:
+    "from vacuum insulation panels, about 3e-8 m^2/s (0.004 W/(m K), 190 kg/m³, 800 J/(kg K), from memory), to diamond, about 1.2e-3 m^2/s (2200 W/(m K), 3515 kg/m³, 509 J/(kg K), from memory)",
+} as const;
+
+/** Pushes an out-of-range error when λ/(ρc) lies outside `DIFFUSIVITY_RANGE`; returns whether it is inside. */
+export function withinDiffusivityRange(
+  conductivity: number,
+  density: number,
+  specificHeat: number,
+  at: Position,
+  out: Diagnostic[],
+): boolean {
+  const diffusivity = conductivity / (density * specificHeat);
+  if (diffusivity >= DIFFUSIVITY_RANGE.min && diffusivity <= DIFFUSIVITY_RANGE.max) return true;
+  const shown = (v: number) => Number(v.toPrecision(6));
+  out.push(
+    error(
+      at,
+      "diffusivity-out-of-range",
+      `Cannot use conductivity ${shown(conductivity)} W/(m K) with density ${
+        shown(density)
+      } kg/m^3 and specific-heat ${shown(specificHeat)} J/(kg K): their diffusivity λ/(ρc) is ${
+        diffusivity.toPrecision(3)
+      } ${DIFFUSIVITY_RANGE.unit}, expected ${DIFFUSIVITY_RANGE.min} to ${DIFFUSIVITY_RANGE.max} ${DIFFUSIVITY_RANGE.unit}`,
+      `one of the three values belongs to another material or has a wrong unit; the range runs ${DIFFUSIVITY_RANGE.source}`,
+    ),
+  );
+  return false;
+}

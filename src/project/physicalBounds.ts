@@ -94,11 +94,11 @@ export const MASSIVE_PROPERTY_RANGES: Readonly<
     hint: "check the value and its unit (kg/m^3); a still air gap is a massless layer with a `resistance`",
   },
   "specific-heat": {
-    min: 100,
+    min: 0.1,
     max: 15000,
     unit: "J/(kg K)",
     source:
-      "from lead and gold, about 130 J/(kg K), the lowest of building metals (CIBSE Guide A (2006) Table 3.36, secondary copy), to hydrogen gas, about 14 300 J/(kg K), the highest of any substance (from memory)",
+      "from lead, 0.13 kJ/(kg K), the lowest of building materials (CIBSE Guide A (2006) Table 3.36, secondary copy), written in J/(kg K) by mistake (the review names that slip), to hydrogen gas, about 14 300 J/(kg K), the highest of any substance (from memory)",
     hint: "check the unit: a value in kJ/(kg K) is written e.g. `0.88 kJ/(kg K)` or `880 J/(kg K)`",
   },
 };

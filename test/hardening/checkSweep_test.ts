@@ -4,7 +4,7 @@
  * with its reason (the engine's pole budget). A tool that cries wolf on valid input is not used.
  *
  * Ranges. The reader (src/project/constructionBlock.ts, physicalBounds.ts) accepts 1–40 layers, thickness
- * 0 < d ≤ 3 m (warning above 1 m), λ 0.001–2500 W/(m K), ρ 1–23 000 kg/m³, c 100–15 000 J/(kg K) with λ/(ρc)
+ * 0 < d ≤ 3 m (warning above 1 m), λ 0.001–2500 W/(m K), ρ 1–23 000 kg/m³, c 0.1–15 000 J/(kg K) with λ/(ρc)
  * 1e-8–2e-3 m²/s, any positive massless R, surface resistances ≥ 0.01 m² K/W, and time steps of whole divisors of
  * 1 h from 5 min (`readTimestep`). The first sweep stays inside the review's hard limits; the second draws the
  * reader's full property ranges. Values beyond the review's hard limits (src/review/limits.ts: λ ≤ 450 W/(m K) above
@@ -101,7 +101,9 @@ function allChecks(c: ConstructionInput, step: number, random: () => number) {
 
 /**
  * Draws from the reader's full property ranges (src/project/physicalBounds.ts): λ 0.001–2500 W/(m K), ρ 1–23 000
- * kg/m³, c 100–15 000 J/(kg K), each with its end points drawn one time in five, redrawn until λ/(ρc) lies in the
+ * kg/m³, c 100–15 000 J/(kg K) (the reader goes down to 0.1 so that the review can name a kJ figure written in
+ * J/(kg K); such inputs still fail state-space-reciprocity at ~3e-9 and sum-rule-Z at ~2e-8 now and then and
+ * are not drawn here — open), each with its end points drawn one time in five, redrawn until λ/(ρc) lies in the
  * reader's diffusivity range 1e-8–2e-3 m²/s. Thickness 0.1 mm–1 m (one in five at an end), massless layers
  * 0.01–10 m² K/W, surface resistances 0.01 (the reader's floor) to 0.5 m² K/W, 1–10 layers.
  */

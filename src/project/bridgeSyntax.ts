@@ -4,7 +4,7 @@
  */
 import { type Diagnostic, error, errorCount, warning } from "./diagnostic.ts";
 import { describe, quantityOf, readFields, readQuantity, readText, textOf } from "./fields.ts";
-import { positive } from "./materialBlock.ts";
+import { checkMassiveProperties } from "./materialBlock.ts";
 import type { BridgeComponent, LayerCorrections, ResolvedLayer } from "./model.ts";
 import type { Position } from "./position.ts";
 import { describeCodePoints } from "./quantity.ts";
@@ -101,9 +101,7 @@ export function readBridge(
     const conductivity = readQuantity(fields, "conductivity", "conductivity", out, true);
     const density = readQuantity(fields, "density", "density", out, true);
     const specificHeat = readQuantity(fields, "specific-heat", "specificHeat", out, true);
-    positive(fields.entries.get("conductivity")?.value.at, "conductivity", conductivity, out);
-    positive(fields.entries.get("density")?.value.at, "density", density, out);
-    positive(fields.entries.get("specific-heat")?.value.at, "specific-heat", specificHeat, out);
+    checkMassiveProperties(fields, conductivity, density, specificHeat, out);
     if (
       name !== undefined && conductivity !== undefined && density !== undefined && specificHeat !== undefined
     ) {

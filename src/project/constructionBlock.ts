@@ -9,7 +9,7 @@ import {
   readText,
   textOf,
 } from "./fields.ts";
-import { positive } from "./materialBlock.ts";
+import { checkMassiveProperties, positive } from "./materialBlock.ts";
 import { describeCodePoints } from "./quantity.ts";
 import type { HeatFlowDirection, LimitSpec, MaterialDef, ResolvedLayer } from "./model.ts";
 import { defaultSurfaceResistances } from "../materials/surfaceResistance.ts";
@@ -71,6 +71,13 @@ export interface MaterialLookup {
 const MAX_LAYERS = 40;
 const WARN_THICKNESS_M = 1;
 const MAX_THICKNESS_M = 3;
+/**
+ * The thinnest massive layer accepted, m. Membranes and boards are 0.1 mm and more (a polyethylene vapour control
+ * layer is 0.15–0.25 mm, from memory); a foil or paint film below it stores and resists next to nothing and is
+ * left out (common practice, no source). Thinner cells made the state-space reciprocity fail on roundoff in the
+ * scratch sweep (1 µm layers, 2026-12-03).
+ */
+export const MIN_THICKNESS_M = 1e-4;
 
 /** Reads a `construction` block and resolves its layers against the materials. */
 export function readConstructionBlock(
@@ -306,9 +313,7 @@ function readLayer(
       ),
     );
   }
-  positive(fields.entries.get("conductivity")?.value.at, "conductivity", conductivity, out);
-  positive(fields.entries.get("density")?.value.at, "density", density, out);
-  positive(fields.entries.get("specific-heat")?.value.at, "specific-heat", specificHeat, out);
+  checkMassiveProperties(fields, conductivity, density, specificHeat, out);
   if (
     errorCount(out) > before || name === undefined || thickness === undefined || conductivity === undefined ||
     density === undefined || specificHeat === undefined
@@ -333,6 +338,17 @@ function checkThickness(thicknessM: number, at: Position, what: string, out: Dia
         "not-positive",
         `Expected a positive thickness for the ${what}, found ${thicknessM} m`,
         "remove the layer or give its real thickness, e.g. `thickness: 10 mm`",
+      ),
+    );
+  } else if (thicknessM < MIN_THICKNESS_M) {
+    out.push(
+      error(
+        at,
+        "thickness-too-small",
+        `Thickness ${
+          Number(thicknessM.toPrecision(6))
+        } m of the ${what} is less than ${MIN_THICKNESS_M} m (0.1 mm)`,
+        "check the unit (mm, not m); leave out a foil or film thinner than 0.1 mm: it stores and resists next to nothing",
       ),
     );
   } else if (thicknessM > MAX_THICKNESS_M) {

@@ -1,5 +1,6 @@
 import { type Diagnostic, error, errorCount } from "./diagnostic.ts";
-import { readFields, readId, readQuantity, readText } from "./fields.ts";
+import { type Fields, readFields, readId, readQuantity, readText } from "./fields.ts";
+import { withinDiffusivityRange, withinPropertyRange } from "./physicalBounds.ts";
 import type { MaterialDef } from "./model.ts";
 import type { YamlValue } from "./yamlTree.ts";
 
@@ -41,9 +42,7 @@ export function readMaterialBlock(value: YamlValue, out: Diagnostic[]): Material
     const conductivity = readQuantity(fields, "conductivity", "conductivity", out, true);
     const density = readQuantity(fields, "density", "density", out, true);
     const specificHeat = readQuantity(fields, "specific-heat", "specificHeat", out, true);
-    positive(fields.entries.get("conductivity")?.value.at, "conductivity", conductivity, out);
-    positive(fields.entries.get("density")?.value.at, "density", density, out);
-    positive(fields.entries.get("specific-heat")?.value.at, "specific-heat", specificHeat, out);
+    checkMassiveProperties(fields, conductivity, density, specificHeat, out);
     if (
       errorCount(out) > before || id === undefined || conductivity === undefined || density === undefined ||
       specificHeat === undefined
@@ -89,5 +88,27 @@ export function positive(
         `${key} must be greater than zero`,
       ),
     );
+  }
+}
+
+/** Reports conductivity, density and specific heat that are not positive or outside any building material's range. */
+export function checkMassiveProperties(
+  fields: Fields,
+  conductivity: number | undefined,
+  density: number | undefined,
+  specificHeat: number | undefined,
+  out: Diagnostic[],
+): void {
+  const values = { conductivity, density, "specific-heat": specificHeat } as const;
+  let inRange = true;
+  for (const key of ["conductivity", "density", "specific-heat"] as const) {
+    const at = fields.entries.get(key)?.value.at;
+    positive(at, key, values[key], out);
+    inRange = withinPropertyRange(values[key], key, at, out) && values[key] !== undefined &&
+      values[key] > 0 &&
+      inRange;
+  }
+  if (inRange && conductivity !== undefined && density !== undefined && specificHeat !== undefined) {
+    withinDiffusivityRange(conductivity, density, specificHeat, fields.at, out);
   }
 }

@@ -84,8 +84,6 @@ figure.plot-figure svg.swatch, svg.swatch { display: inline-block; vertical-alig
 figure.plot-figure svg.swatch-fill, svg.swatch-fill { width: 12px; }
 .caution-box { border: 1px solid var(--ink); background: #f7f7f7; padding: 2mm 3mm; margin: 4mm 0; break-inside: avoid; }
 .caution-box p { margin: 1mm 0; }
-.synthetic-stamp { color: #b00000; font-weight: bold; }
-.synthetic-banner { border: 2px solid #b00000; padding: 1mm 2mm; }
 nav.contents ol.contents-outputs { padding-left: 6mm; }
 @media print {
   html { background: none; }

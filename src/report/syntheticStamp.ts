@@ -9,7 +9,9 @@ import type { SyntheticWeatherResults } from "../results/types.ts";
 import { SYNTHETIC_STAMP } from "../results/syntheticWeather.ts";
 import { html, raw, type Trusted } from "./html.ts";
 
-const TEXT_STAMP = `<span class="synthetic-stamp">${SYNTHETIC_STAMP}</span>`;
+/** Styled inline (the package's CSP allows inline style), so packages without synthetic weather keep their CSS. */
+const STAMP_STYLE = "color:#b00000;font-weight:bold";
+const TEXT_STAMP = `<span class="synthetic-stamp" style="${STAMP_STYLE}">${SYNTHETIC_STAMP}</span>`;
 /** The boxes of a scenario's output that carry a stamp line. */
 const BOX = /<div class="(?:peak-summary|caution-box)"[^>]*>/g;
 /** A table with its caption opening tag, when it has one. */

@@ -1,5 +1,6 @@
 /**
- * Writes the demo's SYNTHETIC weather year, projects/demo/weather/synthetic-year-2031.csv: 8760 hourly rows
+ * Writes the demo's SYNTHETIC weather year, projects/demo/weather/synthetic-year-2031.csv: a first comment line
+ * `# synthetic: …` (the weather CSV's marker of invented data), the header, then 8760 hourly rows
  * 2031-01-01T01:00 … 2032-01-01T00:00 (local standard time, UTC), invented by the deterministic formulas below. It
  * is not measured or typical climate data of any place; it exists so the demo can show a weather-year scenario.
  *
@@ -35,6 +36,9 @@ const OUTPUT = "projects/demo/weather/synthetic-year-2031.csv";
 const SITE = { latitudeDeg: 52.4, longitudeDeg: -1.9, timeZoneH: 0 };
 const START_S = secondsOf({ year: 2031, month: 1, day: 1, hour: 0, minute: 0 });
 const TWO_PI = 2 * Math.PI;
+/** The first line: the weather CSV's own marker of invented data, so the file says what it is wherever it goes. */
+export const SYNTHETIC_COMMENT =
+  "# synthetic: invented by scripts/synthetic-weather.ts (documented formulas), not climate data of any place";
 
 /** Cloudiness 0…1 at d days after 2031-01-01T00:00. */
 export function cloudiness(d: number): number {
@@ -72,7 +76,7 @@ export function irradianceAt(d: number): { global: number; diffuse: number } {
 
 /** The synthetic year as weather CSV text. */
 export function syntheticYearCsv(): string {
-  const lines = ["time,dry-bulb,global-horizontal,diffuse-horizontal"];
+  const lines = [SYNTHETIC_COMMENT, "time,dry-bulb,global-horizontal,diffuse-horizontal"];
   for (let k = 1; k <= 8760; k++) {
     const d = k / 24;
     let global = 0;
@@ -97,7 +101,9 @@ function plain(value: number, decimals: number): string {
 if (import.meta.main) {
   const text = syntheticYearCsv();
   const check = parseWeatherCsv(text, OUTPUT, 1, 3600);
-  if (!check.ok) throw new Error(check.diagnostics.map((d) => `${d.at.line}: ${d.message}`).join("\n"));
+  if (!check.ok || check.synthetic === undefined) {
+    throw new Error(check.diagnostics.map((d) => `${d.at.line}: ${d.message}`).join("\n"));
+  }
   await Deno.mkdir("projects/demo/weather", { recursive: true });
   await Deno.writeTextFile(OUTPUT, text);
 }

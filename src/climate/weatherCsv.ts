@@ -12,6 +12,7 @@ import {
   DRY_BULB_RANGE_C,
   MAX_IRRADIANCE_W_PER_M2,
   NEGATIVE_IRRADIANCE_TOLERANCE_W_PER_M2,
+  readComment,
   readHeader,
   readValueCell,
   REQUIRED_WEATHER_COLUMNS,
@@ -50,8 +51,14 @@ export interface WeatherSeries {
 
 /** Result of reading a weather CSV: the series (with any warnings) or the errors. */
 export type WeatherParseResult =
-  | { ok: true; weather: WeatherSeries; diagnostics: Diagnostic[] }
+  | { ok: true; weather: WeatherSeries; diagnostics: Diagnostic[]; synthetic?: SyntheticMark }
   | { ok: false; diagnostics: Diagnostic[] };
+
+/** A leading comment `# synthetic: <how the data were made>` of the weather file, with its line. */
+export interface SyntheticMark {
+  readonly note: string;
+  readonly line: number;
+}
 
 /** Diffuse may exceed global by this much (separately rounded values), W/m² (our stated rule). */
 export const DIFFUSE_EXCESS_TOLERANCE_W_PER_M2 = 5;
@@ -78,12 +85,17 @@ export function parseWeatherCsv(
   const lines = lineCursor(body);
   let lineNo = firstLine - 1;
   let headerLine: string | undefined;
+  let synthetic: SyntheticMark | undefined;
   while (headerLine === undefined) {
     const line = lines.next();
     if (line === undefined) break;
     lineNo++;
-    if (line.trim() !== "") headerLine = line;
+    if (line.trimStart().startsWith("#")) {
+      const comment = readComment(line, lineNo, at, errors);
+      if (comment !== undefined) synthetic ??= comment;
+    } else if (line.trim() !== "") headerLine = line;
   }
+  if (errors.length > 0) return fail();
   if (headerLine === undefined) {
     errors.push(
       error(
@@ -220,7 +232,7 @@ export function parseWeatherCsv(
     ...(header.names.includes("direct-normal") ? { directNormalWPerM2: series("direct-normal") } : {}),
     monthOfStep: exact(monthOfStep),
   };
-  return { ok: true, weather, diagnostics: warnings };
+  return { ok: true, weather, diagnostics: warnings, ...(synthetic === undefined ? {} : { synthetic }) };
 }
 
 /** Visits the lines of a text one at a time (LF or CRLF ends), and counts the lines not yet visited. */

@@ -40,6 +40,36 @@ export function splitCells(line: string): { text: string; col: number }[] {
   return cells;
 }
 
+/**
+ * Reads a comment line (`#` first) before the header. `# synthetic: <how the data were made>` marks the file as
+ * invented data (`# synthetic: true` marks it without a note; `# synthetic: false` does not mark it); any other
+ * comment is free text. A comment that starts with the word synthetic but lacks the colon is an error, so a marker
+ * meant to warn the reader is never silently dropped.
+ */
+export function readComment(
+  line: string,
+  lineNo: number,
+  at: (line: number, col: number) => Diagnostic["at"],
+  errors: Diagnostic[],
+): { note: string; line: number } | undefined {
+  const text = line.trim().slice(1).trim();
+  const marker = /^synthetic\b/i.exec(text);
+  if (marker === null) return undefined;
+  const rest = text.slice(marker[0].length).trimStart();
+  if (marker[0] !== "synthetic" || !rest.startsWith(":")) {
+    errors.push(error(
+      at(lineNo, line.indexOf("#") + 1),
+      "weather-synthetic-comment",
+      `Cannot read the comment "${line.trim()}" as a synthetic-data marker`,
+      "write the first line as # synthetic: <how the data were made>, lower case with a colon",
+    ));
+    return undefined;
+  }
+  const note = rest.slice(1).trim();
+  if (note === "false") return undefined;
+  return { note: note === "true" ? "" : note, line: lineNo };
+}
+
 /** Reads the header line into column names, or reports unknown, duplicate and missing columns. */
 export function readHeader(
   line: string,

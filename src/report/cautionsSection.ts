@@ -5,6 +5,7 @@
  */
 import { html, raw, type Trusted } from "./html.ts";
 import type { PackageInput } from "./packageInput.ts";
+import { syntheticScenarios } from "../results/syntheticWeather.ts";
 
 /** The general caution, worded for any jurisdiction. */
 export const GENERAL_CAUTION =
@@ -12,11 +13,9 @@ export const GENERAL_CAUTION =
   "regulations that apply where the building stands, and the review of a person qualified to sign under " +
   "them, govern any design decision.";
 
-/** Weather scenarios whose data is marked synthetic by the scenario's `synthetic` key. */
+/** Weather scenarios whose data is marked synthetic by the scenario's `synthetic` key or the file's comment. */
 function syntheticWeather(input: PackageInput): string[] {
-  return input.model.scenarios.flatMap((s) =>
-    s.kind === "weather" && s.synthetic !== undefined ? [s.id] : []
-  );
+  return [...syntheticScenarios(input.model, input.results).keys()];
 }
 
 /** Built-in library materials in use whose values are recorded from memory, not checked against the source. */

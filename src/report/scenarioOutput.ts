@@ -28,6 +28,7 @@ import {
 } from "./scenarioStyle.ts";
 import { renderPeakSummary } from "./scenarioSummary.ts";
 import { renderMonthlyTable, renderStepTables } from "./scenarioTables.ts";
+import { stampSyntheticOutput, syntheticBanner } from "./syntheticStamp.ts";
 
 /** What the scenario output reads: the block's scenario, its results entry, the register, checks and anchors. */
 export interface ScenarioOutputInput {
@@ -166,9 +167,11 @@ export function renderScenarioOutput(input: ScenarioOutputInput): Trusted {
     (c) => surfaceOfSubject(c.subject, id),
     "Surface",
   );
-  return html`
+  const output = html`
     <div class="scenario-output" id="${anchor}">
-      <h4 class="output-heading">Results of scenario ${id}</h4>
+      <h4 class="output-heading">Results of scenario ${id}</h4>${results.synthetic === undefined
+        ? html``
+        : syntheticBanner(id, results.synthetic)}
       <p class="muted">Numbers as in results.json <code>scenarios</code> entry for ${id} (Appendix B); times are local standard time.</p>
       ${renderPeakSummary(id, results, d)}
       <h5>Conditions</h5>
@@ -180,4 +183,5 @@ export function renderScenarioOutput(input: ScenarioOutputInput): Trusted {
       ${caution(results)}
     </div>
   `;
+  return results.synthetic === undefined ? output : stampSyntheticOutput(output);
 }

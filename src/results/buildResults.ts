@@ -18,6 +18,7 @@ import { weatherCoverage } from "../scenarios/weatherPeriod.ts";
 import { weatherBudget } from "../scenarios/weatherBudget.ts";
 import { sensitivityStudy } from "../sensitivity/study.ts";
 import { parseWeatherCsv } from "../climate/weatherCsv.ts";
+import { stampSyntheticCsv, syntheticMark } from "./syntheticWeather.ts";
 import { TOOL_VERSION } from "../version.ts";
 import { limitsFor, ownLimits } from "../project/constructionLimits.ts";
 import { designResults } from "./designResults.ts";
@@ -262,7 +263,10 @@ function computeScenarios(
         }
         heldBytes += budget.bytes;
         const outcome = computeWeatherYear(scenario, parsed.weather, context, coverage.coverage);
-        parts.scenarios[scenario.id] = outcome.results;
+        const synthetic = syntheticMark(scenario.synthetic, parsed.synthetic);
+        parts.scenarios[scenario.id] = synthetic === undefined
+          ? outcome.results
+          : { ...outcome.results, synthetic };
         parts.checks.push(...outcome.checks);
         parts.assumptions.push(...outcome.assumptions);
         parts.warnings.push(...outcome.warnings);
@@ -272,7 +276,11 @@ function computeScenarios(
             message: d.message,
           })),
         );
-        parts.csvFiles.push(...outcome.csv);
+        parts.csvFiles.push(
+          ...(synthetic === undefined
+            ? outcome.csv
+            : outcome.csv.map((f) => stampSyntheticCsv(f, synthetic))),
+        );
         break;
       }
     }

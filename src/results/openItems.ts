@@ -9,6 +9,7 @@ import { formatPosition, type Position } from "../project/position.ts";
 import type { Acknowledgement } from "../project/signOff.ts";
 import type { LimitResult } from "./limitResults.ts";
 import { BLOCKING_KINDS, type OpenItem, type OpenItemKind } from "./summaryTypes.ts";
+import { syntheticScenarios } from "./syntheticWeather.ts";
 import type { ResultsJson } from "./types.ts";
 
 /** A source text that says its values are recalled, not read, or still to be confirmed. */
@@ -24,7 +25,7 @@ export function collectOpenItems(
 ): OpenItem[] {
   const drafts = [
     ...fromMemoryItems(model, results),
-    ...syntheticItems(model),
+    ...syntheticItems(model, results),
     ...failedCheckItems(model, results),
     ...defaultItems(results.assumptions),
     ...unmetLimitItems(results),
@@ -140,19 +141,23 @@ function firstUse(model: Model, materialId: string): Position | undefined {
   return undefined;
 }
 
-function syntheticItems(model: Model): Draft[] {
-  return model.scenarios.flatMap((s): Draft[] =>
-    s.kind === "weather" && s.synthetic !== undefined
+function syntheticItems(model: Model, results: ResultsJson): Draft[] {
+  const marks = syntheticScenarios(model, results);
+  return model.scenarios.flatMap((s): Draft[] => {
+    const mark = marks.get(s.id);
+    return s.kind === "weather" && mark !== undefined
       ? [{
         id: `synthetic-data:${s.id}`,
         kind: "synthetic-data",
         text: `Weather of scenario ${s.id} (${s.weatherPath}) is synthetic${
-          s.synthetic.note === "" ? "" : `: ${s.synthetic.note}`
+          mark.from === "file" ? " (marked in the file's first comment)" : ""
+        }${
+          mark.note === "" ? "" : `: ${mark.note}`
         }; replace it with climate data before relying on the results`,
         at: formatPosition(s.weatherAt),
       }]
-      : []
-  );
+      : [];
+  });
 }
 
 function failedCheckItems(model: Model, results: ResultsJson): Draft[] {

@@ -7,6 +7,7 @@ import type { Model } from "../project/model.ts";
 import type { HeatingResults } from "./heatingTypes.ts";
 import type { LimitResult } from "./limitResults.ts";
 import { collectOpenItems } from "./openItems.ts";
+import { syntheticScenarios } from "./syntheticWeather.ts";
 import type { ConstructionSummary, ScenarioSummary, SummaryJson } from "./summaryTypes.ts";
 import type { ConstructionResults, ResultsJson, ScenarioResults } from "./types.ts";
 
@@ -16,9 +17,7 @@ export function buildSummary(
   results: ResultsJson,
   findings: readonly Diagnostic[],
 ): SummaryJson {
-  const synthetic = new Set(
-    model.scenarios.filter((s) => s.kind === "weather" && s.synthetic !== undefined).map((s) => s.id),
-  );
+  const synthetic = syntheticScenarios(model, results);
   return {
     constructions: model.constructions.flatMap((c) => {
       const r = results.constructions[c.id];

@@ -163,4 +163,15 @@ export interface ScenarioResults {
   readonly notes: readonly string[];
   /** Extension (design day with a radiant time series): total cooling load per full hour and its peak. */
   readonly coolingLoad?: CoolingLoadResults;
+  /**
+   * Extension (weather): present when the weather is synthetic, marked by the scenario's `synthetic` key
+   * (`from: "scenario"`, which wins) or by the file's first comment `# synthetic: <note>` (`from: "file"`).
+   */
+  readonly synthetic?: SyntheticWeatherResults;
+}
+
+/** How a weather scenario's data is marked synthetic (results.json `scenarios.<id>.synthetic`). */
+export interface SyntheticWeatherResults {
+  readonly note: string;
+  readonly from: "scenario" | "file";
 }

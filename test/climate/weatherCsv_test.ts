@@ -258,3 +258,29 @@ Deno.test("an empty file and a header without rows are errors", () => {
   );
   assert.equal(only(parse([HEADER, ""])).message, "The weather file has a header but no data rows");
 });
+
+Deno.test("comment lines before the header are read; '# synthetic: <note>' marks the file synthetic", () => {
+  const plain = parse([HEADER, ...rows(3)]);
+  const marked = parse(["# made for the test", "# synthetic: sine swing, invented", HEADER, ...rows(3)]);
+  assert.ok(plain.ok && marked.ok);
+  assert.equal(plain.synthetic, undefined);
+  assert.deepEqual(marked.synthetic, { note: "sine swing, invented", line: 2 });
+  // The comments do not change the series.
+  assert.deepEqual(marked.weather, plain.weather);
+  const bare = parse(["# synthetic: true", HEADER, ...rows(3)]);
+  assert.ok(bare.ok);
+  assert.deepEqual(bare.synthetic, { note: "", line: 1 });
+  const no = parse(["# synthetic: false", "# measured at the test site", HEADER, ...rows(3)]);
+  assert.ok(no.ok);
+  assert.equal(no.synthetic, undefined);
+});
+
+Deno.test("a synthetic marker without its colon or in capitals is an error at its line, not a silent comment", () => {
+  for (const comment of ["# synthetic invented", "  # Synthetic: invented", "#SYNTHETIC"]) {
+    const d = only(parse([comment, HEADER, ...rows(3)]));
+    assert.equal(d.line, 1);
+    assert.equal(d.col, comment.indexOf("#") + 1);
+    assert.equal(d.message, `Cannot read the comment "${comment.trim()}" as a synthetic-data marker`);
+    assert.match(d.hint ?? "", /# synthetic: <how the data were made>/);
+  }
+});

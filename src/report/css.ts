@@ -97,7 +97,7 @@ table.assumptions td.applies-to { font-size: 7.5pt; }
   html { background: none; }
   body { max-width: none; margin: 0; padding: 0; font-size: 10pt; }
   .running-header { display: none; }
-  .embedded-file { display: none; }
+  .embedded-file, details.input-echo { display: none; }
   details { display: block; }
   a { color: inherit; text-decoration: none; }
   h2, h3 { break-after: avoid; }

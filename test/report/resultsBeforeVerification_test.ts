@@ -126,3 +126,26 @@ Deno.test("demo: the assumptions register has one row per default kind and state
     /\d+ notes "Default in use" .* folded into the assumptions register/,
   );
 });
+
+Deno.test("each input block prints once: named in the body, its text in Appendix A", () => {
+  const input = fixture();
+  const out = renderPackage(input);
+  const doc = parseDocument(out);
+  const blocks = input.model.documents.flatMap((d) => d.segments.filter((s) => s.kind === "block"));
+  assert.ok(blocks.length >= 2);
+  const written = Array.from(doc.querySelectorAll("#s-a .block-as-written pre")).map((p) =>
+    // The pre's leading newline (PRE_LEAD) is not part of the block.
+    (p.textContent ?? "").replace(/^\n/, "")
+  );
+  assert.deepEqual(written, blocks.map((b) => `${b.kind === "block" ? b.source : ""}`));
+  for (const label of Array.from(doc.querySelectorAll("#s-2 .input-block"))) {
+    const href = label.querySelector('a[href^="#a-block-"]')?.getAttribute("href") ?? "";
+    assert.ok(doc.querySelector(href) !== null, href);
+    // The body's copy is folded on screen and not printed.
+    assert.ok(label.querySelector("pre")?.closest("details.input-echo") !== null);
+  }
+  assert.match(
+    out,
+    /@media print \{[^}]*details\.input-echo \{ display: none; \}|@media print \{[^]*?details\.input-echo[^{]*\{ display: none; \}/,
+  );
+});

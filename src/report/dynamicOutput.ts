@@ -81,20 +81,19 @@ function surfaceLine(view: DynamicView, d: DisplayUnits): Trusted {
 
 /**
  * Renders the dynamic response of one construction from its results.json entry in the display units `d`;
- * `notes` are results.json `methodNotes` (why a polynomial CTF is not published), `anchor` prefixes the plots'
- * ids, `checksList` is the construction's list of checks, shown at the end.
+ * `_notes` (results.json `methodNotes`) are read by its factors in Appendix D, not here; `anchor` names the
+ * construction's Appendix D part, `checksList` is the construction's checks line, shown at the end.
  */
 export function renderDynamicResponse(
   construction: Construction,
   results: ConstructionResults | undefined,
-  notes: readonly MethodNoteResult[],
+  _notes: readonly MethodNoteResult[],
   anchor: string,
   checksList: Trusted,
   d: DisplayUnits,
   compact = false,
 ): Trusted {
   const view = readDynamic(results);
-  const subject = `construction:${construction.id}`;
   const body = view === undefined
     ? html`<p class="fail">No dynamic results: results.json holds no complete dynamic entry for ${construction.id}.</p>`
     : compact

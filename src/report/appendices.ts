@@ -1,5 +1,6 @@
 /** Appendix A (every input file's exact bytes, base64) and Appendix B (the results JSON). */
 import { encodeBase64 } from "./base64.ts";
+import { renderBlocksAsWritten } from "./inputBlocks.ts";
 import { html, PRE_LEAD, type Trusted } from "./html.ts";
 import type { InputFile, RenderContext } from "./packageInput.ts";
 
@@ -43,6 +44,7 @@ export function renderInputsAppendix(ctx: RenderContext): Trusted {
   return html`<section id="s-a"><h2>Appendix A Embedded inputs</h2>
 <p>Each input file's exact bytes, base64-encoded (RFC 4648), so the package alone can regenerate its results. The base64 blocks are hidden when printed.</p>
 ${ctx.input.inputFiles.map(embeddedFile)}
+${renderBlocksAsWritten(ctx)}
 ${
     ctx.input.libraryEntries.length === 0 ? "" : html`<h3 id="s-a-lib">Built-in library entries used</h3>
 <p>The canonical text of each library entry the project used; these are hashed with the inputs.</p>

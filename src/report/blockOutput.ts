@@ -6,6 +6,7 @@ import { renderConstructionOutput } from "./constructionOutput.ts";
 import { html, PRE_LEAD, type Trusted } from "./html.ts";
 import type { RenderContext } from "./packageInput.ts";
 import { materialTableHead, materialTableRow } from "./materialRows.ts";
+import { blockTextAnchor } from "./inputBlocks.ts";
 import { renderScenarioOutput } from "./scenarioOutput.ts";
 import { renderHeatingBlock } from "./heatingOutput.ts";
 
@@ -90,7 +91,10 @@ function outputFor(block: BlockSegment, ctx: RenderContext): Trusted {
   }
 }
 
-/** Renders an input block verbatim (escaped) with its position, then its computed output. */
+/**
+ * Renders an input block's position and its text (escaped, folded on screen, not printed: the printed copy is
+ * Appendix A's), then its computed output.
+ */
 export function renderBlock(block: BlockSegment, ctx: RenderContext): Trusted {
   const anchor = block.blockKind === "construction" && block.id !== undefined
     ? ctx.constructionAnchors.get(block.id)
@@ -98,12 +102,19 @@ export function renderBlock(block: BlockSegment, ctx: RenderContext): Trusted {
   const idAttr = anchor === undefined ? html`` : html`
     id="${anchor}"
   `;
+  const textAnchor = blockTextAnchor(ctx, block);
+  const where = textAnchor === undefined ? html`` : html`
+    (as written in <a href="#${textAnchor}">Appendix A</a>)
+  `;
   return html`
     <div class="input-block" ${idAttr}>
       <p class="input-label">Input: ${block.blockKind} block${block.id === undefined
         ? ""
-        : ` "${block.id}"`}, ${formatPosition(block.at)}</p>
-      <pre>${PRE_LEAD}${block.source}</pre>
+        : ` "${block.id}"`}, ${formatPosition(block.at)}${where}</p>
+      <details class="input-echo">
+        <summary>Block as written</summary>
+        <pre>${PRE_LEAD}${block.source}</pre>
+      </details>
     </div>
     <div class="block-output"><p class="input-label">Computed output</p>${outputFor(block, ctx)}</div>
   `;

@@ -4,6 +4,7 @@ import { sortDiagnostics } from "../project/diagnostic.ts";
 import { formatSig } from "./format.ts";
 import { html, type Trusted } from "./html.ts";
 import type { RenderContext } from "./packageInput.ts";
+import type { CheckResult } from "../results/types.ts";
 
 function subjectAnchor(subject: string, ctx: RenderContext): string | undefined {
   if (subject.startsWith("construction:")) {
@@ -22,8 +23,12 @@ function subjectCell(subject: string, ctx: RenderContext): Trusted {
     : html`<td><a href="#${anchor}">${subject}</a></td>`;
 }
 
-function checksTable(ctx: RenderContext): Trusted {
-  const checks = ctx.input.results.checks;
+/** Tables every numerical check (Appendix C), or says none applies. */
+export function allChecksTable(ctx: RenderContext): Trusted {
+  return checksTable(ctx, ctx.input.results.checks);
+}
+
+function checksTable(ctx: RenderContext, checks: readonly CheckResult[]): Trusted {
   if (checks.length === 0) return html`<p>No automated checks apply yet.</p>`;
   const rows = checks.map((c) =>
     html`<tr><td>${c.id}</td>${subjectCell(c.subject, ctx)}<td>${c.description}</td><td class="num">${
@@ -33,7 +38,7 @@ function checksTable(ctx: RenderContext): Trusted {
     }</td></tr>`
   );
   return html`
-    <table>
+    <table class="checks-list">
       <thead>
         <tr>
           <th>Check</th>
@@ -48,6 +53,19 @@ function checksTable(ctx: RenderContext): Trusted {
     </table>
     <p class="muted">A check passes when |value| ≤ limit.</p>
   `;
+}
+
+function checksSummary(ctx: RenderContext): Trusted {
+  const checks = ctx.input.results.checks;
+  if (checks.length === 0) return html`<p>No automated checks apply yet.</p>`;
+  const failed = checks.filter((c) => !c.pass);
+  const line = html`
+    <p
+      class="${failed.length === 0 ? "pass" : ""}">${String(checks.length - failed.length)} of ${String(
+        checks.length,
+      )} numerical checks passed; every check with its value and limit is in <a href="#s-c">Appendix C</a>.</p>
+  `;
+  return failed.length === 0 ? line : html`${line}<p>The failed checks:</p>${checksTable(ctx, failed)}`;
 }
 
 function methodNotesTable(ctx: RenderContext): Trusted {
@@ -72,9 +90,22 @@ function methodNotesTable(ctx: RenderContext): Trusted {
   `;
 }
 
+/** Review notes folded into the assumptions register (one per default assumption). */
+const FOLDED_RULE = "default-used";
+
 function findingsTable(ctx: RenderContext): Trusted {
-  const findings = sortDiagnostics(ctx.input.findings);
-  if (findings.length === 0) return html`<p>No findings were raised on the inputs.</p>`;
+  const all = sortDiagnostics(ctx.input.findings);
+  const findings = all.filter((f) => f.rule !== FOLDED_RULE);
+  const foldedCount = all.length - findings.length;
+  const folded = foldedCount === 0 ? html`` : html`
+    <p
+      class="muted">${String(
+        foldedCount,
+      )} notes "Default in use" (rule <code>${FOLDED_RULE}</code>) are folded into the <a href="#s-5">assumptions register</a>, one row per default with the lines it applies to.</p>
+  `;
+  if (findings.length === 0) {
+    return html`${folded}${foldedCount === 0 ? html`<p>No findings were raised on the inputs.</p>` : html``}`;
+  }
   const rows = findings.map((f) =>
     html`
       <tr>
@@ -87,7 +118,7 @@ function findingsTable(ctx: RenderContext): Trusted {
     `
   );
   return html`
-    <table>
+    <table class="checks-list">
       <thead>
         <tr>
           <th>Severity</th>
@@ -99,6 +130,7 @@ function findingsTable(ctx: RenderContext): Trusted {
       </thead>
       <tbody>${rows}</tbody>
     </table>
+    ${folded}
   `;
 }
 
@@ -106,7 +138,7 @@ function findingsTable(ctx: RenderContext): Trusted {
 export function renderChecksSection(ctx: RenderContext): Trusted {
   return html`<section id="s-4"><h2>4 Checks and findings</h2>
 <h3 id="s-4-1">4.1 Automated checks</h3>
-${checksTable(ctx)}
+${checksSummary(ctx)}
 ${methodNotesTable(ctx)}
 <h3 id="s-4-2">4.2 Review findings on the inputs</h3>
 ${findingsTable(ctx)}

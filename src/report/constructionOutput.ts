@@ -233,19 +233,32 @@ export function renderConstructionOutput(
       results,
       notes,
       anchor,
-      compact
-        ? compactChecks(checks, `construction:${construction.id}`)
-        : subjectChecks(checks, `construction:${construction.id}`),
+      bodyChecks(checks, `construction:${construction.id}`),
       d,
       compact,
     )}
   `;
 }
 
-function compactChecks(checks: readonly CheckResult[], subject: string): Trusted {
+/**
+ * The body's line on a subject's numerical checks: failures tabled beside their values, then
+ * "N numerical checks passed (Appendix C)"; nothing when the subject has no check.
+ */
+export function bodyChecks(checks: readonly CheckResult[], subject: string): Trusted {
   const own = checks.filter((c) => c.subject === subject);
+  if (own.length === 0) return html``;
   const failed = own.filter((c) => !c.pass);
+  const passed = own.length - failed.length;
   return failed.length === 0
-    ? html`<p class="pass">All ${String(own.length)} checks passed (listed with values in Appendix B).</p>`
-    : checksTable(failed);
+    ? html`<p class="pass checks-line">${
+      String(passed)
+    } numerical checks passed (<a href="#s-c">Appendix C</a>).</p>`
+    : html`
+      ${checksTable(failed)}<p
+        class="checks-line">${String(passed)} of ${String(
+          own.length,
+        )} numerical checks passed (<a href="#s-c">Appendix C</a>); the ${String(
+          failed.length,
+        )} failed above.</p>
+    `;
 }

@@ -85,16 +85,24 @@ figure.plot-figure svg.swatch-fill, svg.swatch-fill { width: 12px; }
 .caution-box { border: 1px solid var(--ink); background: #f7f7f7; padding: 2mm 3mm; margin: 4mm 0; break-inside: avoid; }
 .caution-box p { margin: 1mm 0; }
 nav.contents ol.contents-outputs { padding-left: 6mm; }
+table.assumptions, table.checks-list { width: 100%; table-layout: fixed; font-size: 8.5pt; break-inside: auto; }
+table.assumptions th, table.assumptions td, table.checks-list th, table.checks-list td { padding: 0.5mm 1.2mm; }
+table.assumptions code, table.checks-list code { font-size: 7.5pt; overflow-wrap: anywhere; }
+table.assumptions tr, table.checks-list tr { break-inside: avoid; }
+table.assumptions th:nth-child(1) { width: 16%; }
+table.assumptions th:nth-child(2) { width: 34%; }
+table.assumptions th:nth-child(3) { width: 20%; }
+table.assumptions td.applies-to { font-size: 7.5pt; }
 @media print {
   html { background: none; }
   body { max-width: none; margin: 0; padding: 0; font-size: 10pt; }
   .running-header { display: none; }
-  .embedded-file { display: none; }
+  .embedded-file, details.input-echo { display: none; }
   details { display: block; }
   a { color: inherit; text-decoration: none; }
   h2, h3 { break-after: avoid; }
   tr, figure, table, .input-block { break-inside: avoid; }
-  table.hourly { break-inside: auto; }
+  table.hourly, table.assumptions, table.checks-list { break-inside: auto; }
 }
 `);
 

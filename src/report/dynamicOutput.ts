@@ -1,4 +1,4 @@
-/** The "Dynamic response" part after a construction's steady-state output: tables, CTFs, plots and checks. */
+/** The "Dynamic response" after a construction's steady-state output (summary and checks line) and its factors for Appendix D. */
 import type { Construction } from "../project/model.ts";
 import type { ConstructionResults, MethodNoteResult } from "../results/types.ts";
 import { COMPACT_ABOVE_CONSTRUCTIONS } from "./compact.ts";
@@ -81,20 +81,19 @@ function surfaceLine(view: DynamicView, d: DisplayUnits): Trusted {
 
 /**
  * Renders the dynamic response of one construction from its results.json entry in the display units `d`;
- * `notes` are results.json `methodNotes` (why a polynomial CTF is not published), `anchor` prefixes the plots'
- * ids, `checksList` is the construction's list of checks, shown at the end.
+ * `_notes` (results.json `methodNotes`) are read by its factors in Appendix D, not here; `anchor` names the
+ * construction's Appendix D part, `checksList` is the construction's checks line, shown at the end.
  */
 export function renderDynamicResponse(
   construction: Construction,
   results: ConstructionResults | undefined,
-  notes: readonly MethodNoteResult[],
+  _notes: readonly MethodNoteResult[],
   anchor: string,
   checksList: Trusted,
   d: DisplayUnits,
   compact = false,
 ): Trusted {
   const view = readDynamic(results);
-  const subject = `construction:${construction.id}`;
   const body = view === undefined
     ? html`<p class="fail">No dynamic results: results.json holds no complete dynamic entry for ${construction.id}.</p>`
     : compact
@@ -108,14 +107,10 @@ export function renderDynamicResponse(
     `
     : html`
       ${dynamicSummaryTable(view, d)}
-      <h5>Response factors</h5>
-      ${responseFactorTable(view, d)}
-      ${surfaceLine(view, d)}
-      <h5>Conduction transfer functions</h5>
-      ${ctfSection(view, notes, subject, d)}
-      <h5>Periodic response factors and conduction time series</h5>
-      ${periodicTable(view, d)}
-      ${plots(construction, view, `${anchor}-fig`, d)}
+      <p
+        class="muted">Response factors, conduction transfer functions, periodic factors and plots of ${construction
+          .id}: <a href="#d-${anchor}">Appendix D</a> (leading terms; every term in results.json and csv/factors-${construction
+          .id}.csv).</p>
     `;
   return html`
     <div class="dynamic-response">
@@ -123,10 +118,37 @@ export function renderDynamicResponse(
       <p class="muted">Numbers as in results.json <code>constructions</code> entry for ${construction
         .id} (Appendix B); method in section 3.</p>
       ${body}
-      <h5>Checks on ${construction.id}</h5>
       ${checksList.markup === ""
         ? html`<p>No automated check is recorded for this construction.</p>`
         : checksList}
     </div>
+  `;
+}
+
+/**
+ * Renders the factor tables of one construction for Appendix D: response factors (leading terms), the
+ * surface-to-surface line, both CTFs, periodic factors and the plots; nothing without dynamic results.
+ */
+export function renderDynamicFactors(
+  construction: Construction,
+  results: ConstructionResults | undefined,
+  notes: readonly MethodNoteResult[],
+  anchor: string,
+  d: DisplayUnits,
+): Trusted {
+  const view = readDynamic(results);
+  if (view === undefined) {
+    return html`<p class="fail">No dynamic results: results.json holds no complete dynamic entry for ${construction.id}.</p>`;
+  }
+  const subject = `construction:${construction.id}`;
+  return html`
+    <h4>Response factors</h4>
+    ${responseFactorTable(view, d)}
+    ${surfaceLine(view, d)}
+    <h4>Conduction transfer functions</h4>
+    ${ctfSection(view, notes, subject, d)}
+    <h4>Periodic response factors and conduction time series</h4>
+    ${periodicTable(view, d)}
+    ${plots(construction, view, `${anchor}-fig`, d)}
   `;
 }

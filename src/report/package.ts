@@ -1,5 +1,6 @@
 /** Assembles the self-contained HTML calculation package from the model, results and inputs. */
 import { renderInputsAppendix, renderResultsAppendix } from "./appendices.ts";
+import { renderChecksAppendix, renderFactorsAppendix } from "./checksAppendices.ts";
 import { renderCalculationSection } from "./calculationSection.ts";
 import { renderChecksSection } from "./checksSection.ts";
 import { renderCover, STATUS_LABEL, watermarkFor } from "./cover.ts";
@@ -39,6 +40,8 @@ const CONTENTS: readonly (readonly [string, string])[] = [
   ["s-10", "10 Reproducibility"],
   ["s-a", "Appendix A Embedded inputs"],
   ["s-b", "Appendix B Results (results.json)"],
+  ["s-c", "Appendix C Numerical checks"],
+  ["s-d", "Appendix D Dynamic factors"],
 ];
 
 function renderContents(ctx: RenderContext): Trusted {
@@ -117,6 +120,8 @@ export function renderPackage(input: PackageInput): string {
     ${renderReproducibilitySection(ctx)}
     ${renderInputsAppendix(ctx)}
     ${renderResultsAppendix(ctx)}
+    ${renderChecksAppendix(ctx)}
+    ${renderFactorsAppendix(ctx)}
     </main>
     ${endMarker(input)}
       </body>

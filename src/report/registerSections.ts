@@ -1,29 +1,44 @@
 /** Sections 5 to 7: the assumptions register, the materials used with their sources, and the sources. */
 import type { MaterialDef } from "../project/model.ts";
+import { type AssumptionGroup, groupAssumptions } from "./assumptionGroups.ts";
 import { html, type Trusted } from "./html.ts";
 import { materialTableHead, materialTableRow } from "./materialRows.ts";
 import type { RenderContext } from "./packageInput.ts";
 
-/** Renders section 5, one row per assumption. */
+function appliesTo(group: AssumptionGroup): Trusted {
+  if (group.members.length === 1) {
+    return html`<td class="applies-to"><code>${group.members[0]!.at}</code></td>`;
+  }
+  const items = group.members.map((m, i) =>
+    html`${i === 0 ? "" : "; "}<code>${m.id.slice(group.kind.length + 1)}</code> at <code>${m.at}</code>`
+  );
+  return html`<td class="applies-to">${String(group.members.length)}: ${items}</td>`;
+}
+
+/**
+ * Renders section 5: one row per kind of assumption and statement, with the subjects and input lines it
+ * applies to; the review's "Default in use" notes are folded into it.
+ */
 export function renderAssumptionsSection(ctx: RenderContext): Trusted {
   const list = ctx.input.results.assumptions;
+  const groups = groupAssumptions(list, ctx.input.model.constructions.map((c) => c.id));
   const body = list.length === 0 ? html`<p>No assumptions were recorded.</p>` : html`
-    <table>
+    <table class="assumptions">
       <thead>
         <tr>
-          <th>Id</th>
+          <th>Kind</th>
           <th>Statement</th>
           <th>Basis / source</th>
-          <th>Applies at</th>
+          <th>Applies to</th>
         </tr>
       </thead>
-      <tbody>${list.map((a) =>
+      <tbody>${groups.map((g) =>
         html`
           <tr>
-            <td><code>${a.id}</code></td>
-            <td>${a.text}</td>
-            <td>${a.source}</td>
-            <td><code>${a.at}</code></td>
+            <td><code>${g.members.length === 1 ? g.members[0]!.id : g.kind}</code></td>
+            <td>${g.text}</td>
+            <td>${g.source}</td>
+            ${appliesTo(g)}
           </tr>
         `
       )}</tbody>
@@ -32,9 +47,18 @@ export function renderAssumptionsSection(ctx: RenderContext): Trusted {
   const siNote = ctx.display.system === "SI" ? html`` : html`
     <p class="muted">The statements are quoted as recorded in results.json, so their values are in SI units.</p>
   `;
+  const defaults = list.filter((a) => a.id.startsWith("default:")).length;
+  const folded = defaults === 0 ? html`` : html`
+    <p
+      class="muted">The review's ${String(
+        defaults,
+      )} notes "Default in use" are folded into this register: state the value in the input if a default does not fit an element.</p>
+  `;
   return html`<section id="s-5"><h2>5 Assumptions register</h2>
-<p>Every value the tool filled in or chose, with its basis and the input line it applies to.</p>
-${siNote}${body}
+<p>Every value the tool filled in or chose, with its basis and the input lines it applies to; a default used by many subjects is one row (${
+    String(list.length)
+  } assumptions in ${String(groups.length)} rows; each id in results.json <code>assumptions</code>).</p>
+${siNote}${folded}${body}
 </section>`;
 }
 

@@ -11,6 +11,7 @@ import {
 } from "../../src/engine/mod.ts";
 import type { Layer } from "../../src/engine/layer.ts";
 import type { Construction } from "../../src/project/model.ts";
+import { renderDynamicFactors } from "../../src/report/dynamicOutput.ts";
 import { renderConstructionOutput } from "../../src/report/constructionOutput.ts";
 import type { CheckResult, ConstructionResults, MethodNoteResult } from "../../src/results/types.ts";
 
@@ -102,7 +103,9 @@ export function renderWithEngine(
   c: Construction,
 ): { markup: string; results: ConstructionResults; checks: CheckResult[]; notes: MethodNoteResult[] } {
   const { results, checks, notes } = engineEntry(c);
-  const markup =
-    renderConstructionOutput(c, results, checks, `c-${c.id.toLowerCase()}`, SI_DISPLAY, false, notes).markup;
+  const anchor = `c-${c.id.toLowerCase()}`;
+  // The body's output followed by the construction's Appendix D part, where the factor tables now print.
+  const markup = renderConstructionOutput(c, results, checks, anchor, SI_DISPLAY, false, notes).markup +
+    renderDynamicFactors(c, results, notes, anchor, SI_DISPLAY).markup;
   return { markup, results, checks, notes };
 }

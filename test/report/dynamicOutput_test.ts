@@ -141,7 +141,11 @@ Deno.test("renderPackage() says so when a construction's dynamic results are inc
     /No dynamic results: results\.json holds no complete dynamic entry for EW-9/,
   );
   assert.equal(part?.querySelectorAll("svg").length, 0);
-  assert.equal(part?.querySelectorAll(".subject-checks tbody tr").length, 1, "the checks are still listed");
+  assert.match(
+    part?.textContent ?? "",
+    /1 numerical checks? passed|0 of 1 numerical checks passed/,
+    "the checks are still counted",
+  );
 });
 
 Deno.test("renderPackage() escapes a hostile construction name in the figure captions", () => {

@@ -32,6 +32,7 @@ const QUOTED = [
   "#s-10",
   "#s-a",
   "#s-b",
+  "#s-c",
   "style",
 ];
 

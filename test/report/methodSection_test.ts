@@ -11,7 +11,7 @@ function text(doc: Document, selector: string): string {
 
 /** Limit cell of the calculation methods section's check table for a check id. */
 function limitCell(doc: Document, id: string): string | undefined {
-  const rows = Array.from(doc.querySelectorAll("#s-3 table.method-checks tbody tr"));
+  const rows = Array.from(doc.querySelectorAll("#s-c table.method-checks tbody tr"));
   const row = rows.find((r) => r.querySelector("td")?.textContent === id);
   return row?.querySelectorAll("td")[2]?.textContent ?? undefined;
 }
@@ -66,7 +66,7 @@ Deno.test("renderPackage() takes the limits of the calculation methods section's
   const { checks } = engineEntry(wall());
   const doc = parseDocument(renderPackage(fixture({ checks })));
   for (const c of checks) assert.equal(limitCell(doc, c.id), formatSig(c.limit, 3), c.id);
-  const rows = Array.from(doc.querySelectorAll("#s-3 table.method-checks tbody tr"));
+  const rows = Array.from(doc.querySelectorAll("#s-c table.method-checks tbody tr"));
   const surface = rows.find((r) => r.querySelector("td")?.textContent === "sum-rule-Y-surface");
   assert.match(surface?.textContent ?? "", /Surface to surface/);
 });

@@ -20,7 +20,7 @@ export interface BuildReport {
 
 const scope = self as unknown as {
   onmessage: ((event: MessageEvent<BuildRequest>) => void) | null;
-  postMessage(message: BuildReport): void;
+  postMessage(message: BuildReport | { readonly ready: true }): void;
 };
 
 scope.onmessage = async (event) => {
@@ -34,3 +34,6 @@ scope.onmessage = async (event) => {
     scope.postMessage({ code: undefined, stdout, stderr, thrown });
   }
 };
+
+// Loading and type-checking the modules above is start-up, not build time: say when it is done.
+scope.postMessage({ ready: true });

@@ -118,8 +118,8 @@ function spec(yLabel: string, marks: Plot.Markish[]): PlotSpec {
     marginBottom: 40,
     style: { fontSize: "11px" },
     x: {
-      domain: [0, 23],
-      ticks: [0, 3, 6, 9, 12, 15, 18, 21],
+      domain: [0, 24],
+      ticks: [0, 3, 6, 9, 12, 15, 18, 21, 24],
       tickFormat: clockTime,
       label: "Hour, local standard time",
       labelAnchor: "center",

@@ -59,9 +59,6 @@ table.subject-checks tr.pass td.result { color: var(--pass); }
 .equation { font-family: "Cambria Math", "STIX Two Math", Georgia, serif; margin: 1.5mm 0 1.5mm 6mm; }
 figure.plot-figure svg { display: block; width: 100%; max-width: 160mm; height: auto; }
 figure.plot-figure svg text { white-space: pre; }
-.key { display: inline-block; width: 7mm; height: 0; vertical-align: middle; border-top: 2px solid #111; }
-.key-x { border-top: 2px dashed #1f5fa8; }
-.key-z { border-top: 2px dotted #b5470f; }
 .scenario-output { margin-top: 4mm; }
 .scenario-output h4 { font-size: 11pt; margin: 4mm 0 1mm; }
 .scenario-output h5 { font-size: 10pt; margin: 4mm 0 1mm; border-top: 1px solid var(--rule); padding-top: 2mm; }

@@ -4,22 +4,11 @@ import type { ConstructionResults, MethodNoteResult } from "../results/types.ts"
 import { COMPACT_ABOVE_CONSTRUCTIONS } from "./compact.ts";
 import { ctfSection } from "./ctfTables.ts";
 import { type DynamicView, readDynamic, seriesSum, stepResponse } from "./dynamicData.ts";
-import {
-  ctsPlot,
-  RESPONSE_FACTOR_WINDOW_H,
-  responseFactorPlot,
-  SERIES_STYLE,
-  stepResponsePlot,
-  symlogConstant,
-} from "./dynamicPlots.ts";
+import { ctsPlot, RESPONSE_FACTOR_WINDOW_H, responseFactorPlot, stepResponsePlot } from "./dynamicPlots.ts";
 import { dynamicSummaryTable, periodicTable, responseFactorTable } from "./dynamicTables.ts";
 import { type DisplayUnits, toDisplay, unitLabel } from "./displayUnits.ts";
-import { formatFixed, formatSig, formatTrim } from "./format.ts";
+import { formatFixed, formatSig } from "./format.ts";
 import { html, type Trusted } from "./html.ts";
-
-function key(series: keyof typeof SERIES_STYLE, label: string): Trusted {
-  return html`<span class="key key-${series.toLowerCase()}"></span> ${label}`;
-}
 
 function figure(svg: Trusted, title: string, caption: Trusted): Trusted {
   return html`
@@ -36,11 +25,7 @@ function plots(construction: Construction, view: DynamicView, prefix: string, d:
     ${figure(
       responseFactorPlot(view, prefix, d),
       `Response factors of ${construction.id}, first ${String(RESPONSE_FACTOR_WINDOW_H)} h.`,
-      html`${key("X", "X_j outside")}, ${key("Y", "Y_j cross")}, ${
-        key("Z", "Z_j inside")
-      }. Vertical scale symmetric-logarithmic (linear within ±${
-        formatTrim(symlogConstant(toDisplay(d, "transmittance", view.U)), 1)
-      } ${perDegree}), because X₀ and Z₀ dwarf the later terms. ${construction.name}.`,
+      html`Each line is named at its end: X_j outside, Y_j cross, Z_j inside. Linear vertical scale: X₀ and Z₀ reach far above the later terms, which the table in Appendix B lists. ${construction.name}.`,
     )}
     ${figure(
       ctsPlot(view, prefix),

@@ -49,28 +49,17 @@ function points(
   return out;
 }
 
-/** Ticks 0 and ±10^k from ten times the linear threshold, within the data range [min, max]. */
-function symlogTicks(constant: number, min: number, max: number): number[] {
-  const ticks = [0];
-  const top = Math.floor(Math.log10(Math.max(-min, max, constant)));
-  for (let k = Math.round(Math.log10(constant)) + 1; k <= top; k++) {
-    const v = Number(`1e${k}`);
-    if (v <= max) ticks.push(v);
-    if (-v >= min) ticks.push(-v);
-  }
-  return ticks.sort((a, b) => a - b);
-}
-
 function finish(spec: Plot.PlotOptions): Plot.PlotOptions {
   return { height: HEIGHT, style: { fontSize: `${FONT_SIZE}px` }, marginBottom: 40, ...spec };
 }
 
-/** Half-width of the linear part of the symmetric-log scale: the power of ten at or below U/20. */
-export function symlogConstant(u: number): number {
-  return Number(`1e${Math.floor(Math.log10(u / 20))}`);
-}
+/** End-of-line names of the response-factor series. */
+const SERIES_NAME = { X: "X (outside)", Y: "Y (cross)", Z: "Z (inside)" } as const;
 
-/** Response factors X, Y, Z (display unit of U) against time jΔ over the first 48 h on a symmetric-log scale. */
+/**
+ * Response factors X, Y, Z (display unit of U) against time jΔ over the first 48 h on a linear scale, each
+ * line named at its end. Series differ by dash as well as colour, so they read in greyscale.
+ */
 export function responseFactorPlot(view: DynamicView, idPrefix: string, d: DisplayUnits): Trusted {
   const rf = view.responseFactors;
   const scale = (si: number) => toDisplay(d, "transmittance", si);
@@ -78,10 +67,6 @@ export function responseFactorPlot(view: DynamicView, idPrefix: string, d: Displ
     key,
     data: points(rf[key], view.timestep_h, RESPONSE_FACTOR_WINDOW_H, scale),
   }));
-  const all = series.flatMap((s) => s.data.map((p) => p.v));
-  const min = all.reduce((m, v) => Math.min(m, v), 0);
-  const max = all.reduce((m, v) => Math.max(m, v), 0);
-  const constant = symlogConstant(scale(view.U));
   const dots = series[0]!.data.length <= 60;
   const marks = series.flatMap(({ key, data }) => [
     Plot.line(data, {
@@ -93,10 +78,15 @@ export function responseFactorPlot(view: DynamicView, idPrefix: string, d: Displ
     }),
     ...(dots ? [Plot.dot(data, { x: "t", y: "v", r: 1.8, fill: SERIES_STYLE[key].stroke })] : []),
   ]);
+  const ends = endLabels(
+    series.map(({ key, data }) => ({ name: SERIES_NAME[key], end: data[data.length - 1] })),
+    series.flatMap((s) => s.data.map((p) => p.v)),
+  );
   return renderPlotSvg(
     finish({
       marginLeft: 62,
       marginTop: 30,
+      marginRight: 78,
       x: {
         label: "Time after the pulse peak, jΔ (h)",
         labelAnchor: "center",
@@ -104,20 +94,40 @@ export function responseFactorPlot(view: DynamicView, idPrefix: string, d: Displ
         tickFormat: tick,
       },
       y: {
-        type: "symlog",
-        constant,
-        domain: [min, max],
-        ticks: symlogTicks(constant, min, max),
         tickFormat: tick,
         grid: true,
         label: `Response factor, ${unitLabel(d, "transmittance")}`,
         labelArrow: "none",
       },
-      marks: [Plot.ruleY([0], { stroke: "#777" }), ...marks],
+      marks: [Plot.ruleY([0], { stroke: "#777" }), ...marks, ends],
     }),
     `${idPrefix}-rf`,
-    "Response factors X, Y and Z against time, symmetric-log vertical scale",
+    "Response factors X, Y and Z against time, linear vertical scale",
   );
+}
+
+/**
+ * Text marks naming each line just right of its last point, moved apart vertically so no two overlap (at
+ * least 7 % of the data range); the names are constants of this module.
+ */
+export function endLabels(
+  lines: readonly { readonly name: string; readonly end: Point | undefined }[],
+  values: readonly number[],
+  fromData = false,
+): Plot.Markish {
+  const min = values.reduce((m, v) => Math.min(m, v), fromData ? Infinity : 0);
+  const max = values.reduce((m, v) => Math.max(m, v), fromData ? -Infinity : 0);
+  const gap = (max - min) * 0.07;
+  const placed = lines.filter((l) => l.end !== undefined).map((l) => ({
+    name: l.name,
+    t: l.end!.t,
+    v: l.end!.v,
+  }))
+    .sort((a, b) => a.v - b.v);
+  for (let i = 1; i < placed.length; i++) {
+    placed[i]!.v = Math.max(placed[i]!.v, placed[i - 1]!.v + gap);
+  }
+  return Plot.text(placed, { x: "t", y: "v", text: "name", textAnchor: "start", dx: 5, fill: "#111" });
 }
 
 /** The conduction time series as 24 bars, hour 0 to 23, in percent of the total (the same in every unit system). */

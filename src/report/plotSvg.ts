@@ -4,7 +4,7 @@
  */
 import * as Plot from "@observablehq/plot";
 import { parseHTML } from "linkedom";
-import { raw, type Trusted } from "./html.ts";
+import { escapeHtml, raw, type Trusted } from "./html.ts";
 
 /** Fixed plot width in CSS pixels, so the layout is the same on every render. */
 export const PLOT_WIDTH = 640;
@@ -41,11 +41,23 @@ function renameIds(svg: Element, prefix: string): void {
   }
 }
 
+/** The placeholder a plot mark draws for the i-th project name, replaced by the escaped name afterwards. */
+export function namePlaceholder(i: number): string {
+  return `@name-${String(i)}@`;
+}
+
 /**
  * Renders the plot as inline SVG; `idPrefix` names any generated id, `label` is the SVG's accessible
- * name. Labels and data must not contain project text: only constant labels and numbers.
+ * name. Labels and data must not contain project text: only constant labels and numbers. Project names
+ * (`names`) reach the plot only as `namePlaceholder(i)` text and are put in, escaped and isolated, after
+ * the markup is checked.
  */
-export function renderPlotSvg(spec: PlotSpec, idPrefix: string, label: string): Trusted {
+export function renderPlotSvg(
+  spec: PlotSpec,
+  idPrefix: string,
+  label: string,
+  names: readonly string[] = [],
+): Trusted {
   const { document } = parseHTML("<!doctype html><html><head></head><body></body></html>");
   const node = Plot.plot({ ...spec, width: PLOT_WIDTH, document: document as unknown as Document });
   const svg = node as unknown as Element;
@@ -69,5 +81,9 @@ export function renderPlotSvg(spec: PlotSpec, idPrefix: string, label: string): 
   if (FORBIDDEN.test(markup)) {
     throw new Error(`Cannot inline plot "${label}": it holds live or external content`);
   }
-  return raw(markup);
+  const named = names.reduce(
+    (text, name, i) => text.split(namePlaceholder(i)).join(`\u2068${escapeHtml(name)}\u2069`),
+    markup,
+  );
+  return raw(named);
 }

@@ -19,7 +19,6 @@ import { insideFluxPlot, monthlyPlot, solAirPlot, stackedGainPlot } from "./scen
 import {
   fillSwatch,
   GAIN_STYLE,
-  INDOOR_STYLE,
   legendEntry,
   lineSwatch,
   LOSS_STYLE,
@@ -50,10 +49,6 @@ function figure(svg: Trusted, title: Trusted, caption: Trusted): Trusted {
   `;
 }
 
-function surfaceLegend(results: ScenarioResults): Trusted[] {
-  return Object.keys(results.surfaces).map((id, i) => legendEntry(lineSwatch(surfaceStyle(i)), id));
-}
-
 function designDayPlots(id: string, results: ScenarioResults, prefix: string, d: DisplayUnits): Trusted {
   const barLegend = Object.keys(results.surfaces).map((sid, i) =>
     legendEntry(fillSwatch(surfaceStyle(i)), sid)
@@ -62,14 +57,12 @@ function designDayPlots(id: string, results: ScenarioResults, prefix: string, d:
     ${figure(
       solAirPlot(results, prefix, d),
       html`Outdoor air and sol-air temperatures, scenario ${id}.`,
-      html`<span class="legend">${legendEntry(lineSwatch(OUTDOOR_STYLE, 2.4), "outdoor air")}${
-        legendEntry(lineSwatch(INDOOR_STYLE), "indoor air")
-      }${surfaceLegend(results)}</span> The 24:00 point repeats 00:00 (the day repeats).`,
+      html`Each line is named at its right end (surface sol-air temperatures by surface id). The 24:00 point repeats 00:00 (the day repeats).`,
     )}
     ${figure(
       insideFluxPlot(results, prefix, d),
       html`Inside heat flux by surface, scenario ${id}.`,
-      html`<span class="legend">${surfaceLegend(results)}</span> ${
+      html`Each line is named at its right end by surface id; ${
         unitLabel(d, "heatFlux")
       } of surface, positive into the room.`,
     )}

@@ -4,7 +4,8 @@ import type { ScenarioResults } from "../results/types.ts";
 import { type DisplayUnits, type QuantityKind, toDisplay, unitLabel } from "./displayUnits.ts";
 import { formatTrim } from "./format.ts";
 import type { Trusted } from "./html.ts";
-import { type PlotSpec, renderPlotSvg } from "./plotSvg.ts";
+import { namePlaceholder, type PlotSpec, renderPlotSvg } from "./plotSvg.ts";
+import { endLabels } from "./dynamicPlots.ts";
 import { clockTime, MONTH_NAMES } from "./scenarioData.ts";
 import {
   GAIN_STYLE,
@@ -55,6 +56,7 @@ function daySpec(yLabel: string, marks: Plot.Markish[]): PlotSpec {
   return {
     height: HEIGHT,
     marginLeft: 56,
+    marginRight: 96,
     marginBottom: 40,
     style: { fontSize: "11px" },
     x: {
@@ -74,31 +76,51 @@ function daySpec(yLabel: string, marks: Plot.Markish[]): PlotSpec {
 export function solAirPlot(results: ScenarioResults, idPrefix: string, d: DisplayUnits): Trusted {
   const dt = results.timestep_h;
   const points = (values: readonly number[]) => dayPoints(values, dt, d, "temperature");
-  const surfaces = Object.values(results.surfaces).map((s, i) => line(points(s.solAir), surfaceStyle(i)));
+  const ids = Object.keys(results.surfaces);
+  const series = Object.values(results.surfaces).map((s) => points(s.solAir));
+  const indoor = points(results.indoor);
+  const outdoor = points(results.outdoor);
+  const ends = endLabels(
+    [
+      ...series.map((p, i) => ({ name: namePlaceholder(i), end: p[p.length - 1] })),
+      { name: "indoor air", end: indoor[indoor.length - 1] },
+      { name: "outdoor air", end: outdoor[outdoor.length - 1] },
+    ],
+    [...series.flat(), ...indoor, ...outdoor].map((p) => p.v),
+    true,
+  );
   return renderPlotSvg(
     daySpec(`Temperature (${unitLabel(d, "temperature")})`, [
-      ...surfaces,
-      line(points(results.indoor), INDOOR_STYLE, 1.4),
-      line(points(results.outdoor), OUTDOOR_STYLE, 2.4),
+      ...series.map((p, i) => line(p, surfaceStyle(i))),
+      line(indoor, INDOOR_STYLE, 1.4),
+      line(outdoor, OUTDOOR_STYLE, 2.4),
+      ends,
     ]),
     `${idPrefix}-solair`,
     "Outdoor, indoor and sol-air temperatures over the design day",
+    ids,
   );
 }
 
 /** (b) Inside heat flux of each surface over the day, W/m² or Btu/(h·ft²), positive into the room. */
 export function insideFluxPlot(results: ScenarioResults, idPrefix: string, d: DisplayUnits): Trusted {
   const dt = results.timestep_h;
-  const surfaces = Object.values(results.surfaces).map((s, i) =>
-    line(dayPoints(s.insideFlux, dt, d, "heatFlux"), surfaceStyle(i))
+  const ids = Object.keys(results.surfaces);
+  const series = Object.values(results.surfaces).map((s) => dayPoints(s.insideFlux, dt, d, "heatFlux"));
+  const ends = endLabels(
+    series.map((p, i) => ({ name: namePlaceholder(i), end: p[p.length - 1] })),
+    series.flat().map((p) => p.v),
+    true,
   );
   return renderPlotSvg(
     daySpec(`Inside heat flux, into the room (${unitLabel(d, "heatFlux")})`, [
       Plot.ruleY([0], { stroke: "#444" }),
-      ...surfaces,
+      ...series.map((p, i) => line(p, surfaceStyle(i))),
+      ends,
     ]),
     `${idPrefix}-flux`,
     "Inside heat flux of each surface over the design day",
+    ids,
   );
 }
 
@@ -108,14 +130,20 @@ export function insideFluxPlot(results: ScenarioResults, idPrefix: string, d: Di
  */
 export function stackedGainPlot(results: ScenarioResults, idPrefix: string, d: DisplayUnits): Trusted {
   const dt = results.timestep_h;
-  const n = results.totalHeatGain.length;
   const gainOf = (w: number) => toDisplay(d, "heatGain", w);
+  // Bar k is centred on its time kΔ; the day repeats, so step 0 is drawn again at 24:00 and both halves are
+  // clipped to the 0–24 h axis.
   const bars = Object.values(results.surfaces).flatMap((s, i) =>
-    s.heatGain.map((g, k) => ({ k, gain: gainOf(g), order: i, colour: surfaceStyle(i).colour }))
+    [...s.heatGain, s.heatGain[0] ?? 0].map((g, k) => ({
+      t0: (k - 0.5) * dt,
+      t1: (k + 0.5) * dt,
+      gain: gainOf(g),
+      order: i,
+      colour: surfaceStyle(i).colour,
+    }))
   );
-  const total = results.totalHeatGain.map((g, k) => ({ k, gain: gainOf(g) }));
-  const every = Math.max(1, Math.round(3 / dt));
-  const ticks = Array.from({ length: n }, (_, k) => k).filter((k) => k % every === 0);
+  const totals = [...results.totalHeatGain, results.totalHeatGain[0] ?? 0];
+  const total = totals.map((g, k) => ({ t: k * dt, gain: gainOf(g) }));
   return renderPlotSvg(
     {
       height: HEIGHT,
@@ -123,14 +151,12 @@ export function stackedGainPlot(results: ScenarioResults, idPrefix: string, d: D
       marginBottom: 40,
       style: { fontSize: "11px" },
       x: {
-        type: "band",
-        domain: Array.from({ length: n }, (_, k) => k),
-        ticks,
-        tickFormat: (k: number) => clockTime(k * dt),
+        domain: [0, 24],
+        ticks: DAY_TICKS,
+        tickFormat: clockTime,
         label: TIME_LABEL,
         labelAnchor: "center",
         labelArrow: "none",
-        padding: 0.12,
       },
       y: {
         label: `Heat gain (${unitLabel(d, "heatGain")})`,
@@ -141,10 +167,19 @@ export function stackedGainPlot(results: ScenarioResults, idPrefix: string, d: D
       },
       color: { type: "identity" },
       marks: [
-        Plot.barY(bars, { x: "k", y: "gain", fill: "colour", z: "order", stroke: "#fff", strokeWidth: 0.4 }),
+        Plot.rectY(bars, {
+          x1: "t0",
+          x2: "t1",
+          y: "gain",
+          fill: "colour",
+          z: "order",
+          stroke: "#fff",
+          strokeWidth: 0.4,
+          clip: true,
+        }),
         Plot.ruleY([0], { stroke: "#111" }),
-        Plot.line(total, { x: "k", y: "gain", stroke: "#111", strokeWidth: 1.6 }),
-        Plot.dot(total, { x: "k", y: "gain", r: 2, fill: "#111" }),
+        Plot.line(total, { x: "t", y: "gain", stroke: "#111", strokeWidth: 1.6 }),
+        Plot.dot(total, { x: "t", y: "gain", r: 2, fill: "#111" }),
       ],
     },
     `${idPrefix}-stack`,

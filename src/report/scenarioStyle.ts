@@ -7,7 +7,8 @@ export interface SeriesStyle {
   readonly dash: string;
 }
 
-const COLOURS = ["#1f5fa8", "#b5470f", "#2e7d32", "#7b3fa0", "#8c6d1f", "#00838f", "#c2185b", "#5d4037"];
+// Alternating dark and light, so neighbouring series differ in greyscale as well as in hue.
+const COLOURS = ["#1f4e79", "#e0a040", "#2e6b30", "#9cc3e6", "#5b2d86", "#c9b037", "#8c2d04", "#8fc46a"];
 const DASHES = ["none", "6 3", "2 2", "8 3 2 3", "4 4"];
 
 /** Outdoor air: solid black, drawn thicker than the surfaces. */

@@ -5,7 +5,7 @@ import { type DisplayUnits, type QuantityKind, toDisplay, unitLabel } from "./di
 import { formatSig, formatTrim } from "./format.ts";
 import { html, type Trusted } from "./html.ts";
 import type { RenderContext } from "./packageInput.ts";
-import { renderPlotSvg } from "./plotSvg.ts";
+import { namePlaceholder, renderPlotSvg } from "./plotSvg.ts";
 
 const PROPERTY_NAMES: Readonly<Record<SensitivityEffect["property"], string>> = {
   conductivity: "conductivity λ",
@@ -66,6 +66,11 @@ function conditionTable(
     </table>
     <p class="muted">${droppedText(dropped, study, "condition effect")}</p>
   `;
+}
+
+/** Shortens a bar label to fit the left margin of the chart. */
+function clipName(text: string): string {
+  return text.length <= 44 ? text : `${text.slice(0, 43)}\u2026`;
 }
 
 function materialLabel(key: string): string {
@@ -143,17 +148,34 @@ function tornado(id: string, effects: readonly SensitivityEffect[], display: Dis
       value: toDisplay(display, "heatGain", e.plus) - toDisplay(display, "heatGain", 0),
     },
   ]);
+  const names = shown.map((e) => clipName(`${materialLabel(e.material)}: ${PROPERTY_NAMES[e.property]}`));
   return renderPlotSvg(
     {
       height: 60 + 26 * shown.length,
-      marginLeft: 60,
-      x: { label: `Change of peak heat gain (${unitLabel(display, "heatGain")})`, grid: true },
-      y: { label: "Rank", domain: shown.map((_, i) => i + 1) },
-      color: { domain: ["minus", "plus"], range: ["#4477aa", "#cc6677"] },
-      marks: [Plot.barX(data, { x: "value", y: "rank", fill: "side" }), Plot.ruleX([0])],
+      marginLeft: 262,
+      marginBottom: 40,
+      x: {
+        label: `Change of peak heat gain (${unitLabel(display, "heatGain")})`,
+        labelAnchor: "center",
+        labelArrow: "none",
+        grid: true,
+      },
+      y: {
+        label: null,
+        domain: shown.map((_, i) => i + 1),
+        tickFormat: (rank: number) => namePlaceholder(rank - 1),
+        tickSize: 0,
+      },
+      // Dark for lowered, light for raised: the two sides differ in greyscale too.
+      color: { domain: ["minus", "plus"], range: ["#2c4f73", "#d8a3a3"] },
+      marks: [
+        Plot.barX(data, { x: "value", y: "rank", fill: "side", stroke: "#111", strokeWidth: 0.5 }),
+        Plot.ruleX([0]),
+      ],
     },
     `sens-${id}`,
     "Sensitivity of the peak heat gain",
+    names,
   );
 }
 
@@ -167,7 +189,7 @@ export function renderSensitivity(ctx: RenderContext, sectionId: string, number:
     html`<h4>Design day ${id}: peak total heat gain</h4>
 <figure>${
       tornado(id, s.peakHeatGain, display)
-    }<figcaption>Change of the peak total heat gain of ${id} when one property of one material is lowered (blue) or raised (red) by ${percent} %, largest effects first; ranks as in the table below.</figcaption></figure>
+    }<figcaption>Change of the peak total heat gain of ${id} when one property of one material is lowered (blue) or raised (red) by ${percent} %, largest effects first; each bar is labelled by material and property, in the order of the table below.</figcaption></figure>
 ${
       effectTable(
         `Effect on the peak total heat gain of ${id}`,

@@ -152,9 +152,13 @@ Deno.test("scenario output: hostile surface ids come out as text only", () => {
     const firstCells = Array.from(doc.querySelectorAll("table.scenario-surfaces tbody tr td:first-child"));
     assert.ok(firstCells.some((td) => td.textContent === id), `surface row for ${id}`);
   }
+  // Surface ids name the lines at their ends: escaped, isolated text, never markup inside a plot.
   for (const svg of Array.from(doc.querySelectorAll(".scenario-output figure svg.plot"))) {
-    assert.doesNotMatch(svg.outerHTML, /alert/, "no project text inside a plot");
+    assert.equal(svg.querySelectorAll("svg, script, a, img").length, 0, "no project markup inside a plot");
   }
+  const solAir = doc.querySelector(".scenario-output svg.plot[aria-label^='Outdoor, indoor and sol-air']");
+  const names = Array.from(solAir?.querySelectorAll("text") ?? []).map((t) => t.textContent ?? "");
+  for (const id of ids.slice(0, 4)) assert.ok(names.includes(`\u2068${id}\u2069`), `line end label ${id}`);
 });
 
 Deno.test("scenario output: defaults are marked, constructions linked, checks listed and counted on the cover", () => {

@@ -66,8 +66,9 @@ Deno.test("scenario plots are byte-identical when rendered twice", () => {
 Deno.test("the stacked gain plot draws one bar per surface and step, above and below the zero line", () => {
   const results = mixedDay();
   const svg = parseFragment(stackedGainPlot(results, "p", SI_DISPLAY).markup).querySelector("svg")!;
-  const bars = Array.from(svg.querySelectorAll('g[aria-label="bar"] rect'));
-  assert.equal(bars.length, 24 * 3);
+  const bars = Array.from(svg.querySelectorAll('g[aria-label="rect"] rect'));
+  // 24 steps per surface plus step 0 repeated at 24:00 (the day repeats; both half bars clipped to 0–24 h).
+  assert.equal(bars.length, 25 * 3);
   const zero = Number(svg.querySelector('g[aria-label="rule"] line')?.getAttribute("y1"));
   assert.ok(Number.isFinite(zero));
   const top = (r: Element) => Number(r.getAttribute("y"));
@@ -77,7 +78,7 @@ Deno.test("the stacked gain plot draws one bar per surface and step, above and b
   assert.ok(bars.some((r) => bottom(r) < zero - 1), "a bar above zero");
   assert.ok(bars.some((r) => top(r) > zero + 1), "a bar below zero");
   assert.ok(bars.every((r) => bottom(r) <= zero + 0.02 || top(r) >= zero - 0.02), "no bar crosses zero");
-  assert.equal(svg.querySelectorAll('g[aria-label="dot"] circle').length, 24, "a dot per step on the total");
+  assert.equal(svg.querySelectorAll('g[aria-label="dot"] circle').length, 25, "a dot per step and at 24:00");
 });
 
 Deno.test("the monthly plot draws twelve gain bars above and twelve loss bars below zero", () => {

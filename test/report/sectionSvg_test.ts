@@ -5,8 +5,7 @@ import { assertNoLiveMarkup, parseFragment } from "./dom.ts";
 import { HOSTILE, wall } from "./fixture.ts";
 
 function layerRects(svg: Element): Element[] {
-  // Layer rectangles are the full-height ones (y = 62); the legend and scale bar are shorter.
-  return Array.from(svg.querySelectorAll("rect")).filter((r) => r.getAttribute("height") === "128");
+  return Array.from(svg.querySelectorAll("rect.layer"));
 }
 
 Deno.test("renderSectionSvg() draws massive layers to scale and gaps at nominal width", () => {
@@ -23,21 +22,22 @@ Deno.test("renderSectionSvg() draws massive layers to scale and gaps at nominal 
   assert.equal(gapRect?.getAttribute("stroke-dasharray"), "4 3");
 });
 
-Deno.test("renderSectionSvg() labels OUTSIDE left of INSIDE, numbers layers and marks not to scale", () => {
+Deno.test("renderSectionSvg() names the exterior face left of the interior face, tags layers, marks not to scale", () => {
   const markup = renderSectionSvg(wall(), SI_DISPLAY).markup;
   const svg = parseFragment(markup).querySelector("svg");
   assert.ok(svg !== null);
   assert.equal(svg.getAttribute("xmlns"), "http://www.w3.org/2000/svg");
   const texts = Array.from(svg.querySelectorAll("text"));
   const xOf = (label: string) => Number(texts.find((t) => t.textContent === label)?.getAttribute("x"));
-  assert.ok(xOf("OUTSIDE") < xOf("INSIDE"));
-  for (const n of ["1", "2", "3", "4", "5"]) {
-    assert.ok(texts.some((t) => t.textContent === n), `layer number ${n}`);
-  }
+  assert.ok(xOf("exterior face") < xOf("interior face"));
+  const tags = Array.from(svg.querySelectorAll("g.layer-tag text")).map((t) => t.textContent);
+  // Once above the drawing and once in the key.
+  assert.deepEqual(tags, ["1", "2", "3", "4", "5", "1", "2", "3", "4", "5"]);
   // Overall massive thickness by hand: 15 + 120 + 175 + 12.5 = 322.5 mm.
   assert.ok(texts.some((t) => t.textContent?.startsWith("322.5\u2009mm overall")));
   assert.ok(texts.some((t) => t.textContent?.includes("NOT TO SCALE")));
-  assert.equal(svg.querySelectorAll("[id]").length, 0, "no ids that could collide");
+  const ids = Array.from(svg.querySelectorAll("[id]")).map((e) => e.getAttribute("id") ?? "");
+  assert.ok(ids.length > 0 && ids.every((id) => id.startsWith("hatch-EW_2d_9-")), ids.join(" "));
 });
 
 Deno.test("renderSectionSvg() escapes hostile construction ids", () => {

@@ -2,6 +2,8 @@
 import { encodeBase64 } from "./base64.ts";
 import { html, PRE_LEAD, type Trusted } from "./html.ts";
 import type { InputFile, RenderContext } from "./packageInput.ts";
+import { PRINT_SERIES_LEAD, PRINT_SERIES_MAX, printedResultsText } from "./printedResults.ts";
+import { sha256Hex } from "../archive/hash.ts";
 
 /** Decodes bytes as UTF-8 text, or undefined when they are not valid UTF-8. */
 function asText(bytes: Uint8Array): string | undefined {
@@ -24,10 +26,14 @@ function embeddedFile(file: InputFile, index: number): Trusted {
         : "Not valid UTF-8 text: only the base64 form is given."
     }</p>`
     : html`
-      <details>
+      <details class="screen-only">
         <summary>Readable view of ${file.path}</summary>
         <pre class="readable-file">${PRE_LEAD}${text}</pre>
       </details>
+      <div class="print-only printed-input">
+        <p class="muted">${file.path} in full:</p>
+        <pre class="printed-file">${PRE_LEAD}${text}</pre>
+      </div>
     `;
   return html`
     <h3 id="s-a-${String(index + 1)}">A.${String(index + 1)} ${file.path}</h3>
@@ -41,7 +47,7 @@ function embeddedFile(file: InputFile, index: number): Trusted {
 /** Renders Appendix A: each input file's bytes as base64 in an inert element, plus a readable view. */
 export function renderInputsAppendix(ctx: RenderContext): Trusted {
   return html`<section id="s-a"><h2>Appendix A Embedded inputs</h2>
-<p>Each input file's exact bytes, base64-encoded (RFC 4648), so the package alone can regenerate its results. The base64 blocks are hidden when printed.</p>
+<p>Each input file's exact bytes, base64-encoded (RFC 4648), so the package alone can regenerate its results. The base64 blocks are hidden when printed; the printout gives each text file in full.</p>
 ${ctx.input.inputFiles.map(embeddedFile)}
 ${
     ctx.input.libraryEntries.length === 0 ? "" : html`<h3 id="s-a-lib">Built-in library entries used</h3>
@@ -61,15 +67,36 @@ function siNote(ctx: RenderContext): Trusted {
     : html`<p class="muted">In SI units, whatever the display units of the package.</p>`;
 }
 
+/** The print-only view of Appendix B: long series cut to their first terms, with where the rest is. */
+function printedResults(ctx: RenderContext): Trusted {
+  const printed = printedResultsText(ctx.input.resultsJsonText);
+  const pointer = printed.cutSeries === 0 ? "" : html`
+    ${String(printed.cutSeries)} series longer than ${String(
+      PRINT_SERIES_MAX,
+    )} values are shown by their first ${String(
+      PRINT_SERIES_LEAD,
+    )} terms; every value is in the CSV files in csv/ beside the package and in the results embedded in the electronic package.
+  `;
+  return html`
+    <div class="print-only printed-results">
+      <p
+        class="muted">The results embedded in this package (results.json, schema ${ctx.input.results
+          .schema}, SHA-256 <span class="hash">${sha256Hex(ctx.input.resultsJsonText)}</span>).${pointer}</p>
+      <pre class="printed-results-json">${PRE_LEAD}${printed.text}</pre>
+    </div>
+  `;
+}
+
 /** Renders Appendix B: the results JSON as escaped text (always SI). */
 export function renderResultsAppendix(ctx: RenderContext): Trusted {
   return html`
     <section id="s-b">
       <h2>Appendix B Results (results.json)</h2>${siNote(ctx)}
-      <details>
+      <details class="screen-only">
         <summary>Machine-readable results, schema ${ctx.input.results.schema}</summary>
         <pre data-embedded="results-json">${PRE_LEAD}${ctx.input.resultsJsonText}</pre>
       </details>
+      ${printedResults(ctx)}
     </section>
   `;
 }

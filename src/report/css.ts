@@ -85,16 +85,21 @@ figure.plot-figure svg.swatch-fill, svg.swatch-fill { width: 12px; }
 .caution-box { border: 1px solid var(--ink); background: #f7f7f7; padding: 2mm 3mm; margin: 4mm 0; break-inside: avoid; }
 .caution-box p { margin: 1mm 0; }
 nav.contents ol.contents-outputs { padding-left: 6mm; }
+.print-only { display: none; }
 @media print {
   html { background: none; }
   body { max-width: none; margin: 0; padding: 0; font-size: 10pt; }
   .running-header { display: none; }
   .embedded-file { display: none; }
   details { display: block; }
+  details.screen-only, .screen-only { display: none; }
+  .print-only { display: block; }
   a { color: inherit; text-decoration: none; }
-  h2, h3 { break-after: avoid; }
-  tr, figure, table, .input-block { break-inside: avoid; }
-  table.hourly { break-inside: auto; }
+  h1, h2, h3, h4, h5, h6, .input-label, caption { break-after: avoid; page-break-after: avoid; }
+  tr, figure, .input-block { break-inside: avoid; }
+  table, table.hourly { break-inside: auto; }
+  thead { display: table-header-group; }
+  tfoot { display: table-footer-group; }
 }
 `);
 

@@ -18,7 +18,7 @@ const USAGE =
 usage: fluxnote <command> [options]
 
 commands:
-  build <project> [--out <dir>] [--sign <private key>]
+  build <project> [--out <dir>] [--sign <private key>] [--pdf]
                                            write package.html, results.json and csv/
   check <project> [--format text|json] [--strict]
                                            validate the project, write nothing
@@ -34,7 +34,7 @@ commands:
 Run "fluxnote <command> --help" for a command's options.`;
 
 const HELP: Record<string, string> = {
-  build: `usage: fluxnote build <project> [--out <dir>] [--sign <private key>]
+  build: `usage: fluxnote build <project> [--out <dir>] [--sign <private key>] [--pdf]
 
 Reads the project folder, computes every construction and writes one output set:
   <dir>/package.html   the self-contained calculation package
@@ -45,6 +45,8 @@ Reads the project folder, computes every construction and writes one output set:
 a folder holding it, a file, a link or a folder of other files is refused and left untouched.
 --sign <file>  sign package.html with an Ed25519 private key (PEM, from "fluxnote keygen"); the signature
                covers the whole page, the signing key's fingerprint and the signing time.
+--pdf          also print package.pdf through the local Chromium (Debian's chromium package), paper from
+               the front matter's paper: A4 (default) or Letter; without Chromium nothing is written.
 Exit codes: 0 success; 1 input errors, a refused --out or a failed computed check (the package is still
 written then); 2 usage error, an unreadable --sign key (nothing is written) or internal fault.`,
   verify: `usage: fluxnote verify <package.html> [--key <public key>]
@@ -114,13 +116,14 @@ function choice<T extends string>(option: string, value: unknown, allowed: reado
 
 const COMMANDS: Record<string, CommandSpec> = {
   build: {
-    options: { out: { type: "string" }, sign: { type: "string" } },
+    options: { out: { type: "string" }, sign: { type: "string" }, pdf: { type: "boolean" } },
     positionals: { count: 1, what: "one project folder" },
     run: ([project = ""], values, io) =>
       runBuild({
         project,
         ...(typeof values.out === "string" ? { out: values.out } : {}),
         ...(typeof values.sign === "string" ? { sign: values.sign } : {}),
+        ...(values.pdf === true ? { pdf: true } : {}),
       }, io),
   },
   check: {

@@ -5,6 +5,8 @@ import { NOT_OURS_HINT, refuseBuildTarget } from "./outputTarget.ts";
 import { readSigner, signOutputFiles } from "./signOutputs.ts";
 import { OutputRefused, writeOutputSet } from "./writeOutput.ts";
 import { TOOL_VERSION } from "../version.ts";
+import { type PaperSize, renderPdf } from "./pdf.ts";
+import type { OutputFile } from "./writeOutput.ts";
 
 /** What a command needs from its surroundings (so tests can run it without a terminal). */
 export interface CommandIo {
@@ -17,6 +19,9 @@ export interface BuildOptions {
   readonly out?: string;
   /** A private key file (PEM, PKCS#8 Ed25519): package.html is signed with it. */
   readonly sign?: string;
+  /** Also print package.pdf through the local Chromium (this path, or Debian's when absent). */
+  readonly pdf?: boolean;
+  readonly chromiumPath?: string;
   /** Test hook: called after rendering, before the output set is swapped in. */
   readonly beforeSwap?: () => void | Promise<void>;
   /** Test hook: called when the old output set has been moved aside, before the new one is put in place. */
@@ -49,9 +54,16 @@ export async function runBuild(options: BuildOptions, io: CommandIo): Promise<nu
     return 1;
   }
   const { results } = produced.outputs;
-  const files = signer === undefined
+  const signed = signer === undefined
     ? produced.outputs.files
     : await signOutputFiles(produced.outputs, signer.key, io);
+  const files = options.pdf === true
+    ? await withPdf(signed, loaded.model?.info.paper ?? "A4", options.chromiumPath)
+    : signed;
+  if (typeof files === "string") {
+    io.stderr(`fluxnote build: ${files}; nothing was written`);
+    return 1;
+  }
   for (const w of results.warnings.slice(loaded.diagnostics.filter((d) => d.severity !== "error").length)) {
     io.stderr(`${w.at}: warning: ${w.message}`);
   }
@@ -67,9 +79,9 @@ export async function runBuild(options: BuildOptions, io: CommandIo): Promise<nu
     return 1;
   }
   io.stdout(
-    `wrote ${join(outDir, "package.html")}, results.json and csv/ (${
-      loaded.model?.constructions.length ?? 0
-    } constructions, ${
+    `wrote ${join(outDir, "package.html")}${
+      options.pdf === true ? ", package.pdf" : ""
+    }, results.json and csv/ (${loaded.model?.constructions.length ?? 0} constructions, ${
       Object.keys(results.scenarios).length + Object.keys(results.heating ?? {}).length
     } scenarios)`,
   );
@@ -82,4 +94,16 @@ export async function runBuild(options: BuildOptions, io: CommandIo): Promise<nu
     return 1;
   }
   return 0;
+}
+
+/** The output set with package.pdf printed from its package.html, or why it cannot be printed. */
+async function withPdf(
+  files: readonly OutputFile[],
+  paper: PaperSize,
+  chromiumPath: string | undefined,
+): Promise<readonly OutputFile[] | string> {
+  const page = files.find((f) => f.path === "package.html");
+  if (page === undefined || !("text" in page)) return "package.html was not produced, so no package.pdf";
+  const pdf = await renderPdf(page.text, paper, chromiumPath);
+  return pdf.ok ? [...files, { path: "package.pdf", bytes: pdf.bytes }] : pdf.reason;
 }

@@ -27,6 +27,7 @@ export const FRONT_MATTER_KEYS = [
   "approved-date",
   "open-points",
   "acknowledged",
+  "paper",
 ] as const;
 
 const STATUSES: readonly ProjectStatus[] = ["draft", "for-review", "issued"];
@@ -66,6 +67,7 @@ export function readFrontMatter(value: YamlValue, out: Diagnostic[]): FrontMatte
   requireRoleFor(fields, "approved-date", "approved-by", out);
   const openPoints = readOpenPoints(fields, out);
   const acknowledged = readAcknowledgements(fields, out);
+  const paper = readChoice(fields, "paper", ["A4", "Letter"] as const, out);
   if (
     errorCount(out) > before || title === undefined || reference === undefined || revision === undefined ||
     status === undefined || preparedBy === undefined || checkedBy === undefined || date === undefined
@@ -91,6 +93,7 @@ export function readFrontMatter(value: YamlValue, out: Diagnostic[]): FrontMatte
     ...(approvedDate === undefined ? {} : { approvedDate }),
     ...(openPoints === undefined ? {} : { openPoints }),
     ...(acknowledged === undefined ? {} : { acknowledged }),
+    ...(paper === undefined ? {} : { paper }),
   };
   return files === undefined ? { info } : { info, files };
 }

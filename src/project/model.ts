@@ -38,6 +38,8 @@ export interface ProjectInfo {
   readonly openPoints?: readonly OpenPoint[];
   /** Open items accepted for issue, each with a reason and a name (front matter `acknowledged`). */
   readonly acknowledged?: readonly Acknowledgement[];
+  /** Paper size of package.pdf (front matter `paper`, A4 when absent). */
+  readonly paper?: "A4" | "Letter";
 }
 
 /** A material as defined in a project block or taken from the built-in library. */

@@ -3,6 +3,7 @@ import { encodeBase64 } from "./base64.ts";
 import { renderBlocksAsWritten } from "./inputBlocks.ts";
 import { html, PRE_LEAD, type Trusted } from "./html.ts";
 import type { InputFile, RenderContext } from "./packageInput.ts";
+import { sha256Hex } from "../archive/hash.ts";
 
 /** Decodes bytes as UTF-8 text, or undefined when they are not valid UTF-8. */
 function asText(bytes: Uint8Array): string | undefined {
@@ -25,10 +26,14 @@ function embeddedFile(file: InputFile, index: number): Trusted {
         : "Not valid UTF-8 text: only the base64 form is given."
     }</p>`
     : html`
-      <details>
+      <details class="screen-only">
         <summary>Readable view of ${file.path}</summary>
         <pre class="readable-file">${PRE_LEAD}${text}</pre>
       </details>
+      <div class="print-only printed-input">
+        <p class="muted">${file.path} in full:</p>
+        <pre class="printed-file">${PRE_LEAD}${text}</pre>
+      </div>
     `;
   return html`
     <h3 id="s-a-${String(index + 1)}">A.${String(index + 1)} ${file.path}</h3>
@@ -42,7 +47,7 @@ function embeddedFile(file: InputFile, index: number): Trusted {
 /** Renders Appendix A: each input file's bytes as base64 in an inert element, plus a readable view. */
 export function renderInputsAppendix(ctx: RenderContext): Trusted {
   return html`<section id="s-a"><h2>Appendix A Embedded inputs</h2>
-<p>Each input file's exact bytes, base64-encoded (RFC 4648), so the package alone can regenerate its results. The base64 blocks are hidden when printed.</p>
+<p>Each input file's exact bytes, base64-encoded (RFC 4648), so the package alone can regenerate its results. The base64 blocks are hidden when printed; the printout gives each text file in full.</p>
 ${ctx.input.inputFiles.map(embeddedFile)}
 ${renderBlocksAsWritten(ctx)}
 ${
@@ -63,15 +68,34 @@ function siNote(ctx: RenderContext): Trusted {
     : html`<p class="muted">In SI units, whatever the display units of the package.</p>`;
 }
 
+/**
+ * The print-only view of Appendix B: the results named by their hash and where every value is. The JSON itself
+ * is not printed: the body and Appendices C and D print its numbers (long series by their leading terms).
+ */
+function printedResults(ctx: RenderContext): Trusted {
+  return html`
+    <div class="print-only printed-results">
+      <p>The results embedded in this package: results.json, schema ${ctx.input.results.schema}, ${String(
+        new TextEncoder().encode(ctx.input.resultsJsonText).length,
+      )} bytes, SHA-256 <span class="hash">${sha256Hex(
+        ctx.input.resultsJsonText,
+      )}</span>. Every value is in the
+      electronic package and in results.json and the CSV files in csv/ beside it; the printout gives the numbers in
+      the body and in Appendices C and D, long series by their leading terms.</p>
+    </div>
+  `;
+}
+
 /** Renders Appendix B: the results JSON as escaped text (always SI). */
 export function renderResultsAppendix(ctx: RenderContext): Trusted {
   return html`
     <section id="s-b">
       <h2>Appendix B Results (results.json)</h2>${siNote(ctx)}
-      <details>
+      <details class="screen-only">
         <summary>Machine-readable results, schema ${ctx.input.results.schema}</summary>
         <pre data-embedded="results-json">${PRE_LEAD}${ctx.input.resultsJsonText}</pre>
       </details>
+      ${printedResults(ctx)}
     </section>
   `;
 }

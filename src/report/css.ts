@@ -90,16 +90,21 @@ table.assumptions th:nth-child(1) { width: 16%; }
 table.assumptions th:nth-child(2) { width: 34%; }
 table.assumptions th:nth-child(3) { width: 20%; }
 table.assumptions td.applies-to { font-size: 7.5pt; }
+.print-only { display: none; }
 @media print {
   html { background: none; }
   body { max-width: none; margin: 0; padding: 0; font-size: 10pt; }
   .running-header { display: none; }
   .embedded-file, details.input-echo { display: none; }
   details { display: block; }
+  details.screen-only, .screen-only { display: none; }
+  .print-only { display: block; }
   a { color: inherit; text-decoration: none; }
-  h2, h3 { break-after: avoid; }
-  tr, figure, table, .input-block { break-inside: avoid; }
-  table.hourly, table.assumptions, table.checks-list { break-inside: auto; }
+  h1, h2, h3, h4, h5, h6, .input-label, caption { break-after: avoid; page-break-after: avoid; }
+  tr, figure, .input-block { break-inside: avoid; }
+  table, table.hourly { break-inside: auto; }
+  thead { display: table-header-group; }
+  tfoot { display: table-footer-group; }
 }
 `);
 

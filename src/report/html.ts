@@ -119,7 +119,9 @@ export function cssStringLiteral(text: string): Trusted {
   for (const ch of text) {
     out += /^[A-Za-z0-9 ]$/.test(ch)
       ? ch
-      : `\\${(ch.codePointAt(0) ?? 0xfffd).toString(16).padStart(6, "0")}`;
+      // Six hex digits and a space: the parser takes one whitespace after an escape as its end, even after
+      // six digits, so the space is always written; a literal space that follows then survives.
+      : `\\${(ch.codePointAt(0) ?? 0xfffd).toString(16).padStart(6, "0")} `;
   }
   return new Trusted(MINT, out + '"');
 }

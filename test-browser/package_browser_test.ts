@@ -4,25 +4,17 @@
  * sizes and a PDF. Run with `deno task browser` after `deno task demo`; needs /usr/bin/chromium.
  */
 import assert from "node:assert/strict";
+import { CHROMIUM_ARGS, CHROMIUM_PATH } from "../src/commands/pdf.ts";
 import { join } from "node:path";
 import { chromium } from "playwright-core";
 
 const PACKAGE = new URL("../projects/demo/out/package.html", import.meta.url);
 // Beside the output folder, not in it: a build replaces only a folder holding nothing but its own files.
 const SHOTS = new URL("../projects/demo/screenshots/", import.meta.url).pathname;
-const ARGS = [
-  "--no-sandbox",
-  "--disable-gpu",
-  "--disable-background-networking",
-  "--disable-component-update",
-  "--disable-sync",
-  "--no-first-run",
-  "--disable-quic",
-];
 
 Deno.test("the demo package opens in Chromium with no request beyond itself, no console error, all sections and plots visible", async () => {
   await Deno.mkdir(SHOTS, { recursive: true });
-  const browser = await chromium.launch({ executablePath: "/usr/bin/chromium", args: ARGS });
+  const browser = await chromium.launch({ executablePath: CHROMIUM_PATH, args: CHROMIUM_ARGS });
   try {
     const page = await browser.newPage({ viewport: { width: 1200, height: 1600 } });
     const requests: string[] = [];

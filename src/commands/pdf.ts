@@ -12,7 +12,8 @@ export const CHROMIUM_PATH = "/usr/bin/chromium";
 export const NO_CHROMIUM_MESSAGE =
   "package.pdf needs Chromium: install Debian's chromium package (apt-get install chromium)";
 
-const ARGS = [
+/** Chromium switches for a headless run that reaches no network service of its own. */
+export const CHROMIUM_ARGS = [
   "--no-sandbox",
   "--disable-gpu",
   "--disable-background-networking",
@@ -70,7 +71,7 @@ export async function renderPdf(
   const dir = await Deno.makeTempDir({ prefix: "fluxnote-pdf-" });
   let browser;
   try {
-    browser = await chromium.launch({ executablePath, args: ARGS });
+    browser = await chromium.launch({ executablePath, args: CHROMIUM_ARGS });
   } catch (cause) {
     await Deno.remove(dir, { recursive: true });
     return {

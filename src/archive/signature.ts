@@ -4,7 +4,7 @@
  * the signer's key fingerprint and the signing time, so recomputing the embedded hashes does not help a
  * forger. Keys are PEM files: PKCS#8 for the private key, SubjectPublicKeyInfo for the public key.
  */
-import { encodeBase64 } from "../report/base64.ts";
+import { encodeBase64 } from "./base64.ts";
 import { decodeBase64 } from "./base64Decode.ts";
 import { sha256Hex } from "./hash.ts";
 

@@ -1,6 +1,6 @@
 import { clampUnit, cosDeg, sinDeg, toDeg, wrap180, wrap360 } from "./_angles.ts";
 import { DESIGN_REFERENCE_YEAR, julianDay } from "./calendar.ts";
-import { handbookSunDeclinationAndTime } from "./solarPositionHandbook.ts";
+import { type DeclinationAndTime, handbookSunDeclinationAndTime } from "./solarPositionHandbook.ts";
 
 /** Where and when the sun is wanted: site, day and local standard clock time. */
 export interface SolarPositionInput {
@@ -42,11 +42,7 @@ export interface SolarPosition {
   readonly azimuthDeg: number;
 }
 
-/** Declination and equation of time from one of the published methods. */
-export interface DeclinationAndTime {
-  readonly declinationDeg: number;
-  readonly equationOfTimeMin: number;
-}
+export type { DeclinationAndTime } from "./solarPositionHandbook.ts";
 
 /**
  * Sun's apparent declination and the equation of time at a Julian Day, by Meeus (1998) Ch. 25 "low accuracy"

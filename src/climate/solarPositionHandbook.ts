@@ -1,5 +1,10 @@
 import { cosDeg, sinDeg } from "./_angles.ts";
-import type { DeclinationAndTime } from "./solarPosition.ts";
+
+/** Declination and equation of time from one of the published methods. */
+export interface DeclinationAndTime {
+  readonly declinationDeg: number;
+  readonly equationOfTimeMin: number;
+}
 
 /**
  * Declination and equation of time by the simple day-of-year formulas of ASHRAE Handbook—Fundamentals (2013, SI)

@@ -8,11 +8,8 @@ import { TOOL_VERSION } from "../version.ts";
 import { type PaperSize, renderPdf } from "./pdf.ts";
 import type { OutputFile } from "./writeOutput.ts";
 
-/** What a command needs from its surroundings (so tests can run it without a terminal). */
-export interface CommandIo {
-  stdout(line: string): void;
-  stderr(line: string): void;
-}
+export type { CommandIo } from "./commandIo.ts";
+import type { CommandIo } from "./commandIo.ts";
 
 export interface BuildOptions {
   readonly project: string;

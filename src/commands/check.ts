@@ -4,7 +4,7 @@ import { issueGate } from "../results/issueGate.ts";
 import { buildSummary } from "../results/summary.ts";
 import { formatPosition } from "../project/position.ts";
 import { formatFinding, reviewProject } from "../review/mod.ts";
-import type { CommandIo } from "./build.ts";
+import type { CommandIo } from "./commandIo.ts";
 import { loadProject } from "./loadProject.ts";
 
 export interface CheckOptions {

@@ -6,7 +6,7 @@ import { renderDiffText } from "../diff/text.ts";
 import { type Diagnostic, formatDiagnostic } from "../project/diagnostic.ts";
 import { decodeSource } from "../project/sourceText.ts";
 import { computeProject } from "../results/buildResults.ts";
-import type { CommandIo } from "./build.ts";
+import type { CommandIo } from "./commandIo.ts";
 import { openProject } from "./openProject.ts";
 
 /** The output formats of `fluxnote diff`. */

@@ -1,5 +1,5 @@
 import { join } from "node:path";
-import type { CommandIo } from "./build.ts";
+import type { CommandIo } from "./commandIo.ts";
 
 /** The template folder a new project is copied from. */
 export const TEMPLATE_FOLDER = new URL("../../templates/new-project/", import.meta.url);

@@ -1,7 +1,7 @@
 import { formatDiagnostic } from "../project/diagnostic.ts";
 import { oneLine, shortened } from "../project/displayText.ts";
-import { escapeHtml } from "../report/html.ts";
-import type { CommandIo } from "./build.ts";
+import { escapeHtml } from "../report/page/html.ts";
+import type { CommandIo } from "./commandIo.ts";
 import { loadProject } from "./loadProject.ts";
 import { produceOutputs } from "./produce.ts";
 

@@ -1,6 +1,6 @@
 /** `build --sign`: signs the rendered package.html with the firm's key, at build time. */
 import { type Signer, signingTime, signPage } from "../archive/signature.ts";
-import type { CommandIo } from "./build.ts";
+import type { CommandIo } from "./commandIo.ts";
 import type { ProducedOutputs } from "./produce.ts";
 import type { OutputFile } from "./writeOutput.ts";
 

@@ -7,7 +7,7 @@ import {
   pemEncode,
   type Signer,
 } from "../archive/signature.ts";
-import type { CommandIo } from "./build.ts";
+import type { CommandIo } from "./commandIo.ts";
 import { readBoundedFile } from "./readBounded.ts";
 
 /** Key files are a few hundred bytes; anything above this is not one. */

@@ -1,5 +1,5 @@
 import { htmlTerminalSafe, terminalSafe } from "../project/displayText.ts";
-import type { CommandIo } from "./build.ts";
+import type { CommandIo } from "./commandIo.ts";
 
 /**
  * Wraps a command's output so that no control or bidi character reaches the terminal raw: messages and

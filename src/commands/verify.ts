@@ -8,7 +8,7 @@ import { oneLine, shortenValues } from "../project/displayText.ts";
 import { memoryProjectFs } from "../project/projectFs.ts";
 import { libraryWith } from "../project/resolveProject.ts";
 import { TOOL_VERSION } from "../version.ts";
-import type { CommandIo } from "./build.ts";
+import type { CommandIo } from "./commandIo.ts";
 import { loadProject } from "./loadProject.ts";
 import { printDiagnostics, produceOutputs } from "./produce.ts";
 import { PACKAGE_SIZE_LIMIT, readBoundedFile } from "./readBounded.ts";

@@ -1,6 +1,6 @@
 /** The signature part of `verify`: who signed, when, and whether the signature holds for this page. */
 import { type FoundSignature, keyFingerprint, signatureHolds } from "../archive/signature.ts";
-import type { CommandIo } from "./build.ts";
+import type { CommandIo } from "./commandIo.ts";
 
 /** The public key given with `verify --key`. */
 export interface ExpectedKey {

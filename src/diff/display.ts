@@ -1,5 +1,5 @@
-import { formatFixed, formatSig, formatTrim, MINUS, withUnit } from "../report/format.ts";
-import { weatherTime } from "../report/scenarioData.ts";
+import { formatFixed, formatSig, formatTrim, MINUS, withUnit } from "../report/page/format.ts";
+import { weatherTime } from "../report/scenarios/scenarioData.ts";
 import type { Change, Effect, EffectQuantity, FieldValue } from "./types.ts";
 
 const LONG_TEXT = 90;

@@ -1,4 +1,4 @@
-import type { HeatingResults } from "../results/heatingTypes.ts";
+import type { HeatingResults } from "../scenarios/heatingTypes.ts";
 import type { ConstructionResults, ResultsJson, ScenarioResults } from "../results/types.ts";
 import type { Effect, EffectQuantity } from "./types.ts";
 

@@ -1,5 +1,5 @@
-import { packageCss } from "../report/css.ts";
-import { html, joinHtml, raw, type Trusted } from "../report/html.ts";
+import { packageCss } from "../report/page/css.ts";
+import { html, joinHtml, raw, type Trusted } from "../report/page/html.ts";
 import {
   changeLabel,
   changeText,

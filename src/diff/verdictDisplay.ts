@@ -1,5 +1,5 @@
 /** How verdict and check changes read for people, shared by the text and HTML renderings of a diff. */
-import { formatSig } from "../report/format.ts";
+import { formatSig } from "../report/page/format.ts";
 import type { CheckChange, CheckStatus, Verdict, VerdictChange } from "./types.ts";
 
 function subjectText(subject: string): string {

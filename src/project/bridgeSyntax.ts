@@ -5,12 +5,11 @@
 import { type Diagnostic, error, errorCount, warning } from "./diagnostic.ts";
 import { describe, quantityOf, readFields, readQuantity, readText, textOf } from "./fields.ts";
 import { checkMassiveProperties } from "./materialBlock.ts";
-import type { BridgeComponent, LayerCorrections, ResolvedLayer } from "./model.ts";
+import type { BridgeComponent, LayerCorrections, MaterialLookup, ResolvedLayer } from "./model.ts";
 import type { Position } from "./position.ts";
 import { describeCodePoints } from "./quantity.ts";
 import { didYouMean } from "./suggest.ts";
 import type { YamlValue } from "./yamlTree.ts";
-import type { MaterialLookup } from "./constructionBlock.ts";
 import { MAX_U_CORRECTION, withinBound } from "./physicalBounds.ts";
 
 /** Keys of a layer's `bridge:` mapping. */

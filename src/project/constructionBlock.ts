@@ -11,7 +11,7 @@ import {
 } from "./fields.ts";
 import { checkMassiveProperties, positive } from "./materialBlock.ts";
 import { describeCodePoints } from "./quantity.ts";
-import type { HeatFlowDirection, LimitSpec, MaterialDef, ResolvedLayer } from "./model.ts";
+import type { HeatFlowDirection, LimitSpec, MaterialLookup, ResolvedLayer } from "./model.ts";
 import { defaultSurfaceResistances } from "../materials/surfaceResistance.ts";
 import { attachLayerExtras } from "./bridgeSyntax.ts";
 import { applyBridges } from "./bridgedLayers.ts";
@@ -60,13 +60,7 @@ export interface ConstructionDraft {
   readonly at: Position;
 }
 
-/** Looks up a material id among the project's blocks and the built-in library. */
-export interface MaterialLookup {
-  find(id: string): MaterialDef | undefined;
-  ids(): readonly string[];
-  /** True for the id of a material block that has errors of its own (already reported once). */
-  isBroken?(id: string): boolean;
-}
+export type { MaterialLookup } from "./model.ts";
 
 const MAX_LAYERS = 40;
 const WARN_THICKNESS_M = 1;

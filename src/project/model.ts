@@ -283,3 +283,11 @@ export interface Model {
   /** `kind: heating` scenario blocks, in reading order (absent when there are none). */
   readonly heatingScenarios?: readonly HeatingScenario[];
 }
+
+/** Looks up a material id among the project's blocks and the built-in library. */
+export interface MaterialLookup {
+  find(id: string): MaterialDef | undefined;
+  ids(): readonly string[];
+  /** True for the id of a material block that has errors of its own (already reported once). */
+  isBroken?(id: string): boolean;
+}

@@ -10,6 +10,18 @@ export function formatPosition(at: Position): string {
   return `${at.file}:${at.line}:${at.col}`;
 }
 
+/** Parses the `path:line:col` of an assumption back into a position (the path may contain colons). */
+export function parsePosition(text: string): Position {
+  const last = text.lastIndexOf(":");
+  const middle = last > 0 ? text.lastIndexOf(":", last - 1) : -1;
+  const line = Number(text.slice(middle + 1, last));
+  const col = Number(text.slice(last + 1));
+  if (middle <= 0 || !Number.isInteger(line) || !Number.isInteger(col)) {
+    return { file: text, line: 1, col: 1 };
+  }
+  return { file: text.slice(0, middle), line, col };
+}
+
 /** A value together with the place in the project where it was written. */
 export interface Located<T> {
   readonly value: T;

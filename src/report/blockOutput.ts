@@ -1,14 +1,14 @@
 /** The echo of one input block (verbatim, with file:line) followed by its computed output. */
 import type { Segment } from "../project/model.ts";
 import { formatPosition } from "../project/position.ts";
-import { COMPACT_ABOVE_CONSTRUCTIONS } from "./compact.ts";
-import { renderConstructionOutput } from "./constructionOutput.ts";
-import { html, PRE_LEAD, type Trusted } from "./html.ts";
-import type { RenderContext } from "./packageInput.ts";
-import { materialTableHead, materialTableRow } from "./materialRows.ts";
-import { blockTextAnchor } from "./inputBlocks.ts";
-import { renderScenarioOutput } from "./scenarioOutput.ts";
-import { renderHeatingBlock } from "./heatingOutput.ts";
+import { COMPACT_ABOVE_CONSTRUCTIONS } from "./page/compact.ts";
+import { renderConstructionOutput } from "./constructions/constructionOutput.ts";
+import { html, PRE_LEAD, type Trusted } from "./page/html.ts";
+import type { RenderContext } from "./page/packageInput.ts";
+import { materialTableHead, materialTableRow } from "./constructions/materialRows.ts";
+import { blockTextAnchor } from "./appendices/inputBlocks.ts";
+import { renderScenarioOutput } from "./scenarios/scenarioOutput.ts";
+import { renderHeatingBlock } from "./scenarios/heatingOutput.ts";
 
 type BlockSegment = Extract<Segment, { kind: "block" }>;
 

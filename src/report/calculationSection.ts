@@ -1,10 +1,10 @@
 /** Section 2, the notebook: each document's prose in order, each input block followed by its output. */
 import type { ProjectDocument } from "../project/model.ts";
 import { renderBlock } from "./blockOutput.ts";
-import { html, type Trusted } from "./html.ts";
-import { renderMarkdown } from "./markdown.ts";
-import { renderSensitivity } from "./sensitivityOutput.ts";
-import type { RenderContext } from "./packageInput.ts";
+import { html, type Trusted } from "./page/html.ts";
+import { renderMarkdown } from "./page/markdown.ts";
+import { renderSensitivity } from "./scenarios/sensitivityOutput.ts";
+import type { RenderContext } from "./page/packageInput.ts";
 
 function renderDocument(doc: ProjectDocument, index: number, ctx: RenderContext): Trusted {
   const parts = doc.segments.map((segment) => {

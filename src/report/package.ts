@@ -1,26 +1,26 @@
 /** Assembles the self-contained HTML calculation package from the model, results and inputs. */
-import { renderInputsAppendix, renderResultsAppendix } from "./appendices.ts";
-import { renderChecksAppendix, renderFactorsAppendix } from "./checksAppendices.ts";
+import { renderInputsAppendix, renderResultsAppendix } from "./appendices/appendices.ts";
+import { renderChecksAppendix, renderFactorsAppendix } from "./appendices/checksAppendices.ts";
 import { renderCalculationSection } from "./calculationSection.ts";
-import { renderChecksSection } from "./checksSection.ts";
-import { renderCover, STATUS_LABEL, watermarkFor } from "./cover.ts";
-import { packageCss } from "./css.ts";
-import { renderCautionsSection } from "./cautionsSection.ts";
-import { renderScopeSection } from "./fixedSections.ts";
-import { renderMethodSection } from "./methodSection.ts";
+import { renderChecksSection } from "./registers/checksSection.ts";
+import { renderCover, STATUS_LABEL, watermarkFor } from "./front/cover.ts";
+import { packageCss } from "./page/css.ts";
+import { renderCautionsSection } from "./registers/cautionsSection.ts";
+import { renderScopeSection } from "./front/fixedSections.ts";
+import { renderMethodSection } from "./registers/methodSection.ts";
 import { outsideFilmCautions } from "../results/outsideFilmCautions.ts";
-import { filmCoefficientText } from "./displayUnits.ts";
-import { renderSummarySection } from "./summary/summarySection.ts";
-import { html, type Trusted } from "./html.ts";
-import { makeRenderContext, type PackageInput, type RenderContext } from "./packageInput.ts";
-import { renderReproducibilitySection, renderRevisionSection } from "./recordSections.ts";
+import { filmCoefficientText } from "./page/displayUnits.ts";
+import { renderSummarySection } from "./front/summarySection.ts";
+import { html, type Trusted } from "./page/html.ts";
+import { makeRenderContext, type PackageInput, type RenderContext } from "./page/packageInput.ts";
+import { renderReproducibilitySection, renderRevisionSection } from "./registers/recordSections.ts";
 import {
   renderAssumptionsSection,
   renderMaterialsSection,
   renderSourcesSection,
-} from "./registerSections.ts";
+} from "./registers/registerSections.ts";
 
-export type { InputFile, LibraryEntry, PackageInput } from "./packageInput.ts";
+export type { InputFile, LibraryEntry, PackageInput } from "./page/packageInput.ts";
 
 /** The Content-Security-Policy of the package: nothing may load or run except inline style and data: images. */
 export const PACKAGE_CSP = "default-src 'none'; img-src data:; style-src 'unsafe-inline'";

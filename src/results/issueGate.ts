@@ -5,7 +5,7 @@
  */
 import { type Diagnostic, error, warning } from "../project/diagnostic.ts";
 import type { Model } from "../project/model.ts";
-import { parsePosition } from "../review/finding.ts";
+import { parsePosition } from "../project/position.ts";
 import type { OpenItemKind, SummaryJson } from "./summaryTypes.ts";
 
 /** Why each blocking kind stops issue (the item's full text is in the summary of results). */

@@ -4,7 +4,7 @@
  */
 import type { Diagnostic } from "../project/diagnostic.ts";
 import type { Model } from "../project/model.ts";
-import type { HeatingResults } from "./heatingTypes.ts";
+import type { HeatingResults } from "../scenarios/heatingTypes.ts";
 import type { LimitResult } from "./limitResults.ts";
 import { collectOpenItems } from "./openItems.ts";
 import { syntheticScenarios } from "./syntheticWeather.ts";

@@ -44,15 +44,3 @@ export function num(x: number): string {
 export function range(min: number, max: number, unit: string): string {
   return `${num(min)}–${num(max)} ${unit}`;
 }
-
-/** Parses the `path:line:col` of an assumption back into a position (the path may contain colons). */
-export function parsePosition(text: string): Position {
-  const last = text.lastIndexOf(":");
-  const middle = last > 0 ? text.lastIndexOf(":", last - 1) : -1;
-  const line = Number(text.slice(middle + 1, last));
-  const col = Number(text.slice(last + 1));
-  if (middle <= 0 || !Number.isInteger(line) || !Number.isInteger(col)) {
-    return { file: text, line: 1, col: 1 };
-  }
-  return { file: text.slice(0, middle), line, col };
-}

@@ -6,7 +6,8 @@
 import type { Diagnostic } from "../project/diagnostic.ts";
 import type { Model } from "../project/model.ts";
 import type { ResultsJson } from "../results/types.ts";
-import { finding, parsePosition } from "./finding.ts";
+import { finding } from "./finding.ts";
+import { parsePosition } from "../project/position.ts";
 import { proseBefore } from "./orderRules.ts";
 import { layerLabel } from "./subjects.ts";
 

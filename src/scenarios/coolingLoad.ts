@@ -3,8 +3,8 @@
  * nonresidential cooling load chapter): Q(h) = q_conv(h) + Σ_j r_j q_rad(h − j), hourly, day repeated.
  */
 import type { RadiantTimeSeries } from "../project/model.ts";
-import type { CoolingLoadResults } from "../results/heatingTypes.ts";
-import type { SurfaceResults } from "../results/types.ts";
+import type { CoolingLoadResults } from "./heatingTypes.ts";
+import type { SurfaceResults } from "./types.ts";
 import { peakOf, sumSeries } from "./seriesStats.ts";
 
 const HOURS = 24;

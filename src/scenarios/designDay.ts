@@ -8,7 +8,8 @@ import {
   type SurfaceFlux,
 } from "../engine/surfaceFlux.ts";
 import type { Assumption, Construction, Scenario, TemperatureProfile } from "../project/model.ts";
-import type { CheckResult, ScenarioResults, SurfaceResults } from "../results/types.ts";
+import type { CheckResult } from "../engine/checkResult.ts";
+import type { ScenarioResults, SurfaceResults } from "./types.ts";
 import { coolingLoadNotes, designDayCoolingLoad } from "./coolingLoad.ts";
 import { gainAndLoss, meanOf, peakOf, sumSeries } from "./seriesStats.ts";
 import { outsideFilmNote, outsideFilmOf } from "./outsideFilm.ts";

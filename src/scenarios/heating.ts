@@ -5,7 +5,7 @@
 import type { SteadyState } from "../engine/steady.ts";
 import type { Assumption, Construction, HeatingScenario } from "../project/model.ts";
 import { formatPosition } from "../project/position.ts";
-import type { HeatingResults, HeatingSurfaceResults } from "../results/heatingTypes.ts";
+import type { HeatingResults, HeatingSurfaceResults } from "./heatingTypes.ts";
 import {
   dewPoint,
   ISO13788_FORMULA_SOURCE,

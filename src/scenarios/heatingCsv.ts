@@ -1,5 +1,5 @@
 /** The CSV of a heating scenario, `csv/heating-<id>.csv`: one row per surface, SI units. */
-import type { HeatingResults } from "../results/heatingTypes.ts";
+import type { HeatingResults } from "./heatingTypes.ts";
 
 const HEADER = [
   "surface",

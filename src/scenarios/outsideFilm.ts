@@ -1,5 +1,5 @@
 import type { ScenarioSurface } from "../project/model.ts";
-import type { OutsideFilmResults } from "../results/types.ts";
+import type { OutsideFilmResults } from "./types.ts";
 import {
   SUMMER_DESIGN_FILM_SOURCE,
   SUMMER_DESIGN_OUTSIDE_COEFFICIENT,

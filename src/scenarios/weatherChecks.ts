@@ -1,6 +1,6 @@
 import type { PulseModes } from "../engine/pulseModes.ts";
 import type { FluxModes } from "../engine/surfaceFlux.ts";
-import type { CheckResult } from "../results/types.ts";
+import type { CheckResult } from "../engine/checkResult.ts";
 import { fluxesAfterWarmUp } from "./weatherRecursion.ts";
 
 /** Unit roundoff of IEEE 754 double precision, 2^−53. */

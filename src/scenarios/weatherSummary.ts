@@ -1,4 +1,4 @@
-import type { EnergyTotals } from "../results/types.ts";
+import type { EnergyTotals } from "./types.ts";
 import { civilFromDays, daysFromCivil } from "../climate/weatherTime.ts";
 import type { StepLabels } from "./weatherBoundary.ts";
 import type { WeatherSeries } from "../climate/weatherCsv.ts";

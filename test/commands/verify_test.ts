@@ -2,9 +2,9 @@ import assert from "node:assert/strict";
 import { join } from "node:path";
 import { runBuild } from "../../src/commands/build.ts";
 import { runVerify } from "../../src/commands/verify.ts";
-import { encodeBase64 } from "../../src/report/base64.ts";
+import { encodeBase64 } from "../../src/archive/base64.ts";
 import { sha256Hex } from "../../src/archive/hash.ts";
-import { escapeHtml } from "../../src/report/html.ts";
+import { escapeHtml } from "../../src/report/page/html.ts";
 import { PACKAGE_SIZE_LIMIT } from "../../src/commands/readBounded.ts";
 
 const MINIMAL = new URL("../fixtures/good/minimal/", import.meta.url).pathname;

@@ -4,7 +4,7 @@ import { diffProjects } from "../../src/diff/diffProjects.ts";
 import { renderDiffJson } from "../../src/diff/json.ts";
 import { DIFF_CSP, renderDiffHtml } from "../../src/diff/page.ts";
 import { renderDiffText } from "../../src/diff/text.ts";
-import { escapeHtml } from "../../src/report/html.ts";
+import { escapeHtml } from "../../src/report/page/html.ts";
 import type { Change, Effect } from "../../src/diff/types.ts";
 import { side } from "./_sides.ts";
 

@@ -1,6 +1,6 @@
 import assert from "node:assert/strict";
 import fc from "fast-check";
-import { encodeBase64 } from "../../src/report/base64.ts";
+import { encodeBase64 } from "../../src/archive/base64.ts";
 
 Deno.test("encodeBase64() matches the RFC 4648 §10 test vectors", () => {
   // Source: RFC 4648 section 10, "Test Vectors" (from memory).

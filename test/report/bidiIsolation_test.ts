@@ -9,7 +9,7 @@ import { join } from "node:path";
 import { extractPackage } from "../../src/archive/extract.ts";
 import { loadProject } from "../../src/commands/loadProject.ts";
 import { produceOutputs } from "../../src/commands/produce.ts";
-import { html } from "../../src/report/html.ts";
+import { html } from "../../src/report/page/html.ts";
 import { parseDocument } from "./dom.ts";
 
 const GOOD = new URL("../fixtures/good/minimal/", import.meta.url).pathname;

@@ -1,6 +1,6 @@
 import assert from "node:assert/strict";
-import { SI_DISPLAY } from "../../src/report/displayUnits.ts";
-import { renderConstructionOutput } from "../../src/report/constructionOutput.ts";
+import { SI_DISPLAY } from "../../src/report/page/displayUnits.ts";
+import { renderConstructionOutput } from "../../src/report/constructions/constructionOutput.ts";
 import { bareSlab, engineEntry } from "./dynamicFixture.ts";
 
 Deno.test("renderConstructionOutput() in compact mode keeps the summary and points to the full series", () => {

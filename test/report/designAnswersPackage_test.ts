@@ -2,7 +2,7 @@
 import assert from "node:assert/strict";
 import { join } from "node:path";
 import { runBuild } from "../../src/commands/build.ts";
-import { MINUS } from "../../src/report/format.ts";
+import { MINUS } from "../../src/report/page/format.ts";
 import type { ResultsJson } from "../../src/results/types.ts";
 import { assertNoLiveMarkup, parseDocument } from "./dom.ts";
 

@@ -18,7 +18,7 @@ import {
   SI_PER_IP_UNIT,
   toDisplay,
   unitLabel,
-} from "../../src/report/displayUnits.ts";
+} from "../../src/report/page/displayUnits.ts";
 
 /** |actual − expected| ≤ half a unit in the last printed digit of `expected`. */
 function assertPrinted(actual: number, expected: string, what: string): void {

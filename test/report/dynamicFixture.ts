@@ -2,7 +2,7 @@
  * Dynamic results for the rendering tests, produced by the real engine (never typed in), and small
  * invented constructions with known closed-form behaviour.
  */
-import { SI_DISPLAY } from "../../src/report/displayUnits.ts";
+import { SI_DISPLAY } from "../../src/report/page/displayUnits.ts";
 import {
   analyseConstruction,
   constructionChecksJson,
@@ -11,8 +11,8 @@ import {
 } from "../../src/engine/mod.ts";
 import type { Layer } from "../../src/engine/layer.ts";
 import type { Construction } from "../../src/project/model.ts";
-import { renderDynamicFactors } from "../../src/report/dynamicOutput.ts";
-import { renderConstructionOutput } from "../../src/report/constructionOutput.ts";
+import { renderDynamicFactors } from "../../src/report/constructions/dynamicOutput.ts";
+import { renderConstructionOutput } from "../../src/report/constructions/constructionOutput.ts";
 import type { CheckResult, ConstructionResults, MethodNoteResult } from "../../src/results/types.ts";
 
 const at = (line: number) => ({ file: "walls.md", line, col: 1 });

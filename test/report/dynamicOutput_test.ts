@@ -1,6 +1,6 @@
 import assert from "node:assert/strict";
-import { readDynamic } from "../../src/report/dynamicData.ts";
-import { formatFixed, formatSig } from "../../src/report/format.ts";
+import { readDynamic } from "../../src/report/constructions/dynamicData.ts";
+import { formatFixed, formatSig } from "../../src/report/page/format.ts";
 import { renderPackage } from "../../src/report/package.ts";
 import { assertNoLiveMarkup, parseDocument, parseFragment } from "./dom.ts";
 import { bareSlab, construction, ctfRejectingWall, renderWithEngine } from "./dynamicFixture.ts";

@@ -1,11 +1,20 @@
 import assert from "node:assert/strict";
-import { SI_DISPLAY } from "../../src/report/displayUnits.ts";
+import { SI_DISPLAY } from "../../src/report/page/displayUnits.ts";
 import * as Plot from "@observablehq/plot";
-import { type DynamicView, readDynamic, seriesSum, stepResponse } from "../../src/report/dynamicData.ts";
-import { ctsPlot, responseFactorPlot, stepResponsePlot } from "../../src/report/dynamicPlots.ts";
-import { MINUS } from "../../src/report/format.ts";
+import {
+  type DynamicView,
+  readDynamic,
+  seriesSum,
+  stepResponse,
+} from "../../src/report/constructions/dynamicData.ts";
+import {
+  ctsPlot,
+  responseFactorPlot,
+  stepResponsePlot,
+} from "../../src/report/constructions/dynamicPlots.ts";
+import { MINUS } from "../../src/report/page/format.ts";
 import { renderPackage } from "../../src/report/package.ts";
-import { PLOT_WIDTH, renderPlotSvg } from "../../src/report/plotSvg.ts";
+import { PLOT_WIDTH, renderPlotSvg } from "../../src/report/page/plotSvg.ts";
 import { assertNoLiveMarkup, parseDocument, parseFragment } from "./dom.ts";
 import { ctfRejectingWall, engineEntry } from "./dynamicFixture.ts";
 import { fixture, wall } from "./fixture.ts";

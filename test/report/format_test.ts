@@ -1,5 +1,12 @@
 import assert from "node:assert/strict";
-import { formatFixed, formatSig, formatTrim, MINUS, THIN_SPACE, withUnit } from "../../src/report/format.ts";
+import {
+  formatFixed,
+  formatSig,
+  formatTrim,
+  MINUS,
+  THIN_SPACE,
+  withUnit,
+} from "../../src/report/page/format.ts";
 
 // Expected strings below are hand-rounded (round half up on the decimal value), from memory of the
 // usual significant-figure rule; no published source.

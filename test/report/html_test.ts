@@ -1,6 +1,6 @@
 import assert from "node:assert/strict";
 import fc from "fast-check";
-import { cssStringLiteral, escapeHtml, html, raw, Trusted } from "../../src/report/html.ts";
+import { cssStringLiteral, escapeHtml, html, raw, Trusted } from "../../src/report/page/html.ts";
 import { parseFragment } from "./dom.ts";
 
 Deno.test("escapeHtml() escapes the five HTML-significant characters", () => {

@@ -4,7 +4,7 @@
  * Appendix B.9), never with the module under test.
  */
 import assert from "node:assert/strict";
-import { formatFixed, formatSig, formatTrim, MINUS } from "../../src/report/format.ts";
+import { formatFixed, formatSig, formatTrim, MINUS } from "../../src/report/page/format.ts";
 import { renderPackage } from "../../src/report/package.ts";
 import type { ScenarioResults } from "../../src/results/types.ts";
 import { parseDocument } from "./dom.ts";

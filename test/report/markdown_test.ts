@@ -1,6 +1,6 @@
 import assert from "node:assert/strict";
-import { renderMarkdown } from "../../src/report/markdown.ts";
-import { decodeCharacterReferences, safeLinkUrl } from "../../src/report/safeUrl.ts";
+import { renderMarkdown } from "../../src/report/page/markdown.ts";
+import { decodeCharacterReferences, safeLinkUrl } from "../../src/report/page/safeUrl.ts";
 import { assertNoLiveMarkup, parseFragment } from "./dom.ts";
 
 function render(md: string): { markup: string; body: HTMLElement } {

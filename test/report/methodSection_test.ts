@@ -1,5 +1,5 @@
 import assert from "node:assert/strict";
-import { formatSig } from "../../src/report/format.ts";
+import { formatSig } from "../../src/report/page/format.ts";
 import { renderPackage } from "../../src/report/package.ts";
 import { parseDocument } from "./dom.ts";
 import { engineEntry } from "./dynamicFixture.ts";

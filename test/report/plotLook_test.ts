@@ -7,7 +7,7 @@ import assert from "node:assert/strict";
 import { join } from "node:path";
 import { runBuild } from "../../src/commands/build.ts";
 import * as Plot from "@observablehq/plot";
-import { namePlaceholder, renderPlotSvg } from "../../src/report/plotSvg.ts";
+import { namePlaceholder, renderPlotSvg } from "../../src/report/page/plotSvg.ts";
 import { assertNoLiveMarkup, parseDocument, parseFragment } from "./dom.ts";
 import { HOSTILE } from "./fixture.ts";
 

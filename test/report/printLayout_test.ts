@@ -1,7 +1,7 @@
 /** The package on paper: running header text, page-break rules and readable appendices. */
 import assert from "node:assert/strict";
-import { cssStringLiteral } from "../../src/report/html.ts";
-import { packageCss } from "../../src/report/css.ts";
+import { cssStringLiteral } from "../../src/report/page/html.ts";
+import { packageCss } from "../../src/report/page/css.ts";
 import { renderPackage } from "../../src/report/package.ts";
 import { parseDocument } from "./dom.ts";
 import { fixture } from "./fixture.ts";

@@ -4,7 +4,7 @@
  * checks compare n with 4n and allow a ratio of 8 (linear gives about 4, quadratic about 16).
  */
 import assert from "node:assert/strict";
-import { renderMarkdown } from "../../src/report/markdown.ts";
+import { renderMarkdown } from "../../src/report/page/markdown.ts";
 import { splitMarkdown } from "../../src/project/fences.ts";
 import { parseFragment } from "./dom.ts";
 

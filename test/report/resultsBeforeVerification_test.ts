@@ -7,11 +7,11 @@
 import assert from "node:assert/strict";
 import { join } from "node:path";
 import { runBuild } from "../../src/commands/build.ts";
-import { renderConstructionOutput } from "../../src/report/constructionOutput.ts";
-import { SI_DISPLAY } from "../../src/report/displayUnits.ts";
-import { PRINTED_TERMS } from "../../src/report/dynamicTables.ts";
-import { readDynamic } from "../../src/report/dynamicData.ts";
-import { formatSig } from "../../src/report/format.ts";
+import { renderConstructionOutput } from "../../src/report/constructions/constructionOutput.ts";
+import { SI_DISPLAY } from "../../src/report/page/displayUnits.ts";
+import { PRINTED_TERMS } from "../../src/report/constructions/dynamicTables.ts";
+import { readDynamic } from "../../src/report/constructions/dynamicData.ts";
+import { formatSig } from "../../src/report/page/format.ts";
 import { renderPackage } from "../../src/report/package.ts";
 import { parseDocument, parseFragment } from "./dom.ts";
 import { engineEntry } from "./dynamicFixture.ts";

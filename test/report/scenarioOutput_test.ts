@@ -1,5 +1,5 @@
 import assert from "node:assert/strict";
-import { MINUS } from "../../src/report/format.ts";
+import { MINUS } from "../../src/report/page/format.ts";
 import { renderPackage } from "../../src/report/package.ts";
 import { assertNoLiveMarkup, parseDocument } from "./dom.ts";
 import { HOSTILE } from "./fixture.ts";

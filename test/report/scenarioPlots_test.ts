@@ -1,7 +1,12 @@
 import assert from "node:assert/strict";
-import { SI_DISPLAY } from "../../src/report/displayUnits.ts";
-import { PLOT_WIDTH } from "../../src/report/plotSvg.ts";
-import { insideFluxPlot, monthlyPlot, solAirPlot, stackedGainPlot } from "../../src/report/scenarioPlots.ts";
+import { SI_DISPLAY } from "../../src/report/page/displayUnits.ts";
+import { PLOT_WIDTH } from "../../src/report/page/plotSvg.ts";
+import {
+  insideFluxPlot,
+  monthlyPlot,
+  solAirPlot,
+  stackedGainPlot,
+} from "../../src/report/scenarios/scenarioPlots.ts";
 import type { ScenarioResults } from "../../src/results/types.ts";
 import { computeDesignDay } from "../../src/scenarios/designDay.ts";
 import { assertNoLiveMarkup, parseFragment } from "./dom.ts";

@@ -7,8 +7,8 @@
 import assert from "node:assert/strict";
 import { loadProject } from "../../src/commands/loadProject.ts";
 import type { Construction } from "../../src/project/model.ts";
-import { SI_DISPLAY } from "../../src/report/displayUnits.ts";
-import { renderSectionSvg } from "../../src/report/sectionSvg.ts";
+import { SI_DISPLAY } from "../../src/report/page/displayUnits.ts";
+import { renderSectionSvg } from "../../src/report/constructions/drawing/sectionSvg.ts";
 import { parseFragment } from "./dom.ts";
 
 const DEMO = new URL("../../projects/demo/", import.meta.url).pathname;

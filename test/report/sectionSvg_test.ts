@@ -1,6 +1,6 @@
 import assert from "node:assert/strict";
-import { SI_DISPLAY } from "../../src/report/displayUnits.ts";
-import { renderSectionSvg } from "../../src/report/sectionSvg.ts";
+import { SI_DISPLAY } from "../../src/report/page/displayUnits.ts";
+import { renderSectionSvg } from "../../src/report/constructions/drawing/sectionSvg.ts";
 import { assertNoLiveMarkup, parseFragment } from "./dom.ts";
 import { HOSTILE, wall } from "./fixture.ts";
 

@@ -1,7 +1,8 @@
 import assert from "node:assert/strict";
 import type { Diagnostic } from "../../src/project/diagnostic.ts";
 import { countFindings, formatFinding, formatFindings, REVIEW_RULES } from "../../src/review/mod.ts";
-import { num, parsePosition } from "../../src/review/finding.ts";
+import { num } from "../../src/review/finding.ts";
+import { parsePosition } from "../../src/project/position.ts";
 
 const AT = { file: "walls.md", line: 12, col: 5 };
 

@@ -6,7 +6,7 @@
 import assert from "node:assert/strict";
 import { join } from "node:path";
 import { runBuild } from "../../src/commands/build.ts";
-import type { HeatingResults } from "../../src/results/heatingTypes.ts";
+import type { HeatingResults } from "../../src/scenarios/heatingTypes.ts";
 import type { ResultsJson } from "../../src/results/types.ts";
 import { parseDocument } from "../report/dom.ts";
 

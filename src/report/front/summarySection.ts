@@ -1,0 +1,94 @@
+/**
+ * "Summary of results", directly after the cover: every verdict of the package on one page — constructions,
+ * scenarios, the failed checks and the open items (with the id to acknowledge them by).
+ */
+import type { OpenItem, OpenItemKind, SummaryJson } from "../../results/summaryTypes.ts";
+import { outsideFilmCautions } from "../../results/outsideFilmCautions.ts";
+import { filmCoefficientText } from "../page/displayUnits.ts";
+import { html, type Trusted } from "../page/html.ts";
+import type { RenderContext } from "../page/packageInput.ts";
+import { constructionsTable, scenariosTable } from "./summaryTables.ts";
+
+/** Printed name of each open-item kind. */
+export const OPEN_ITEM_LABEL: Readonly<Record<OpenItemKind, string>> = {
+  "from-memory-source": "Source from memory or not confirmed",
+  "synthetic-data": "Synthetic data",
+  "failed-check": "Failed check",
+  "default-in-use": "Default in use",
+  "unmet-limit": "Limit not met",
+  "open-point": "Open point",
+  "acknowledged-finding": "Acknowledged finding",
+};
+
+function failedChecks(summary: SummaryJson): Trusted {
+  if (summary.failedChecks.length === 0) {
+    return html`<p class="check-summary">Failed checks: none.</p>`;
+  }
+  const items = summary.failedChecks.map((c) =>
+    html`<li>${c.id} on ${c.subject}: ${String(c.value)} against ${String(c.limit)} (${c.description})</li>`
+  );
+  return html`
+    <div class="check-summary has-failures">
+      <p>Failed checks: ${String(summary.failedChecks.length)} (see section 4).</p>
+      <ul>${items}</ul>
+    </div>
+  `;
+}
+
+function itemStatus(item: OpenItem): Trusted {
+  if (item.acknowledged !== null) {
+    return html`acknowledged by ${item.acknowledged.by}: ${item.acknowledged.reason}`;
+  }
+  return item.blocking ? html`<span class="fail">blocks issue</span>` : html`open`;
+}
+
+function openItems(summary: SummaryJson): Trusted {
+  if (summary.openItems.length === 0) return html`<p>Open items: none.</p>`;
+  const rows = summary.openItems.map((item) =>
+    html`
+      <tr class="${item.blocking && item.acknowledged === null ? "fail" : ""}">
+        <td>${OPEN_ITEM_LABEL[item.kind]}</td>
+        <td>${item.text}<br><span class="muted">at ${item.at}; id <code>${item.id}</code></span></td>
+        <td>${itemStatus(item)}</td>
+      </tr>
+    `
+  );
+  return html`
+    <table class="compact summary-open-items">
+      <caption>Open items: ${String(
+        summary.openItems.length,
+      )}. Sources from memory, synthetic data and failed checks block issue until each is resolved or acknowledged in project.md (<code>acknowledged: [{ item: &lt;id or kind&gt;, reason, by }]</code>).</caption>
+      <thead>
+        <tr>
+          <th>Kind</th>
+          <th>Item</th>
+          <th>Status</th>
+        </tr>
+      </thead>
+      <tbody>${rows}</tbody>
+    </table>
+  `;
+}
+
+/** The outside film the design days use, stated once (the same words as the caution). */
+function outsideFilm(ctx: RenderContext): Trusted {
+  const [statement] = outsideFilmCautions(
+    ctx.input.results.scenarios,
+    (w) => filmCoefficientText(ctx.display, w),
+  );
+  return statement === undefined ? html`` : html`<p class="summary-film">${statement}</p>`;
+}
+
+/** Renders the summary section; nothing when results.json has no summary (a package read from before it). */
+export function renderSummarySection(ctx: RenderContext): Trusted {
+  const summary = ctx.input.results.summary;
+  if (summary === undefined) return html``;
+  return html`<section class="summary-of-results" id="s-summary" aria-labelledby="s-summary-h">
+<h2 id="s-summary-h">Summary of results</h2>
+${constructionsTable(summary.constructions, ctx.display)}
+${scenariosTable(summary.scenarios, ctx.display)}
+${outsideFilm(ctx)}
+${failedChecks(summary)}
+${openItems(summary)}
+</section>`;
+}

@@ -1,0 +1,226 @@
+/** The cooling load part of a design day's output: the user's radiant time series, peaks, hourly table, plots. */
+import * as Plot from "@observablehq/plot";
+import type { CoolingLoadResults } from "../../scenarios/heatingTypes.ts";
+import type { ScenarioResults } from "../../results/types.ts";
+import { type DisplayUnits, toDisplay, unitLabel } from "../page/displayUnits.ts";
+import { formatFixed, formatTrim } from "../page/format.ts";
+import { html, type Trusted } from "../page/html.ts";
+import { type PlotSpec, renderPlotSvg } from "../page/plotSvg.ts";
+import { clockTime } from "./scenarioData.ts";
+import { legendEntry, lineSwatch, OUTDOOR_STYLE, type SeriesStyle, surfaceStyle } from "./scenarioStyle.ts";
+
+const HOURS = Array.from({ length: 24 }, (_, h) => h);
+const DASHED: SeriesStyle = { colour: "#b5470f", dash: "5 3" };
+
+function gainAt(results: ScenarioResults, series: readonly number[], h: number): number {
+  return series[Math.round(h / results.timestep_h)] ?? NaN;
+}
+
+function rtsTable(cl: CoolingLoadResults): Trusted {
+  const half = (start: number) => {
+    const js = HOURS.slice(start, start + 12);
+    return html`
+      <tr><th scope="row">j</th>${js.map((j) => html`<td class="num">${String(j)}</td>`)}</tr>
+      <tr><th scope="row">r<sub>j</sub></th>${js.map((j) =>
+        html`<td class="num" data-q="rts">${formatTrim(cl.radiantTimeSeries.values[j] ?? NaN, 4)}</td>`
+      )}</tr>
+    `;
+  };
+  return html`
+    <table class="rts-table compact">
+      <caption>Radiant time series used (r<sub>j</sub>: share of a radiant gain that becomes cooling load j hours later), as given in the input.</caption>
+      <tbody>${half(0)}${half(12)}</tbody>
+    </table>
+  `;
+}
+
+function peakTable(results: ScenarioResults, cl: CoolingLoadResults, d: DisplayUnits): Trusted {
+  const w = (v: number) => formatFixed(toDisplay(d, "heatGain", v), 0);
+  const rows = Object.entries(results.surfaces).map(([sid, s]) => {
+    const load = s.coolingLoadPeak;
+    return html`
+      <tr>
+        <th scope="row">${sid}</th>
+        <td class="num">${w(s.peak.heatGain)}</td>
+        <td>${clockTime(s.peak.time_h)}</td>
+        <td class="num" data-q="load-peak">${load === undefined ? "—" : w(load.value)}</td>
+        <td>${load === undefined ? "—" : clockTime(load.time_h)}</td>
+      </tr>
+    `;
+  });
+  return html`
+    <table class="cooling-peaks">
+      <caption>Peak heat gain and peak cooling load per surface and in total (${unitLabel(
+        d,
+        "heatGain",
+      )}; local standard time). Surface gain peaks are over all steps, the totals over the full hours.</caption>
+      <thead>
+        <tr>
+          <th>Surface</th>
+          <th>Peak heat gain</th>
+          <th>at</th>
+          <th>Peak cooling load</th>
+          <th>at</th>
+        </tr>
+      </thead>
+      <tbody>${rows}
+        <tr class="total-row"><th scope="row">Total</th><td class="num">${w(
+          cl.heatGainPeak.value,
+        )}</td><td>${clockTime(cl.heatGainPeak.time_h)}</td><td class="num" data-q="total-load-peak">${w(
+          cl.peak.value,
+        )}</td><td data-q="total-load-time">${clockTime(cl.peak.time_h)}</td></tr>
+      </tbody>
+    </table>
+  `;
+}
+
+function hourlyTable(id: string, results: ScenarioResults, cl: CoolingLoadResults, d: DisplayUnits): Trusted {
+  const w = (v: number) => formatFixed(toDisplay(d, "heatGain", v), 0);
+  const surfaces = Object.entries(results.surfaces);
+  const body = HOURS.map((h) =>
+    html`<tr><td class="num" data-q="time">${clockTime(h)}</td>${
+      surfaces.map(([, s]) =>
+        html`
+          <td class="num" data-q="gain">${w(gainAt(results, s.heatGain, h))}</td>
+          <td class="num" data-q="load">${w(s.coolingLoad?.[h] ?? NaN)}</td>
+        `
+      )
+    }<td class="num total-col" data-q="total-gain">${
+      w(cl.totalHeatGain[h] ?? NaN)
+    }</td><td class="num total-col" data-q="total-load">${w(cl.total[h] ?? NaN)}</td></tr>`
+  );
+  return html`
+    <table class="hourly cooling-load compact">
+      <caption>Scenario ${id} at the full hours: heat gain (HG) and cooling load (CL) per surface and in total, ${unitLabel(
+        d,
+        "heatGain",
+      )}.</caption>
+      <thead>
+        <tr><th rowspan="2">Time</th>${surfaces.map(([sid]) =>
+          html`<th colspan="2">${sid}</th>`
+        )}<th colspan="2">Total</th></tr>
+        <tr>${surfaces.map(() =>
+          html`
+            <th>HG</th>
+            <th>CL</th>
+          `
+        )}<th>HG</th><th>CL</th></tr>
+      </thead>
+      <tbody>${body}</tbody>
+    </table>
+  `;
+}
+
+function spec(yLabel: string, marks: Plot.Markish[]): PlotSpec {
+  return {
+    height: 280,
+    marginLeft: 56,
+    marginBottom: 40,
+    style: { fontSize: "11px" },
+    x: {
+      domain: [0, 24],
+      ticks: [0, 3, 6, 9, 12, 15, 18, 21, 24],
+      tickFormat: clockTime,
+      label: "Hour, local standard time",
+      labelAnchor: "center",
+      labelArrow: "none",
+    },
+    y: {
+      label: yLabel,
+      labelArrow: "none",
+      grid: true,
+      nice: true,
+      tickFormat: (v: number) => formatTrim(v, 4),
+    },
+    marks,
+  };
+}
+
+function line(values: readonly number[], style: SeriesStyle, d: DisplayUnits, width = 1.6): Plot.Markish {
+  const points = values.map((v, h) => ({ h, v: toDisplay(d, "heatGain", v) }));
+  return Plot.line(points, {
+    x: "h",
+    y: "v",
+    stroke: style.colour,
+    strokeDasharray: style.dash,
+    strokeWidth: width,
+  });
+}
+
+function plots(
+  id: string,
+  results: ScenarioResults,
+  cl: CoolingLoadResults,
+  prefix: string,
+  d: DisplayUnits,
+) {
+  const y = `Heat gain, cooling load (${unitLabel(d, "heatGain")})`;
+  const totalSvg = renderPlotSvg(
+    spec(y, [
+      Plot.ruleY([0], { stroke: "#444" }),
+      line(cl.totalHeatGain, DASHED, d),
+      line(cl.total, OUTDOOR_STYLE, d, 2.2),
+    ]),
+    `${prefix}-cooling-total`,
+    "Total heat gain and total cooling load over the design day",
+  );
+  const entries = Object.values(results.surfaces);
+  const surfaceSvg = renderPlotSvg(
+    spec(y, [
+      Plot.ruleY([0], { stroke: "#444" }),
+      ...entries.map((s, i) =>
+        line(HOURS.map((h) => gainAt(results, s.heatGain, h)), { ...surfaceStyle(i), dash: "2 3" }, d, 1.1)
+      ),
+      ...entries.map((s, i) => line(s.coolingLoad ?? [], { ...surfaceStyle(i), dash: "none" }, d)),
+    ]),
+    `${prefix}-cooling-surfaces`,
+    "Heat gain and cooling load of each surface over the design day",
+  );
+  const names = Object.keys(results.surfaces).map((sid, i) =>
+    legendEntry(lineSwatch({ ...surfaceStyle(i), dash: "none" }), sid)
+  );
+  return html`
+    <figure
+      class="plot-figure">${totalSvg}<figcaption><strong>Total heat gain and cooling load, scenario ${id}.</strong> <span class="legend">${legendEntry(
+        lineSwatch(DASHED),
+        "heat gain",
+      )}${legendEntry(
+        lineSwatch(OUTDOOR_STYLE, 2.2),
+        "cooling load",
+      )}</span> At the full hours.</figcaption></figure>
+    <figure
+      class="plot-figure">${surfaceSvg}<figcaption><strong>Heat gain (dotted) and cooling load (solid) by surface, scenario ${id}.</strong> <span class="legend">${names}</span></figcaption></figure>
+  `;
+}
+
+function limits(cl: CoolingLoadResults): Trusted {
+  return html`
+    <div class="caution-box cooling-limits" role="note">
+      <p><strong>Limits of this cooling load.</strong> The radiant time series method assumes a steady-periodic day (the same day repeated) and continuous operation at the stated indoor temperature; with intermittent plant the peak is usually higher. It covers conduction through the opaque surfaces listed here only: glazing, internal gains, ventilation and infiltration are not included. The radiant share of each gain is the radiant fraction shown in the conditions.</p>
+      <p>The radiant time series is the user's input, not the tool's; it must suit the room it is applied to. Its source as given: <q class="rts-source">${cl
+        .radiantTimeSeries.source}</q>.</p>
+    </div>
+  `;
+}
+
+/** The cooling load section of a design day, or nothing when the scenario gives no radiant time series. */
+export function renderCoolingLoad(
+  id: string,
+  results: ScenarioResults,
+  prefix: string,
+  d: DisplayUnits,
+): Trusted {
+  const cl = results.coolingLoad;
+  if (cl === undefined) return html``;
+  return html`
+    <section class="cooling-load-output">
+      <h5>Cooling load (radiant time series method)</h5>
+      <p>Cooling load of each surface = convective part of its heat gain + Σ r<sub>j</sub> × radiant part j hours earlier (ASHRAE Handbook—Fundamentals, nonresidential cooling load chapter). Values are per hour, at the full hours; results.json key <code>coolingLoad</code>.</p>
+      ${rtsTable(cl)}
+      ${peakTable(results, cl, d)}
+      ${hourlyTable(id, results, cl, d)}
+      ${plots(id, results, cl, prefix, d)}
+      ${limits(cl)}
+    </section>
+  `;
+}

@@ -1,0 +1,183 @@
+/** The computed output of a heating scenario: design heat loss and the ISO 13788 surface checks per surface. */
+import type { HeatingScenario } from "../../project/model.ts";
+import type { HeatingResults, Verdict } from "../../scenarios/heatingTypes.ts";
+import { type DisplayUnits, toDisplay, unitLabel } from "../page/displayUnits.ts";
+import { DELTA_F_PER_K } from "../page/displayUnits.ts";
+import { formatFixed, formatSig } from "../page/format.ts";
+import { html, type Trusted } from "../page/html.ts";
+import type { RenderContext } from "../page/packageInput.ts";
+
+/** What the heating output reads: the block's scenario, its `heating.<id>` entry, anchor and display units. */
+export interface HeatingOutputInput {
+  readonly scenario: HeatingScenario;
+  readonly results: HeatingResults | undefined;
+  readonly anchor: string;
+  readonly display: DisplayUnits;
+}
+
+function verdictCell(v: Verdict, q: string, failText: string): Trusted {
+  return v.pass
+    ? html`<td class="pass" data-q="${q}">pass</td>`
+    : html`<td class="fail" data-q="${q}">${failText}</td>`;
+}
+
+function conditions(r: HeatingResults, d: DisplayUnits): Trusted {
+  const t = (c: number) => `${formatFixed(toDisplay(d, "temperature", c), 1)} ${unitLabel(d, "temperature")}`;
+  return html`
+    <table class="conditions heating-conditions">
+      <caption>Design condition and ISO 13788 limits</caption>
+      <tbody>
+        <tr>
+          <th scope="row">Indoor air θ<sub>i</sub></th>
+          <td>${t(r.indoor)}</td>
+        </tr>
+        <tr>
+          <th scope="row">Outdoor design θ<sub>e</sub></th>
+          <td>${t(r.outdoor)}</td>
+        </tr>
+        <tr>
+          <th scope="row">Indoor relative humidity φ<sub>i</sub></th>
+          <td>${formatFixed(r.indoorRelativeHumidity * 100, 0)} %</td>
+        </tr>
+        <tr>
+          <th scope="row">Indoor vapour pressure p<sub>i</sub></th>
+          <td>${formatFixed(r.indoorVapourPressure, 0)} Pa</td>
+        </tr>
+        <tr>
+          <th scope="row">Indoor dew point θ<sub>dew</sub></th>
+          <td data-q="dew-point">${t(r.indoorDewPoint)}</td>
+        </tr>
+        <tr>
+          <th scope="row">Surface relative humidity limit (mould)</th>
+          <td>${formatFixed(r.mouldCriterion.surfaceRelativeHumidity * 100, 0)} %</td>
+        </tr>
+        <tr>
+          <th scope="row">Lowest acceptable surface temperature θ<sub>si,min</sub></th>
+          <td>${t(r.mouldCriterion.minimumSurfaceTemperature)}</td>
+        </tr>
+        <tr>
+          <th scope="row">f<sub>Rsi,min</sub></th>
+          <td data-q="frsi-min">${formatFixed(r.mouldCriterion.fRsiMin, 3)}</td>
+        </tr>
+      </tbody>
+    </table>
+  `;
+}
+
+/** " (R_si = 0.25 m²·K/W)": the one moisture R_si of the scenario's surfaces, shown with every f_Rsi. */
+function rsiLabel(r: HeatingResults, d: DisplayUnits): string {
+  const rsi = Object.values(r.surfaces)[0]?.moistureSurfaceResistance;
+  return rsi === undefined
+    ? ""
+    : ` (R_si = ${formatSig(toDisplay(d, "resistance", rsi), 3)} ${unitLabel(d, "resistance")})`;
+}
+
+function surfaceTable(id: string, r: HeatingResults, d: DisplayUnits): Trusted {
+  const t = (c: number) => formatFixed(toDisplay(d, "temperature", c), 1);
+  const w = (v: number) => formatFixed(toDisplay(d, "heatGain", v), 0);
+  const rows = Object.entries(r.surfaces).map(([sid, s]) =>
+    html`
+      <tr><th scope="row">${sid}</th><td>${s.construction}</td><td class="num" data-q="u">${formatSig(
+        toDisplay(d, "transmittance", s.U),
+        3,
+      )}</td><td class="num" data-q="u-c">${formatSig(
+        toDisplay(d, "transmittance", s.correctedU ?? s.U),
+        3,
+      )}</td><td class="num" data-q="area">${formatSig(
+        toDisplay(d, "area", s.area),
+        3,
+      )}</td><td class="num" data-q="loss">${w(s.heatLoss)}</td><td class="num" data-q="theta-si">${t(
+        s.insideSurfaceTemperature,
+      )}</td><td class="num" data-q="frsi">${formatFixed(s.fRsi, 3)}</td><td class="num">${formatFixed(
+        s.fRsiMin,
+        3,
+      )}</td><td class="num">${t(s.dewPoint)}</td>${verdictCell(
+        s.surfaceCondensation,
+        "condensation",
+        "condensation",
+      )}${verdictCell(s.mould, "mould", "mould risk")}</tr>
+    `
+  );
+  return html`
+    <table class="heating-surfaces compact">
+      <caption>Scenario ${id}: steady heat loss U<sub>c</sub>·A·(θ<sub>i</sub> − θ<sub>e</sub>) (U<sub>c</sub> = U + ΔU of the corrections given) and ISO 13788 surface checks per surface.</caption>
+      <thead>
+        <tr>
+          <th>Surface</th>
+          <th>Construction</th>
+          <th>U ${unitLabel(d, "transmittance")}</th>
+          <th>U<sub>c</sub> ${unitLabel(d, "transmittance")}</th>
+          <th>Area ${unitLabel(d, "area")}</th>
+          <th>Heat loss ${unitLabel(d, "heatGain")}</th>
+          <th>θ<sub>si</sub> ${unitLabel(d, "temperature")}</th>
+          <th>f<sub>Rsi</sub>${rsiLabel(r, d)}</th>
+          <th>f<sub>Rsi,min</sub></th>
+          <th>Dew point ${unitLabel(d, "temperature")}</th>
+          <th>Surface condensation</th>
+          <th>Mould</th>
+        </tr>
+      </thead>
+      <tbody>${rows}
+        <tr class="total-row"><th scope="row">Total</th><td></td><td></td><td></td><td class="num">${formatSig(
+          toDisplay(d, "area", Object.values(r.surfaces).reduce((a, s) => a + s.area, 0)),
+          3,
+        )}</td><td class="num" data-q="total-loss">${w(r.totalHeatLoss)}</td><td colspan="6"></td></tr>
+      </tbody>
+    </table>
+  `;
+}
+
+/** Renders a heating scenario's output from its results.json entry; missing results give a plain failure note. */
+export function renderHeatingOutput(input: HeatingOutputInput): Trusted {
+  const { scenario, results: r, anchor, display: d } = input;
+  if (r === undefined) {
+    return html`
+      <div class="scenario-output heating-output" id="${anchor}">
+        <p class="fail">Not computed: results.json holds no <code>heating</code> entry for scenario ${scenario
+          .id}.</p>
+      </div>
+    `;
+  }
+  const failures =
+    Object.values(r.surfaces).filter((s) => !s.surfaceCondensation.pass || !s.mould.pass).length;
+  const rsi = Object.values(r.surfaces)[0]?.moistureSurfaceResistance;
+  return html`
+    <div class="scenario-output heating-output" id="${anchor}">
+      <h4 class="output-heading">Results of heating scenario ${scenario.id}</h4>
+      <p class="muted">Numbers as in results.json <code>heating</code> entry for ${scenario
+        .id} (Appendix B) and <code>csv/heating-${scenario.id}.csv</code>.</p>
+      <p class="peak-summary">Design heat loss through these surfaces: <strong data-q="total-loss-summary">${formatFixed(
+        toDisplay(d, "heatGain", r.totalHeatLoss),
+        0,
+      )} ${unitLabel(d, "heatGain")}</strong> (Σ U<sub>c</sub>·A = ${d.system === "SI"
+        ? `${formatSig(r.totalUA, 4)} W/K`
+        : `${
+          formatSig(toDisplay(d, "heatGain", r.totalUA) / DELTA_F_PER_K, 4)
+        } Btu/(h·°F)`}). ${failures === 0
+        ? "Every surface passes the surface-condensation and mould checks at this condition."
+        : `${failures} surface(s) fail a check: see the table.`}</p>
+      ${conditions(r, d)}
+      ${surfaceTable(scenario.id, r, d)}
+      <ul class="scenario-notes">${r.notes.map((n) => html`<li>${n}</li>`)}</ul>
+      <div class="caution-box" role="note">
+        <p><strong>Limits:</strong> a steady-state screening at one design condition for the plane elements listed; ${rsi ===
+            undefined
+          ? ""
+          : `surface temperatures use R_si = ${formatSig(toDisplay(d, "resistance", rsi), 3)} ${
+            unitLabel(d, "resistance")
+          }; `}thermal bridges, corners, ground contact, air leakage and interstitial condensation are not assessed, and the heat loss excludes ventilation and infiltration. The ISO 13788 constants used are logged in the assumptions register, with the clauses named from memory where so.</p>
+        </div>
+    </div>
+  `;
+}
+
+/** The output after a heating scenario block, read from the rendering context (anchor `hs-<id>`). */
+export function renderHeatingBlock(scenario: HeatingScenario, ctx: RenderContext): Trusted {
+  const heating = ctx.input.results.heating ?? {};
+  return renderHeatingOutput({
+    scenario,
+    results: Object.hasOwn(heating, scenario.id) ? heating[scenario.id] : undefined,
+    anchor: `hs-${scenario.id}`,
+    display: ctx.display,
+  });
+}

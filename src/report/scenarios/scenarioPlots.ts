@@ -1,0 +1,228 @@
+/** The plots of a scenario's computed output, drawn with Observable Plot as inline SVG (numbers only inside). */
+import * as Plot from "@observablehq/plot";
+import type { ScenarioResults } from "../../results/types.ts";
+import { type DisplayUnits, type QuantityKind, toDisplay, unitLabel } from "../page/displayUnits.ts";
+import { formatTrim } from "../page/format.ts";
+import type { Trusted } from "../page/html.ts";
+import { namePlaceholder, type PlotSpec, renderPlotSvg } from "../page/plotSvg.ts";
+import { endLabels } from "../constructions/dynamicPlots.ts";
+import { clockTime, MONTH_NAMES } from "./scenarioData.ts";
+import {
+  GAIN_STYLE,
+  INDOOR_STYLE,
+  LOSS_STYLE,
+  OUTDOOR_STYLE,
+  type SeriesStyle,
+  surfaceStyle,
+} from "./scenarioStyle.ts";
+
+const HEIGHT = 300;
+const DAY_TICKS = [0, 3, 6, 9, 12, 15, 18, 21, 24];
+const TIME_LABEL = "Time of day, local standard time (hh:mm)";
+
+interface Point {
+  readonly t: number;
+  readonly v: number;
+}
+
+const tick = (d: number) => formatTrim(d, 4);
+
+/**
+ * Points (kΔ, values[k]) in the display unit of `kind`, plus a closing point at 24 h equal to the first (the
+ * day repeats).
+ */
+function dayPoints(
+  values: readonly number[],
+  timestepH: number,
+  d: DisplayUnits,
+  kind: QuantityKind,
+): Point[] {
+  const out = values.map((v, k) => ({ t: k * timestepH, v: toDisplay(d, kind, v) }));
+  if (values.length > 0) out.push({ t: values.length * timestepH, v: toDisplay(d, kind, values[0]!) });
+  return out;
+}
+
+function line(points: readonly Point[], style: SeriesStyle, width = 1.6): Plot.Markish {
+  return Plot.line(points, {
+    x: "t",
+    y: "v",
+    stroke: style.colour,
+    strokeDasharray: style.dash,
+    strokeWidth: width,
+  });
+}
+
+function daySpec(yLabel: string, marks: Plot.Markish[]): PlotSpec {
+  return {
+    height: HEIGHT,
+    marginLeft: 56,
+    marginRight: 96,
+    marginBottom: 40,
+    style: { fontSize: "11px" },
+    x: {
+      domain: [0, 24],
+      ticks: DAY_TICKS,
+      tickFormat: clockTime,
+      label: TIME_LABEL,
+      labelAnchor: "center",
+      labelArrow: "none",
+    },
+    y: { label: yLabel, labelArrow: "none", grid: true, tickFormat: tick, nice: true },
+    marks,
+  };
+}
+
+/** (a) Outdoor and indoor air and each surface's sol-air temperature over the day, °C or °F. */
+export function solAirPlot(results: ScenarioResults, idPrefix: string, d: DisplayUnits): Trusted {
+  const dt = results.timestep_h;
+  const points = (values: readonly number[]) => dayPoints(values, dt, d, "temperature");
+  const ids = Object.keys(results.surfaces);
+  const series = Object.values(results.surfaces).map((s) => points(s.solAir));
+  const indoor = points(results.indoor);
+  const outdoor = points(results.outdoor);
+  const ends = endLabels(
+    [
+      ...series.map((p, i) => ({ name: namePlaceholder(i), end: p[p.length - 1] })),
+      { name: "indoor air", end: indoor[indoor.length - 1] },
+      { name: "outdoor air", end: outdoor[outdoor.length - 1] },
+    ],
+    [...series.flat(), ...indoor, ...outdoor].map((p) => p.v),
+    true,
+  );
+  return renderPlotSvg(
+    daySpec(`Temperature (${unitLabel(d, "temperature")})`, [
+      ...series.map((p, i) => line(p, surfaceStyle(i))),
+      line(indoor, INDOOR_STYLE, 1.4),
+      line(outdoor, OUTDOOR_STYLE, 2.4),
+      ends,
+    ]),
+    `${idPrefix}-solair`,
+    "Outdoor, indoor and sol-air temperatures over the design day",
+    ids,
+  );
+}
+
+/** (b) Inside heat flux of each surface over the day, W/m² or Btu/(h·ft²), positive into the room. */
+export function insideFluxPlot(results: ScenarioResults, idPrefix: string, d: DisplayUnits): Trusted {
+  const dt = results.timestep_h;
+  const ids = Object.keys(results.surfaces);
+  const series = Object.values(results.surfaces).map((s) => dayPoints(s.insideFlux, dt, d, "heatFlux"));
+  const ends = endLabels(
+    series.map((p, i) => ({ name: namePlaceholder(i), end: p[p.length - 1] })),
+    series.flat().map((p) => p.v),
+    true,
+  );
+  return renderPlotSvg(
+    daySpec(`Inside heat flux, into the room (${unitLabel(d, "heatFlux")})`, [
+      Plot.ruleY([0], { stroke: "#444" }),
+      ...series.map((p, i) => line(p, surfaceStyle(i))),
+      ends,
+    ]),
+    `${idPrefix}-flux`,
+    "Inside heat flux of each surface over the design day",
+    ids,
+  );
+}
+
+/**
+ * (c) Heat gain per step (W or Btu/h) stacked by surface (gains above zero, losses below), with the total as
+ * a line.
+ */
+export function stackedGainPlot(results: ScenarioResults, idPrefix: string, d: DisplayUnits): Trusted {
+  const dt = results.timestep_h;
+  const gainOf = (w: number) => toDisplay(d, "heatGain", w);
+  // Bar k is centred on its time kΔ; the day repeats, so step 0 is drawn again at 24:00 and both halves are
+  // clipped to the 0–24 h axis.
+  const bars = Object.values(results.surfaces).flatMap((s, i) =>
+    [...s.heatGain, s.heatGain[0] ?? 0].map((g, k) => ({
+      t0: (k - 0.5) * dt,
+      t1: (k + 0.5) * dt,
+      gain: gainOf(g),
+      order: i,
+      colour: surfaceStyle(i).colour,
+    }))
+  );
+  const totals = [...results.totalHeatGain, results.totalHeatGain[0] ?? 0];
+  const total = totals.map((g, k) => ({ t: k * dt, gain: gainOf(g) }));
+  return renderPlotSvg(
+    {
+      height: HEIGHT,
+      marginLeft: 56,
+      marginBottom: 40,
+      style: { fontSize: "11px" },
+      x: {
+        domain: [0, 24],
+        ticks: DAY_TICKS,
+        tickFormat: clockTime,
+        label: TIME_LABEL,
+        labelAnchor: "center",
+        labelArrow: "none",
+      },
+      y: {
+        label: `Heat gain (${unitLabel(d, "heatGain")})`,
+        labelArrow: "none",
+        grid: true,
+        tickFormat: tick,
+        nice: true,
+      },
+      color: { type: "identity" },
+      marks: [
+        Plot.rectY(bars, {
+          x1: "t0",
+          x2: "t1",
+          y: "gain",
+          fill: "colour",
+          z: "order",
+          stroke: "#fff",
+          strokeWidth: 0.4,
+          clip: true,
+        }),
+        Plot.ruleY([0], { stroke: "#111" }),
+        Plot.line(total, { x: "t", y: "gain", stroke: "#111", strokeWidth: 1.6 }),
+        Plot.dot(total, { x: "t", y: "gain", r: 2, fill: "#111" }),
+      ],
+    },
+    `${idPrefix}-stack`,
+    "Heat gain stacked by surface with the total",
+  );
+}
+
+/** (d) Monthly heat gain (above zero) and heat loss (below zero) of a weather year, kWh or kBtu. */
+export function monthlyPlot(
+  months: readonly { gain_J: number; loss_J: number }[],
+  idPrefix: string,
+  d: DisplayUnits,
+): Trusted {
+  const names = MONTH_NAMES.map((m) => m.slice(0, 3));
+  const gain = months.map((m, i) => ({ month: names[i]!, energy: toDisplay(d, "energy", m.gain_J) }));
+  const loss = months.map((m, i) => ({ month: names[i]!, energy: -toDisplay(d, "energy", m.loss_J) }));
+  return renderPlotSvg(
+    {
+      height: HEIGHT,
+      marginLeft: 62,
+      marginBottom: 40,
+      style: { fontSize: "11px" },
+      x: {
+        type: "band",
+        domain: names,
+        label: "Month",
+        labelAnchor: "center",
+        labelArrow: "none",
+        padding: 0.2,
+      },
+      y: {
+        label: `Heat gain (+) and heat loss (−) (${unitLabel(d, "energy")})`,
+        labelArrow: "none",
+        grid: true,
+        tickFormat: tick,
+      },
+      marks: [
+        Plot.barY(gain, { x: "month", y: "energy", fill: GAIN_STYLE.colour }),
+        Plot.barY(loss, { x: "month", y: "energy", fill: LOSS_STYLE.colour }),
+        Plot.ruleY([0], { stroke: "#111" }),
+      ],
+    },
+    `${idPrefix}-monthly`,
+    "Monthly heat gain and heat loss",
+  );
+}

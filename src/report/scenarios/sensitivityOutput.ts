@@ -1,0 +1,217 @@
+/** The sensitivity study in the package: which material property moves U, time lag and the peak heat gain most. */
+import * as Plot from "@observablehq/plot";
+import type { ConditionEffect, SensitivityEffect, SensitivityResults } from "../../sensitivity/study.ts";
+import { type DisplayUnits, type QuantityKind, toDisplay, unitLabel } from "../page/displayUnits.ts";
+import { formatSig, formatTrim } from "../page/format.ts";
+import { html, type Trusted } from "../page/html.ts";
+import type { RenderContext } from "../page/packageInput.ts";
+import { namePlaceholder, renderPlotSvg } from "../page/plotSvg.ts";
+
+const PROPERTY_NAMES: Readonly<Record<SensitivityEffect["property"], string>> = {
+  conductivity: "conductivity λ",
+  density: "density ρ",
+  specificHeat: "specific heat c",
+  resistance: "thermal resistance R",
+};
+const SHOWN = 10;
+
+const CONDITION_NAMES: Readonly<Record<ConditionEffect["condition"], string>> = {
+  absorptance: "solar absorptance α of every sunlit surface",
+  outsideCoefficient: "outside film h_o of every sunlit surface (and its R_se = 1/h_o)",
+  maxDryBulb: "design maximum dry bulb (the whole outdoor profile shifted)",
+  dailyRange: "daily range of the outdoor dry bulb",
+  indoor: "indoor temperature",
+};
+
+/** The sentence on the effects left out: how many and the threshold. */
+function droppedText(count: number, study: SensitivityResults, what: string): string {
+  const threshold = formatTrim(study.threshold * 100, 3);
+  return count === 0
+    ? `No ${what} is below the threshold of ${threshold} % of the base value.`
+    : `${count} ${what}${
+      count === 1 ? " is" : "s are"
+    } left out: both changes below ${threshold} % of the base value.`;
+}
+
+function conditionTable(
+  id: string,
+  effects: readonly ConditionEffect[],
+  dropped: number,
+  study: SensitivityResults,
+  display: DisplayUnits,
+): Trusted {
+  const unit = unitLabel(display, "heatGain");
+  const rows = effects.map((e) =>
+    html`
+      <tr>
+        <td>${CONDITION_NAMES[e.condition]}</td>
+        <td>${e.step}</td>
+        <td class="num">${signed(e.minus, display, "heatGain")}</td>
+        <td class="num">${signed(e.plus, display, "heatGain")}</td>
+      </tr>
+    `
+  );
+  return html`
+    <table>
+      <caption>Effect of the design-day conditions on the peak total heat gain of ${id}, largest first</caption>
+      <thead>
+        <tr>
+          <th>Condition varied</th>
+          <th>Step</th>
+          <th>Change at − step (${unit})</th>
+          <th>Change at + step (${unit})</th>
+        </tr>
+      </thead>
+      <tbody>${rows}</tbody>
+    </table>
+    <p class="muted">${droppedText(dropped, study, "condition effect")}</p>
+  `;
+}
+
+/** Shortens a bar label to fit the left margin of the chart. */
+function clipName(text: string): string {
+  return text.length <= 44 ? text : `${text.slice(0, 43)}\u2026`;
+}
+
+function materialLabel(key: string): string {
+  return key.startsWith("inline:") ? `${key.slice(7)} (inline layer)` : key;
+}
+
+function signed(value: number, display: DisplayUnits, kind: QuantityKind): string {
+  const shown = kind === "time" ? value : toDisplay(display, kind, value) - toDisplay(display, kind, 0);
+  const text = formatSig(shown, 3);
+  return shown > 0 ? `+${text}` : text;
+}
+
+function effectTable(
+  caption: string,
+  allEffects: readonly SensitivityEffect[],
+  dropped: number,
+  study: SensitivityResults,
+  display: DisplayUnits,
+  kind: QuantityKind,
+): Trusted {
+  const percent = formatTrim(study.variation * 100, 3);
+  const unit = kind === "time" ? "h" : unitLabel(display, kind);
+  const effects = allEffects.filter((e) => Math.max(Math.abs(e.minus), Math.abs(e.plus)) > 1e-12);
+  const droppedNote = droppedText(dropped, study, "material property effect");
+  if (effects.length === 0) {
+    return html`<p class="muted">${caption}: no material property changes it by the threshold. ${droppedNote}</p>`;
+  }
+  const rows = effects.slice(0, SHOWN).map((e, i) =>
+    html`
+      <tr>
+        <td class="num">${String(i + 1)}</td>
+        <td>${materialLabel(e.material)}</td>
+        <td>${PROPERTY_NAMES[e.property]}</td>
+        <td class="num">${signed(e.minus, display, kind)}</td>
+        <td class="num">${signed(e.plus, display, kind)}</td>
+      </tr>
+    `
+  );
+  const more = effects.length > SHOWN
+    ? html`
+      <p
+        class="muted">${String(
+          effects.length - SHOWN,
+        )} smaller effects are in Appendix B (results.json, key sensitivity).</p>
+    `
+    : html``;
+  return html`
+    <table>
+      <caption>${caption}</caption>
+      <thead>
+        <tr>
+          <th>Rank</th>
+          <th>Material</th>
+          <th>Property varied</th>
+          <th>Change at −${percent} % (${unit})</th>
+          <th>Change at +${percent} % (${unit})</th>
+        </tr>
+      </thead>
+      <tbody>${rows}</tbody>
+    </table>${more}<p class="muted">${droppedNote}</p>
+  `;
+}
+
+function tornado(id: string, effects: readonly SensitivityEffect[], display: DisplayUnits): Trusted {
+  const shown = effects.slice(0, SHOWN);
+  const data = shown.flatMap((e, i) => [
+    {
+      rank: i + 1,
+      side: "minus",
+      value: toDisplay(display, "heatGain", e.minus) - toDisplay(display, "heatGain", 0),
+    },
+    {
+      rank: i + 1,
+      side: "plus",
+      value: toDisplay(display, "heatGain", e.plus) - toDisplay(display, "heatGain", 0),
+    },
+  ]);
+  const names = shown.map((e) => clipName(`${materialLabel(e.material)}: ${PROPERTY_NAMES[e.property]}`));
+  return renderPlotSvg(
+    {
+      height: 60 + 26 * shown.length,
+      marginLeft: 262,
+      marginBottom: 40,
+      x: {
+        label: `Change of peak heat gain (${unitLabel(display, "heatGain")})`,
+        labelAnchor: "center",
+        labelArrow: "none",
+        grid: true,
+      },
+      y: {
+        label: null,
+        domain: shown.map((_, i) => i + 1),
+        tickFormat: (rank: number) => namePlaceholder(rank - 1),
+        tickSize: 0,
+      },
+      // Dark for lowered, light for raised: the two sides differ in greyscale too.
+      color: { domain: ["minus", "plus"], range: ["#2c4f73", "#d8a3a3"] },
+      marks: [
+        Plot.barX(data, { x: "value", y: "rank", fill: "side", stroke: "#111", strokeWidth: 0.5 }),
+        Plot.ruleX([0]),
+      ],
+    },
+    `sens-${id}`,
+    "Sensitivity of the peak heat gain",
+    names,
+  );
+}
+
+/** Renders the sensitivity study: per design day a ranked table and bar chart of the peak gain, per construction U and lag. */
+export function renderSensitivity(ctx: RenderContext, sectionId: string, number: string): Trusted {
+  const study = ctx.input.results.sensitivity;
+  if (study === undefined) return html``;
+  const display = ctx.display;
+  const percent = formatTrim(study.variation * 100, 3);
+  const scenarios = Object.entries(study.scenarios).map(([id, s]) =>
+    html`<h4>Design day ${id}: peak total heat gain</h4>
+<figure>${
+      tornado(id, s.peakHeatGain, display)
+    }<figcaption>Change of the peak total heat gain of ${id} when one property of one material is lowered (blue) or raised (red) by ${percent} %, largest effects first; each bar is labelled by material and property, in the order of the table below.</figcaption></figure>
+${
+      effectTable(
+        `Effect on the peak total heat gain of ${id}`,
+        s.peakHeatGain,
+        s.dropped.peakHeatGain,
+        study,
+        display,
+        "heatGain",
+      )
+    }
+${conditionTable(id, s.conditions, s.dropped.conditions, study, display)}`
+  );
+  const constructions = Object.entries(study.constructions).map(([id, c]) =>
+    html`<h4>Construction ${id}</h4>
+${effectTable(`Effect on the U-value of ${id}`, c.U, c.dropped.U, study, display, "transmittance")}
+${effectTable(`Effect on the time lag of ${id}`, c.timeLag_h, c.dropped.timeLag_h, study, display, "time")}`
+  );
+  return html`<section class="document"><h3 id="${sectionId}">${number} Sensitivity study</h3>
+<p>Each material property was lowered and raised by ${percent} % in every layer that uses the material, one property at a time, with all else held; the affected constructions were recomputed (root method) and so was each design day. Each design day's conditions were varied the same way, one at a time, by the steps stated in its table (absorptance ±0.1, h_o ±${percent} %, design maximum dry bulb and daily range ±2 K, indoor temperature ±1 K: our stated steps, common practice, no source). Effects whose changes are both below ${
+    formatTrim(study.threshold * 100, 3)
+  } % of the base value are left out and counted. The study shows which inputs the results depend on most, so that their sources can be checked first; it is not a statement of uncertainty.</p>
+${scenarios}
+${constructions}
+</section>`;
+}

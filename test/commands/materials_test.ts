@@ -46,7 +46,10 @@ Deno.test("materials lists every built-in entry with its values, class and sourc
     assert.ok(m.source.replace(/\s+/g, " ").includes(source!), `${m.id}: ${source}`);
     assert.ok(source!.length >= m.source.length - "from memory ()".length, `${m.id}: ${source}`);
   }
-  assert.match(out.trimEnd().split("\n").at(-1)!, new RegExp(`^${LIBRARY_MATERIALS.length} of \\d+ built-in`));
+  assert.match(
+    out.trimEnd().split("\n").at(-1)!,
+    new RegExp(`^${LIBRARY_MATERIALS.length} of \\d+ built-in`),
+  );
 });
 
 Deno.test("materials --format json gives every entry with SI units in the keys and the full source", async () => {
@@ -104,7 +107,10 @@ Deno.test("materials with no match says so on one line and exits 1", async () =>
   const none = await run(["materials", "--search", "render-thin-coat"]);
   assert.equal(none.code, 1);
   assert.equal(none.out, "");
-  assert.equal(none.err, 'fluxnote materials: no built-in material with "render-thin-coat" in its id or name\n');
+  assert.equal(
+    none.err,
+    'fluxnote materials: no built-in material with "render-thin-coat" in its id or name\n',
+  );
   const json = await run(["materials", "--search", "unobtainium", "--class", "steel", "--format", "json"]);
   assert.equal(json.code, 1);
   assert.deepEqual(JSON.parse(json.out), []);
@@ -125,7 +131,10 @@ Deno.test("materials is in the help, with its own --help, and refuses arguments 
 
 Deno.test("source state reads the library's words: from memory, unconfirmed, else confirmed", () => {
   // Wordings the library and project sources use (src/materials/library*.ts, README "Summary and issue").
-  assert.equal(sourceConfirmation('from memory (believed ISO 10456:2007, Table 3, row "steel")'), "from memory");
+  assert.equal(
+    sourceConfirmation('from memory (believed ISO 10456:2007, Table 3, row "steel")'),
+    "from memory",
+  );
   assert.equal(sourceConfirmation("conductivity: Berge Table 14.15; density from memory"), "from memory");
   assert.equal(sourceConfirmation("manufacturer's data sheet, not yet confirmed"), "unconfirmed");
   assert.equal(sourceConfirmation("supplier value, to be confirmed"), "unconfirmed");

@@ -1,9 +1,9 @@
 /**
  * The text form of `fluxnote materials`: two header lines (quantity, then SI unit) and one aligned row per
- * entry. Given a width (a terminal's), the name and then the source column are cut with "…" until the lines
- * fit, down to a floor; ids are never cut (they are what a layer's `material:` names). Without a width (a
- * pipe, a file) nothing is cut. The source column leaves out a leading "from memory", which the source-state
- * column already says.
+ * entry. Given a width (a terminal's), the name and source columns are cut with "…" to share the room the
+ * other columns leave, each down to a floor; ids are never cut (they are what a layer's `material:` names).
+ * Without a width (a pipe, a file) nothing is cut. The source column leaves out a leading "from memory", which
+ * the source-state column already says.
  */
 import type { MaterialListingRow } from "./libraryListing.ts";
 
@@ -17,14 +17,12 @@ interface Column {
   readonly header: string;
   readonly unit: string;
   readonly align: Align;
-  /** Cut when a width is given (name before source), never below this many characters. */
-  readonly cutTo?: number;
   cell(row: MaterialListingRow): string;
 }
 
 const COLUMNS: readonly Column[] = [
   { header: "id", unit: "", align: "left", cell: (r) => r.id },
-  { header: "name", unit: "", align: "left", cutTo: MIN_NAME, cell: (r) => r.name },
+  { header: "name", unit: "", align: "left", cell: (r) => r.name },
   {
     header: "λ",
     unit: "W/(m·K)",
@@ -51,7 +49,7 @@ const COLUMNS: readonly Column[] = [
   },
   { header: "class", unit: "", align: "left", cell: (r) => r.materialClass },
   { header: "source state", unit: "", align: "left", cell: (r) => r.confirmation },
-  { header: "source", unit: "", align: "left", cutTo: MIN_SOURCE, cell: (r) => sourceShown(r) },
+  { header: "source", unit: "", align: "left", cell: (r) => sourceShown(r) },
 ];
 
 /** The source without a leading "from memory" (and its colon or brackets) when the state column says so. */
@@ -75,16 +73,23 @@ function pad(text: string, width: number, align: Align): string {
 
 const GAP = 2;
 
-/** Column widths that fit `width`: the name shrinks first, then the source. */
+/** The name's share of the room left by the uncut columns when name and source must be cut (no source). */
+const NAME_SHARE = 0.4;
+
+/**
+ * Column widths that fit `width`: the uncut columns keep theirs, the name gets up to `NAME_SHARE` of the rest
+ * (at least its floor) and the source what remains (at least its floor).
+ */
 function fittedWidths(natural: readonly number[], width: number | undefined): number[] {
   const widths = [...natural];
-  if (width === undefined) return widths;
-  const excess = () => widths.reduce((a, b) => a + b, 0) + GAP * (widths.length - 1) - width;
-  for (let i = 0; i < COLUMNS.length && excess() > 0; i++) {
-    const floor = COLUMNS[i]!.cutTo;
-    if (floor === undefined) continue;
-    widths[i] = Math.max(Math.min(floor, natural[i]!), widths[i]! - excess());
-  }
+  const total = natural.reduce((a, b) => a + b, 0) + GAP * (natural.length - 1);
+  if (width === undefined || total <= width) return widths;
+  const name = COLUMNS.findIndex((c) => c.header === "name");
+  const source = COLUMNS.findIndex((c) => c.header === "source");
+  const room = width - (total - natural[name]! - natural[source]!);
+  const nameWidth = Math.min(natural[name]!, Math.max(MIN_NAME, Math.floor(room * NAME_SHARE)));
+  widths[name] = Math.max(nameWidth, room - natural[source]!);
+  widths[source] = Math.min(natural[source]!, Math.max(MIN_SOURCE, room - widths[name]!));
   return widths;
 }
 

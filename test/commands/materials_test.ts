@@ -156,6 +156,12 @@ Deno.test("materials on a terminal cuts names and sources to its width, never an
   for (const [i, m] of LIBRARY_MATERIALS.entries()) assert.ok(lines[i + 2]!.startsWith(`${m.id} `), m.id);
   assert.ok(lines.some((l) => l.includes("…")));
   assert.match(lines.at(-1)!, /cut at "…" \(--format json gives them in full\)$/);
+  // With room to spare the name stays whole and only the long sources are cut.
+  const wool = listLibraryMaterials({ materialClass: "mineral-wool" });
+  assert.ok(wool.ok);
+  const roomy = listingTextLines(wool.rows, LIBRARY_MATERIALS.length, 170);
+  for (const row of wool.rows) assert.ok(roomy.some((l) => l.includes(`  ${row.name}  `)), row.name);
+  assert.ok(roomy.every((l) => [...l].length <= 170));
   const uncut = listingTextLines(listing.rows, LIBRARY_MATERIALS.length);
   assert.ok(!uncut.some((l) => l.includes("…")) && !uncut.at(-1)!.includes("cut"));
 });

@@ -3,6 +3,7 @@ import { type CommandIo, runBuild } from "./commands/build.ts";
 import { runCheck } from "./commands/check.ts";
 import { runDiff } from "./commands/diff.ts";
 import { runInit } from "./commands/init.ts";
+import { runMaterials } from "./commands/materials.ts";
 import { runVerify } from "./commands/verify.ts";
 import { runKeygen } from "./commands/signingKeys.ts";
 import { runServe } from "./commands/serve.ts";
@@ -28,6 +29,8 @@ commands:
                                            re-run the embedded inputs and compare
   keygen <name>                            make a signing key pair <name>.private.pem, <name>.public.pem
   init <dir>                               start a new project from the template
+  materials [--class <class>] [--search <text>] [--format text|json]
+                                           list the built-in materials library
   serve <project> [--port N]               live preview on 127.0.0.1, rebuilt on every change
   help [command]                           show help
 
@@ -86,6 +89,15 @@ Exit codes: 0 compared (whether or not anything differs); 1 input errors on eith
 
 Creates <dir> with a starter project (project.md, materials, constructions, a design day) to edit.
 Refuses a folder that already holds files. Exit codes: 0 created; 2 usage error or folder not empty.`,
+  materials: `usage: fluxnote materials [--class <class>] [--search <text>] [--format text|json]
+
+Lists the built-in materials library: id (what a layer's material: names), name, λ, ρ and c (or R for an
+air layer), class, and the source with its state: confirmed (read in the cited document or a copy of it),
+from memory, or unconfirmed. Long names and sources are cut in the text form.
+--class <class>   only entries of this material class (an unknown class lists the classes)
+--search <text>   only entries whose id or name contains the text (case-insensitive)
+--format json     print an array of objects, SI units in the keys (conductivity_W_per_mK, …)
+Exit codes: 0 listed; 1 nothing matched; 2 unknown class or usage error.`,
   check: `usage: fluxnote check <project> [--format text|json] [--strict]
 
 Runs all validation of a build and reports every finding as path:line:col: severity: message.
@@ -162,6 +174,20 @@ const COMMANDS: Record<string, CommandSpec> = {
     options: {},
     positionals: { count: 1, what: "one folder name" },
     run: ([target = ""], _values, io) => runInit(target, io),
+  },
+  materials: {
+    options: {
+      class: { type: "string" },
+      search: { type: "string" },
+      format: { type: "string", default: "text" },
+    },
+    positionals: { count: 0, what: "no arguments" },
+    run: (_positionals, values, io) =>
+      runMaterials({
+        ...(typeof values.class === "string" ? { materialClass: values.class } : {}),
+        ...(typeof values.search === "string" ? { search: values.search } : {}),
+        format: choice("format", values.format, ["text", "json"] as const),
+      }, io),
   },
   serve: {
     options: { port: { type: "string", default: "8470" } },

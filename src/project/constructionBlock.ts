@@ -229,7 +229,7 @@ function readLayer(
           `Unknown material "${describeCodePoints(materialId)}" in the ${what}`,
           `${
             didYouMean(materialId, materials.ids(), "materials")
-          } Otherwise define it in a \`material\` block or use a built-in id`,
+          } Otherwise define it in a \`material\` block or use a built-in id (\`fluxnote materials\` lists them)`,
         ),
       );
       return undefined;

@@ -142,7 +142,16 @@ const ROWS_PER_CHUNK = 96;
 
 /** The text of a table in pieces of `ROWS_PER_CHUNK` rows, so that a large table never sits in memory whole. */
 export function* csvChunks(table: CsvTable, locale: CsvLocale): Generator<string> {
-  const line = (cells: readonly CsvValue[]) => cells.map((c) => csvCell(c, locale)).join(locale.separator);
+  const line = (cells: readonly CsvValue[]) => {
+    // A loop, not map/join: a weather year at scale writes some 10⁸ cells.
+    let text = "";
+    for (let i = 0; i < cells.length; i++) {
+      const cell = cells[i]!;
+      if (i > 0) text += locale.separator;
+      text += typeof cell === "number" ? csvNumber(cell, locale.decimal) : csvCell(cell, locale);
+    }
+    return text;
+  };
   const comment = table.comment === undefined ? "" : `# ${table.comment.replace(/[\r\n]+/g, " ")}\n`;
   yield `${locale.byteOrderMark ? "\uFEFF" : ""}${comment}${line(table.header)}\n`;
   const block: string[] = [];

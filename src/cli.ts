@@ -48,9 +48,10 @@ a folder holding it, a file, a link or a folder of other files is refused and le
                covers the whole page, the signing key's fingerprint and the signing time.
 --pdf          also print package.pdf through the local Chromium (Debian's chromium package), paper from
                the front matter's paper: A4 (default) or Letter; without Chromium nothing is written.
---csv-locale <name>  the CSV dialect: comma-point (default: "," between fields, decimal point) or
-               semicolon-comma (";" between fields, decimal comma, UTF-8 byte-order mark) for spreadsheets
-               set to a decimal-comma locale.
+--csv-locale comma-point|semicolon-comma
+               the CSV dialect: "," between fields and decimal points (comma-point, the default), or ";"
+               between fields, decimal commas and a UTF-8 byte-order mark for spreadsheets set to a
+               decimal-comma locale (semicolon-comma).
 Exit codes: 0 success; 1 input errors, a refused --out or a failed computed check (the package is still
 written then); 2 usage error, an unreadable --sign key (nothing is written) or internal fault.`,
   verify: `usage: fluxnote verify <package.html> [--key <public key>]

@@ -12,6 +12,7 @@ import { hideEnvironmentFromDependencies } from "./commands/quietDependencies.ts
 import { streamWriter, terminalIo } from "./commands/terminalIo.ts";
 import { terminalSafe } from "./project/displayText.ts";
 import { TOOL_VERSION } from "./version.ts";
+import { CSV_LOCALE_NAMES, DEFAULT_CSV_LOCALE } from "./tables/csvTable.ts";
 
 const USAGE =
   `fluxnote ${TOOL_VERSION} — heat flow through walls and roofs, as a reviewable calculation package
@@ -19,7 +20,7 @@ const USAGE =
 usage: fluxnote <command> [options]
 
 commands:
-  build <project> [--out <dir>] [--sign <private key>] [--pdf]
+  build <project> [--out <dir>] [--sign <private key>] [--pdf] [--csv-locale <name>]
                                            write package.html, results.json and csv/
   check <project> [--format text|json] [--strict]
                                            validate the project, write nothing
@@ -37,7 +38,7 @@ commands:
 Run "fluxnote <command> --help" for a command's options.`;
 
 const HELP: Record<string, string> = {
-  build: `usage: fluxnote build <project> [--out <dir>] [--sign <private key>] [--pdf]
+  build: `usage: fluxnote build <project> [--out <dir>] [--sign <private key>] [--pdf] [--csv-locale <name>]
 
 Reads the project folder, computes every construction and writes one output set:
   <dir>/package.html   the self-contained calculation package
@@ -50,6 +51,10 @@ a folder holding it, a file, a link or a folder of other files is refused and le
                covers the whole page, the signing key's fingerprint and the signing time.
 --pdf          also print package.pdf through the local Chromium (Debian's chromium package), paper from
                the front matter's paper: A4 (default) or Letter; without Chromium nothing is written.
+--csv-locale comma-point|semicolon-comma
+               the CSV dialect: "," between fields and decimal points (comma-point, the default), or ";"
+               between fields, decimal commas and a UTF-8 byte-order mark for spreadsheets set to a
+               decimal-comma locale (semicolon-comma).
 Exit codes: 0 success; 1 input errors, a refused --out or a failed computed check (the package is still
 written then); 2 usage error, an unreadable --sign key (nothing is written) or internal fault.`,
   verify: `usage: fluxnote verify <package.html> [--key <public key>]
@@ -128,7 +133,12 @@ function choice<T extends string>(option: string, value: unknown, allowed: reado
 
 const COMMANDS: Record<string, CommandSpec> = {
   build: {
-    options: { out: { type: "string" }, sign: { type: "string" }, pdf: { type: "boolean" } },
+    options: {
+      out: { type: "string" },
+      sign: { type: "string" },
+      pdf: { type: "boolean" },
+      "csv-locale": { type: "string", default: DEFAULT_CSV_LOCALE },
+    },
     positionals: { count: 1, what: "one project folder" },
     run: ([project = ""], values, io) =>
       runBuild({
@@ -136,6 +146,7 @@ const COMMANDS: Record<string, CommandSpec> = {
         ...(typeof values.out === "string" ? { out: values.out } : {}),
         ...(typeof values.sign === "string" ? { sign: values.sign } : {}),
         ...(values.pdf === true ? { pdf: true } : {}),
+        csvLocale: choice("csv-locale", values["csv-locale"], CSV_LOCALE_NAMES),
       }, io),
   },
   check: {

@@ -7,6 +7,7 @@ import { OutputRefused, writeOutputSet } from "./writeOutput.ts";
 import { TOOL_VERSION } from "../version.ts";
 import { type PaperSize, renderPdf } from "./pdf.ts";
 import type { OutputFile } from "./writeOutput.ts";
+import type { CsvLocaleName } from "../tables/csvTable.ts";
 
 export type { CommandIo } from "./commandIo.ts";
 import type { CommandIo } from "./commandIo.ts";
@@ -19,6 +20,8 @@ export interface BuildOptions {
   /** Also print package.pdf through the local Chromium (this path, or Debian's when absent). */
   readonly pdf?: boolean;
   readonly chromiumPath?: string;
+  /** The CSV dialect (`build --csv-locale`); comma-separated with a decimal point when absent. */
+  readonly csvLocale?: CsvLocaleName;
   /** Test hook: called after rendering, before the output set is swapped in. */
   readonly beforeSwap?: () => void | Promise<void>;
   /** Test hook: called when the old output set has been moved aside, before the new one is put in place. */
@@ -43,7 +46,7 @@ export async function runBuild(options: BuildOptions, io: CommandIo): Promise<nu
   printDiagnostics(loaded.diagnostics, io.stderr);
   // Progress goes to stderr only when a person watches it (a terminal), never into logs or pipes.
   const progress = Deno.stderr.isTerminal() ? (message: string) => io.stderr(`… ${message}`) : undefined;
-  const produced = produceOutputs(loaded, progress);
+  const produced = produceOutputs(loaded, progress, options.csvLocale);
   if (!produced.ok) {
     if (loaded.model !== undefined) printDiagnostics(produced.diagnostics, io.stderr);
     const count = produced.diagnostics.filter((d) => d.severity === "error").length;

@@ -8,7 +8,9 @@ import { issueGate } from "../results/issueGate.ts";
 import { buildSummary } from "../results/summary.ts";
 import type { ResultsJson } from "../results/types.ts";
 import { TOOL_VERSION } from "../version.ts";
-import { constructionsCsv, designDayCsv, factorsCsv } from "./csv.ts";
+import { constructionsCsv, csvOutputFiles, designDayCsv, factorsCsv } from "./csv.ts";
+import { summaryCsv } from "./summaryCsv.ts";
+import { CSV_LOCALES, type CsvLocaleName, DEFAULT_CSV_LOCALE } from "../tables/csvTable.ts";
 import type { LoadedProject } from "./loadProject.ts";
 import type { OutputFile } from "./writeOutput.ts";
 
@@ -30,8 +32,15 @@ export function runtimeVersion(): string {
   return `Deno ${Deno.version.deno}`;
 }
 
-/** Computes and renders a loaded project; pure apart from reading the runtime version. */
-export function produceOutputs(loaded: LoadedProject, progress?: (message: string) => void): ProduceOutcome {
+/**
+ * Computes and renders a loaded project; pure apart from reading the runtime version. The CSV files are written
+ * in `csvLocale` (comma-separated with a decimal point unless told otherwise).
+ */
+export function produceOutputs(
+  loaded: LoadedProject,
+  progress?: (message: string) => void,
+  csvLocale: CsvLocaleName = DEFAULT_CSV_LOCALE,
+): ProduceOutcome {
   if (loaded.model === undefined) return { ok: false, diagnostics: loaded.diagnostics };
   const outcome = computeProject(loaded.model, loaded.inputRecords, loaded.dataTexts, progress);
   if (!outcome.ok) return { ok: false, diagnostics: outcome.diagnostics };
@@ -73,18 +82,15 @@ export function produceOutputs(loaded: LoadedProject, progress?: (message: strin
   const files: OutputFile[] = [
     { path: "package.html", text: page },
     { path: "results.json", text: resultsText },
-    { path: "csv/constructions.csv", text: constructionsCsv(loaded.model, results) },
-    ...loaded.model.constructions.map((c) => ({
-      path: `csv/factors-${c.id}.csv`,
-      text: factorsCsv(c.id, results),
-    })),
-    ...loaded.model.scenarios.filter((s) => s.kind === "design-day").map((s) => ({
-      path: `csv/scenario-${s.id}.csv`,
-      text: designDayCsv(s.id, results),
-    })),
-    ...computed.csvFiles.map((
-      f,
-    ) => (f.chunks === undefined ? { path: f.path, text: f.text } : { path: f.path, chunks: f.chunks })),
+    ...csvOutputFiles([
+      constructionsCsv(loaded.model, results),
+      summaryCsv(results),
+      ...loaded.model.constructions.map((c) => factorsCsv(c.id, results)),
+      ...loaded.model.scenarios.filter((s) => s.kind === "design-day").map((s) =>
+        designDayCsv(s.id, results)
+      ),
+      ...computed.csvFiles,
+    ], CSV_LOCALES[csvLocale]),
   ];
   return { ok: true, outputs: { results, resultsJsonText: resultsText, page, files } };
 }

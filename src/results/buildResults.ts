@@ -13,6 +13,7 @@ import { formatPosition } from "../project/position.ts";
 import { computeDesignDay, type ScenarioContext } from "../scenarios/designDay.ts";
 import { computeHeating } from "../scenarios/heating.ts";
 import { heatingCsv } from "../scenarios/heatingCsv.ts";
+import type { CsvTable } from "../tables/csvTable.ts";
 import { computeWeatherYear } from "../scenarios/weatherYear.ts";
 import { weatherCoverage } from "../scenarios/weatherPeriod.ts";
 import { weatherBudget } from "../scenarios/weatherBudget.ts";
@@ -38,12 +39,8 @@ export interface ComputedProject {
   readonly results: ResultsJson;
   readonly steady: Readonly<Record<string, SteadyState>>;
   readonly analyses: Readonly<Record<string, DynamicAnalysis>>;
-  /** Extra CSV files to write under csv/ (hourly series of weather years). */
-  readonly csvFiles: readonly {
-    readonly path: string;
-    readonly text: string;
-    readonly chunks?: () => Iterable<string>;
-  }[];
+  /** CSV tables computed with the scenarios (weather-year series and daily summaries, heating surfaces). */
+  readonly csvFiles: readonly CsvTable[];
 }
 
 export type ComputeOutcome =
@@ -152,7 +149,7 @@ interface ScenarioParts {
   readonly methodNotes: MethodNoteResult[];
   readonly assumptions: Assumption[];
   readonly warnings: { at: string; message: string }[];
-  readonly csvFiles: { path: string; readonly text: string; chunks?: () => Iterable<string> }[];
+  readonly csvFiles: CsvTable[];
   readonly problems: Diagnostic[];
 }
 

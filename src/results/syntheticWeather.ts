@@ -4,6 +4,7 @@
  * items, the summary, the cautions and the stamps of the scenario's tables and plots all read it from here.
  */
 import type { Model } from "../project/model.ts";
+import type { CsvTable } from "../tables/csvTable.ts";
 import type { ResultsJson, SyntheticWeatherResults } from "./types.ts";
 
 /** The scenario's `synthetic` key wins over the file's `# synthetic:` comment; either marks the results. */
@@ -36,30 +37,13 @@ export function syntheticScenarios(
 /** The words of every stamp on output derived from synthetic weather. */
 export const SYNTHETIC_STAMP = "SYNTHETIC WEATHER — illustration only";
 
-/** A CSV file of the package: its text, or its text in pieces for large files. */
-interface CsvFile {
-  path: string;
-  readonly text: string;
-  chunks?: () => Iterable<string>;
-}
-
 /**
  * Stamps a CSV derived from synthetic weather with a first comment line `# SYNTHETIC WEATHER — …` (the weather
  * file's own comment syntax); a spreadsheet shows it as one first row above the column names.
  */
-export function stampSyntheticCsv(file: CsvFile, mark: SyntheticWeatherResults): CsvFile {
-  const line = `# ${SYNTHETIC_STAMP}: synthetic ${
+export function stampSyntheticCsv(table: CsvTable, mark: SyntheticWeatherResults): CsvTable {
+  const comment = `${SYNTHETIC_STAMP}: synthetic ${
     mark.from === "file" ? "per the weather file" : "per the scenario"
-  }${mark.note === "" ? "" : `, ${mark.note.replace(/[\r\n]+/g, " ")}`}\n`;
-  const inner = file.chunks;
-  return inner === undefined ? { path: file.path, text: line + file.text } : {
-    path: file.path,
-    get text() {
-      return line + file.text;
-    },
-    chunks: function* () {
-      yield line;
-      yield* inner();
-    },
-  };
+  }${mark.note === "" ? "" : `, ${mark.note.replace(/[\r\n]+/g, " ")}`}`;
+  return { ...table, comment };
 }

@@ -1,41 +1,42 @@
-/** The CSV of a heating scenario, `csv/heating-<id>.csv`: one row per surface, SI units. */
+/** The CSV of a heating scenario, `csv/heating-<id>.csv`: one row per surface, then the total heat loss. */
 import type { HeatingResults } from "./heatingTypes.ts";
+import { type CsvTable, csvTable, type CsvValue, verdictCell } from "../tables/csvTable.ts";
 
 const HEADER = [
   "surface",
   "construction",
   "area_m2",
-  "U_W_per_m2K",
+  "U_W_m2K",
   "heat_loss_W",
-  "R_si_moisture_m2K_per_W",
-  "inside_surface_C",
-  "f_Rsi",
-  "f_Rsi_min",
-  "dew_point_C",
-  "surface_condensation",
-  "mould",
-  "U_c_W_per_m2K",
+  "R_si_moisture_m2K_W",
+  "inside_surface_degC",
+  "f_Rsi_1",
+  "f_Rsi_min_1",
+  "dew_point_degC",
+  "surface_condensation_verdict",
+  "mould_verdict",
+  "U_c_W_m2K",
 ];
 
-/** Path and text of the heating CSV; ids are validated identifiers, so no cell needs quoting. */
-export function heatingCsv(id: string, r: HeatingResults): { path: string; text: string } {
-  const rows = Object.entries(r.surfaces).map(([sid, s]) =>
-    [
-      sid,
-      s.construction,
-      s.area,
-      s.U,
-      s.heatLoss,
-      s.moistureSurfaceResistance,
-      s.insideSurfaceTemperature,
-      s.fRsi,
-      s.fRsiMin,
-      s.dewPoint,
-      s.surfaceCondensation.pass ? "pass" : "fail",
-      s.mould.pass ? "pass" : "fail",
-      s.correctedU,
-    ].join(",")
-  );
-  const total = ["total", "", "", "", r.totalHeatLoss, "", "", "", "", "", "", "", ""].join(",");
-  return { path: `csv/heating-${id}.csv`, text: `${[HEADER.join(","), ...rows, total].join("\n")}\n` };
+/** The heating table: per surface its figures and ISO 13788 verdicts, and a last row `total` with the heat loss. */
+export function heatingCsv(id: string, r: HeatingResults): CsvTable {
+  const rows: CsvValue[][] = Object.entries(r.surfaces).map(([sid, s]) => [
+    sid,
+    s.construction,
+    s.area,
+    s.U,
+    s.heatLoss,
+    s.moistureSurfaceResistance,
+    s.insideSurfaceTemperature,
+    s.fRsi,
+    s.fRsiMin,
+    s.dewPoint,
+    verdictCell(s.surfaceCondensation.pass),
+    verdictCell(s.mould.pass),
+    s.correctedU,
+  ]);
+  const total: CsvValue[] = HEADER.map(() => null);
+  total[0] = "total";
+  total[4] = r.totalHeatLoss;
+  return csvTable(`csv/heating-${id}.csv`, HEADER, [...rows, total]);
 }

@@ -2,6 +2,7 @@ import type { EnergyTotals } from "./types.ts";
 import { civilFromDays, daysFromCivil } from "../climate/weatherTime.ts";
 import type { StepLabels } from "./weatherBoundary.ts";
 import type { WeatherSeries } from "../climate/weatherCsv.ts";
+import type { CsvTable, CsvValue } from "../tables/csvTable.ts";
 
 /** `scenarios.<id>.weather` of a weather scenario in results.json. */
 export interface WeatherFileSummary {
@@ -97,13 +98,6 @@ export function dailySummary(
   return { max: max.map(round), min: min.map(round), mean: sum.map((s, d) => round(s / count[d]!)) };
 }
 
-/** A number as plain decimal text with `decimals` places (no exponent, no "-0"); empty for a non-finite value. */
-export function plainNumber(value: number, decimals: number): string {
-  if (!Number.isFinite(value)) return "";
-  const text = value.toFixed(decimals);
-  return /^-0(\.0*)?$/.test(text) ? text.slice(1) : text;
-}
-
 /** One surface's columns in the hourly CSV. */
 export interface CsvSurface {
   readonly id: string;
@@ -114,83 +108,80 @@ export interface CsvSurface {
   readonly areaM2: number;
 }
 
-/**
- * The hourly CSV of a weather scenario: `time`, `outdoor_degC`, `indoor_degC`, then per surface
- * `<id>:incident_W_per_m2`, `<id>:sol_air_degC`, `<id>:inside_flux_W_per_m2`, `<id>:heat_gain_W`, and
- * `total_heat_gain_W`; one row per step, LF line ends.
- */
-export function weatherCsvText(
-  timeLabels: StepLabels,
-  outdoorC: ArrayLike<number>,
-  indoorC: ArrayLike<number>,
-  surfaces: readonly CsvSurface[],
-  totalW: ArrayLike<number>,
-): string {
-  return [...weatherCsvChunks(timeLabels, outdoorC, indoorC, surfaces, totalW)].join("");
+/** Columns of one surface in the hourly CSV, after `<id>:`. */
+const SURFACE_COLUMNS = ["incident_W_m2", "sol_air_degC", "inside_flux_W_m2", "heat_gain_W"] as const;
+
+/** The step series of a weather scenario's hourly CSV, held as arrays (the rows are made as they are written). */
+export interface WeatherCsvSeries {
+  readonly timeLabels: StepLabels;
+  readonly outdoorC: ArrayLike<number>;
+  readonly indoorC: ArrayLike<number>;
+  readonly surfaces: readonly CsvSurface[];
+  readonly totalW: ArrayLike<number>;
 }
 
-/** The same CSV as `weatherCsvText`, produced a block of rows at a time so a large year never sits in memory whole. */
-export function* weatherCsvChunks(
-  timeLabels: StepLabels,
-  outdoorC: ArrayLike<number>,
-  indoorC: ArrayLike<number>,
-  surfaces: readonly CsvSurface[],
-  totalW: ArrayLike<number>,
-): Generator<string> {
-  const quote = (name: string) => (/[",\n\r]/.test(name) ? `"${name.replaceAll('"', '""')}"` : name);
-  const header = ["time", "outdoor_degC", "indoor_degC"];
-  for (const s of surfaces) {
-    header.push(
-      ...["incident_W_per_m2", "sol_air_degC", "inside_flux_W_per_m2", "heat_gain_W"].map((c) =>
-        quote(`${s.id}:${c}`)
-      ),
-    );
-  }
-  header.push("total_heat_gain_W");
-  yield `${header.join(",")}\n`;
-  const block: string[] = [];
-  for (let k = 0; k < timeLabels.length; k++) {
-    const cells = [timeLabels.at(k)!, plainNumber(outdoorC[k]!, 3), plainNumber(indoorC[k]!, 3)];
-    for (const s of surfaces) {
-      cells.push(
-        s.incidentWPerM2 === null ? "" : plainNumber(s.incidentWPerM2[k]!, 2),
-        plainNumber(s.solAirC[k]!, 3),
-        plainNumber(s.insideWPerM2[k]!, 4),
-        plainNumber(s.insideWPerM2[k]! * s.areaM2, 2),
-      );
-    }
-    cells.push(plainNumber(totalW[k]!, 2));
-    block.push(`${cells.join(",")}\n`);
-    if (block.length === 96 || k === timeLabels.length - 1) {
-      yield block.join("");
-      block.length = 0;
-    }
-  }
+/**
+ * The hourly CSV of a weather scenario: `time` (local standard time), `outdoor_degC`, `indoor_degC`, then per
+ * surface `<id>:incident_W_m2`, `<id>:sol_air_degC`, `<id>:inside_flux_W_m2`, `<id>:heat_gain_W`, and
+ * `total_heat_gain_W`; one row per step, made when the row is written.
+ */
+export function weatherCsvTable(path: string, series: WeatherCsvSeries): CsvTable {
+  const { timeLabels, outdoorC, indoorC, surfaces, totalW } = series;
+  return {
+    path,
+    header: [
+      "time",
+      "outdoor_degC",
+      "indoor_degC",
+      ...surfaces.flatMap((s) => SURFACE_COLUMNS.map((c) => `${s.id}:${c}`)),
+      "total_heat_gain_W",
+    ],
+    rows: function* () {
+      for (let k = 0; k < timeLabels.length; k++) {
+        const cells: CsvValue[] = [timeLabels.at(k)!, outdoorC[k]!, indoorC[k]!];
+        for (const s of surfaces) {
+          cells.push(
+            s.incidentWPerM2 === null ? null : s.incidentWPerM2[k]!,
+            s.solAirC[k]!,
+            s.insideWPerM2[k]!,
+            s.insideWPerM2[k]! * s.areaM2,
+          );
+        }
+        cells.push(totalW[k]!);
+        yield cells;
+      }
+    },
+  };
 }
 
 /**
  * The daily summary CSV of a weather scenario: `date`, then per surface `<id>:max_heat_gain_W`,
- * `<id>:min_heat_gain_W`, `<id>:mean_heat_gain_W`; one row per calendar day from `firstDate`, LF line ends.
+ * `<id>:min_heat_gain_W`, `<id>:mean_heat_gain_W`; one row per calendar day from `firstDate`.
  */
-export function dailyCsvText(firstDate: string, columns: readonly ({ id: string } & DailySummary)[]): string {
-  const quote = (name: string) => (/[",\n\r]/.test(name) ? `"${name.replaceAll('"', '""')}"` : name);
-  const header = [
-    "date",
-    ...columns.flatMap((c) => ["max", "min", "mean"].map((k) => quote(`${c.id}:${k}_heat_gain_W`))),
-  ];
+export function dailyCsvTable(
+  path: string,
+  firstDate: string,
+  columns: readonly ({ id: string } & DailySummary)[],
+): CsvTable {
   const [year, month, day] = firstDate.split("-").map(Number) as [number, number, number];
   const start = daysFromCivil(year, month, day);
   const days = columns[0]?.mean.length ?? 0;
-  const rows = [header.join(",")];
-  for (let d = 0; d < days; d++) {
-    const date = civilFromDays(start + d);
-    const label = `${date.year}-${String(date.month).padStart(2, "0")}-${String(date.day).padStart(2, "0")}`;
-    rows.push(
-      [label, ...columns.flatMap((c) => [c.max[d]!, c.min[d]!, c.mean[d]!].map((v) => plainNumber(v, 2)))]
-        .join(","),
-    );
-  }
-  return `${rows.join("\n")}\n`;
+  return {
+    path,
+    header: [
+      "date",
+      ...columns.flatMap((c) => ["max", "min", "mean"].map((k) => `${c.id}:${k}_heat_gain_W`)),
+    ],
+    rows: function* () {
+      for (let d = 0; d < days; d++) {
+        const date = civilFromDays(start + d);
+        const label = `${date.year}-${String(date.month).padStart(2, "0")}-${
+          String(date.day).padStart(2, "0")
+        }`;
+        yield [label, ...columns.flatMap((c) => [c.max[d]!, c.min[d]!, c.mean[d]!])];
+      }
+    },
+  };
 }
 
 /** The weather file's extent and dry-bulb and irradiation summary for results.json `scenarios.<id>.weather`. */

@@ -9,6 +9,7 @@ import type { Assumption, Scenario } from "../project/model.ts";
 import { formatPosition } from "../project/position.ts";
 import type { CheckResult } from "../engine/checkResult.ts";
 import type { EnergyTotals, ScenarioResults, SurfaceResults } from "./types.ts";
+import type { CsvTable } from "../tables/csvTable.ts";
 import type { ScenarioContext, ScenarioOutcome } from "./designDay.ts";
 import { surfaceParameters, type SurfaceWarning } from "./surfaceParameters.ts";
 import { coverageNotes, impliedCoverage, type PeriodJson, type WeatherCoverage } from "./weatherPeriod.ts";
@@ -22,13 +23,13 @@ import {
 } from "./weatherRecursion.ts";
 import {
   type CsvSurface,
-  dailyCsvText,
+  dailyCsvTable,
   type DailySummary,
   dailySummary,
   energyTotals,
   type TimedPeak,
   timedPeak,
-  weatherCsvChunks,
+  weatherCsvTable,
   type WeatherFileSummary,
   weatherSummary,
 } from "./weatherSummary.ts";
@@ -63,8 +64,8 @@ export interface WeatherScenarioResults extends ScenarioResults {
 /** A computed weather year with the CSV files to write under the output folder. */
 export interface WeatherOutcome extends ScenarioOutcome {
   readonly results: WeatherScenarioResults;
-  /** CSV files to write; `chunks`, when present, yields the same text block by block (used for large years). */
-  readonly csv: { path: string; readonly text: string; chunks?: () => Iterable<string> }[];
+  /** CSV files to write: the step series (rows made as they are written) and the daily summary. */
+  readonly csv: CsvTable[];
 }
 
 /** Computes a weather year: sol-air per surface, fluxes after a periodic warm-up, gains, summaries, checks and CSV. */
@@ -196,23 +197,20 @@ export function computeWeatherYear(
     },
     period: coverage.json,
   };
-  const chunks = () =>
-    weatherCsvChunks(boundary.timeLabels, boundary.outdoorC, boundary.indoorC, csvSurfaces, total);
-  const dailyText = dailyCsvText(boundary.firstDate, dailyColumns);
   return {
     results,
     checks,
     assumptions,
     warnings,
     csv: [
-      {
-        path: csvPath,
-        get text() {
-          return [...chunks()].join("");
-        },
-        chunks,
-      },
-      { path: dailyPath, text: dailyText },
+      weatherCsvTable(csvPath, {
+        timeLabels: boundary.timeLabels,
+        outdoorC: boundary.outdoorC,
+        indoorC: boundary.indoorC,
+        surfaces: csvSurfaces,
+        totalW: total,
+      }),
+      dailyCsvTable(dailyPath, boundary.firstDate, dailyColumns),
     ],
   };
 }
@@ -267,7 +265,7 @@ function notes(id: string, csvPath: string, dt: number, repeating: string): stri
     } warm-up (see assumptions).`,
     "Monthly totals: each step counts for the month of the interval ending at its time (time − Δ/2).",
     `Step series of scenario ${id} are in ${csvPath}, not in results.json: columns time, outdoor_degC, indoor_degC, ` +
-    "then per surface <id>:incident_W_per_m2, <id>:sol_air_degC, <id>:inside_flux_W_per_m2 (positive into the " +
+    "then per surface <id>:incident_W_m2, <id>:sol_air_degC, <id>:inside_flux_W_m2 (positive into the " +
     "room), <id>:heat_gain_W, and total_heat_gain_W.",
   ];
 }

@@ -95,6 +95,9 @@ function templateValue(
     : { key, text: value, col: text.indexOf(value, key.length) + 1, hint: known.hint };
 }
 
+/** Keeps a quoted placeholder readable: at most 60 characters, cut at a space. */
 function shorten(text: string): string {
-  return text.length > 60 ? `${text.slice(0, 57).trimEnd()}…` : text;
+  if (text.length <= 60) return text;
+  const cut = text.lastIndexOf(" ", 58);
+  return `${text.slice(0, cut > 30 ? cut : 58).replace(/[\s,;:]+$/, "")}…`;
 }

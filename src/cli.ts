@@ -22,7 +22,7 @@ usage: fluxnote <command> [options]
 commands:
   build <project> [--out <dir>] [--sign <private key>] [--pdf] [--csv-locale <name>]
                                            write package.html, results.json and csv/
-  check <project> [--format text|json] [--strict]
+  check <project> [--format text|json] [--strict] [--severity error|warning|note]
                                            validate the project, write nothing
   diff <a> <b> [--format text|json|html] [--out <file>]
                                            compare two revisions (folders or package.html files)
@@ -103,12 +103,15 @@ from memory, or unconfirmed. Long names and sources are cut in the text form.
 --search <text>   only entries whose id or name contains the text (case-insensitive)
 --format json     print an array of objects, SI units in the keys (conductivity_W_per_mK, …)
 Exit codes: 0 listed; 1 nothing matched; 2 unknown class or usage error.`,
-  check: `usage: fluxnote check <project> [--format text|json] [--strict]
+  check: `usage: fluxnote check <project> [--format text|json] [--strict] [--severity error|warning|note]
 
-Runs all validation of a build and reports every finding as path:line:col: severity: message.
---format json   print {"schema": "fluxnote-check/1", "findings": [...]} on stdout
---strict        warnings also give exit code 1
-Exit codes: 0 no errors; 1 errors (or warnings with --strict); 2 usage error.`,
+Runs all validation of a build. Errors print one by one as path:line:col: error: message; warnings and
+notes print grouped by rule (count, message, what they apply to, first path:line:col).
+--format json   print {"schema": "fluxnote-check/1", "findings": [...], "groups": [...]} on stdout
+--strict        warnings also give exit code 1, except those acknowledged in project.md
+                (acknowledged: [{ rule, subject, reason, by }])
+--severity S    print only findings of severity S and above (default note: all); the exit code is unchanged
+Exit codes: 0 no errors; 1 errors (or unacknowledged warnings with --strict); 2 usage error.`,
 };
 
 /** One command: its options, how many positional arguments it takes, and how it runs once parsed. */
@@ -150,13 +153,18 @@ const COMMANDS: Record<string, CommandSpec> = {
       }, io),
   },
   check: {
-    options: { format: { type: "string", default: "text" }, strict: { type: "boolean" } },
+    options: {
+      format: { type: "string", default: "text" },
+      strict: { type: "boolean" },
+      severity: { type: "string", default: "note" },
+    },
     positionals: { count: 1, what: "one project folder" },
     run: ([project = ""], values, io) =>
       runCheck({
         project,
         format: choice("format", values.format, ["text", "json"] as const),
         strict: values.strict === true,
+        severity: choice("severity", values.severity, ["error", "warning", "note"] as const),
       }, io),
   },
   diff: {

@@ -10,6 +10,7 @@ import {
   resolveProject,
 } from "../project/resolveProject.ts";
 import type { InputFileRecord } from "../results/types.ts";
+import { placeholderFindings } from "../review/placeholderRules.ts";
 
 /** A project read and resolved, ready to compute, or the diagnostics that stopped it. */
 export interface LoadedProject {
@@ -69,7 +70,12 @@ export async function loadProject(
     dataFiles.push(data.file);
     dataTexts.set(scenario.weatherPath, data.text);
   }
-  const diagnostics = sortDiagnostics([...read.diagnostics, ...resolved.diagnostics, ...dataProblems]);
+  const diagnostics = sortDiagnostics([
+    ...read.diagnostics,
+    ...resolved.diagnostics,
+    ...dataProblems,
+    ...placeholderFindings(read.sources),
+  ]);
   const library = resolved.libraryUsed.map((entry) => ({ ...entry, sha256: sha256Hex(entry.canonical) }));
   const inputRecords: InputFileRecord[] = [
     ...[...read.files, ...dataFiles].map((f) => ({ path: f.path, sha256: f.sha256 })),

@@ -57,7 +57,7 @@ export function produceOutputs(
   };
   const findings = sortDiagnostics([...loaded.diagnostics, ...reviewProject(loaded.model, computedResults)]);
   const summary = buildSummary(loaded.model, computedResults, findings);
-  const gate = issueGate(loaded.model, summary);
+  const gate = issueGate(loaded.model, summary, findings);
   if (gate.some((d) => d.severity === "error")) return { ok: false, diagnostics: sortDiagnostics(gate) };
   const results: ResultsJson = {
     ...computedResults,

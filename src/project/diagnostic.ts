@@ -17,6 +17,12 @@ export interface Diagnostic {
   readonly expected?: string;
   /** For plausibility findings: where the expected range comes from. */
   readonly source?: string;
+  /**
+   * What the finding is about, as `check` groups it and `acknowledged: [{ rule, subject }]` names it: a material
+   * id, a construction id, `<construction> layer <n>`, `<scenario>/<surface>`, a front-matter key. Absent: the
+   * finding's `file:line` stands for it.
+   */
+  readonly subject?: string;
 }
 
 /** Creates an error diagnostic; quoted values longer than 200 characters are shortened. */

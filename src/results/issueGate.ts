@@ -1,10 +1,12 @@
 /**
  * Issued means checked: a project with `status: issued` is refused while a blocking open item (from memory or
  * unconfirmed source, synthetic data, failed check) is not acknowledged in the front matter with a reason and a
- * name. An acknowledgement that matches no open item is a warning (a stale entry would hide a later one).
+ * name. An acknowledgement that matches no open item (or, for a finding, no warning or note) is a warning: a stale
+ * entry would hide a later one. `findings` (the review findings) only sharpen that warning's message.
  */
 import { type Diagnostic, error, warning } from "../project/diagnostic.ts";
 import type { Model } from "../project/model.ts";
+import { staleFindingMessage } from "../project/acknowledgedFindings.ts";
 import { parsePosition } from "../project/position.ts";
 import type { OpenItemKind, SummaryJson } from "./summaryTypes.ts";
 
@@ -16,7 +18,11 @@ const BLOCKING_REASON: Partial<Record<OpenItemKind, string>> = {
 };
 
 /** The diagnostics of the issue gate: errors for unacknowledged blocking items once the status is issued. */
-export function issueGate(model: Model, summary: SummaryJson): Diagnostic[] {
+export function issueGate(
+  model: Model,
+  summary: SummaryJson,
+  findings: readonly Diagnostic[] = [],
+): Diagnostic[] {
   const out: Diagnostic[] = [];
   for (const ack of model.info.acknowledged ?? []) {
     const matches = summary.openItems.some((i) => i.id === ack.item || i.kind === ack.item);
@@ -24,8 +30,12 @@ export function issueGate(model: Model, summary: SummaryJson): Diagnostic[] {
       out.push(warning(
         ack.at,
         "acknowledged-nothing",
-        `Acknowledged item "${ack.item}" matches no open item`,
-        "copy an id from the open items of the summary (e.g. `synthetic-data:<scenario>`) or a kind; remove the entry if the item is closed",
+        ack.finding === undefined
+          ? `Acknowledged item "${ack.item}" matches no open item`
+          : staleFindingMessage(ack, findings),
+        ack.finding === undefined
+          ? "copy an id from the open items of the summary (e.g. `synthetic-data:<scenario>`) or a kind; remove the entry if the item is closed"
+          : "copy the rule and a subject from `fluxnote check` (a warning or a note); remove the entry if the finding is gone",
       ));
     }
   }

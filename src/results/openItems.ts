@@ -7,6 +7,7 @@ import type { Diagnostic } from "../project/diagnostic.ts";
 import type { Assumption, Model } from "../project/model.ts";
 import { formatPosition, type Position } from "../project/position.ts";
 import type { Acknowledgement } from "../project/signOff.ts";
+import { findingsAcknowledgedBy } from "../project/acknowledgedFindings.ts";
 import type { LimitResult } from "./limitResults.ts";
 import { BLOCKING_KINDS, type OpenItem, type OpenItemKind } from "./summaryTypes.ts";
 import { syntheticScenarios } from "./syntheticWeather.ts";
@@ -223,19 +224,26 @@ function unmetLimitItems(results: ResultsJson): Draft[] {
   );
 }
 
-/** `acknowledged: [{ item: "finding:<rule>" }]` records the review findings of that rule as seen and accepted. */
+/**
+ * `acknowledged: [{ rule, subject }]` (or `item: finding:<rule>[:<subject>]`) records the review findings it names
+ * as seen and accepted: one open item per acknowledgement that matches a warning or a note.
+ */
 function acknowledgedFindingItems(
   acks: readonly Acknowledgement[],
   findings: readonly Diagnostic[],
 ): Draft[] {
-  return acks.filter((a) => a.item.startsWith("finding:")).flatMap((a): Draft[] => {
-    const rule = a.item.slice("finding:".length);
-    const hits = findings.filter((f) => f.rule === rule && f.severity !== "error");
-    if (hits.length === 0) return [];
+  return acks.flatMap((a): Draft[] => {
+    const hits = findingsAcknowledgedBy(a, findings);
+    if (a.finding === undefined || hits.length === 0) return [];
+    const { rule, subject } = a.finding;
     return [{
       id: a.item,
       kind: "acknowledged-finding",
-      text: `Finding ${rule} (${hits.length}×), e.g. ${hits[0]!.message}`,
+      text: subject === undefined
+        ? `Finding ${rule} (${hits.length}×), e.g. ${hits[0]!.message}`
+        : `Finding ${rule} for ${subject}${hits.length > 1 ? ` (${hits.length}×), e.g.` : ":"} ${
+          hits[0]!.message
+        }`,
       at: formatPosition(hits[0]!.at),
     }];
   });

@@ -64,4 +64,5 @@ export const REVIEW_RULES: readonly ReviewRule[] = [
   rule("time-lag-long", "note", "time lag above 24 h"),
   rule("limit-not-met", "warning", "a code limit the user wrote (with its clause) is not met"),
   rule("limit-met", "note", "a code limit the user wrote (with its clause) is met"),
+  rule("placeholder-text", "warning", "text left from the template of `fluxnote init`"),
 ];

@@ -7,14 +7,14 @@
 import type { Diagnostic } from "../project/diagnostic.ts";
 import type { Model, TemperatureProfile } from "../project/model.ts";
 import type { Position } from "../project/position.ts";
-import { finding, num, range } from "./finding.ts";
+import { about, finding, num, range } from "./finding.ts";
 import { CONDITIONS } from "./limits.ts";
 
 /** Checks the indoor temperature of every scenario and the long-wave correction of every surface. */
 export function reviewConditions(model: Model): Diagnostic[] {
   const out: Diagnostic[] = [];
   for (const scenario of model.scenarios) {
-    out.push(...indoor(scenario.id, profileRange(scenario.indoor), scenario.at));
+    out.push(...about(scenario.id, indoor(scenario.id, profileRange(scenario.indoor), scenario.at)));
     for (const surface of scenario.surfaces) {
       const correction = surface.longwaveCorrectionK;
       if (correction === undefined) continue;
@@ -22,6 +22,7 @@ export function reviewConditions(model: Model): Diagnostic[] {
       out.push(finding({
         severity: "warning",
         at: surface.at,
+        subject: `${scenario.id}/${surface.id}`,
         rule: "longwave-correction-unusual",
         message:
           `Surface ${surface.id} of scenario ${scenario.id} has a long-wave correction outside the usual sol-air convention`,
@@ -34,7 +35,7 @@ export function reviewConditions(model: Model): Diagnostic[] {
     }
   }
   for (const heating of model.heatingScenarios ?? []) {
-    out.push(...indoor(heating.id, [heating.indoorC, heating.indoorC], heating.at));
+    out.push(...about(heating.id, indoor(heating.id, [heating.indoorC, heating.indoorC], heating.at)));
   }
   return out;
 }

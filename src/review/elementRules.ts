@@ -25,6 +25,7 @@ export function reviewElements(model: Model, results: ResultsJson): Diagnostic[]
       out.push(finding({
         severity: "warning",
         at: c.at,
+        subject: c.id,
         rule: "u-value-high",
         message: `${c.id} has a U-value higher than an opaque element normally has`,
         hint: "check for a missing layer, a thickness in the wrong unit, or surface resistances set to zero",
@@ -40,6 +41,7 @@ export function reviewElements(model: Model, results: ResultsJson): Diagnostic[]
       out.push(finding({
         severity: "warning",
         at: c.at,
+        subject: c.id,
         rule: "kappa-high",
         message: `${c.id} has an inside areal heat capacity κ1 above that of a semi-infinite stone wall`,
         hint: "check density and specific heat of the inner layers (kJ vs J, lb/ft³ vs kg/m³)",
@@ -53,6 +55,7 @@ export function reviewElements(model: Model, results: ResultsJson): Diagnostic[]
       out.push(finding({
         severity: "note",
         at: c.at,
+        subject: c.id,
         rule: "time-lag-long",
         message: `${c.id} has a time lag longer than one day`,
         hint: "plausible only for very massive elements; confirm the thicknesses",

@@ -13,6 +13,8 @@ export interface FindingSpec {
   readonly value?: string;
   readonly expected?: string;
   readonly source?: string;
+  /** What the finding is about (see `Diagnostic.subject`). */
+  readonly subject?: string;
 }
 
 /** Builds a diagnostic from a finding spec, leaving absent fields out (exact optional properties). */
@@ -27,7 +29,13 @@ export function finding(spec: FindingSpec): Diagnostic {
   if (spec.value !== undefined) out.value = spec.value;
   if (spec.expected !== undefined) out.expected = spec.expected;
   if (spec.source !== undefined) out.source = spec.source;
+  if (spec.subject !== undefined) out.subject = spec.subject;
   return out;
+}
+
+/** Names what each finding of the list is about (see `Diagnostic.subject`). */
+export function about(subject: string, list: readonly Diagnostic[]): Diagnostic[] {
+  return list.map((d) => ({ ...d, subject }));
 }
 
 /** Formats a number with four significant digits, plain for 0.001–999 999 and exponential otherwise. */

@@ -7,9 +7,9 @@ import { findMaterialClass } from "../materials/classes.ts";
 import { defaultSurfaceResistances } from "../materials/surfaceResistance.ts";
 import type { Diagnostic } from "../project/diagnostic.ts";
 import type { Construction, Model, ResolvedLayer } from "../project/model.ts";
-import { finding, num, range } from "./finding.ts";
+import { about, finding, num, range } from "./finding.ts";
 import { AIR_LAYER_NAME, SLIP } from "./limits.ts";
-import { layerClassId, layerLabel, MASONRY_CLASSES } from "./subjects.ts";
+import { layerClassId, layerLabel, layerSubject, MASONRY_CLASSES } from "./subjects.ts";
 
 /** Names that say a layer is a surface resistance (a membrane named "film" alone does not count). */
 export const SURFACE_FILM_NAME =
@@ -22,8 +22,12 @@ export function reviewLayers(model: Model): Diagnostic[] {
   const out: Diagnostic[] = [];
   for (const c of model.constructions) {
     c.layers.forEach((layer, index) => {
-      out.push(...thinMasonry(model, c, layer, index), ...largeResistance(c, layer, index));
-      out.push(...surfaceFilm(c, layer, index), ...airLayer(model, c, layer, index));
+      out.push(...about(layerSubject(c, index), [
+        ...thinMasonry(model, c, layer, index),
+        ...largeResistance(c, layer, index),
+        ...surfaceFilm(c, layer, index),
+        ...airLayer(model, c, layer, index),
+      ]));
     });
   }
   return out;

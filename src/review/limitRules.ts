@@ -38,6 +38,7 @@ export function reviewLimits(model: Model, results: ResultsJson): Diagnostic[] {
       out.push(finding({
         severity: l.pass ? "note" : "warning",
         at: c.at,
+        subject: `${c.id}/${l.limitKey}`,
         rule: l.pass ? "limit-met" : "limit-not-met",
         message: `${c.id} ${l.pass ? "meets" : "does NOT meet"} ${l.limitKey} (${where})`,
         ...(l.pass

@@ -7,7 +7,7 @@ import type { MassiveMaterialClass } from "../materials/classes.ts";
 import { MATERIAL_CLASSES } from "../materials/classes.ts";
 import type { Diagnostic } from "../project/diagnostic.ts";
 import type { Model } from "../project/model.ts";
-import { finding, num, range } from "./finding.ts";
+import { about, finding, num, range } from "./finding.ts";
 import { DERIVED, HARD, INSULATION_FLOOR, MINERAL, SLIP } from "./limits.ts";
 import { MINERAL_CLASSES, type PropertySubject, propertySubjects, SUPER_INSULATION } from "./subjects.ts";
 
@@ -23,7 +23,7 @@ export function reviewMaterials(model: Model): Diagnostic[] {
     if (own.length === 0) own.push(...mineralConsistency(s));
     const special = SUPER_INSULATION.test(s.name);
     if (own.length === 0 && s.materialClass === undefined && !special) own.push(...derived(s));
-    out.push(...own);
+    out.push(...about(s.subject, own));
   }
   return out;
 }

@@ -5,7 +5,7 @@
 
 import type { Diagnostic } from "../project/diagnostic.ts";
 import type { Construction, Model } from "../project/model.ts";
-import { finding } from "./finding.ts";
+import { about, finding } from "./finding.ts";
 import { INSULATION_MAX_CONDUCTIVITY } from "./limits.ts";
 import { isInsulationLayer, layerLabel } from "./subjects.ts";
 
@@ -33,7 +33,7 @@ export function proseBefore(model: Model, construction: Construction): string {
 export function reviewOrder(model: Model): Diagnostic[] {
   const out: Diagnostic[] = [];
   for (const c of model.constructions) {
-    out.push(...describedOrder(model, c), ...bareInsideInsulation(model, c));
+    out.push(...about(c.id, [...describedOrder(model, c), ...bareInsideInsulation(model, c)]));
   }
   return out;
 }

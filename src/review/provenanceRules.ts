@@ -9,7 +9,7 @@ import type { ResultsJson } from "../results/types.ts";
 import { finding } from "./finding.ts";
 import { parsePosition } from "../project/position.ts";
 import { proseBefore } from "./orderRules.ts";
-import { layerLabel } from "./subjects.ts";
+import { layerLabel, layerSubject } from "./subjects.ts";
 
 const PROVENANCE_SOURCE =
   "common practice, no source: a reviewable calculation names the reference of every input value";
@@ -26,6 +26,7 @@ export function reviewProvenance(model: Model, results?: ResultsJson): Diagnosti
     out.push(finding({
       severity: "warning",
       at: m.at,
+      subject: m.id,
       rule: "source-missing",
       message: `Material "${m.id}" gives no source for its values`,
       hint:
@@ -45,6 +46,7 @@ export function reviewProvenance(model: Model, results?: ResultsJson): Diagnosti
       out.push(finding({
         severity: cited ? "note" : "warning",
         at: layer.at,
+        subject: layerSubject(c, index),
         rule: cited ? "source-in-prose-only" : "source-missing",
         message: cited
           ? `The inline ${layerLabel(c, index)} cites its source only in the prose above the block`
@@ -64,6 +66,7 @@ export function reviewProvenance(model: Model, results?: ResultsJson): Diagnosti
       severity: "note",
       at: parsePosition(a.at),
       rule: "default-used",
+      subject: a.id.slice("default:".length),
       message: `Default in use: ${a.text}`,
       hint: "state the value in the input if the default does not fit this element",
       value: a.id,

@@ -6,7 +6,7 @@
 import type { Diagnostic } from "../project/diagnostic.ts";
 import type { Model, Scenario, ScenarioSurface } from "../project/model.ts";
 import type { ResultsJson } from "../results/types.ts";
-import { finding, num, range } from "./finding.ts";
+import { about, finding, num, range } from "./finding.ts";
 import { SURFACE } from "./limits.ts";
 
 const ROOF_NAME = /roof|\bdeck\b/i;
@@ -24,7 +24,11 @@ export function reviewScenarios(model: Model, results?: ResultsJson): Diagnostic
     const outdoorMin = outdoorMinimum(scenario, results);
     for (const surface of scenario.surfaces) {
       const name = `${surface.id} ${constructionNames.get(surface.construction) ?? ""}`;
-      out.push(...orientation(surface, name), ...absorptance(surface), ...solAir(surface, outdoorMin));
+      out.push(...about(`${scenario.id}/${surface.id}`, [
+        ...orientation(surface, name),
+        ...absorptance(surface),
+        ...solAir(surface, outdoorMin),
+      ]));
     }
   }
   return out;

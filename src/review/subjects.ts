@@ -50,6 +50,8 @@ export const SUPER_INSULATION = /vacuum|aerogel|\bVIP\b/i;
 export interface PropertySubject {
   /** How the message names it, e.g. `material "eps-100"` or `layer 2 of EW-1`. */
   readonly label: string;
+  /** What a finding names (`Diagnostic.subject`): the material id, or `<construction>/layer-<n>`. */
+  readonly subject: string;
   readonly name: string;
   /** The class id as given (it may be unknown). */
   readonly classId?: string;
@@ -86,6 +88,11 @@ export function layerLabel(construction: Construction, index: number): string {
   return `layer ${index + 1}${layer === undefined ? "" : ` ("${layer.name}")`} of ${construction.id}`;
 }
 
+/** The subject of a layer's findings: `EW-1/layer-2`. */
+export function layerSubject(construction: Construction, index: number): string {
+  return `${construction.id}/layer-${index + 1}`;
+}
+
 /** Every massive material and inline massive layer of the model, as property subjects. */
 export function propertySubjects(model: Model): PropertySubject[] {
   const subjects: PropertySubject[] = [];
@@ -93,6 +100,7 @@ export function propertySubjects(model: Model): PropertySubject[] {
     if (m.conductivity === undefined || m.density === undefined || m.specificHeat === undefined) continue;
     subjects.push(withClass({
       label: `${m.origin === "library" ? "library material" : "material"} "${m.id}"`,
+      subject: m.id,
       name: m.name,
       conductivity: m.conductivity,
       density: m.density,
@@ -105,6 +113,7 @@ export function propertySubjects(model: Model): PropertySubject[] {
       if (layer.kind !== "massive" || layer.materialId !== undefined) return;
       subjects.push({
         label: `inline ${layerLabel(c, index)}`,
+        subject: layerSubject(c, index),
         name: layer.name,
         conductivity: layer.conductivity,
         density: layer.density,

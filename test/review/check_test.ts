@@ -97,7 +97,19 @@ Deno.test("check raises nothing beyond notes and EW-1's unmet U target on the de
 
 Deno.test("JSON findings have the fluxnote-check/1 shape; plausibility findings fill value, expected and source", async () => {
   const found = await findings(PLANTED);
-  const keys = ["severity", "rule", "at", "message", "value", "expected", "source", "hint"];
+  // The first eight keys are the original contract; `subject` and `acknowledged` extend it.
+  const keys = [
+    "severity",
+    "rule",
+    "at",
+    "message",
+    "value",
+    "expected",
+    "source",
+    "hint",
+    "subject",
+    "acknowledged",
+  ];
   const ruleIds = new Set(REVIEW_RULES.map((r) => r.id));
   for (const f of found) {
     assert.deepStrictEqual(Object.keys(f), keys);
@@ -125,7 +137,10 @@ Deno.test("--strict turns a review warning into exit 1; without it the exit code
   Deno.writeTextFileSync(path, edited);
   const loose = await check(dir, "text");
   assert.equal(loose.code, 0);
-  assert.match(loose.stderr, /10-materials\.md:47:1: warning: Material "render-thin-coat" gives no source/);
+  assert.match(
+    loose.stderr,
+    /^warning +source-missing +1 +Material "render-thin-coat" gives no source.*\n +applies to +render-thin-coat\n +at +10-materials\.md:47:1$/m,
+  );
   assert.match(loose.stdout, /^0 error\(s\), 2 warning\(s\), \d+ note\(s\)/);
   assert.equal((await check(dir, "text", true)).code, 1);
 });

@@ -5,6 +5,7 @@ import { formatSig } from "../page/format.ts";
 import { html, type Trusted } from "../page/html.ts";
 import type { RenderContext } from "../page/packageInput.ts";
 import type { CheckResult } from "../../results/types.ts";
+import { acknowledgementFor } from "../../project/acknowledgedFindings.ts";
 
 function subjectAnchor(subject: string, ctx: RenderContext): string | undefined {
   if (subject.startsWith("construction:")) {
@@ -106,17 +107,21 @@ function findingsTable(ctx: RenderContext): Trusted {
   if (findings.length === 0) {
     return html`${folded}${foldedCount === 0 ? html`<p>No findings were raised on the inputs.</p>` : html``}`;
   }
-  const rows = findings.map((f) =>
-    html`
+  const acks = ctx.input.model.info.acknowledged ?? [];
+  const rows = findings.map((f) => {
+    const ack = acknowledgementFor(f, acks);
+    return html`
       <tr>
         <td class="${f.severity === "error" ? "finding-error" : ""}">${f.severity}</td>
         <td><code>${formatPosition(f.at)}</code></td>
         <td>${f.rule}</td>
-        <td>${f.message}</td>
+        <td>${f.message}${ack === undefined
+          ? html``
+          : html`<br><span class="muted">acknowledged by ${ack.by}: ${ack.reason}</span>`}</td>
         <td>${f.hint ?? ""}</td>
       </tr>
-    `
-  );
+    `;
+  });
   return html`
     <table class="checks-list">
       <thead>

@@ -1,16 +1,13 @@
 import { parseArgs } from "node:util";
-import { type CommandIo, runBuild } from "./commands/build.ts";
-import { runCheck } from "./commands/check.ts";
-import { runDiff } from "./commands/diff.ts";
-import { runInit } from "./commands/init.ts";
-import { runVerify } from "./commands/verify.ts";
-import { runKeygen } from "./commands/signingKeys.ts";
-import { runServe } from "./commands/serve.ts";
+import type { CommandIo } from "./commands/build.ts";
 import { describeEnvironmentFault, isEnvironmentFault } from "./commands/environmentFault.ts";
 import { hideEnvironmentFromDependencies } from "./commands/quietDependencies.ts";
 import { streamWriter, terminalIo } from "./commands/terminalIo.ts";
 import { terminalSafe } from "./project/displayText.ts";
 import { TOOL_VERSION } from "./version.ts";
+
+// Each command's modules are loaded by its `run` with `import()`, so `--version`, `--help` and `check` do
+// not wait for the package renderer, the plotting and DOM libraries or the PDF printer (README, "Start-up").
 
 const USAGE =
   `fluxnote ${TOOL_VERSION} — heat flow through walls and roofs, as a reviewable calculation package
@@ -96,7 +93,7 @@ Exit codes: 0 no errors; 1 errors (or warnings with --strict); 2 usage error.`,
 
 /** One command: its options, how many positional arguments it takes, and how it runs once parsed. */
 interface CommandSpec {
-  readonly options: Record<string, { type: "string" | "boolean"; default?: string }>;
+  readonly options: Record<string, { type: "string" | "boolean"; default?: string; short?: string }>;
   /** Number of positional arguments and what they are, for messages. */
   readonly positionals: { readonly count: number; readonly what: string };
   run(
@@ -116,31 +113,39 @@ function choice<T extends string>(option: string, value: unknown, allowed: reado
 
 const COMMANDS: Record<string, CommandSpec> = {
   build: {
-    options: { out: { type: "string" }, sign: { type: "string" }, pdf: { type: "boolean" } },
+    options: {
+      out: { type: "string" },
+      sign: { type: "string" },
+      pdf: { type: "boolean" },
+      quiet: { type: "boolean", short: "q" },
+    },
     positionals: { count: 1, what: "one project folder" },
-    run: ([project = ""], values, io) =>
-      runBuild({
+    run: async ([project = ""], values, io) => {
+      const { runBuild } = await import("./commands/build.ts");
+      return runBuild({
         project,
         ...(typeof values.out === "string" ? { out: values.out } : {}),
         ...(typeof values.sign === "string" ? { sign: values.sign } : {}),
         ...(values.pdf === true ? { pdf: true } : {}),
-      }, io),
+        ...(values.quiet === true ? { quiet: true } : {}),
+      }, io);
+    },
   },
   check: {
     options: { format: { type: "string", default: "text" }, strict: { type: "boolean" } },
     positionals: { count: 1, what: "one project folder" },
-    run: ([project = ""], values, io) =>
-      runCheck({
-        project,
-        format: choice("format", values.format, ["text", "json"] as const),
-        strict: values.strict === true,
-      }, io),
+    run: async ([project = ""], values, io) => {
+      const format = choice("format", values.format, ["text", "json"] as const);
+      const { runCheck } = await import("./commands/check.ts");
+      return runCheck({ project, format, strict: values.strict === true }, io);
+    },
   },
   diff: {
     options: { format: { type: "string", default: "text" }, out: { type: "string" } },
     positionals: { count: 2, what: "two projects or packages" },
-    run: ([a = "", b = ""], values, io) => {
+    run: async ([a = "", b = ""], values, io) => {
       const format = choice("format", values.format, ["text", "json", "html"] as const);
+      const { runDiff } = await import("./commands/diff.ts");
       return runDiff(
         typeof values.out === "string" ? { a, b, format, out: values.out } : { a, b, format },
         io,
@@ -150,43 +155,92 @@ const COMMANDS: Record<string, CommandSpec> = {
   verify: {
     options: { key: { type: "string" } },
     positionals: { count: 1, what: "one package file" },
-    run: ([path = ""], values, io) =>
-      runVerify(path, io, typeof values.key === "string" ? { key: values.key } : {}),
+    run: async ([path = ""], values, io) => {
+      const { runVerify } = await import("./commands/verify.ts");
+      return runVerify(path, io, typeof values.key === "string" ? { key: values.key } : {});
+    },
   },
   keygen: {
     options: {},
     positionals: { count: 1, what: "one key name" },
-    run: ([name = ""], _values, io) => runKeygen(name, io),
+    run: async ([name = ""], _values, io) => (await import("./commands/signingKeys.ts")).runKeygen(name, io),
   },
   init: {
     options: {},
     positionals: { count: 1, what: "one folder name" },
-    run: ([target = ""], _values, io) => runInit(target, io),
+    run: async ([target = ""], _values, io) => (await import("./commands/init.ts")).runInit(target, io),
   },
   serve: {
     options: { port: { type: "string", default: "8470" } },
     positionals: { count: 1, what: "one project folder" },
-    run: ([project = ""], values, io) => {
+    run: async ([project = ""], values, io) => {
       const port = Number(values.port);
       if (!Number.isInteger(port) || port < 0 || port > 65535) {
         throw new UsageError(`--port must be 0–65535, found "${String(values.port)}"`);
       }
+      const { runServe } = await import("./commands/serve.ts");
       return runServe({ project, port }, io);
     },
   },
 };
+
+/** The command names, for the launcher's permission table (bin/fluxnote) and its test. */
+export const COMMAND_NAMES: readonly string[] = Object.keys(COMMANDS);
+
+/** node:util's parseArgs messages, reworded with balanced quotes and a fix. */
+function usageMessage(cause: TypeError & { code?: unknown }): string {
+  const unknown = /^Unknown option '([^']*)'/.exec(cause.message);
+  if (cause.code === "ERR_PARSE_ARGS_UNKNOWN_OPTION" && unknown !== null) {
+    const option = unknown[1] ?? "";
+    return `unknown option "${option}"; a project or file whose name starts with "-" goes after "--", ` +
+      `as in: -- "${option}"`;
+  }
+  return cause.message;
+}
+
+/** A permission the run was not given (Deno's permission system), as opposed to a file the OS refused. */
+function isMissingPermission(cause: unknown): cause is Error {
+  return cause instanceof Deno.errors.NotCapable;
+}
 
 /** Runs the command line; returns the process exit code. */
 export async function main(args: readonly string[], rawIo: CommandIo): Promise<number> {
   hideEnvironmentFromDependencies();
   const io = terminalIo(rawIo);
   const [command, ...rest] = args;
+  try {
+    return await dispatch(command, rest, io);
+  } catch (cause) {
+    if (!isEnvironmentFault(cause)) throw cause;
+    // The reader of our output has gone (e.g. `| head`): there is no one left to tell.
+    if (cause instanceof Deno.errors.BrokenPipe) return 1;
+    const how = isMissingPermission(cause)
+      ? `; run it as "fluxnote ${command ?? ""} …" (bin/fluxnote), which gives each command what it needs`
+      : "";
+    io.stderr(`fluxnote ${command ?? ""}: ${describeEnvironmentFault(cause)}${how}`);
+    return 1;
+  }
+}
+
+async function dispatch(
+  command: string | undefined,
+  rest: readonly string[],
+  io: CommandIo,
+): Promise<number> {
   if (command === undefined || command === "help" || command === "--help" || command === "-h") {
     const topic = rest[0];
-    io.stdout(topic !== undefined && HELP[topic] !== undefined ? HELP[topic] : USAGE);
+    if (topic === undefined) {
+      io.stdout(USAGE);
+      return 0;
+    }
+    if (HELP[topic] === undefined) {
+      io.stderr(`fluxnote help: no command "${topic}"\n\n${USAGE}`);
+      return 2;
+    }
+    io.stdout(HELP[topic]);
     return 0;
   }
-  if (command === "--version") {
+  if (command === "--version" || command === "-V") {
     io.stdout(`fluxnote ${TOOL_VERSION}`);
     return 0;
   }
@@ -212,22 +266,22 @@ export async function main(args: readonly string[], rawIo: CommandIo): Promise<n
     }
     return await spec.run(parsed.positionals, values, io);
   } catch (cause) {
-    const isUsage = cause instanceof UsageError || (cause instanceof TypeError && "code" in cause &&
-      String((cause as { code: unknown }).code).startsWith("ERR_PARSE_ARGS"));
-    if (!isUsage) {
-      if (!isEnvironmentFault(cause)) throw cause;
-      // The reader of our output has gone (e.g. `| head`): there is no one left to tell.
-      if (cause instanceof Deno.errors.BrokenPipe) return 1;
-      io.stderr(`fluxnote ${command}: ${describeEnvironmentFault(cause)}`);
-      return 1;
-    }
-    io.stderr(`fluxnote ${command}: ${cause.message}\n\n${HELP[command] ?? USAGE}`);
+    const isParseError = cause instanceof TypeError && "code" in cause &&
+      String((cause as { code: unknown }).code).startsWith("ERR_PARSE_ARGS");
+    if (!(cause instanceof UsageError) && !isParseError) throw cause;
+    const message = isParseError ? usageMessage(cause) : cause.message;
+    io.stderr(`fluxnote ${command}: ${message}\n\n${HELP[command] ?? USAGE}`);
     return 2;
   }
 }
 
 if (import.meta.main) {
-  const io: CommandIo = { stdout: streamWriter(Deno.stdout), stderr: streamWriter(Deno.stderr) };
+  const io: CommandIo = {
+    stdout: streamWriter(Deno.stdout),
+    stderr: streamWriter(Deno.stderr),
+    // Colour only on a terminal, never with NO_COLOR set (Deno.noColor: set and not empty).
+    colour: Deno.stdout.isTerminal() && !Deno.noColor,
+  };
   let code: number;
   try {
     code = await main(Deno.args, io);

@@ -7,11 +7,17 @@ import { OutputRefused, writeOutputSet } from "./writeOutput.ts";
 import { TOOL_VERSION } from "../version.ts";
 import { type PaperSize, renderPdf } from "./pdf.ts";
 import type { OutputFile } from "./writeOutput.ts";
+import { type StyledPart, writeStyled } from "./terminalIo.ts";
+import { buildStatusLines } from "./buildStatus.ts";
 
 /** What a command needs from its surroundings (so tests can run it without a terminal). */
 export interface CommandIo {
   stdout(line: string): void;
   stderr(line: string): void;
+  /** True when stdout is a terminal that takes colour (and NO_COLOR is not set). */
+  readonly colour?: boolean;
+  /** One stdout line of parts, each coloured by its tone when `colour` is on (see terminalIo). */
+  styled?(parts: readonly StyledPart[]): void;
 }
 
 export interface BuildOptions {
@@ -22,6 +28,8 @@ export interface BuildOptions {
   /** Also print package.pdf through the local Chromium (this path, or Debian's when absent). */
   readonly pdf?: boolean;
   readonly chromiumPath?: string;
+  /** Print errors only: no progress, warnings, "wrote" line or status block. */
+  readonly quiet?: boolean;
   /** Test hook: called after rendering, before the output set is swapped in. */
   readonly beforeSwap?: () => void | Promise<void>;
   /** Test hook: called when the old output set has been moved aside, before the new one is put in place. */
@@ -42,13 +50,24 @@ export async function runBuild(options: BuildOptions, io: CommandIo): Promise<nu
     io.stderr(`fluxnote build: ${signer.reason}; nothing was written`);
     return 2;
   }
+  const quiet = options.quiet === true;
   const loaded = await loadProject(options.project);
-  printDiagnostics(loaded.diagnostics, io.stderr);
+  printDiagnostics(
+    quiet ? loaded.diagnostics.filter((d) => d.severity === "error") : loaded.diagnostics,
+    io.stderr,
+  );
   // Progress goes to stderr only when a person watches it (a terminal), never into logs or pipes.
-  const progress = Deno.stderr.isTerminal() ? (message: string) => io.stderr(`… ${message}`) : undefined;
+  const progress = Deno.stderr.isTerminal() && !quiet
+    ? (message: string) => io.stderr(`… ${message}`)
+    : undefined;
   const produced = produceOutputs(loaded, progress);
   if (!produced.ok) {
-    if (loaded.model !== undefined) printDiagnostics(produced.diagnostics, io.stderr);
+    if (loaded.model !== undefined) {
+      printDiagnostics(
+        quiet ? produced.diagnostics.filter((d) => d.severity === "error") : produced.diagnostics,
+        io.stderr,
+      );
+    }
     const count = produced.diagnostics.filter((d) => d.severity === "error").length;
     io.stderr(`build stopped: ${count} error(s); nothing was written`);
     return 1;
@@ -64,9 +83,10 @@ export async function runBuild(options: BuildOptions, io: CommandIo): Promise<nu
     io.stderr(`fluxnote build: ${files}; nothing was written`);
     return 1;
   }
-  for (const w of results.warnings.slice(loaded.diagnostics.filter((d) => d.severity !== "error").length)) {
-    io.stderr(`${w.at}: warning: ${w.message}`);
-  }
+  const computedWarnings = results.warnings.slice(
+    loaded.diagnostics.filter((d) => d.severity !== "error").length,
+  );
+  if (!quiet) { for (const w of computedWarnings) io.stderr(`${w.at}: warning: ${w.message}`); }
   try {
     await writeOutputSet(outDir, files, { tool: `fluxnote ${TOOL_VERSION}`, inputs: results.inputs.sha256 }, {
       ...(options.beforeSwap === undefined ? {} : { beforeSwap: options.beforeSwap }),
@@ -78,14 +98,19 @@ export async function runBuild(options: BuildOptions, io: CommandIo): Promise<nu
     io.stderr(`  hint: ${NOT_OURS_HINT}`);
     return 1;
   }
-  io.stdout(
-    `wrote ${join(outDir, "package.html")}${
-      options.pdf === true ? ", package.pdf" : ""
-    }, results.json and csv/ (${loaded.model?.constructions.length ?? 0} constructions, ${
-      Object.keys(results.scenarios).length + Object.keys(results.heating ?? {}).length
-    } scenarios)`,
-  );
   const failed = results.checks.filter((c) => !c.pass);
+  if (!quiet) {
+    io.stdout(
+      `wrote ${join(outDir, "package.html")}${
+        options.pdf === true ? ", package.pdf" : ""
+      }, results.json and csv/ (${loaded.model?.constructions.length ?? 0} constructions, ${
+        Object.keys(results.scenarios).length + Object.keys(results.heating ?? {}).length
+      } scenarios)`,
+    );
+    const output = join(outDir, "package.html");
+    const status = { results, findings: produced.outputs.findings, computedWarnings, output };
+    for (const line of buildStatusLines(status)) writeStyled(io, line);
+  }
   if (failed.length > 0) {
     for (const c of failed) {
       io.stderr(`${c.subject}: error: computed check ${c.id} failed: ${c.value} > ${c.limit}`);

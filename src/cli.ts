@@ -15,7 +15,7 @@ const USAGE =
 usage: fluxnote <command> [options]
 
 commands:
-  build <project> [--out <dir>] [--sign <private key>] [--pdf]
+  build <project> [--out <dir>] [--sign <private key>] [--pdf] [--quiet]
                                            write package.html, results.json and csv/
   check <project> [--format text|json] [--strict]
                                            validate the project, write nothing
@@ -27,11 +27,12 @@ commands:
   init <dir>                               start a new project from the template
   serve <project> [--port N]               live preview on 127.0.0.1, rebuilt on every change
   help [command]                           show help
+  --version, -V                            print the version
 
 Run "fluxnote <command> --help" for a command's options.`;
 
 const HELP: Record<string, string> = {
-  build: `usage: fluxnote build <project> [--out <dir>] [--sign <private key>] [--pdf]
+  build: `usage: fluxnote build <project> [--out <dir>] [--sign <private key>] [--pdf] [--quiet]
 
 Reads the project folder, computes every construction and writes one output set:
   <dir>/package.html   the self-contained calculation package
@@ -44,6 +45,9 @@ a folder holding it, a file, a link or a folder of other files is refused and le
                covers the whole page, the signing key's fingerprint and the signing time.
 --pdf          also print package.pdf through the local Chromium (Debian's chromium package), paper from
                the front matter's paper: A4 (default) or Letter; without Chromium nothing is written.
+--quiet, -q    print errors only (no warnings, no status block)
+After writing, a status block: failed checks, unmet limits, open items, warnings (counts, the first few
+named) and the output path; coloured only on a terminal, never with NO_COLOR set.
 Exit codes: 0 success; 1 input errors, a refused --out or a failed computed check (the package is still
 written then); 2 usage error, an unreadable --sign key (nothing is written) or internal fault.`,
   verify: `usage: fluxnote verify <package.html> [--key <public key>]

@@ -12,6 +12,7 @@ const RUNS = Number(Deno.args[0] ?? "15");
 const ENTRIES = {
   before: fromFileUrl(new URL("./startup_eager.ts", import.meta.url)),
   after: fromFileUrl(new URL("../src/cli.ts", import.meta.url)),
+  empty: fromFileUrl(new URL("./startup_empty.ts", import.meta.url)),
 };
 const CONFIG = fromFileUrl(new URL("../deno.json", import.meta.url));
 const TEMPLATE = fromFileUrl(new URL("../templates/new-project/", import.meta.url));
@@ -52,6 +53,17 @@ for (const c of CASES) {
   }
   rows.push(figures);
 }
+// The floor: Deno starting and running a module that does nothing.
+const floor: number[] = [];
+await timeOnce(ENTRIES.empty, []);
+for (let i = 0; i < RUNS; i++) floor.push(await timeOnce(ENTRIES.empty, []));
+rows.push([
+  "deno run <empty module>",
+  `${median(floor).toFixed(3)} s`,
+  `${Math.min(...floor).toFixed(3)} s`,
+  "",
+  "",
+]);
 const widths = rows[0]!.map((_, i) => Math.max(...rows.map((r) => r[i]!.length)));
 console.log(`${RUNS} runs each, Deno ${Deno.version.deno}`);
 for (const r of rows) {

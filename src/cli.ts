@@ -1,13 +1,13 @@
-import { parseArgs } from "node:util";
 import type { CommandIo } from "./commands/build.ts";
 import { describeEnvironmentFault, isEnvironmentFault } from "./commands/environmentFault.ts";
-import { hideEnvironmentFromDependencies } from "./commands/quietDependencies.ts";
 import { streamWriter, terminalIo } from "./commands/terminalIo.ts";
 import { terminalSafe } from "./project/displayText.ts";
 import { TOOL_VERSION } from "./version.ts";
 
 // Each command's modules are loaded by its `run` with `import()`, so `--version`, `--help` and `check` do
-// not wait for the package renderer, the plotting and DOM libraries or the PDF printer (README, "Start-up").
+// not wait for the package renderer, the plotting and DOM libraries or the PDF printer, and `--version` and
+// `--help` not for Node's argument parser either (README, "Start-up"). A new command loads its modules the
+// same way and gets a line in the permission table of bin/fluxnote.
 
 const USAGE =
   `fluxnote ${TOOL_VERSION} — heat flow through walls and roofs, as a reviewable calculation package
@@ -209,7 +209,6 @@ function isMissingPermission(cause: unknown): cause is Error {
 
 /** Runs the command line; returns the process exit code. */
 export async function main(args: readonly string[], rawIo: CommandIo): Promise<number> {
-  hideEnvironmentFromDependencies();
   const io = terminalIo(rawIo);
   const [command, ...rest] = args;
   try {
@@ -253,6 +252,9 @@ async function dispatch(
     io.stderr(`fluxnote: unknown command "${command}"\n\n${USAGE}`);
     return 2;
   }
+  // Before any command module (and the YAML parser with it) is loaded.
+  (await import("./commands/quietDependencies.ts")).hideEnvironmentFromDependencies();
+  const { parseArgs } = await import("node:util");
   try {
     const parsed = parseArgs({
       args: [...rest],

@@ -19,7 +19,10 @@ const MINIMAL = fileURLToPath(new URL("../fixtures/good/minimal/", import.meta.u
  */
 function program(name: string, args: readonly string[], options: Deno.CommandOptions): Deno.Command {
   // INIT_CWD inherited from a `npx … task test` run names another folder: the child starts without it.
-  return new Deno.Command("sh", { ...options, args: ["-c", 'unset INIT_CWD; exec "$0" "$@"', name, ...args] });
+  return new Deno.Command("sh", {
+    ...options,
+    args: ["-c", 'unset INIT_CWD; exec "$0" "$@"', name, ...args],
+  });
 }
 
 /** PATH with this test's Deno first, so the launcher takes it instead of asking npx. */

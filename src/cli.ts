@@ -1,18 +1,14 @@
-import { parseArgs } from "node:util";
-import { type CommandIo, runBuild } from "./commands/build.ts";
-import { runCheck } from "./commands/check.ts";
-import { runDiff } from "./commands/diff.ts";
-import { runInit } from "./commands/init.ts";
-import { runMaterials } from "./commands/materials.ts";
-import { runVerify } from "./commands/verify.ts";
-import { runKeygen } from "./commands/signingKeys.ts";
-import { runServe } from "./commands/serve.ts";
+import type { CommandIo } from "./commands/commandIo.ts";
 import { describeEnvironmentFault, isEnvironmentFault } from "./commands/environmentFault.ts";
-import { hideEnvironmentFromDependencies } from "./commands/quietDependencies.ts";
 import { streamWriter, terminalIo } from "./commands/terminalIo.ts";
 import { terminalSafe } from "./project/displayText.ts";
 import { TOOL_VERSION } from "./version.ts";
 import { CSV_LOCALE_NAMES, DEFAULT_CSV_LOCALE } from "./tables/csvTable.ts";
+
+// Each command's modules are loaded by its `run` with `import()`, so `--version`, `--help` and `check` do
+// not wait for the package renderer, the plotting and DOM libraries or the PDF printer, and `--version` and
+// `--help` not for Node's argument parser either (README, "Start-up"). A new command loads its modules the
+// same way and gets a line in the permission table of bin/fluxnote.
 
 const USAGE =
   `fluxnote ${TOOL_VERSION} — heat flow through walls and roofs, as a reviewable calculation package
@@ -20,7 +16,7 @@ const USAGE =
 usage: fluxnote <command> [options]
 
 commands:
-  build <project> [--out <dir>] [--sign <private key>] [--pdf] [--csv-locale <name>]
+  build <project> [--out <dir>] [--sign <private key>] [--pdf] [--csv-locale <name>] [--quiet]
                                            write package.html, results.json and csv/
   check <project> [--format text|json] [--strict] [--severity error|warning|note]
                                            validate the project, write nothing
@@ -34,11 +30,13 @@ commands:
                                            list the built-in materials library
   serve <project> [--port N]               live preview on 127.0.0.1, rebuilt on every change
   help [command]                           show help
+  --version, -V                            print the version
 
 Run "fluxnote <command> --help" for a command's options.`;
 
 const HELP: Record<string, string> = {
-  build: `usage: fluxnote build <project> [--out <dir>] [--sign <private key>] [--pdf] [--csv-locale <name>]
+  build:
+    `usage: fluxnote build <project> [--out <dir>] [--sign <private key>] [--pdf] [--csv-locale <name>] [--quiet]
 
 Reads the project folder, computes every construction and writes one output set:
   <dir>/package.html   the self-contained calculation package
@@ -55,6 +53,9 @@ a folder holding it, a file, a link or a folder of other files is refused and le
                the CSV dialect: "," between fields and decimal points (comma-point, the default), or ";"
                between fields, decimal commas and a UTF-8 byte-order mark for spreadsheets set to a
                decimal-comma locale (semicolon-comma).
+--quiet, -q    print errors only (no warnings, no status block)
+After writing, a status block: failed checks, unmet limits, open items, warnings (counts, the first few
+named) and the output path; coloured only on a terminal, never with NO_COLOR set.
 Exit codes: 0 success; 1 input errors, a refused --out or a failed computed check (the package is still
 written then); 2 usage error, an unreadable --sign key (nothing is written) or internal fault.`,
   verify: `usage: fluxnote verify <package.html> [--key <public key>]
@@ -116,7 +117,7 @@ Exit codes: 0 no errors; 1 errors (or unacknowledged warnings with --strict); 2 
 
 /** One command: its options, how many positional arguments it takes, and how it runs once parsed. */
 interface CommandSpec {
-  readonly options: Record<string, { type: "string" | "boolean"; default?: string }>;
+  readonly options: Record<string, { type: "string" | "boolean"; default?: string; short?: string }>;
   /** Number of positional arguments and what they are, for messages. */
   readonly positionals: { readonly count: number; readonly what: string };
   run(
@@ -141,16 +142,20 @@ const COMMANDS: Record<string, CommandSpec> = {
       sign: { type: "string" },
       pdf: { type: "boolean" },
       "csv-locale": { type: "string", default: DEFAULT_CSV_LOCALE },
+      quiet: { type: "boolean", short: "q" },
     },
     positionals: { count: 1, what: "one project folder" },
-    run: ([project = ""], values, io) =>
-      runBuild({
+    run: async ([project = ""], values, io) => {
+      const { runBuild } = await import("./commands/build.ts");
+      return runBuild({
         project,
         ...(typeof values.out === "string" ? { out: values.out } : {}),
         ...(typeof values.sign === "string" ? { sign: values.sign } : {}),
         ...(values.pdf === true ? { pdf: true } : {}),
         csvLocale: choice("csv-locale", values["csv-locale"], CSV_LOCALE_NAMES),
-      }, io),
+        ...(values.quiet === true ? { quiet: true } : {}),
+      }, io);
+    },
   },
   check: {
     options: {
@@ -159,19 +164,19 @@ const COMMANDS: Record<string, CommandSpec> = {
       severity: { type: "string", default: "note" },
     },
     positionals: { count: 1, what: "one project folder" },
-    run: ([project = ""], values, io) =>
-      runCheck({
-        project,
-        format: choice("format", values.format, ["text", "json"] as const),
-        strict: values.strict === true,
-        severity: choice("severity", values.severity, ["error", "warning", "note"] as const),
-      }, io),
+    run: async ([project = ""], values, io) => {
+      const format = choice("format", values.format, ["text", "json"] as const);
+      const severity = choice("severity", values.severity, ["error", "warning", "note"] as const);
+      const { runCheck } = await import("./commands/check.ts");
+      return runCheck({ project, format, strict: values.strict === true, severity }, io);
+    },
   },
   diff: {
     options: { format: { type: "string", default: "text" }, out: { type: "string" } },
     positionals: { count: 2, what: "two projects or packages" },
-    run: ([a = "", b = ""], values, io) => {
+    run: async ([a = "", b = ""], values, io) => {
       const format = choice("format", values.format, ["text", "json", "html"] as const);
+      const { runDiff } = await import("./commands/diff.ts");
       return runDiff(
         typeof values.out === "string" ? { a, b, format, out: values.out } : { a, b, format },
         io,
@@ -181,18 +186,20 @@ const COMMANDS: Record<string, CommandSpec> = {
   verify: {
     options: { key: { type: "string" } },
     positionals: { count: 1, what: "one package file" },
-    run: ([path = ""], values, io) =>
-      runVerify(path, io, typeof values.key === "string" ? { key: values.key } : {}),
+    run: async ([path = ""], values, io) => {
+      const { runVerify } = await import("./commands/verify.ts");
+      return runVerify(path, io, typeof values.key === "string" ? { key: values.key } : {});
+    },
   },
   keygen: {
     options: {},
     positionals: { count: 1, what: "one key name" },
-    run: ([name = ""], _values, io) => runKeygen(name, io),
+    run: async ([name = ""], _values, io) => (await import("./commands/signingKeys.ts")).runKeygen(name, io),
   },
   init: {
     options: {},
     positionals: { count: 1, what: "one folder name" },
-    run: ([target = ""], _values, io) => runInit(target, io),
+    run: async ([target = ""], _values, io) => (await import("./commands/init.ts")).runInit(target, io),
   },
   materials: {
     options: {
@@ -201,37 +208,86 @@ const COMMANDS: Record<string, CommandSpec> = {
       format: { type: "string", default: "text" },
     },
     positionals: { count: 0, what: "no arguments" },
-    run: (_positionals, values, io) =>
-      runMaterials({
+    run: async (_positionals, values, io) => {
+      const format = choice("format", values.format, ["text", "json"] as const);
+      const { runMaterials } = await import("./commands/materials.ts");
+      return runMaterials({
         ...(typeof values.class === "string" ? { materialClass: values.class } : {}),
         ...(typeof values.search === "string" ? { search: values.search } : {}),
-        format: choice("format", values.format, ["text", "json"] as const),
-      }, io),
+        format,
+      }, io);
+    },
   },
   serve: {
     options: { port: { type: "string", default: "8470" } },
     positionals: { count: 1, what: "one project folder" },
-    run: ([project = ""], values, io) => {
+    run: async ([project = ""], values, io) => {
       const port = Number(values.port);
       if (!Number.isInteger(port) || port < 0 || port > 65535) {
         throw new UsageError(`--port must be 0–65535, found "${String(values.port)}"`);
       }
+      const { runServe } = await import("./commands/serve.ts");
       return runServe({ project, port }, io);
     },
   },
 };
 
+/** The command names, for the launcher's permission table (bin/fluxnote) and its test. */
+export const COMMAND_NAMES: readonly string[] = Object.keys(COMMANDS);
+
+/** node:util's parseArgs messages, reworded with balanced quotes and a fix. */
+function usageMessage(cause: TypeError & { code?: unknown }): string {
+  const unknown = /^Unknown option '([^']*)'/.exec(cause.message);
+  if (cause.code === "ERR_PARSE_ARGS_UNKNOWN_OPTION" && unknown !== null) {
+    const option = unknown[1] ?? "";
+    return `unknown option "${option}"; a project or file whose name starts with "-" goes after "--", ` +
+      `as in: -- "${option}"`;
+  }
+  return cause.message;
+}
+
+/** A permission the run was not given (Deno's permission system), as opposed to a file the OS refused. */
+function isMissingPermission(cause: unknown): cause is Error {
+  return cause instanceof Deno.errors.NotCapable;
+}
+
 /** Runs the command line; returns the process exit code. */
 export async function main(args: readonly string[], rawIo: CommandIo): Promise<number> {
-  hideEnvironmentFromDependencies();
   const io = terminalIo(rawIo);
   const [command, ...rest] = args;
+  try {
+    return await dispatch(command, rest, io);
+  } catch (cause) {
+    if (!isEnvironmentFault(cause)) throw cause;
+    // The reader of our output has gone (e.g. `| head`): there is no one left to tell.
+    if (cause instanceof Deno.errors.BrokenPipe) return 1;
+    const how = isMissingPermission(cause)
+      ? `; run it as "fluxnote ${command ?? ""} …" (bin/fluxnote), which gives each command what it needs`
+      : "";
+    io.stderr(`fluxnote ${command ?? ""}: ${describeEnvironmentFault(cause)}${how}`);
+    return 1;
+  }
+}
+
+async function dispatch(
+  command: string | undefined,
+  rest: readonly string[],
+  io: CommandIo,
+): Promise<number> {
   if (command === undefined || command === "help" || command === "--help" || command === "-h") {
     const topic = rest[0];
-    io.stdout(topic !== undefined && HELP[topic] !== undefined ? HELP[topic] : USAGE);
+    if (topic === undefined) {
+      io.stdout(USAGE);
+      return 0;
+    }
+    if (HELP[topic] === undefined) {
+      io.stderr(`fluxnote help: no command "${topic}"\n\n${USAGE}`);
+      return 2;
+    }
+    io.stdout(HELP[topic]);
     return 0;
   }
-  if (command === "--version") {
+  if (command === "--version" || command === "-V") {
     io.stdout(`fluxnote ${TOOL_VERSION}`);
     return 0;
   }
@@ -240,6 +296,9 @@ export async function main(args: readonly string[], rawIo: CommandIo): Promise<n
     io.stderr(`fluxnote: unknown command "${command}"\n\n${USAGE}`);
     return 2;
   }
+  // Before any command module (and the YAML parser with it) is loaded.
+  (await import("./commands/quietDependencies.ts")).hideEnvironmentFromDependencies();
+  const { parseArgs } = await import("node:util");
   try {
     const parsed = parseArgs({
       args: [...rest],
@@ -257,22 +316,22 @@ export async function main(args: readonly string[], rawIo: CommandIo): Promise<n
     }
     return await spec.run(parsed.positionals, values, io);
   } catch (cause) {
-    const isUsage = cause instanceof UsageError || (cause instanceof TypeError && "code" in cause &&
-      String((cause as { code: unknown }).code).startsWith("ERR_PARSE_ARGS"));
-    if (!isUsage) {
-      if (!isEnvironmentFault(cause)) throw cause;
-      // The reader of our output has gone (e.g. `| head`): there is no one left to tell.
-      if (cause instanceof Deno.errors.BrokenPipe) return 1;
-      io.stderr(`fluxnote ${command}: ${describeEnvironmentFault(cause)}`);
-      return 1;
-    }
-    io.stderr(`fluxnote ${command}: ${cause.message}\n\n${HELP[command] ?? USAGE}`);
+    const isParseError = cause instanceof TypeError && "code" in cause &&
+      String((cause as { code: unknown }).code).startsWith("ERR_PARSE_ARGS");
+    if (!(cause instanceof UsageError) && !isParseError) throw cause;
+    const message = isParseError ? usageMessage(cause) : cause.message;
+    io.stderr(`fluxnote ${command}: ${message}\n\n${HELP[command] ?? USAGE}`);
     return 2;
   }
 }
 
 if (import.meta.main) {
-  const io: CommandIo = { stdout: streamWriter(Deno.stdout), stderr: streamWriter(Deno.stderr) };
+  const io: CommandIo = {
+    stdout: streamWriter(Deno.stdout),
+    stderr: streamWriter(Deno.stderr),
+    // Colour only on a terminal, never with NO_COLOR set (Deno.noColor: set and not empty).
+    colour: Deno.stdout.isTerminal() && !Deno.noColor,
+  };
   let code: number;
   try {
     code = await main(Deno.args, io);

@@ -11,6 +11,8 @@ import type { CsvLocaleName } from "../tables/csvTable.ts";
 
 export type { CommandIo } from "./commandIo.ts";
 import type { CommandIo } from "./commandIo.ts";
+import { writeStyled } from "./terminalIo.ts";
+import { buildStatusLines } from "./buildStatus.ts";
 
 export interface BuildOptions {
   readonly project: string;
@@ -22,6 +24,8 @@ export interface BuildOptions {
   readonly chromiumPath?: string;
   /** The CSV dialect (`build --csv-locale`); comma-separated with a decimal point when absent. */
   readonly csvLocale?: CsvLocaleName;
+  /** Print errors only: no progress, warnings, "wrote" line or status block. */
+  readonly quiet?: boolean;
   /** Test hook: called after rendering, before the output set is swapped in. */
   readonly beforeSwap?: () => void | Promise<void>;
   /** Test hook: called when the old output set has been moved aside, before the new one is put in place. */
@@ -42,13 +46,24 @@ export async function runBuild(options: BuildOptions, io: CommandIo): Promise<nu
     io.stderr(`fluxnote build: ${signer.reason}; nothing was written`);
     return 2;
   }
+  const quiet = options.quiet === true;
   const loaded = await loadProject(options.project);
-  printDiagnostics(loaded.diagnostics, io.stderr);
+  printDiagnostics(
+    quiet ? loaded.diagnostics.filter((d) => d.severity === "error") : loaded.diagnostics,
+    io.stderr,
+  );
   // Progress goes to stderr only when a person watches it (a terminal), never into logs or pipes.
-  const progress = Deno.stderr.isTerminal() ? (message: string) => io.stderr(`… ${message}`) : undefined;
+  const progress = Deno.stderr.isTerminal() && !quiet
+    ? (message: string) => io.stderr(`… ${message}`)
+    : undefined;
   const produced = produceOutputs(loaded, progress, options.csvLocale);
   if (!produced.ok) {
-    if (loaded.model !== undefined) printDiagnostics(produced.diagnostics, io.stderr);
+    if (loaded.model !== undefined) {
+      printDiagnostics(
+        quiet ? produced.diagnostics.filter((d) => d.severity === "error") : produced.diagnostics,
+        io.stderr,
+      );
+    }
     const count = produced.diagnostics.filter((d) => d.severity === "error").length;
     io.stderr(`build stopped: ${count} error(s); nothing was written`);
     return 1;
@@ -64,9 +79,10 @@ export async function runBuild(options: BuildOptions, io: CommandIo): Promise<nu
     io.stderr(`fluxnote build: ${files}; nothing was written`);
     return 1;
   }
-  for (const w of results.warnings.slice(loaded.diagnostics.filter((d) => d.severity !== "error").length)) {
-    io.stderr(`${w.at}: warning: ${w.message}`);
-  }
+  const computedWarnings = results.warnings.slice(
+    loaded.diagnostics.filter((d) => d.severity !== "error").length,
+  );
+  if (!quiet) { for (const w of computedWarnings) io.stderr(`${w.at}: warning: ${w.message}`); }
   try {
     await writeOutputSet(outDir, files, { tool: `fluxnote ${TOOL_VERSION}`, inputs: results.inputs.sha256 }, {
       ...(options.beforeSwap === undefined ? {} : { beforeSwap: options.beforeSwap }),
@@ -78,14 +94,19 @@ export async function runBuild(options: BuildOptions, io: CommandIo): Promise<nu
     io.stderr(`  hint: ${NOT_OURS_HINT}`);
     return 1;
   }
-  io.stdout(
-    `wrote ${join(outDir, "package.html")}${
-      options.pdf === true ? ", package.pdf" : ""
-    }, results.json and csv/ (${loaded.model?.constructions.length ?? 0} constructions, ${
-      Object.keys(results.scenarios).length + Object.keys(results.heating ?? {}).length
-    } scenarios)`,
-  );
   const failed = results.checks.filter((c) => !c.pass);
+  if (!quiet) {
+    io.stdout(
+      `wrote ${join(outDir, "package.html")}${
+        options.pdf === true ? ", package.pdf" : ""
+      }, results.json and csv/ (${loaded.model?.constructions.length ?? 0} constructions, ${
+        Object.keys(results.scenarios).length + Object.keys(results.heating ?? {}).length
+      } scenarios)`,
+    );
+    const output = join(outDir, "package.html");
+    const status = { results, findings: produced.outputs.findings, computedWarnings, output };
+    for (const line of buildStatusLines(status)) writeStyled(io, line);
+  }
   if (failed.length > 0) {
     for (const c of failed) {
       io.stderr(`${c.subject}: error: computed check ${c.id} failed: ${c.value} > ${c.limit}`);

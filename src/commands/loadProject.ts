@@ -31,15 +31,21 @@ export async function loadProject(
 ): Promise<LoadedProject> {
   const fs = typeof folder === "string" ? await diskProjectFs(folder) : folder;
   if (fs === undefined) {
-    const at = { file: "project.md", line: 1, col: 1 };
-    const message = `Cannot open the project folder "${
-      String(folder)
-    }": it does not exist or is not a folder`;
+    // The folder itself is the place (line 0: no line of any file), not a project.md that is not there.
+    const at = { file: String(folder), line: 0, col: 0 };
+    const problem = error(
+      at,
+      "no-project",
+      "Cannot open the project folder: it does not exist or is not a folder; expected a folder holding project.md",
+      `check the path (a relative path starts in the folder fluxnote runs in), or start a project there with: fluxnote init ${
+        String(folder)
+      }`,
+    );
     return {
       files: [],
       library: [],
       inputRecords: [],
-      diagnostics: [error(at, "no-project", message, "give the path of a folder that holds project.md")],
+      diagnostics: [problem],
       dataTexts: new Map(),
     };
   }

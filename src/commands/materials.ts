@@ -1,7 +1,7 @@
 import { LIBRARY_MATERIALS } from "../materials/library.ts";
 import { listingJsonRow, listLibraryMaterials } from "../materials/libraryListing.ts";
 import { listingTextLines } from "../materials/listingText.ts";
-import type { CommandIo } from "./build.ts";
+import type { CommandIo } from "./commandIo.ts";
 
 export interface MaterialsOptions {
   /** Only entries of this material class (an id of src/materials/classes.ts). */

@@ -19,6 +19,8 @@ export interface ProducedOutputs {
   readonly results: ResultsJson;
   readonly resultsJsonText: string;
   readonly page: string;
+  /** The reader's and the review's findings, sorted (what the package lists). */
+  readonly findings: readonly Diagnostic[];
   /** package.html, results.json and the CSV files, ready to write. */
   readonly files: readonly OutputFile[];
 }
@@ -92,7 +94,7 @@ export function produceOutputs(
       ...computed.csvFiles,
     ], CSV_LOCALES[csvLocale]),
   ];
-  return { ok: true, outputs: { results, resultsJsonText: resultsText, page, files } };
+  return { ok: true, outputs: { results, resultsJsonText: resultsText, page, findings, files } };
 }
 
 /** Prints diagnostics, one per line, as the CLI contract says. */

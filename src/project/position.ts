@@ -1,13 +1,16 @@
-/** A place in a project file: path relative to the project (POSIX), 1-based line and column. */
+/**
+ * A place in a project file: path relative to the project (POSIX), 1-based line and column. Line 0 means
+ * the file or folder as a whole (e.g. a project folder that does not exist), printed without line and column.
+ */
 export interface Position {
   readonly file: string;
   readonly line: number;
   readonly col: number;
 }
 
-/** Formats a position as `file:line:col`. */
+/** Formats a position as `file:line:col`, or `file` for line 0 (the file or folder as a whole). */
 export function formatPosition(at: Position): string {
-  return `${at.file}:${at.line}:${at.col}`;
+  return at.line === 0 ? at.file : `${at.file}:${at.line}:${at.col}`;
 }
 
 /** Parses the `path:line:col` of an assumption back into a position (the path may contain colons). */

@@ -49,7 +49,9 @@ export async function diskProjectFs(folder: string): Promise<ProjectFs | undefin
   try {
     root = await Deno.realPath(folder);
     if (!(await Deno.stat(root)).isDirectory) return undefined;
-  } catch {
+  } catch (cause) {
+    // A run without read permission is told so (one line from the CLI), not that the folder is missing.
+    if (cause instanceof Deno.errors.NotCapable) throw cause;
     return undefined;
   }
   return {

@@ -38,7 +38,8 @@ const NO_HINT_YET: ReadonlySet<string> = new Set([
   "hostile/weather-empty",
 ]);
 
-const POSITIONED = /^[^\s:][^:]*:\d+:\d+: (error|warning|note): \S/;
+/** `path:line:col: severity: message`, or `path: severity: …` for a file or folder as a whole (line 0). */
+const POSITIONED = /^[^\s:][^:]*(?::\d+:\d+)?: (error|warning|note): \S/;
 const STOPPED = /^build stopped: [1-9]\d* error\(s\); nothing was written$/;
 
 /** Checks the common contract of a stopped build and returns the diagnostics it printed. */
@@ -309,7 +310,7 @@ Deno.test({
 });
 
 Deno.test({
-  name: "runBuild() names the project folder when it does not exist",
+  name: "runBuild() names the project folder when it does not exist, without a project.md:1:1 position",
   sanitizeOps: false,
   sanitizeResources: false,
   async fn() {
@@ -320,8 +321,9 @@ Deno.test({
       const report = await builds.build({ project: missing, out: join(base, "out") });
       assert.equal(
         assertStopped(report, base, true),
-        `project.md:1:1: error: Cannot open the project folder "${missing}": it does not exist or is not a folder\n` +
-          "  hint: give the path of a folder that holds project.md",
+        `${missing}: error: Cannot open the project folder: it does not exist or is not a folder; expected a ` +
+          "folder holding project.md\n  hint: check the path (a relative path starts in the folder fluxnote " +
+          `runs in), or start a project there with: fluxnote init ${missing}`,
       );
     } finally {
       builds.close();

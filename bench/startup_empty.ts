@@ -1,0 +1,2 @@
+// An empty module: bench/startup.ts times Deno starting it, the floor under any command.
+export {};

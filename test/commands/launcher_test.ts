@@ -1,0 +1,268 @@
+/**
+ * The `fluxnote` launcher (bin/fluxnote): run from a folder outside the repository with paths relative to
+ * that folder, one command for every subcommand, each with only the Deno permissions it needs, and the
+ * documented set-up line (`npm link`). The child processes use the Deno that runs the tests (the pinned
+ * one) by putting it first on the PATH, as `npx -y deno@2.9.6 task …` does.
+ */
+import assert from "node:assert/strict";
+import { dirname, join } from "node:path";
+import { fileURLToPath } from "node:url";
+import { COMMAND_NAMES } from "../../src/cli.ts";
+
+const REPO = fileURLToPath(new URL("../../", import.meta.url));
+const LAUNCHER = join(REPO, "bin", "fluxnote");
+const MINIMAL = fileURLToPath(new URL("../fixtures/good/minimal/", import.meta.url));
+
+/**
+ * Runs a program found on the PATH through `sh` (the one program the test task may start besides mkfifo;
+ * the launcher is a shell script anyway).
+ */
+function program(name: string, args: readonly string[], options: Deno.CommandOptions): Deno.Command {
+  // INIT_CWD inherited from a `npx … task test` run names another folder: the child starts without it.
+  return new Deno.Command("sh", {
+    ...options,
+    args: ["-c", 'unset INIT_CWD; exec "$0" "$@"', name, ...args],
+  });
+}
+
+/** PATH with this test's Deno first, so the launcher takes it instead of asking npx. */
+function pathWith(...folders: string[]): string {
+  return [...folders, dirname(Deno.execPath()), Deno.env.get("PATH") ?? ""].join(":");
+}
+
+async function launch(
+  args: readonly string[],
+  cwd: string,
+  env: Record<string, string> = {},
+): Promise<{ code: number; out: string; err: string }> {
+  const result = await new Deno.Command("sh", {
+    args: [LAUNCHER, ...args],
+    cwd,
+    env: { PATH: pathWith(), NO_COLOR: "1", ...env },
+    stdout: "piped",
+    stderr: "piped",
+  }).output();
+  const decode = (b: Uint8Array) => new TextDecoder().decode(b);
+  return { code: result.code, out: decode(result.stdout), err: decode(result.stderr) };
+}
+
+Deno.test("fluxnote runs from a folder outside the repository: init, check and build take paths relative to it", async () => {
+  const caller = await Deno.makeTempDir({ prefix: "fluxnote-caller-" });
+  try {
+    const init = await launch(["init", "myproj"], caller);
+    assert.equal(init.code, 0, init.err);
+    assert.ok(
+      Deno.statSync(join(caller, "myproj", "project.md")).isFile,
+      "init wrote into the caller's folder",
+    );
+    const check = await launch(["check", "myproj"], caller);
+    assert.equal(check.code, 0, check.err);
+    assert.match(check.out, /^0 error\(s\), .* constructions read$/m);
+    const build = await launch(["build", "myproj"], caller);
+    assert.equal(build.code, 0, build.err);
+    assert.ok(Deno.statSync(join(caller, "myproj", "out", "package.html")).isFile);
+    assert.match(build.out, /^ {2}output +myproj\/out\/package\.html$/m);
+    // Nothing landed in the repository.
+    assert.throws(() => Deno.statSync(join(REPO, "myproj")));
+  } finally {
+    await Deno.remove(caller, { recursive: true });
+  }
+});
+
+Deno.test("the fluxnote task resolves paths against the folder it was started from (INIT_CWD)", async () => {
+  const caller = await Deno.makeTempDir({ prefix: "fluxnote-task-" });
+  try {
+    for (const name of ["project.md", "walls.md"]) {
+      Deno.copyFileSync(join(MINIMAL, name), join(caller, name));
+    }
+    const result = await program(Deno.execPath(), [
+      "task",
+      "--quiet",
+      "--config",
+      join(REPO, "deno.json"),
+      "fluxnote",
+      "check",
+      ".",
+    ], {
+      cwd: caller,
+      env: { PATH: pathWith(), NO_COLOR: "1" },
+      stdout: "piped",
+      stderr: "piped",
+    }).output();
+    const out = new TextDecoder().decode(result.stdout);
+    assert.equal(result.code, 0, new TextDecoder().decode(result.stderr));
+    assert.match(out, /1 constructions read/);
+  } finally {
+    await Deno.remove(caller, { recursive: true });
+  }
+});
+
+/** A stand-in `deno` that reports the pinned version and prints the arguments it was run with. */
+async function recordingDeno(): Promise<string> {
+  const folder = await Deno.makeTempDir({ prefix: "fluxnote-fake-deno-" });
+  const script = join(folder, "deno");
+  Deno.writeTextFileSync(
+    script,
+    '#!/bin/sh\nif [ "$1" = --version ]; then echo "deno 2.9.6 (stand-in)"; exit 0; fi\n' +
+      'for a in "$@"; do printf "%s\\n" "$a"; done\n',
+  );
+  Deno.chmodSync(script, 0o755);
+  return folder;
+}
+
+Deno.test("the launcher gives each command only the permissions it needs", async () => {
+  const fake = await recordingDeno();
+  try {
+    const permissionsOf = async (args: string[]) => {
+      const result = await launch(args, fake, { PATH: pathWith(fake) });
+      assert.equal(result.code, 0, result.err);
+      const words = result.out.trimEnd().split("\n");
+      assert.equal(words[0], "run");
+      assert.ok(words.includes("--no-prompt"), "a missing permission must fail, never prompt");
+      const cli = words.indexOf(join(REPO, "src", "cli.ts"));
+      assert.deepEqual(words.slice(cli + 1), args, "the arguments pass through unchanged");
+      return words.slice(0, cli).filter((w) => w.startsWith("--allow-")).sort();
+    };
+    assert.deepEqual(await permissionsOf(["check", "p", "--strict", "--severity", "error"]), [
+      "--allow-read",
+    ]);
+    assert.deepEqual(await permissionsOf(["materials", "--search", "brick"]), ["--allow-read"]);
+    assert.deepEqual(await permissionsOf(["verify", "p.html"]), ["--allow-read"]);
+    assert.deepEqual(await permissionsOf(["build", "p", "--csv-locale", "de"]), [
+      "--allow-read",
+      "--allow-write",
+    ]);
+    assert.deepEqual(await permissionsOf(["build", "p", "--pdf"]), [
+      "--allow-env=TMPDIR,TMP,TEMP,NODE_V8_COVERAGE",
+      "--allow-read",
+      "--allow-run=/usr/bin/chromium",
+      "--allow-sys=homedir",
+      "--allow-write",
+    ]);
+    // "--pdf" after "--" is a folder name, not the option.
+    assert.deepEqual(await permissionsOf(["build", "--", "--pdf"]), ["--allow-read", "--allow-write"]);
+    assert.deepEqual(await permissionsOf(["serve", "p"]), ["--allow-net=127.0.0.1", "--allow-read"]);
+    assert.deepEqual(await permissionsOf(["diff", "a", "b"]), ["--allow-read"]);
+    assert.deepEqual(await permissionsOf(["diff", "a", "b", "--out", "d.html"]), [
+      "--allow-read",
+      "--allow-write",
+    ]);
+    assert.deepEqual(await permissionsOf(["init", "p"]), ["--allow-read", "--allow-write"]);
+    assert.deepEqual(await permissionsOf(["--version"]), []);
+    assert.deepEqual(await permissionsOf(["help", "build"]), []);
+  } finally {
+    await Deno.remove(fake, { recursive: true });
+  }
+});
+
+Deno.test("every command of the command line has a line in the launcher's permission table", () => {
+  const text = Deno.readTextFileSync(LAUNCHER);
+  const start = text.indexOf("case ${1:-} in");
+  const table = text.slice(start, text.indexOf("esac", start));
+  const labels = new Set(
+    [...table.matchAll(/^ {2}([a-z |]+)\)/gm)].flatMap((m) => m[1]!.split("|")).map((s) => s.trim()),
+  );
+  for (const name of COMMAND_NAMES) assert.ok(labels.has(name), `no permission line for "${name}"`);
+  assert.ok(labels.has("materials"), "materials (read-only) is in the table");
+});
+
+Deno.test("serve works through the same fluxnote command and answers on loopback", async () => {
+  const project = await Deno.makeTempDir({ prefix: "fluxnote-serve-" });
+  for (const name of ["project.md", "walls.md"]) Deno.copyFileSync(join(MINIMAL, name), join(project, name));
+  const child = new Deno.Command("sh", {
+    args: [LAUNCHER, "serve", ".", "--port", "0"],
+    cwd: project,
+    env: { PATH: pathWith(), NO_COLOR: "1" },
+    stdout: "piped",
+    stderr: "piped",
+  }).spawn();
+  try {
+    const reader = child.stdout.pipeThrough(new TextDecoderStream()).getReader();
+    let seen = "";
+    let port: string | undefined;
+    const deadline = Date.now() + 60_000;
+    while (port === undefined && Date.now() < deadline) {
+      const { value, done } = await reader.read();
+      if (done) break;
+      seen += value;
+      port = /http:\/\/127\.0\.0\.1:(\d+)\//.exec(seen)?.[1];
+    }
+    assert.ok(port !== undefined, `serve did not start: ${seen}`);
+    const page = await (await fetch(`http://127.0.0.1:${port}/`)).text();
+    assert.ok(page.includes("Fixture project"));
+    reader.releaseLock();
+  } finally {
+    child.kill("SIGTERM");
+    await child.status;
+    await child.stdout.cancel().catch(() => {});
+    await child.stderr.cancel();
+    await Deno.remove(project, { recursive: true });
+  }
+});
+
+Deno.test("a missing permission is one line naming it and how to run the command, exit 1, never an internal fault", async () => {
+  const project = await Deno.makeTempDir({ prefix: "fluxnote-denied-" });
+  try {
+    for (const name of ["project.md", "walls.md"]) {
+      Deno.copyFileSync(join(MINIMAL, name), join(project, name));
+    }
+    const cases: { args: string[]; permissions: string[]; denied: RegExp }[] = [
+      {
+        args: ["serve", project, "--port", "0"],
+        permissions: ["--allow-read"],
+        denied: /not allowed to connect to "127\.0\.0\.1:0"/,
+      },
+      { args: ["check", project], permissions: [], denied: /not allowed to read "/ },
+      { args: ["build", project], permissions: ["--allow-read"], denied: /not allowed to write "/ },
+    ];
+    for (const c of cases) {
+      const cli = join(REPO, "src", "cli.ts");
+      const result = await program(Deno.execPath(), [
+        "run",
+        "--quiet",
+        "--no-prompt",
+        ...c.permissions,
+        cli,
+        ...c.args,
+      ], {
+        stdout: "piped",
+        stderr: "piped",
+      }).output();
+      const err = new TextDecoder().decode(result.stderr);
+      assert.equal(result.code, 1, err);
+      const lines = err.trimEnd().split("\n").filter((l) => !l.startsWith("build 1"));
+      assert.equal(lines.length, 1, err);
+      assert.match(lines[0]!, c.denied);
+      assert.match(lines[0]!, new RegExp(`run it as "fluxnote ${c.args[0]} …" \\(bin/fluxnote\\)`));
+      assert.doesNotMatch(err, /internal error|fault in fluxnote|\n\s+at /);
+    }
+  } finally {
+    await Deno.remove(project, { recursive: true });
+  }
+});
+
+Deno.test("npm link, the README's set-up line, puts a working fluxnote command on the PATH", async () => {
+  const prefix = await Deno.makeTempDir({ prefix: "fluxnote-npm-prefix-" });
+  const caller = await Deno.makeTempDir({ prefix: "fluxnote-linked-" });
+  try {
+    const link = await program("npm", ["link", "--offline", "--no-audit", "--no-fund"], {
+      cwd: REPO,
+      env: { npm_config_prefix: prefix, npm_config_update_notifier: "false" },
+      stdout: "piped",
+      stderr: "piped",
+    }).output();
+    assert.equal(link.code, 0, new TextDecoder().decode(link.stderr));
+    for (const name of ["project.md", "walls.md"]) Deno.copyFileSync(join(MINIMAL, name), join(caller, name));
+    const result = await program("fluxnote", ["check", "."], {
+      cwd: caller,
+      env: { PATH: pathWith(join(prefix, "bin")) },
+      stdout: "piped",
+      stderr: "piped",
+    }).output();
+    assert.equal(result.code, 0, new TextDecoder().decode(result.stderr));
+    assert.match(new TextDecoder().decode(result.stdout), /1 constructions read/);
+  } finally {
+    await Deno.remove(prefix, { recursive: true });
+    await Deno.remove(caller, { recursive: true });
+  }
+});

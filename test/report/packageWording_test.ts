@@ -1,6 +1,6 @@
 /**
  * The demo package reads as an issued document: no internal wording, one general caution worded for any
- * jurisdiction plus the cautions that apply to the project, "Calculation methods" as section 3, the runtime
+ * jurisdiction plus the cautions that apply to the project, "Calculation methods" as the methods section, the runtime
  * named once, and a build line that counts the heating scenario. Built end to end from projects/demo.
  */
 import assert from "node:assert/strict";

@@ -140,7 +140,7 @@ Deno.test("renderPackage() orders the sections and ends with the end marker and 
     text(doc, ".end-marker"),
     new RegExp(`END OF CALCULATION PACKAGE\\s*Input SHA-256 ${"d".repeat(64)}`),
   );
-  assert.ok(out.lastIndexOf("END OF CALCULATION PACKAGE") > positions[11]!);
+  assert.ok(out.lastIndexOf("END OF CALCULATION PACKAGE") > positions[10]!);
 });
 
 Deno.test("renderPackage() follows each block with its output: material, missing scenario results, unresolved", () => {

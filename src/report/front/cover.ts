@@ -43,12 +43,8 @@ export function checkSummary(input: PackageInput): Trusted {
   const notes = input.results.methodNotes?.length ?? 0;
   const noteLine = notes === 0 ? "" : ` Method notes: ${notes} (a numerical form chosen, not a failure).`;
   if (failed.length === 0) {
-    return html`
-      <p
-        class="check-summary">Automated checks: all ${String(
-          checks.length,
-        )} passed (see the checks and findings).${noteLine}</p>
-    `;
+    const all = String(checks.length);
+    return html`<p class="check-summary">Automated checks: all ${all} passed (see checks and findings).${noteLine}</p>`;
   }
   const names = failed.map((c) => html`<li>${c.id} on ${c.subject}</li>`);
   return html`

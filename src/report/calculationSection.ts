@@ -2,11 +2,11 @@
  * The project's files, each titled by its own first heading (file name in small print), with each input block
  * followed by its output, then the sensitivity study. The package adds no numbers to the user's headings.
  */
-import type { ProjectDocument } from "../project/model.ts";
+import type { ProjectDocument, Segment } from "../project/model.ts";
 import { renderBlock } from "./blockOutput.ts";
 import { documentAnchor, SENSITIVITY_ANCHOR } from "./page/anchors.ts";
 import { html, type Trusted } from "./page/html.ts";
-import { leadingHeading, renderMarkdown } from "./page/markdown.ts";
+import { type LeadingHeading, leadingHeading, renderMarkdown } from "./page/markdown.ts";
 import { renderSensitivity } from "./scenarios/sensitivityOutput.ts";
 import type { RenderContext } from "./page/packageInput.ts";
 
@@ -18,14 +18,26 @@ export interface DocumentTitle {
   readonly fromHeading: boolean;
 }
 
+/** A file's opening heading (if it titles the file) and its segments after the heading. */
+interface TitleSplit {
+  readonly lead?: LeadingHeading;
+  readonly rest: readonly Segment[];
+}
+
+/** Each file's split, once per document (the contents and the section both read it). */
+const splits = new WeakMap<ProjectDocument, TitleSplit>();
+
 /** The title of a project file and the prose it leaves: see `leadingHeading` for when a heading is taken. */
-function splitTitle(doc: ProjectDocument) {
+function splitTitle(doc: ProjectDocument): TitleSplit {
+  const known = splits.get(doc);
+  if (known !== undefined) return known;
   const first = doc.segments[0];
   const lead = first?.kind === "prose" ? leadingHeading(first.markdown) : undefined;
-  return {
-    lead,
-    rest: lead === undefined ? doc.segments : [{ ...first!, markdown: lead.rest }, ...doc.segments.slice(1)],
-  };
+  const split = lead === undefined || first === undefined
+    ? { rest: doc.segments }
+    : { lead, rest: [{ ...first, markdown: lead.rest }, ...doc.segments.slice(1)] };
+  splits.set(doc, split);
+  return split;
 }
 
 /** The title the contents and the section heading show for a project file. */

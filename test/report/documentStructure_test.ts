@@ -235,4 +235,8 @@ Deno.test("leadingHeading() takes only a heading that opens the prose", () => {
   assert.equal(leadingHeading("Text first.\n\n# Walls\n"), undefined);
   assert.equal(leadingHeading("- item\n\n# Walls\n"), undefined);
   assert.equal(leadingHeading(""), undefined);
+  // CommonMark 0.31 §4.2, §4.3: `#` needs a space after it; `---` under text makes a level-2 heading.
+  assert.equal(leadingHeading("#hashtag\n"), undefined);
+  assert.equal(leadingHeading("Roof\n---\n")?.depth, 2);
+  assert.equal(leadingHeading("   ## Roof ##\n")?.text, "Roof");
 });

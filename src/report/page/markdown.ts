@@ -1,5 +1,5 @@
 /** Renders the consultant's prose: raw HTML shown as text, links allow-listed, images not loaded. */
-import { Marked, type Tokens } from "marked";
+import { Lexer, Marked, type Tokens } from "marked";
 import { escapeHtml, type Trusted, trustMarkdownRendererOutput } from "./html.ts";
 import { linearInlineTokenizer } from "./linearInline.ts";
 import { decodeCharacterReferences, safeLinkUrl } from "./safeUrl.ts";
@@ -136,8 +136,11 @@ function openingBlock(markdown: string): string {
  */
 export function leadingHeading(markdown: string): LeadingHeading | undefined {
   const opening = openingBlock(markdown);
-  const marked = new Marked({ async: false, gfm: true, breaks: false, tokenizer: linearInlineTokenizer });
-  const tokens = marked.lexer(opening);
+  // A heading is an ATX line (`#` after at most three spaces) or text underlined by `=`/`-` on its second line;
+  // anything else is told without lexing (and inline markup is never lexed here).
+  const lines = opening.trimStart().split("\n", 2);
+  if (!/^ {0,3}#/.test(lines[0] ?? "") && !/^ {0,3}(=+|-+)[ \t]*$/.test(lines[1] ?? "")) return undefined;
+  const tokens = new Lexer({ async: false, gfm: true, breaks: false }).blockTokens(opening, []);
   let consumed = "";
   for (const token of tokens) {
     consumed += token.raw;

@@ -8,7 +8,7 @@ import { join } from "node:path";
 import { runBuild } from "../src/commands/build.ts";
 import { runVerify } from "../src/commands/verify.ts";
 import { CHROMIUM_PATH, NO_CHROMIUM_MESSAGE } from "../src/commands/pdf.ts";
-import { pageNumbersFromOutline } from "../src/commands/pdfOutline.ts";
+import { namedDestinations, pageNumbersFromOutline } from "../src/commands/pdfOutline.ts";
 
 const DEMO = new URL("../projects/demo/", import.meta.url).pathname;
 const HAS_CHROMIUM = (() => {
@@ -84,6 +84,28 @@ Deno.test({
       const contentsLine = text.split("\n").find((l) => /Appendix A Embedded inputs\s*…\s*\d+/.test(l));
       assert.ok(contentsLine !== undefined, "the contents has page numbers");
       assert.equal(Number(contentsLine.match(/(\d+)\s*$/)?.[1]), appendixA?.page);
+      // The outline follows the user's headings: a file is titled by its first heading, with no package number.
+      const titles = outline.map((e) => e.title);
+      assert.ok(
+        titles.includes("20. External walls") &&
+          titles.includes("20.1 EW-1 — Extension wall, timber frame with wood-fibre sheathing"),
+      );
+      assert.ok(!titles.some((t) => /^2\.\d+ \S+\.md$/.test(t) || t === "2 Calculation"), titles.join(" | "));
+      // Every output block has its contents line with the page its named destination (its element) is on.
+      const dests = namedDestinations(await Deno.readFile(pdfPath));
+      const lines = text.split("\n");
+      for (
+        const [label, id] of [
+          ["Results of construction EW-1", "c-ew-1"],
+          ["Results of construction RF-1", "c-rf-1"],
+          ["Results of heating scenario winter-design", "hs-winter-design"],
+          ["Cooling load of july-design-day", "sc-july-design-day-fig-cooling-load"],
+        ] as const
+      ) {
+        const line = lines.find((l) => new RegExp(`^\\s*${label}\\s*…\\s*\\d+\\s*$`).test(l));
+        assert.ok(line !== undefined, `contents line for ${label}`);
+        assert.equal(Number(line.match(/(\d+)\s*$/)?.[1]), dests.get(id), label);
+      }
       // The archived original stays the HTML: no page number written into it, and verify reproduces it.
       const html = await Deno.readTextFile(join(out, "package.html"));
       assert.ok(!html.includes("page-ref"));

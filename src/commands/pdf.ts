@@ -1,11 +1,12 @@
 /**
  * package.pdf: the written package printed by a locally installed Chromium (driven by playwright-core).
  * No request leaves the file, and no script is added to the package: the contents' page numbers come from a
- * first print (its outline gives each heading's page) and are written into a PDF-only copy printed again.
+ * first print (its named destinations give each link target's page, its outline each heading's) and are written
+ * into a PDF-only copy printed again.
  */
 import { join } from "node:path";
 import process from "node:process";
-import { pageNumbersFromOutline } from "./pdfOutline.ts";
+import { namedDestinations, pageNumbersFromOutline } from "./pdfOutline.ts";
 
 /** Debian's Chromium; the `chromium` package installs it here. */
 export const CHROMIUM_PATH = "/usr/bin/chromium";
@@ -95,8 +96,8 @@ export async function renderPdf(
       return new Uint8Array(bytes);
     };
     const first = await print(printCopy(page, paper, new Map()), true);
-    const titles = pageNumbersFromOutline(first);
-    const ids = headingIds(page, titles);
+    // Each link target's page: its named destination (the element's top), else its heading in the outline.
+    const ids = new Map([...headingIds(page, pageNumbersFromOutline(first)), ...namedDestinations(first)]);
     return { ok: true, bytes: await print(printCopy(page, paper, ids), true) };
   } finally {
     await browser.close();

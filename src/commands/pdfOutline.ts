@@ -1,6 +1,8 @@
 /**
  * Reads the outline of a PDF written by Chromium: each entry's title and page number (1-based), in
- * document order. Only what Chromium writes uncompressed is read: the page tree and the outline items.
+ * document order, and the named destinations Chromium writes for the link targets (the ids the package's
+ * links point to). Only what Chromium writes uncompressed is read: the page tree, the outline items and the
+ * catalog's destination dictionary.
  */
 
 export interface OutlineEntry {
@@ -75,4 +77,30 @@ export function pageNumbersFromOutline(pdf: Uint8Array): OutlineEntry[] {
   }
   entries.sort((a, b) => a.page - b.page || b.y - a.y);
   return entries.map(({ title, page }) => ({ title, page }));
+}
+
+/** Decodes a PDF name token's `#xx` escapes (the id of a named destination). */
+function pdfName(token: string): string {
+  return token.replace(/#([0-9A-Fa-f]{2})/g, (_, h: string) => String.fromCharCode(parseInt(h, 16)));
+}
+
+/**
+ * The page (1-based) of each named destination in the catalog's `/Dests` dictionary: Chromium writes one for
+ * every element id a link in the page points to, at the element's top. Empty if there is none.
+ */
+export function namedDestinations(pdf: Uint8Array): Map<string, number> {
+  const text = new TextDecoder("latin1").decode(pdf);
+  const objs = objects(text);
+  const order = pageOrder(objs);
+  let dests: string | undefined;
+  for (const body of objs.values()) {
+    const m = body.match(/\/Type\s*\/Catalog[\s\S]*?\/Dests\s*(\d+) 0 R/);
+    if (m !== null) dests = objs.get(Number(m[1]));
+  }
+  const out = new Map<string, number>();
+  for (const m of (dests ?? "").matchAll(/\/([^\s/\[\]<>()]+)\s*\[(\d+) 0 R \/XYZ/g)) {
+    const index = order.indexOf(Number(m[2]));
+    if (index >= 0) out.set(pdfName(m[1] ?? ""), index + 1);
+  }
+  return out;
 }

@@ -16,7 +16,7 @@ function unresolved(block: BlockSegment): Trusted {
   return html`
     <p
       class="fail">No computed output: this ${block
-        .blockKind} block did not resolve (see the findings in section 4).</p>
+        .blockKind} block did not resolve (see the checks and findings).</p>
   `;
 }
 
@@ -44,7 +44,7 @@ function scenarioOutput(block: BlockSegment, ctx: RenderContext): Trusted {
     return html`
       <p
         class="fail">No computed output here: scenario id ${scenario
-          .id} is used by an earlier block, whose output is <a href="#${anchor}">above</a> (see the findings in section 4).</p>
+          .id} is used by an earlier block, whose output is <a href="#${anchor}">above</a> (see the checks and findings).</p>
     `;
   }
   ctx.placedScenarios.add(scenario.id);

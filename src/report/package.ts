@@ -1,7 +1,9 @@
 /** Assembles the self-contained HTML calculation package from the model, results and inputs. */
 import { renderInputsAppendix, renderResultsAppendix } from "./appendices/appendices.ts";
 import { renderChecksAppendix, renderFactorsAppendix } from "./appendices/checksAppendices.ts";
-import { renderCalculationSection } from "./calculationSection.ts";
+import { documentTitle, renderCalculationSection } from "./calculationSection.ts";
+import { contentsOutputs } from "./front/contentsOutputs.ts";
+import { documentAnchor, SENSITIVITY_ANCHOR, sensitivityAnchor } from "./page/anchors.ts";
 import { renderChecksSection } from "./registers/checksSection.ts";
 import { renderCover, STATUS_LABEL, watermarkFor } from "./front/cover.ts";
 import { packageCss } from "./page/css.ts";
@@ -25,52 +27,60 @@ export type { InputFile, LibraryEntry, PackageInput } from "./page/packageInput.
 /** The Content-Security-Policy of the package: nothing may load or run except inline style and data: images. */
 export const PACKAGE_CSP = "default-src 'none'; img-src data:; style-src 'unsafe-inline'";
 
-/** Contents entries: fragment id and numbered title, in page order. */
-const CONTENTS: readonly (readonly [string, string])[] = [
-  ["s-summary", "Summary of results"],
-  ["s-1", "1 Scope and exclusions"],
-  ["s-2", "2 Calculation"],
-  ["s-3", "3 Calculation methods"],
-  ["s-4", "4 Checks and findings"],
-  ["s-5", "5 Assumptions register"],
-  ["s-6", "6 Materials and their sources"],
-  ["s-7", "7 Sources"],
-  ["s-8", "8 Cautions"],
-  ["s-9", "9 Revision history"],
-  ["s-10", "10 Reproducibility"],
+/**
+ * The package's own sections after the project's files, by fragment id and title: unnumbered, so that the numbers
+ * in the project's headings are the only section numbers; the appendices are lettered.
+ */
+const OWN_SECTIONS: readonly (readonly [string, string])[] = [
+  ["s-3", "Calculation methods"],
+  ["s-4", "Checks and findings"],
+  ["s-5", "Assumptions register"],
+  ["s-6", "Materials and their sources"],
+  ["s-7", "Sources"],
+  ["s-8", "Cautions"],
+  ["s-9", "Revision history"],
+  ["s-10", "Reproducibility"],
   ["s-a", "Appendix A Embedded inputs"],
   ["s-b", "Appendix B Results (results.json)"],
   ["s-c", "Appendix C Numerical checks"],
   ["s-d", "Appendix D Dynamic factors"],
 ];
 
+function entry(anchor: string, title: string, nested: readonly Trusted[] = []): Trusted {
+  const list = nested.length === 0 ? html`` : html`<ol class="contents-outputs">${nested}</ol>`;
+  return html`<li><a href="#${anchor}">${title}</a>${list}</li>`;
+}
+
 function renderContents(ctx: RenderContext): Trusted {
-  const listed = new Set<string>();
-  const docs = ctx.input.model.documents.map((d, i) => {
-    const outputs = d.segments.flatMap((segment) => {
-      if (segment.kind !== "block" || segment.blockKind !== "scenario" || segment.id === undefined) return [];
-      const anchor = ctx.scenarioAnchors.get(segment.id);
-      if (anchor === undefined || listed.has(anchor)) return [];
-      listed.add(anchor);
-      return [html`<li><a href="#${anchor}">Results of scenario ${segment.id}</a></li>`];
-    });
-    const nested = outputs.length === 0 ? html`` : html`<ol class="contents-outputs">${outputs}</ol>`;
-    return html`<li><a href="#s-2-${String(i + 1)}">2.${String(i + 1)} ${d.path}</a>${nested}</li>`;
+  const docs = ctx.input.model.documents.map((doc, i) => {
+    const title = documentTitle(doc);
+    const file = title.fromHeading
+      ? html`
+        <span class="file-name">${doc.path}</span>
+      `
+      : html``;
+    const outputs = contentsOutputs(doc, ctx).map((o) =>
+      entry(o.anchor, o.title, o.nested.map((n) => entry(n.anchor, n.title)))
+    );
+    const list = outputs.length === 0 ? html`` : html`<ol class="contents-outputs">${outputs}</ol>`;
+    return html`<li><a href="#${documentAnchor(i)}">${title.text}</a>${file}${list}</li>`;
   });
-  const sensitivityNumber = String(ctx.input.model.documents.length + 1);
-  const sensitivity = ctx.input.results.sensitivity === undefined
-    ? html``
-    : html`<li><a href="#s-2-${sensitivityNumber}">2.${sensitivityNumber} Sensitivity study</a></li>`;
-  const shown = CONTENTS.filter(([id]) => id !== "s-summary" || ctx.input.results.summary !== undefined);
-  const items = shown.map(([id, title]) =>
-    id === "s-2"
-      ? html`<li><a href="#${id}">${title}</a><ol>${docs}${sensitivity}</ol></li>`
-      : html`<li><a href="#${id}">${title}</a></li>`
-  );
+  const study = ctx.input.results.sensitivity;
+  const sensitivity = study === undefined ? html`` : entry(SENSITIVITY_ANCHOR, "Sensitivity study", [
+    ...Object.keys(study.constructions).map((id) =>
+      entry(sensitivityAnchor(ctx.constructionAnchors.get(id) ?? id), `Construction ${id}`)
+    ),
+    ...Object.keys(study.scenarios).map((id) =>
+      entry(sensitivityAnchor(ctx.scenarioAnchors.get(id) ?? id), `Design day ${id}`)
+    ),
+  ]);
+  const summary = ctx.input.results.summary === undefined ? html`` : entry("s-summary", "Summary of results");
   return html`
     <nav class="contents" aria-label="Contents">
       <h2>Contents</h2>
-      <ol>${items}</ol>
+      <p
+        class="muted">The project's files come first, in build order, each under its own first heading with the file name in small print; the tool's output follows each input block. The package's own sections come after them, unnumbered, so the numbers in the project's headings are the only section numbers.</p>
+      <ol>${summary}${docs}${sensitivity}${OWN_SECTIONS.map(([id, title]) => entry(id, title))}</ol>
     </nav>
   `;
 }
@@ -102,9 +112,8 @@ export function renderPackage(input: PackageInput): string {
     ${renderSummarySection(ctx)}
     ${renderContents(ctx)}
     <main>
-    ${renderScopeSection(ctx.display)}
     ${renderCalculationSection(ctx)}
-    ${renderMethodSection(ctx)}
+    ${renderMethodSection(ctx, renderScopeSection(ctx.display))}
     ${renderChecksSection(ctx)}
     ${renderAssumptionsSection(ctx)}
     ${renderMaterialsSection(ctx)}

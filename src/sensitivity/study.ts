@@ -156,8 +156,12 @@ export function sensitivityStudy(
     const shown = effects.filter((e) => isShown(e, baseValue)).sort(byEffect);
     return { shown, dropped: effects.length - shown.length };
   };
+  // In block order (the model's), not the order the varied materials first reached each construction.
+  const studied = model.constructions.flatMap((c) =>
+    Object.hasOwn(constructions, c.id) ? [[c.id, constructions[c.id]!] as const] : []
+  );
   const constructionResults: SensitivityResults["constructions"] = Object.fromEntries(
-    Object.entries(constructions).map(([id, entry]) => {
+    [...new Map(studied)].map(([id, entry]) => {
       const b = base.get(id)!;
       const u = kept(entry.U, b.steady.uValue);
       const lag = kept(entry.timeLag_h, b.iso13786.timeLag_h);

@@ -16,15 +16,15 @@ function limitCell(doc: Document, id: string): string | undefined {
   return row?.querySelectorAll("td")[2]?.textContent ?? undefined;
 }
 
-Deno.test("renderPackage() places the calculation methods as section 3, listed in the contents", () => {
+Deno.test("renderPackage() places the calculation methods after the project's files, listed in the contents", () => {
   const out = renderPackage(fixture());
   const doc = parseDocument(out);
-  assert.match(text(doc, "#s-3 h2"), /^3 Calculation methods$/);
-  assert.ok(out.indexOf('<section id="s-2"') < out.indexOf('<section id="s-3"'));
+  assert.match(text(doc, "#s-3 h2"), /^Calculation methods$/);
+  assert.ok(out.indexOf('id="s-2"') < out.indexOf('<section id="s-3"'));
   assert.ok(out.indexOf('<section id="s-3"') < out.indexOf('<section id="s-4"'));
   const link = doc.querySelector('nav.contents a[href="#s-3"]');
-  assert.equal(link?.textContent, "3 Calculation methods");
-  assert.match(text(doc, "#s-4 h2"), /^4 Checks and findings$/);
+  assert.equal(link?.textContent, "Calculation methods");
+  assert.match(text(doc, "#s-4 h2"), /^Checks and findings$/);
 });
 
 Deno.test("renderPackage() states the method's equations and conventions", () => {

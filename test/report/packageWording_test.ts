@@ -1,6 +1,6 @@
 /**
  * The demo package reads as an issued document: no internal wording, one general caution worded for any
- * jurisdiction plus the cautions that apply to the project, "Calculation methods" as section 3, the runtime
+ * jurisdiction plus the cautions that apply to the project, "Calculation methods" as the methods section, the runtime
  * named once, and a build line that counts the heating scenario. Built end to end from projects/demo.
  */
 import assert from "node:assert/strict";
@@ -42,9 +42,9 @@ Deno.test("demo package: no internal wording (design rules, our stated rules, to
   }
 });
 
-Deno.test('demo package: section 3 is "Calculation methods", not "Method statement" (a site-safety document)', async () => {
+Deno.test('demo package: the methods section is "Calculation methods", not "Method statement" (a site-safety document)', async () => {
   const { doc, text } = await built();
-  assert.equal(doc.querySelector("#s-3 h2")?.textContent, "3 Calculation methods");
+  assert.equal(doc.querySelector("#s-3 h2")?.textContent, "Calculation methods");
   assert.equal(count(text, "Method statement"), 0);
 });
 

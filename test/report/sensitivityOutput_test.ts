@@ -25,7 +25,7 @@ Deno.test("the package's sensitivity study ranks the effects of results.json and
   assert.equal(top.property, "conductivity");
   const page = Deno.readTextFileSync(join(folder, "out", "package.html"));
   const doc = new DOMParser().parseFromString(page, "text/html");
-  const section = [...doc.querySelectorAll("h3")].find((h) => h.textContent?.endsWith("Sensitivity study"));
+  const section = [...doc.querySelectorAll("h2")].find((h) => h.textContent === "Sensitivity study");
   assert.ok(section !== undefined);
   const firstRow = section.parentNode?.querySelector("table tbody tr");
   assert.ok(firstRow?.textContent?.includes("mineral-wool-25"));

@@ -13,7 +13,7 @@ export function renderChecksAppendix(ctx: RenderContext): Trusted {
       <h3 id="s-c-1">C.1 Checks and their limits</h3>
       ${methodChecksTable(ctx.input.results.checks)}
       <h3 id="s-c-2">C.2 Every check with its value</h3>
-      <p>Every automated check with its value, limit and result, as in results.json <code>checks</code>. Failures are also shown in the body beside the number they concern and in section 4.</p>
+      <p>Every automated check with its value, limit and result, as in results.json <code>checks</code>. Failures are also shown in the body beside the number they concern and in the checks and findings.</p>
       ${allChecksTable(ctx)}
     </section>
   `;
@@ -29,7 +29,7 @@ export function renderFactorsAppendix(ctx: RenderContext): Trusted {
     return html`
       <h3 id="d-${anchor}">D.${String(i + 1)} Dynamic factors of ${construction.id}: ${construction.name}</h3>
       <p
-        class="muted">Results in <a href="#${anchor}">section 2</a>; long series printed as their leading terms, every term in results.json (Appendix B) and csv/factors-${construction
+        class="muted">Results with <a href="#${anchor}">the construction</a>; long series printed as their leading terms, every term in results.json (Appendix B) and csv/factors-${construction
           .id}.csv.</p>
       ${renderDynamicFactors(construction, results, ctx.input.results.methodNotes ?? [], anchor, ctx.display)}
     `;

@@ -73,7 +73,7 @@ function totalRows(results: ConstructionResults | undefined, d: DisplayUnits): T
   if (results === undefined) {
     return html`
       <tr class="total">
-        <td colspan="8" class="fail">Not computed: no results for this construction (see section 4).</td>
+        <td colspan="8" class="fail">Not computed: no results for this construction (see checks and findings).</td>
       </tr>
     `;
   }

@@ -104,7 +104,7 @@ function stateSpaceCaption(ctf: CtfJson & { readonly cellsPerLayer: readonly num
   } poles; cells per layer, outside to inside: ${cells} (0 = resistive layer).`;
 }
 
-/** In IP only, the units of the coefficients (the SI caption has always left them to section 1). */
+/** In IP only, the units of the coefficients (the SI caption has always left them to the conventions). */
 function coefficientUnits(d: DisplayUnits): string {
   return d.system === "SI"
     ? ""

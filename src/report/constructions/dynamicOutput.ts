@@ -59,7 +59,7 @@ function surfaceLine(view: DynamicView, d: DisplayUnits): Trusted {
         s.responseFactors.truncationResidual,
         2,
       )}, polynomial CTF ${s.ctf === null
-        ? "not published, modal form used (method note ctf-modal-form-surface, section 4)"
+        ? "not published, modal form used (method note ctf-modal-form-surface, checks and findings)"
         : "accepted"}; series in Appendix B.</p>
   `;
 }
@@ -101,7 +101,7 @@ export function renderDynamicResponse(
     <div class="dynamic-response">
       <h4 class="output-heading">Dynamic response of ${construction.id}</h4>
       <p class="muted">Numbers as in results.json <code>constructions</code> entry for ${construction
-        .id} (Appendix B); method in section 3.</p>
+        .id} (Appendix B); method in the calculation methods.</p>
       ${body}
       ${checksList.markup === ""
         ? html`<p>No automated check is recorded for this construction.</p>`

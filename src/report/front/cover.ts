@@ -38,21 +38,20 @@ export function checkSummary(input: PackageInput): Trusted {
   const checks = input.results.checks;
   const failed = checks.filter((c) => !c.pass);
   if (checks.length === 0) {
-    return html`<p class="check-summary">Automated checks: none apply yet (see section 4).</p>`;
+    return html`<p class="check-summary">Automated checks: none apply yet (see the checks and findings).</p>`;
   }
   const notes = input.results.methodNotes?.length ?? 0;
   const noteLine = notes === 0 ? "" : ` Method notes: ${notes} (a numerical form chosen, not a failure).`;
   if (failed.length === 0) {
-    return html`<p class="check-summary">Automated checks: all ${
-      String(checks.length)
-    } passed (see section 4).${noteLine}</p>`;
+    const all = String(checks.length);
+    return html`<p class="check-summary">Automated checks: all ${all} passed (see checks and findings).${noteLine}</p>`;
   }
   const names = failed.map((c) => html`<li>${c.id} on ${c.subject}</li>`);
   return html`
     <div class="check-summary has-failures">
       <p>Automated checks: ${String(failed.length)} of ${String(
         checks.length,
-      )} FAILED (see section 4).${noteLine}</p>
+      )} FAILED (see the checks and findings).${noteLine}</p>
       <ul>${names}</ul>
     </div>
   `;
@@ -64,7 +63,7 @@ function findingSummary(input: PackageInput): Trusted {
     return `${n} ${noun}${n === 1 ? "" : "s"}`;
   };
   const counts = `${count("error", "error")}, ${count("warning", "warning")}, ${count("note", "note")}`;
-  return html`<p class="check-summary">Review findings: ${counts} (see section 4).</p>`;
+  return html`<p class="check-summary">Review findings: ${counts} (see the checks and findings).</p>`;
 }
 
 /**

@@ -1,4 +1,8 @@
-/** Sections whose text the tool states itself: scope and conventions (1) and cautions (8). */
+/**
+ * The tool's own statement of what it computes and what it leaves out ("Scope of the calculation"), with the
+ * conventions and units, printed at the head of the calculation methods: the user's scope stays the only scope
+ * section of the package.
+ */
 import { type DisplayUnits, unitLabel } from "../page/displayUnits.ts";
 import { escapeHtml, html, joinHtml, raw, type Trusted } from "../page/html.ts";
 
@@ -42,15 +46,15 @@ function unitRows(d: DisplayUnits): Trusted {
   return joinHtml([...rows, raw("")], raw("\n"));
 }
 
-/** Section 1: scope, exclusions, the sign and time conventions and the display units. */
+/** "Scope of the calculation": what the tool covers and excludes, the sign and time conventions, the display units. */
 export function renderScopeSection(d: DisplayUnits): Trusted {
-  return html`<section id="s-1"><h2>1 Scope and exclusions</h2>
+  return html`<section id="s-1" class="calculation-scope"><h3>Scope of the calculation</h3>
 ${
     raw(
       `<p>This package computes the steady-state thermal resistance and transmittance of plane constructions from the
 layers given in the input, and their dynamic response: response factors, conduction transfer functions, periodic
-response factors, the conduction time series and the ISO 13786 characteristics (method in section 3). The calculation
-rests on these simplifications:</p>
+response factors, the conduction time series and the ISO 13786 characteristics (methods below). These are the tool's
+limits, whatever the project's own scope says; the calculation rests on these simplifications:</p>
 <ul>
 <li>one-dimensional heat conduction through plane, parallel layers;</li>
 <li>constant material properties (no dependence on temperature or moisture content);</li>
@@ -58,7 +62,7 @@ rests on these simplifications:</p>
 <li>no thermal bridges: linear and point thermal transmittances are not included unless modelled separately and stated in the assumptions register;</li>
 <li>surface heat transfer represented by linear surface coefficients (constant surface resistances).</li>
 </ul>
-<h3 id="s-1-1">1.1 Conventions and symbols</h3>
+<h3 id="s-1-1">Conventions and symbols</h3>
 <table>
 <thead><tr><th>Item</th><th>Convention</th></tr></thead>
 <tbody>

@@ -29,7 +29,7 @@ function failedChecks(summary: SummaryJson): Trusted {
   );
   return html`
     <div class="check-summary has-failures">
-      <p>Failed checks: ${String(summary.failedChecks.length)} (see section 4).</p>
+      <p>Failed checks: ${String(summary.failedChecks.length)} (see the checks and findings).</p>
       <ul>${items}</ul>
     </div>
   `;

@@ -57,7 +57,7 @@ export function constructionsTable(rows: readonly ConstructionSummary[], d: Disp
   );
   return html`
     <table class="compact summary-constructions">
-      <caption>Constructions: values from section 2 and results.json.</caption>
+      <caption>Constructions: values from each construction's output and results.json.</caption>
       <thead>
         <tr>
           <th>Construction</th>

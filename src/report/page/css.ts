@@ -82,6 +82,8 @@ figure.plot-figure svg.swatch-fill, svg.swatch-fill { width: 12px; }
 .caution-box { border: 1px solid var(--ink); background: #f7f7f7; padding: 2mm 3mm; margin: 4mm 0; break-inside: avoid; }
 .caution-box p { margin: 1mm 0; }
 nav.contents ol.contents-outputs { padding-left: 6mm; }
+.file-name { font-size: 8pt; color: var(--muted); font-weight: normal; }
+p.file-name { margin: -1mm 0 3mm; break-after: avoid; page-break-after: avoid; }
 table.assumptions, table.checks-list { width: 100%; table-layout: fixed; font-size: 8.5pt; break-inside: auto; }
 table.assumptions th, table.assumptions td, table.checks-list th, table.checks-list td { padding: 0.5mm 1.2mm; }
 table.assumptions code, table.checks-list code { font-size: 7.5pt; overflow-wrap: anywhere; }

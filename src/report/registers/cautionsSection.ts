@@ -34,13 +34,13 @@ function sharedOutsideFilm(input: PackageInput): boolean {
   );
 }
 
-/** Renders section 8 for the package input; `extra` holds cautions produced with the results (outside film). */
+/** Renders the cautions for the package input; `extra` holds cautions produced with the results (outside film). */
 export function renderCautionsSection(input: PackageInput, extra: readonly string[] = []): Trusted {
   const synthetic = syntheticWeather(input);
   const memory = unconfirmedLibraryValues(input);
   return html`
     <section id="s-8">
-      <h2>8 Cautions</h2>
+      <h2>Cautions</h2>
       <ul>
     <li class="general-caution">${GENERAL_CAUTION}</li>
     ${raw(
@@ -48,7 +48,7 @@ export function renderCautionsSection(input: PackageInput, extra: readonly strin
 surface and interstitial condensation. Review the inputs, the assumptions register and the findings before use.</li>
 <li>The quality of the inputs bounds the quality of the outputs: material values without a cited source, defaults
 and unverified assumptions carry their uncertainty into every result.</li>
-<li>The exclusions in section 1 apply. Where an excluded effect matters (thermal bridges, moisture, non-linear
+<li>The exclusions in the scope of the calculation (calculation methods) apply. Where an excluded effect matters (thermal bridges, moisture, non-linear
 surface exchange), assess it separately.</li>`,
     )}${synthetic.length === 0 ? html`` : html`
       <li
@@ -61,7 +61,7 @@ surface exchange), assess it separately.</li>`,
       <li
         class="caution-library">Library values not confirmed: the built-in values of ${memory.join(
           ", ",
-        )} are recorded from memory, not checked against their source (see section 6). Confirm them against the cited table or the manufacturer's data before issue.</li>
+        )} are recorded from memory, not checked against their source (see materials and their sources). Confirm them against the cited table or the manufacturer's data before issue.</li>
     `}${sharedOutsideFilm(input)
       ? html`
         <li

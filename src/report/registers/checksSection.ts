@@ -139,13 +139,13 @@ function findingsTable(ctx: RenderContext): Trusted {
   `;
 }
 
-/** Renders section 4. */
+/** Renders the checks and findings. */
 export function renderChecksSection(ctx: RenderContext): Trusted {
-  return html`<section id="s-4"><h2>4 Checks and findings</h2>
-<h3 id="s-4-1">4.1 Automated checks</h3>
+  return html`<section id="s-4"><h2>Checks and findings</h2>
+<h3 id="s-4-1">Automated checks</h3>
 ${checksSummary(ctx)}
 ${methodNotesTable(ctx)}
-<h3 id="s-4-2">4.2 Review findings on the inputs</h3>
+<h3 id="s-4-2">Review findings on the inputs</h3>
 ${findingsTable(ctx)}
 </section>`;
 }

@@ -79,7 +79,7 @@ export function methodChecksTable(checks: readonly CheckResult[]): Trusted {
     `;
   });
   return html`
-    <p>Every construction is checked as below; a check passes when |value| ≤ limit. The limits are those recorded in results.json for this project; each construction in section 2 states how many passed, failures are shown there beside the number and in section 4, and every value is listed in C.2. Checks whose id ends in <code>-surface</code> repeat the root-method checks surface to surface.</p>
+    <p>Every construction is checked as below; a check passes when |value| ≤ limit. The limits are those recorded in results.json for this project; each construction's output states how many passed, failures are shown there beside the number and in the checks and findings, and every value is listed in Appendix C.2. Checks whose id ends in <code>-surface</code> repeat the root-method checks surface to surface.</p>
     <table class="method-checks checks-list">
       <thead>
         <tr>

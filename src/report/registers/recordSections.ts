@@ -2,7 +2,7 @@
 import { html, type Trusted } from "../page/html.ts";
 import type { RenderContext } from "../page/packageInput.ts";
 
-/** Renders section 9 from the front matter's revision list. */
+/** Renders the revision history from the front matter's revision list. */
 export function renderRevisionSection(ctx: RenderContext): Trusted {
   const revisions = ctx.input.model.info.revisions;
   const body = revisions.length === 0 ? html`<p>No revisions are listed in the front matter.</p>` : html`
@@ -25,7 +25,7 @@ export function renderRevisionSection(ctx: RenderContext): Trusted {
       )}</tbody>
     </table>
   `;
-  return html`<section id="s-9"><h2>9 Revision history</h2>
+  return html`<section id="s-9"><h2>Revision history</h2>
 ${body}
 </section>`;
 }
@@ -56,7 +56,7 @@ function libraryTable(ctx: RenderContext): Trusted {
   `;
 }
 
-/** Renders section 10: versions, input hashes, library entries and how to re-run. */
+/** Renders the reproducibility record: versions, input hashes, library entries and how to re-run. */
 export function renderReproducibilitySection(ctx: RenderContext): Trusted {
   const { results, toolVersion, runtimeVersion } = ctx.input;
   const files = results.inputs.files.map((f) =>
@@ -67,19 +67,19 @@ export function renderReproducibilitySection(ctx: RenderContext): Trusted {
       </tr>
     `
   );
-  return html`<section id="s-10"><h2>10 Reproducibility</h2>
+  return html`<section id="s-10"><h2>Reproducibility</h2>
 <table>
 <tr><th scope="row">Tool</th><td>fluxnote ${toolVersion}</td></tr>
 <tr><th scope="row">Runtime</th><td>${runtimeVersion}</td></tr>
 <tr><th scope="row">Results schema</th><td>${results.schema}</td></tr>
 <tr><th scope="row">SHA-256 of the whole input</th><td class="hash">${results.inputs.sha256}</td></tr>
 </table>
-<h3 id="s-10-1">10.1 Input files</h3>
+<h3 id="s-10-1">Input files</h3>
 <table><thead><tr><th>Path</th><th>SHA-256</th></tr></thead><tbody>${files}</tbody></table>
 <p class="muted">The whole-input hash is the SHA-256 of the lines <code>&lt;sha256&gt;  &lt;path&gt;</code> (each ending in a line feed) of every input in build order, including the canonical forms of the library entries below.</p>
-<h3 id="s-10-2">10.2 Built-in library entries used</h3>
+<h3 id="s-10-2">Built-in library entries used</h3>
 ${libraryTable(ctx)}
-<h3 id="s-10-3">10.3 How to re-run</h3>
+<h3 id="s-10-3">How to re-run</h3>
 <ol>
 <li>Check the package itself: <code>fluxnote verify package.html</code> re-runs the embedded inputs and compares the results.</li>
 <li>Or by hand: save each file of Appendix A (base64, decoded) at its path in an empty folder, confirm each SHA-256 against the table above, and run <code>fluxnote build &lt;folder&gt;</code> with fluxnote ${toolVersion}. The results must equal Appendix B.</li>

@@ -16,7 +16,7 @@ function appliesTo(group: AssumptionGroup): Trusted {
 }
 
 /**
- * Renders section 5: one row per kind of assumption and statement, with the subjects and input lines it
+ * Renders the assumptions register: one row per kind of assumption and statement, with the subjects and input lines it
  * applies to; the review's "Default in use" notes are folded into it.
  */
 export function renderAssumptionsSection(ctx: RenderContext): Trusted {
@@ -54,7 +54,7 @@ export function renderAssumptionsSection(ctx: RenderContext): Trusted {
         defaults,
       )} notes "Default in use" are folded into this register: state the value in the input if a default does not fit an element.</p>
   `;
-  return html`<section id="s-5"><h2>5 Assumptions register</h2>
+  return html`<section id="s-5"><h2>Assumptions register</h2>
 <p>Every value the tool filled in or chose, with its basis and the input lines it applies to; a default used by many subjects is one row (${
     String(list.length)
   } assumptions in ${String(groups.length)} rows; each id in results.json <code>assumptions</code>).</p>
@@ -74,7 +74,7 @@ export function usedMaterials(ctx: RenderContext): MaterialDef[] {
   return out;
 }
 
-/** Renders section 6: each material used, with properties, source and origin. */
+/** Renders the materials and their sources: each material used, with properties, source and origin. */
 export function renderMaterialsSection(ctx: RenderContext): Trusted {
   const used = usedMaterials(ctx);
   const unused = ctx.input.model.materials.filter((m) => m.origin === "project" && !used.includes(m));
@@ -88,14 +88,14 @@ export function renderMaterialsSection(ctx: RenderContext): Trusted {
     : html`<p class="muted">Defined in the project but not used by any construction: ${
       unused.map((m) => m.id).join(", ")
     }.</p>`;
-  return html`<section id="s-6"><h2>6 Materials and their sources</h2>
-<p>Layers given inline (without a material id) show their values in the layer tables of section 2.</p>
+  return html`<section id="s-6"><h2>Materials and their sources</h2>
+<p>Layers given inline (without a material id) show their values in the layer tables of their constructions.</p>
 ${table}
 ${unusedNote}
 </section>`;
 }
 
-/** Renders section 7: the standards the tool applied and the distinct material sources. */
+/** Renders the sources: the standards the tool applied and the distinct material sources. */
 export function renderSourcesSection(ctx: RenderContext): Trusted {
   const sources: string[] = [];
   for (const m of usedMaterials(ctx)) {
@@ -109,8 +109,8 @@ export function renderSourcesSection(ctx: RenderContext): Trusted {
   const list = sources.length === 0
     ? html`<p class="fail">No material source is cited in the inputs.</p>`
     : html`<ol>${sources.map((s) => html`<li>${s}</li>`)}</ol>`;
-  return html`<section id="s-7"><h2>7 Sources</h2>
-<h3 id="s-7-1">7.1 Standards and methods applied by the tool</h3>
+  return html`<section id="s-7"><h2>Sources</h2>
+<h3 id="s-7-1">Standards and methods applied by the tool</h3>
 <ul>
 <li>ISO 6946:2017, Building components and building elements: Thermal resistance and thermal transmittance: calculation methods. Used for the thermal resistance of homogeneous layers (R = d/λ), the default surface resistances by direction of heat flow, and the total resistance and U-value.</li>
 <li>ISO 13786:2017, Thermal performance of building components: Dynamic thermal characteristics: Calculation methods. Used for the heat transfer matrix at 24 h and the periodic thermal transmittance, decrement factor, time shifts, admittances and areal heat capacities (3.8).</li>
@@ -125,7 +125,7 @@ export function renderSourcesSection(ctx: RenderContext): Trusted {
 <li>Spitler, J.D., Fisher, D.E. (1999). Development of periodic response factors for use with the radiant time series method. ASHRAE Transactions 105(2). Periodic response factors (3.7).</li>
 <li>ASHRAE Handbook—Fundamentals, chapter on nonresidential cooling and heating load calculations. Periodic response factors and conduction time series (3.7).</li>
 </ul>
-<h3 id="s-7-2">7.2 Material data sources cited in the inputs</h3>
+<h3 id="s-7-2">Material data sources cited in the inputs</h3>
 ${list}
 </section>`;
 }

@@ -4,6 +4,7 @@ import type { CoolingLoadResults } from "../../scenarios/heatingTypes.ts";
 import type { ScenarioResults } from "../../results/types.ts";
 import { type DisplayUnits, toDisplay, unitLabel } from "../page/displayUnits.ts";
 import { formatFixed, formatTrim } from "../page/format.ts";
+import { coolingLoadAnchor } from "../page/anchors.ts";
 import { html, type Trusted } from "../page/html.ts";
 import { type PlotSpec, renderPlotSvg } from "../page/plotSvg.ts";
 import { clockTime } from "./scenarioData.ts";
@@ -214,7 +215,7 @@ export function renderCoolingLoad(
   if (cl === undefined) return html``;
   return html`
     <section class="cooling-load-output">
-      <h5>Cooling load (radiant time series method)</h5>
+      <h5 id="${coolingLoadAnchor(prefix)}">Cooling load (radiant time series method)</h5>
       <p>Cooling load of each surface = convective part of its heat gain + Σ r<sub>j</sub> × radiant part j hours earlier (ASHRAE Handbook—Fundamentals, nonresidential cooling load chapter). Values are per hour, at the full hours; results.json key <code>coolingLoad</code>.</p>
       ${rtsTable(cl)}
       ${peakTable(results, cl, d)}

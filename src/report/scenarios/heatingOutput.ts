@@ -4,6 +4,7 @@ import type { HeatingResults, Verdict } from "../../scenarios/heatingTypes.ts";
 import { type DisplayUnits, toDisplay, unitLabel } from "../page/displayUnits.ts";
 import { DELTA_F_PER_K } from "../page/displayUnits.ts";
 import { formatFixed, formatSig } from "../page/format.ts";
+import { heatingAnchor } from "../page/anchors.ts";
 import { html, type Trusted } from "../page/html.ts";
 import type { RenderContext } from "../page/packageInput.ts";
 
@@ -177,7 +178,7 @@ export function renderHeatingBlock(scenario: HeatingScenario, ctx: RenderContext
   return renderHeatingOutput({
     scenario,
     results: Object.hasOwn(heating, scenario.id) ? heating[scenario.id] : undefined,
-    anchor: `hs-${scenario.id}`,
+    anchor: heatingAnchor(scenario.id),
     display: ctx.display,
   });
 }

@@ -235,7 +235,7 @@ export function renderConditions(input: SurfaceTableInput): Trusted {
     </table>
     <table class="scenario-surfaces compact">
       <caption>Surfaces of scenario ${scenario
-        .id} with the values used. Azimuth clockwise from north, tilt from horizontal; α solar absorptance, ε long-wave emittance, h_o outside surface coefficient, ΔT_lw long-wave correction subtracted from the sol-air temperature, f_rad radiant fraction of the heat gain, ρg ground reflectance. "(default)" marks a value the tool filled in (assumptions register, section 5).</caption>
+        .id} with the values used. Azimuth clockwise from north, tilt from horizontal; α solar absorptance, ε long-wave emittance, h_o outside surface coefficient, ΔT_lw long-wave correction subtracted from the sol-air temperature, f_rad radiant fraction of the heat gain, ρg ground reflectance. "(default)" marks a value the tool filled in (assumptions register).</caption>
       <thead>
         <tr>
           <th>Surface</th>

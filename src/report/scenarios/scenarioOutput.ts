@@ -4,6 +4,7 @@ import type { CheckResult, ScenarioResults } from "../../results/types.ts";
 import { checksTable } from "../constructions/constructionOutput.ts";
 import { renderCoolingLoad } from "./coolingLoadOutput.ts";
 import { type DisplayUnits, unitLabel } from "../page/displayUnits.ts";
+import { scenarioFigurePrefix } from "../page/anchors.ts";
 import { html, type Trusted } from "../page/html.ts";
 import { renderConditions } from "./scenarioConditions.ts";
 import {
@@ -146,11 +147,11 @@ export function renderScenarioOutput(input: ScenarioOutputInput): Trusted {
     return html`
       <div class="scenario-output" id="${anchor}">
         <p
-          class="fail">Not computed: results.json holds no entry for scenario ${id} (see the warnings and section 4).</p>
+          class="fail">Not computed: results.json holds no entry for scenario ${id} (see the warnings and the checks and findings).</p>
       </div>
     `;
   }
-  const prefix = `${anchor}-fig`;
+  const prefix = scenarioFigurePrefix(anchor);
   const d = input.display;
   const body = hasStepSeries(results)
     ? designDayBody(id, results, prefix, d)

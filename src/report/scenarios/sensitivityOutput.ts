@@ -4,6 +4,7 @@ import type { ConditionEffect, SensitivityEffect, SensitivityResults } from "../
 import { type DisplayUnits, type QuantityKind, toDisplay, unitLabel } from "../page/displayUnits.ts";
 import { formatSig, formatTrim } from "../page/format.ts";
 import { html, type Trusted } from "../page/html.ts";
+import { sensitivityAnchor } from "../page/anchors.ts";
 import type { RenderContext } from "../page/packageInput.ts";
 import { namePlaceholder, renderPlotSvg } from "../page/plotSvg.ts";
 
@@ -179,14 +180,19 @@ function tornado(id: string, effects: readonly SensitivityEffect[], display: Dis
   );
 }
 
-/** Renders the sensitivity study: per design day a ranked table and bar chart of the peak gain, per construction U and lag. */
-export function renderSensitivity(ctx: RenderContext, sectionId: string, number: string): Trusted {
+/**
+ * Renders the sensitivity study: per construction U and lag, then per design day a ranked table and bar chart of the
+ * peak gain, each in block order (the order of results.json).
+ */
+export function renderSensitivity(ctx: RenderContext, sectionId: string): Trusted {
   const study = ctx.input.results.sensitivity;
   if (study === undefined) return html``;
   const display = ctx.display;
   const percent = formatTrim(study.variation * 100, 3);
   const scenarios = Object.entries(study.scenarios).map(([id, s]) =>
-    html`<h4>Design day ${id}: peak total heat gain</h4>
+    html`<h3 id="${
+      sensitivityAnchor(ctx.scenarioAnchors.get(id) ?? id)
+    }">Design day ${id}: peak total heat gain</h3>
 <figure>${
       tornado(id, s.peakHeatGain, display)
     }<figcaption>Change of the peak total heat gain of ${id} when one property of one material is lowered (blue) or raised (red) by ${percent} %, largest effects first; each bar is labelled by material and property, in the order of the table below.</figcaption></figure>
@@ -203,15 +209,15 @@ ${
 ${conditionTable(id, s.conditions, s.dropped.conditions, study, display)}`
   );
   const constructions = Object.entries(study.constructions).map(([id, c]) =>
-    html`<h4>Construction ${id}</h4>
+    html`<h3 id="${sensitivityAnchor(ctx.constructionAnchors.get(id) ?? id)}">Construction ${id}</h3>
 ${effectTable(`Effect on the U-value of ${id}`, c.U, c.dropped.U, study, display, "transmittance")}
 ${effectTable(`Effect on the time lag of ${id}`, c.timeLag_h, c.dropped.timeLag_h, study, display, "time")}`
   );
-  return html`<section class="document"><h3 id="${sectionId}">${number} Sensitivity study</h3>
+  return html`<section class="document" id="${sectionId}"><h2>Sensitivity study</h2>
 <p>Each material property was lowered and raised by ${percent} % in every layer that uses the material, one property at a time, with all else held; the affected constructions were recomputed (root method) and so was each design day. Each design day's conditions were varied the same way, one at a time, by the steps stated in its table (absorptance ±0.1, h_o ±${percent} %, design maximum dry bulb and daily range ±2 K, indoor temperature ±1 K: our stated steps, common practice, no source). Effects whose changes are both below ${
     formatTrim(study.threshold * 100, 3)
   } % of the base value are left out and counted. The study shows which inputs the results depend on most, so that their sources can be checked first; it is not a statement of uncertainty.</p>
-${scenarios}
 ${constructions}
+${scenarios}
 </section>`;
 }

@@ -31,7 +31,8 @@ table.factor-series td, table.factor-series th { padding: 0.2mm 1.5mm; }
   #s-d th, #s-d td { padding: 0 1.5mm; line-height: 1.2; }
   #s-d caption, #s-d figcaption, #s-d p.muted, #s-d p.factor-pointer, #s-d .ctf-method-note {
     font-size: 7pt; line-height: 1.25; }
-  #s-d p { margin: 0.5mm 0; }
+  #s-d p { margin: 0.5mm 0; font-size: 8pt; line-height: 1.3; }
+  #s-a .hash, #s-c .hash, #s-d .hash { font-size: 7pt; }
   #s-d figure.plot-figure { display: inline-block; width: 49%; margin: 0.5mm 0; vertical-align: top; }
   #s-d figure.plot-figure + p.factor-pointer { display: inline-block; width: 49%; margin-left: 1%;
     vertical-align: top; }

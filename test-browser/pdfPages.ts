@@ -89,25 +89,20 @@ export function strandedHeadings(headings: readonly PrintedHeading[], lines: rea
 }
 
 /**
- * The last page of the body: the page holding the end of the cautions section, found from the next section's
- * heading (h2) in the outline — that page, or the one before when the heading opens its page.
- * 0 when the print has no cautions section.
+ * The last page of the body (cover to the cautions and the records after them): the page before the first
+ * appendix's heading (h2) in the outline, or that page when the appendix starts below other text on it.
+ * 0 when the print has no appendix.
  */
 export function bodyEndPage(
   headings: readonly PrintedHeading[],
   outline: readonly { title: string; page: number }[],
   lines: readonly PdfLine[],
 ): number {
-  const sections = headings.filter((h) => h.level === "h2" || h.level === "h1");
-  const cautions = sections.findIndex((h) => /\bCautions\b/i.test(h.text));
-  if (cautions < 0) return 0;
-  const next = sections[cautions + 1];
-  const last = Math.max(0, ...lines.map((l) => l.page));
-  if (next === undefined) return last;
-  const atCautions = outline.findIndex((e) => /\bCautions\b/i.test(e.title));
-  const entry = outline.find((e, i) => i > atCautions && squeeze(e.title) === squeeze(next.text));
+  const first = headings.find((h) => (h.level === "h2" || h.level === "h1") && /^Appendix\b/.test(h.text));
+  if (first === undefined) return 0;
+  const entry = outline.find((e) => squeeze(e.title) === squeeze(first.text));
   if (entry === undefined) return 0;
-  const first = rows(lines, entry.page)[0] ?? "";
-  const opensPage = first.length > 0 && squeeze(next.text).startsWith(squeeze(first));
+  const top = rows(lines, entry.page)[0] ?? "";
+  const opensPage = top.length > 0 && squeeze(first.text).startsWith(squeeze(top));
   return opensPage ? entry.page - 1 : entry.page;
 }

@@ -19,7 +19,7 @@ const FOOTER: readonly [number, string] = [800, "Page 1 of 3"];
 const HEADINGS = [
   { level: "h2", text: "8 Cautions" },
   { level: "h3", text: "8.1 A long heading that wraps onto a second line" },
-  { level: "h2", text: "9 Revision history" },
+  { level: "h2", text: "Appendix A Embedded inputs" },
 ];
 
 const PDF = `<doc>${
@@ -31,7 +31,7 @@ const PDF = `<doc>${
     FOOTER,
   ])
 }${page([HEADER, [60, "Caution text."], [300, "More text."], FOOTER])}${
-  page([HEADER, [60, "9 Revision history"], [80, "A table"], FOOTER])
+  page([HEADER, [60, "Appendix A Embedded inputs"], [80, "A table"], FOOTER])
 }</doc>`;
 
 Deno.test("the page reader leaves out the margins and finds a wrapped heading at a page foot", () => {
@@ -42,11 +42,11 @@ Deno.test("the page reader leaves out the margins and finds a wrapped heading at
   ]);
 });
 
-Deno.test("the body ends on the page before the next section when that section opens its page", () => {
+Deno.test("the body ends on the page before the first appendix when the appendix opens its page", () => {
   const lines = pdfLines(PDF);
-  const outline = [{ title: "8 Cautions", page: 1 }, { title: "9 Revision history", page: 3 }];
+  const outline = [{ title: "8 Cautions", page: 1 }, { title: "Appendix A Embedded inputs", page: 3 }];
   assert.equal(bodyEndPage(HEADINGS, outline, lines), 2);
-  // A section starting below other text on its page: the body ends on that page.
-  const sharedOutline = [{ title: "8 Cautions", page: 1 }, { title: "9 Revision history", page: 2 }];
+  // An appendix starting below other text on its page: the body ends on that page.
+  const sharedOutline = [{ title: "8 Cautions", page: 1 }, { title: "Appendix A Embedded inputs", page: 2 }];
   assert.equal(bodyEndPage(HEADINGS, sharedOutline, lines), 2);
 });

@@ -26,7 +26,8 @@ table.factor-series td, table.factor-series th { padding: 0.2mm 1.5mm; }
   #s-c table.method-checks th:nth-child(3) { width: 16%; }
   #s-c table.checks-by-kind { font-size: 8pt; }
   #s-d h3 { margin-top: 4mm; font-size: 11pt; }
-  #s-d h4 { font-size: 9.5pt; margin: 1.5mm 0 0.5mm; }
+  #s-d h4 { font-size: 9.5pt; margin: 1.5mm 0 0.5mm; clear: both; }
+  #s-d table.rf-table { float: left; margin-right: 3mm; }
   #s-d table { font-size: 7.5pt; margin: 0.5mm 0; }
   #s-d th, #s-d td { padding: 0 1.5mm; line-height: 1.2; }
   #s-d caption, #s-d figcaption, #s-d p.muted, #s-d p.factor-pointer, #s-d .ctf-method-note {

@@ -22,16 +22,12 @@ function seriesTable(rf: Series, timestep_h: number, caption: string, d: Display
   const u = (si: number | undefined) =>
     si === undefined ? "" : formatSig(toDisplay(d, "transmittance", si), SERIES_DIGITS);
   const length = Math.max(rf.X.length, rf.Y.length, rf.Z.length);
-  const rows = Array.from({ length }, (_, j) =>
-    html`
-      <tr>
-        <td class="num">${String(j)}</td>
-        <td class="num">${formatTrim(j * timestep_h, 4)}</td>
-        <td class="num">${u(rf.X[j])}</td>
-        <td class="num">${u(rf.Y[j])}</td>
-        <td class="num">${u(rf.Z[j])}</td>
-      </tr>
-    `);
+  // One line per row, cells right-aligned by the table's class: the series are long (about 150 rows each).
+  const cell = (text: string) => html`<td>${text}</td>`;
+  const rows = Array.from({ length }, (_, j) => {
+    const cells = [String(j), formatTrim(j * timestep_h, 4), u(rf.X[j]), u(rf.Y[j]), u(rf.Z[j])].map(cell);
+    return html`<tr>${cells}</tr>\n`;
+  });
   return html`
     <table class="factor-series">
       <caption>${caption} (${unitLabel(d, "transmittance")}), all ${String(length)} terms.</caption>

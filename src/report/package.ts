@@ -1,6 +1,7 @@
 /** Assembles the self-contained HTML calculation package from the model, results and inputs. */
 import { renderInputsAppendix, renderResultsAppendix } from "./appendices/appendices.ts";
 import { renderChecksAppendix, renderFactorsAppendix } from "./appendices/checksAppendices.ts";
+import { APPENDIX_CSS } from "./appendices/appendixCss.ts";
 import { documentTitle, renderCalculationSection } from "./calculationSection.ts";
 import { contentsOutputs } from "./front/contentsOutputs.ts";
 import { documentAnchor, SENSITIVITY_ANCHOR, sensitivityAnchor } from "./page/anchors.ts";
@@ -95,7 +96,9 @@ export function renderPackage(input: PackageInput): string {
   const info = input.model.info;
   const status = STATUS_LABEL[info.status];
   const headerLeft = `${info.title} | ${info.reference} rev ${info.revision}`;
-  const css = packageCss({ left: headerLeft, right: status }, watermarkFor(info.status));
+  const css = html`${
+    packageCss({ left: headerLeft, right: status }, watermarkFor(info.status))
+  }${APPENDIX_CSS}`;
   const page = html`
     <html lang="en">
       <head>

@@ -26,6 +26,8 @@ export function renderBlocksAsWritten(ctx: RenderContext): Trusted {
   return html`
     <h3 id="s-a-blocks">Input blocks as written</h3>
     <p class="muted">Each block exactly as in its file; the body shows the table computed from it.</p>
+    <p
+      class="print-only">Printed within their files above, at the position the body names (file:line); on screen each block is also listed here on its own.</p>
     ${blocks.map((b, i) =>
       html`
         <div class="block-as-written" id="a-block-${String(i + 1)}">

@@ -7,7 +7,8 @@ import type { RenderContext } from "../page/packageInput.ts";
 import type { CheckResult } from "../../results/types.ts";
 import { acknowledgementFor } from "../../project/acknowledgedFindings.ts";
 
-function subjectAnchor(subject: string, ctx: RenderContext): string | undefined {
+/** The fragment id of a check's subject (its construction or scenario output), if it is in the package. */
+export function subjectAnchor(subject: string, ctx: RenderContext): string | undefined {
   if (subject.startsWith("construction:")) {
     return ctx.constructionAnchors.get(subject.slice("construction:".length));
   }
@@ -29,7 +30,8 @@ export function allChecksTable(ctx: RenderContext): Trusted {
   return checksTable(ctx, ctx.input.results.checks);
 }
 
-function checksTable(ctx: RenderContext, checks: readonly CheckResult[]): Trusted {
+/** Tables the given checks in full: id, subject, description, value, limit and result. */
+export function checksTable(ctx: RenderContext, checks: readonly CheckResult[]): Trusted {
   if (checks.length === 0) return html`<p>No automated checks apply yet.</p>`;
   const rows = checks.map((c) =>
     html`<tr><td>${c.id}</td>${subjectCell(c.subject, ctx)}<td>${c.description}</td><td class="num">${

@@ -59,7 +59,12 @@ function meaningOf(id: string): string | undefined {
 function limitsOf(checks: readonly CheckResult[], id: string): string {
   const limits: number[] = [];
   for (const c of checks) if (c.id === id && !limits.includes(c.limit)) limits.push(c.limit);
-  return limits.length === 0 ? "not run" : limits.map((l) => formatSig(l, 3)).join(", ");
+  if (limits.length === 0) return "not run";
+  if (limits.length <= 2) return limits.map((l) => formatSig(l, 3)).join(", ");
+  // A limit set per series (e.g. a roundoff bound): its range, each value is with its check in C.4.
+  const low = Math.min(...limits);
+  const high = Math.max(...limits);
+  return `${formatSig(low, 3)} to ${formatSig(high, 3)} (${String(limits.length)} values)`;
 }
 
 /** One row per check id: what it verifies and its limit as recorded in results.json (|value| ≤ limit passes). */
@@ -79,7 +84,7 @@ export function methodChecksTable(checks: readonly CheckResult[]): Trusted {
     `;
   });
   return html`
-    <p>Every construction is checked as below; a check passes when |value| ≤ limit. The limits are those recorded in results.json for this project; each construction's output states how many passed, failures are shown there beside the number and in the checks and findings, and every value is listed in Appendix C.2. Checks whose id ends in <code>-surface</code> repeat the root-method checks surface to surface.</p>
+    <p>Every construction is checked as below; a check passes when |value| ≤ limit. The limits are those recorded in results.json for this project; each construction's output states how many passed, failures are shown there beside the number and in the checks and findings, the results per subject and kind are in Appendix C.2, failures in full in C.3, and every single value in C.4. Checks whose id ends in <code>-surface</code> repeat the root-method checks surface to surface.</p>
     <table class="method-checks checks-list">
       <thead>
         <tr>

@@ -1,0 +1,167 @@
+/**
+ * The appendices on paper: Appendix C prints the checks per subject and kind (failures in full) and keeps every
+ * single check on screen; Appendix D prints the leading response-factor terms and keeps every term on screen;
+ * Appendix A prints every input file in full in small monospace, each block only within its file.
+ */
+import assert from "node:assert/strict";
+import { sha256Hex } from "../../src/archive/hash.ts";
+import { PRINTED_TERMS } from "../../src/report/constructions/dynamicTables.ts";
+import { readDynamic } from "../../src/report/constructions/dynamicData.ts";
+import { formatSig } from "../../src/report/page/format.ts";
+import { renderPackage } from "../../src/report/package.ts";
+import type { CheckResult } from "../../src/results/types.ts";
+import { parseDocument } from "./dom.ts";
+import { engineEntry } from "./dynamicFixture.ts";
+import { fixture, wall } from "./fixture.ts";
+
+/** Rows of the tables matched by `selector` that a printout shows (not inside a screen-only element). */
+function printedRows(doc: Document, selector: string): Element[] {
+  return Array.from(doc.querySelectorAll(`${selector} tbody tr`)).filter((r) =>
+    r.closest(".screen-only") === null
+  );
+}
+
+function cells(row: Element): string[] {
+  return Array.from(row.querySelectorAll("td")).map((td) => (td.textContent ?? "").trim());
+}
+
+/** The print rules of the package's stylesheet (every `@media print` block). */
+function printCss(doc: Document): string {
+  const css = Array.from(doc.querySelectorAll("style")).map((s) => s.textContent ?? "").join("\n");
+  return css.split("@media print").slice(1).join("\n");
+}
+
+Deno.test("the checks appendix prints one row per check kind and subject, failures in full", () => {
+  const { checks: engine } = engineEntry(wall());
+  // A second surface with the same kinds twice (two checks per kind), and one failure among them.
+  const scenario: CheckResult[] = [
+    {
+      id: "energy-balance",
+      subject: "scenario:day/s1",
+      description: "balance",
+      value: 2e-9,
+      limit: 1e-6,
+      pass: true,
+    },
+    {
+      id: "energy-balance",
+      subject: "scenario:day/s1",
+      description: "balance",
+      value: -4e-7,
+      limit: 1e-6,
+      pass: true,
+    },
+    {
+      id: "warm-up",
+      subject: "scenario:day/s1",
+      description: "warm-up",
+      value: 0.5,
+      limit: 1e-3,
+      pass: false,
+    },
+    {
+      id: "warm-up",
+      subject: "scenario:day/s1",
+      description: "warm-up",
+      value: 1e-5,
+      limit: 1e-3,
+      pass: true,
+    },
+  ];
+  const checks = [...engine, ...scenario];
+  const doc = parseDocument(renderPackage(fixture({ checks })));
+  const pairs = new Set(checks.map((c) => `${c.subject} ${c.id}`));
+  const rows = printedRows(doc, "#s-c table.checks-by-kind");
+  assert.equal(rows.length, pairs.size, "one printed row per subject and check kind");
+  assert.ok(rows.length < checks.length);
+  // Worst |value| / limit of the two energy-balance checks: 4e-7 / 1e-6 = 0.4 (arithmetic).
+  const balance = rows.find((r) => cells(r)[1] === "energy-balance" && cells(r)[0] === "scenario:day/s1");
+  assert.deepEqual(cells(balance!).slice(1), ["energy-balance", "2", formatSig(0.4, 2), "PASS"]);
+  // warm-up: 0.5 / 1e-3 = 500, one of two failed.
+  const warm = rows.find((r) => cells(r)[1] === "warm-up");
+  assert.deepEqual(cells(warm!).slice(1), ["warm-up", "2", formatSig(500, 2), "FAIL (1 of 2)"]);
+  // The failure in full, printed: id, subject, description, value, limit, result.
+  const failed = printedRows(doc, "#s-c table.checks-list:not(.method-checks)");
+  assert.equal(failed.length, 1);
+  assert.deepEqual(cells(failed[0]!), [
+    "warm-up",
+    "scenario:day/s1",
+    "warm-up",
+    formatSig(0.5, 3),
+    "0.00100",
+    "FAIL",
+  ]);
+  // Every check stays in the HTML, on screen; the printout names results.json checks[] and its hash.
+  const all = Array.from(doc.querySelectorAll("#s-c .screen-only table.checks-list tbody tr"));
+  assert.equal(all.length, checks.length);
+  const pointer = doc.querySelector("#s-c .print-only")?.textContent ?? "";
+  assert.match(pointer, /results\.json checks\[\]/);
+  const input = fixture({ checks });
+  assert.ok(pointer.includes(sha256Hex(input.resultsJsonText)), "names the results by their SHA-256");
+});
+
+Deno.test("every factor term stays in the HTML while print shows the leading terms", () => {
+  const input = fixture();
+  const doc = parseDocument(renderPackage(input));
+  const [id, entry] = Object.entries(input.results.constructions)[0]!;
+  const view = readDynamic(entry)!;
+  const rf = view.responseFactors;
+  assert.ok(rf.Y.length > PRINTED_TERMS, "a long series");
+  // Printed: the leading terms only.
+  const printed = printedRows(doc, "#s-d table.rf-table").filter((r) => /^\d+$/.test(cells(r)[0] ?? ""));
+  assert.equal(printed.length, PRINTED_TERMS);
+  // On screen: every term of both series, to 6 significant figures (SI display).
+  const tables = Array.from(doc.querySelectorAll("#s-d .screen-only table.factor-series"));
+  assert.equal(tables.length, 2);
+  const series = [rf, view.surfaceToSurface.responseFactors];
+  tables.forEach((table, k) => {
+    const rows = Array.from(table.querySelectorAll("tbody tr")).map(cells);
+    const expected = series[k]!;
+    assert.equal(rows.length, expected.Y.length);
+    rows.forEach((row, j) => {
+      assert.deepEqual(
+        row.slice(2),
+        [expected.X[j]!, expected.Y[j]!, expected.Z[j]!].map((v) => formatSig(v, 6)),
+        `term ${j}`,
+      );
+    });
+  });
+  // The printout says how many terms it leaves out and where they are.
+  const pointer = doc.querySelector("#s-d p.print-only")?.textContent?.replace(/\s+/g, " ") ?? "";
+  assert.ok(pointer.includes(`first ${PRINTED_TERMS} of ${rf.Y.length} terms`), pointer);
+  assert.ok(pointer.includes(`further ${rf.Y.length - PRINTED_TERMS} air-to-air terms`), pointer);
+  assert.ok(pointer.includes(`csv/factors-${id}.csv`) && pointer.includes("results.json"), pointer);
+  assert.ok(pointer.includes(sha256Hex(input.resultsJsonText)));
+});
+
+Deno.test("the inputs appendix prints every file in full in small monospace, each block only within its file", () => {
+  const input = fixture();
+  const doc = parseDocument(renderPackage(input));
+  const print = printCss(doc);
+  // Small type and tight lines for the printed files: at most 7 pt and 1.2 line height (common practice for
+  // code listings, no source); long lines wrap instead of running off the page.
+  const rule = print.match(/#s-a pre\.printed-file[^{]*\{([^}]*)\}/)?.[1] ?? "";
+  assert.ok(Number(rule.match(/font-size: ([\d.]+)pt/)?.[1]) <= 7, rule);
+  assert.ok(Number(rule.match(/line-height: ([\d.]+)/)?.[1]) <= 1.2, rule);
+  assert.match(rule, /white-space: pre-wrap/);
+  // The blocks as written repeat what the printed files hold: not printed again.
+  assert.match(print, /#s-a \.block-as-written \{ display: none; \}/);
+  const printed = Array.from(doc.querySelectorAll("#s-a .print-only pre.printed-file")).map((p) =>
+    (p.textContent ?? "").replace(/^\n/, "")
+  );
+  for (const file of input.inputFiles) {
+    const text = (() => {
+      try {
+        return new TextDecoder("utf-8", { fatal: true }).decode(file.bytes);
+      } catch {
+        return undefined;
+      }
+    })();
+    if (text !== undefined) assert.ok(printed.includes(text), `${file.path} printed in full`);
+    // One header line per file: path, bytes and SHA-256.
+    const header = Array.from(doc.querySelectorAll("#s-a p.muted")).find((p) =>
+      (p.textContent ?? "").includes(file.sha256)
+    );
+    assert.ok(header?.textContent?.includes(`${file.bytes.length} bytes`), file.path);
+  }
+});

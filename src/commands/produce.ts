@@ -4,6 +4,7 @@ import { formatPosition } from "../project/position.ts";
 import { renderPackage } from "../report/package.ts";
 import { computeProject } from "../results/buildResults.ts";
 import { resultsJsonText } from "../results/jsonText.ts";
+import { packageResultsCopy } from "../results/packageCopy.ts";
 import { issueGate } from "../results/issueGate.ts";
 import { buildSummary } from "../results/summary.ts";
 import type { ResultsJson } from "../results/types.ts";
@@ -16,6 +17,8 @@ import type { OutputFile } from "./writeOutput.ts";
 export interface ProducedOutputs {
   readonly results: ResultsJson;
   readonly resultsJsonText: string;
+  /** The copy package.html embeds (long response-factor series cut to their leading terms). */
+  readonly embeddedResultsText: string;
   readonly page: string;
   /** package.html, results.json and the CSV files, ready to write. */
   readonly files: readonly OutputFile[];
@@ -60,6 +63,7 @@ export function produceOutputs(loaded: LoadedProject, progress?: (message: strin
   };
   progress?.("rendering the package");
   const resultsText = resultsJsonText(results);
+  const embeddedResultsText = resultsJsonText(packageResultsCopy(results));
   const page = renderPackage({
     model: loaded.model,
     results,
@@ -69,6 +73,7 @@ export function produceOutputs(loaded: LoadedProject, progress?: (message: strin
     toolVersion: TOOL_VERSION,
     runtimeVersion: runtimeVersion(),
     resultsJsonText: resultsText,
+    embeddedResultsText,
   });
   const files: OutputFile[] = [
     { path: "package.html", text: page },
@@ -86,7 +91,7 @@ export function produceOutputs(loaded: LoadedProject, progress?: (message: strin
       f,
     ) => (f.chunks === undefined ? { path: f.path, text: f.text } : { path: f.path, chunks: f.chunks })),
   ];
-  return { ok: true, outputs: { results, resultsJsonText: resultsText, page, files } };
+  return { ok: true, outputs: { results, resultsJsonText: resultsText, embeddedResultsText, page, files } };
 }
 
 /** Prints diagnostics, one per line, as the CLI contract says. */

@@ -4,6 +4,7 @@ import { formatPosition } from "../project/position.ts";
 import { renderPackage } from "../report/package.ts";
 import { computeProject } from "../results/buildResults.ts";
 import { resultsJsonText } from "../results/jsonText.ts";
+import { packageResultsCopy } from "../results/packageCopy.ts";
 import { issueGate } from "../results/issueGate.ts";
 import { buildSummary } from "../results/summary.ts";
 import type { ResultsJson } from "../results/types.ts";
@@ -18,6 +19,8 @@ import type { OutputFile } from "./writeOutput.ts";
 export interface ProducedOutputs {
   readonly results: ResultsJson;
   readonly resultsJsonText: string;
+  /** The copy package.html embeds (long response-factor series cut to their leading terms). */
+  readonly embeddedResultsText: string;
   readonly page: string;
   /** The reader's and the review's findings, sorted (what the package lists). */
   readonly findings: readonly Diagnostic[];
@@ -71,6 +74,7 @@ export function produceOutputs(
   };
   progress?.("rendering the package");
   const resultsText = resultsJsonText(results);
+  const embeddedResultsText = resultsJsonText(packageResultsCopy(results));
   const page = renderPackage({
     model: loaded.model,
     results,
@@ -80,6 +84,7 @@ export function produceOutputs(
     toolVersion: TOOL_VERSION,
     runtimeVersion: runtimeVersion(),
     resultsJsonText: resultsText,
+    embeddedResultsText,
   });
   const files: OutputFile[] = [
     { path: "package.html", text: page },
@@ -94,7 +99,10 @@ export function produceOutputs(
       ...computed.csvFiles,
     ], CSV_LOCALES[csvLocale]),
   ];
-  return { ok: true, outputs: { results, resultsJsonText: resultsText, page, findings, files } };
+  return {
+    ok: true,
+    outputs: { results, resultsJsonText: resultsText, embeddedResultsText, page, findings, files },
+  };
 }
 
 /** Prints diagnostics, one per line, as the CLI contract says. */

@@ -39,6 +39,8 @@ export interface ConstructionDynamicJson {
     readonly U: number;
     readonly responseFactors: ResponseFactorsJson;
     readonly ctf: CtfJson | null;
+    /** Extension: modal form of the surface-to-surface response (its series are this form expanded). */
+    readonly modal: ModalJson;
   };
   readonly periodic: readonly number[];
   readonly periodicX: readonly number[];
@@ -75,6 +77,15 @@ function modalSeries(m: PulseModes) {
   return { rf0: m.rf0, rf1: m.rf1, coefficients: m.coefficients };
 }
 
+function modalJson(modes: RootAnalysis["modes"]): ModalJson {
+  return {
+    ratios: modes.Y.ratios,
+    X: modalSeries(modes.X),
+    Y: modalSeries(modes.Y),
+    Z: modalSeries(modes.Z),
+  };
+}
+
 /** Produces the results.json dynamic fields of one construction from its analysis. */
 export function constructionDynamicJson(analysis: DynamicAnalysis): ConstructionDynamicJson {
   const air = analysis.airToAir;
@@ -91,6 +102,7 @@ export function constructionDynamicJson(analysis: DynamicAnalysis): Construction
       U: analysis.surfaceToSurface.uValue,
       responseFactors: rfJson(analysis.surfaceToSurface.responseFactors),
       ctf: rootCtf(analysis.surfaceToSurface),
+      modal: modalJson(analysis.surfaceToSurface.modes),
     },
     periodic: analysis.periodic.Y,
     periodicX: analysis.periodic.X,
@@ -105,12 +117,7 @@ export function constructionDynamicJson(analysis: DynamicAnalysis): Construction
       arealHeatCapacityInside: iso.arealHeatCapacityInside,
       arealHeatCapacityOutside: iso.arealHeatCapacityOutside,
     },
-    modal: {
-      ratios: air.modes.Y.ratios,
-      X: modalSeries(air.modes.X),
-      Y: modalSeries(air.modes.Y),
-      Z: modalSeries(air.modes.Z),
-    },
+    modal: modalJson(air.modes),
     poles: { count: air.poles.betas.length, betas_per_h: air.poles.betas.map((b) => b * 3600) },
   };
 }

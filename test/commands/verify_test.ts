@@ -6,6 +6,7 @@ import { encodeBase64 } from "../../src/archive/base64.ts";
 import { sha256Hex } from "../../src/archive/hash.ts";
 import { escapeHtml } from "../../src/report/page/html.ts";
 import { PACKAGE_SIZE_LIMIT } from "../../src/commands/readBounded.ts";
+import { heavyWallFiles } from "../../scripts/heavy-walls.ts";
 
 const MINIMAL = new URL("../fixtures/good/minimal/", import.meta.url).pathname;
 
@@ -232,4 +233,31 @@ Deno.test("runVerify() refuses a folder with exit 2", async () => {
   const result = await verifyPath(await Deno.makeTempDir());
   assert.equal(result.code, 2);
   assert.ok(result.lines[0]!.includes("a folder, not a regular file"));
+});
+
+Deno.test("runVerify() compares an older package that embedded every response-factor term with a re-run", async () => {
+  // Packages before the modal-form copy embedded results.json whole; the cut tails are exact expansions of the
+  // modal form, so both sides compare in the copy's form and agree within 1e-9.
+  const project = await Deno.makeTempDir();
+  for (const [path, bytes] of heavyWallFiles(1)) Deno.writeFileSync(join(project, path), bytes);
+  const out = join(await Deno.makeTempDir(), "out");
+  assert.equal(await runBuild({ project, out }, capture().io), 0);
+  const text = Deno.readTextFileSync(join(out, "package.html"));
+  const full = Deno.readTextFileSync(join(out, "results.json"));
+  const embedded = /<pre data-embedded="results-json">([^<]*)<\/pre>/.exec(text);
+  assert.ok(
+    embedded !== null && embedded[1]!.includes("&quot;leading&quot;"),
+    "the copy cuts the long series",
+  );
+  const older = text.replace(embedded[0], `<pre data-embedded="results-json">\n${escapeHtml(full)}</pre>`)
+    .replace(/content="fluxnote [^"]+"/, 'content="fluxnote 0.0.9"')
+    .replaceAll(/&quot;version&quot;: &quot;[^&]+&quot;/g, "&quot;version&quot;: &quot;0.0.9&quot;");
+  const result = await verifyText(older);
+  assert.ok(result.lines.some((l) => l.includes("agrees within 1e-9")), result.lines.join("\n"));
+  const tail = JSON.parse(full).constructions["H-1"].responseFactors.Y[100];
+  const drifted = await verifyText(older.replace(String(tail), String(tail * (1 + 1e-6))));
+  assert.ok(
+    drifted.lines.some((l) => l.includes("/constructions/H-1/responseFactors")),
+    drifted.lines.join("\n"),
+  );
 });

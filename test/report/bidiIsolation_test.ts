@@ -62,7 +62,7 @@ Deno.test("a package with bidi overrides in names and a file name isolates every
     const bytes = extracted.contents.files.get(wallsFile);
     assert.ok(bytes !== undefined, "the file with a bidi override in its name was not extracted");
     assert.equal(new TextDecoder().decode(bytes), walls);
-    assert.equal(extracted.contents.resultsJsonText, produced.outputs.resultsJsonText);
+    assert.equal(extracted.contents.resultsJsonText, produced.outputs.embeddedResultsText);
   } finally {
     await Deno.remove(folder, { recursive: true });
   }

@@ -1,5 +1,6 @@
 /** A small invented project, its results and inputs, for rendering tests. All content is made up. */
 import { engineEntry } from "./dynamicFixture.ts";
+import { packageResultsCopy } from "../../src/results/packageCopy.ts";
 import { wall, WALL_SOURCE } from "./wallFixture.ts";
 import type { Diagnostic } from "../../src/project/diagnostic.ts";
 import type { Construction, Model, ProjectInfo } from "../../src/project/model.ts";
@@ -219,5 +220,6 @@ export function fixture(options: FixtureOptions = {}): PackageInput {
     toolVersion: "0.1.0",
     runtimeVersion: "Deno 2.9.6",
     resultsJsonText: JSON.stringify(results, null, 2) + t,
+    embeddedResultsText: JSON.stringify(packageResultsCopy(results), null, 2) + t,
   };
 }

@@ -100,6 +100,7 @@ export function packageWith(scenario: Scenario, outcome: ScenarioOutcome, text =
     model: { ...base.model, documents, scenarios: [scenario], constructions: [wall(), roof()] },
     results,
     resultsJsonText: JSON.stringify(results),
+    embeddedResultsText: JSON.stringify(results),
   };
 }
 

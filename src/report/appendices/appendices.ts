@@ -1,5 +1,6 @@
 /** Appendix A (every input file's exact bytes, base64) and Appendix B (the results JSON). */
 import { encodeBase64 } from "../../archive/base64.ts";
+import { LEADING_TERMS } from "../../results/packageCopy.ts";
 import { renderBlocksAsWritten } from "./inputBlocks.ts";
 import { html, PRE_LEAD, type Trusted } from "../page/html.ts";
 import type { InputFile, RenderContext } from "../page/packageInput.ts";
@@ -93,7 +94,12 @@ export function renderResultsAppendix(ctx: RenderContext): Trusted {
       <h2>Appendix B Results (results.json)</h2>${siNote(ctx)}
       <details class="screen-only">
         <summary>Machine-readable results, schema ${ctx.input.results.schema}</summary>
-        <pre data-embedded="results-json">${PRE_LEAD}${ctx.input.resultsJsonText}</pre>
+        <p>As results.json, except that each response-factor series of a construction is written to its first
+        ${String(
+          LEADING_TERMS,
+        )} terms; the rest are its modal form (<code>modal</code>) expanded, and results.json
+        beside the package holds every term.</p>
+        <pre data-embedded="results-json">${PRE_LEAD}${ctx.input.embeddedResultsText}</pre>
       </details>
       ${printedResults(ctx)}
     </section>

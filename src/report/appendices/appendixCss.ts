@@ -11,9 +11,6 @@ table.checks-by-kind th, table.checks-by-kind td { padding: 0.3mm 1.2mm; }
 table.checks-by-kind tr { break-inside: avoid; }
 table.checks-by-kind tr.subject-start td { border-top: 1.5px solid var(--ink); }
 table.checks-by-kind code { font-size: 7.5pt; }
-table.factor-series { font-size: 8pt; }
-table.factor-series td, table.factor-series th { padding: 0.2mm 1.5mm; }
-table.factor-series td { text-align: right; font-variant-numeric: tabular-nums; white-space: nowrap; }
 @media print {
   #s-a h3 { font-size: 10pt; margin: 3mm 0 0; }
   #s-a h3 + p.muted { margin: 0 0 0.5mm; font-size: 7.5pt; }

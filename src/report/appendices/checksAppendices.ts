@@ -1,5 +1,7 @@
 /** Appendix C (the numerical checks by subject and kind, failures in full, every check on screen) and Appendix D (each construction's factors). */
 import { renderDynamicFactors } from "../constructions/dynamicOutput.ts";
+import { COMPACT_ABOVE_CONSTRUCTIONS, isCompactPackage } from "../page/compact.ts";
+import { LEADING_TERMS } from "../../results/packageCopy.ts";
 import { readDynamic } from "../constructions/dynamicData.ts";
 import { renderFactorSeries } from "./factorSeries.ts";
 import { html, type Trusted } from "../page/html.ts";
@@ -22,6 +24,17 @@ function failedChecks(ctx: RenderContext): Trusted {
 function everyCheck(ctx: RenderContext): Trusted {
   const checks = ctx.input.results.checks;
   if (checks.length === 0) return html`<p>No automated checks apply yet.</p>`;
+  if (isCompactPackage(ctx.input.model.constructions.length)) {
+    return html`
+      <p
+        class="every-check-pointer">A large project (more than ${String(
+          COMPACT_ABOVE_CONSTRUCTIONS,
+        )} constructions): the ${String(
+          checks.length,
+        )} checks one by one, with description, value and limit, are in the embedded results (Appendix B) and results.json <code>checks[]</code>, SHA-256 <span
+            class="hash">${sha256Hex(ctx.input.resultsJsonText)}</span>.</p>
+    `;
+  }
   return html`
     <details class="screen-only every-check">
       <summary>Every check (${String(checks.length)}) with its description, value, limit and result</summary>
@@ -62,6 +75,19 @@ export function renderChecksAppendix(ctx: RenderContext): Trusted {
 /** Renders Appendix D: per construction, response factors, both CTFs, periodic factors and plots. */
 export function renderFactorsAppendix(ctx: RenderContext): Trusted {
   const resultsSha256 = sha256Hex(ctx.input.resultsJsonText);
+  if (isCompactPackage(ctx.input.model.constructions.length)) {
+    return html`
+      <section id="s-d">
+        <h2>Appendix D Dynamic factors</h2>
+        <p>A large project (more than ${String(
+          COMPACT_ABOVE_CONSTRUCTIONS,
+        )} constructions): each construction's dynamic summary is printed with it; its response factors, CTF coefficients and periodic factors are in the embedded results (Appendix B: long series as their first ${String(
+          LEADING_TERMS,
+        )} terms and the modal form the rest expand from), in results.json, SHA-256 <span
+          class="hash">${resultsSha256}</span>, and in csv/factors-&lt;id&gt;.csv.</p>
+      </section>
+    `;
+  }
   const parts = ctx.input.model.constructions.map((construction, i) => {
     const results = Object.hasOwn(ctx.input.results.constructions, construction.id)
       ? ctx.input.results.constructions[construction.id]
@@ -74,7 +100,7 @@ export function renderFactorsAppendix(ctx: RenderContext): Trusted {
         class="muted">Results with <a href="#${anchor}">the construction</a>; long series printed as their leading terms, every term in results.json (Appendix B) and csv/factors-${construction
           .id}.csv.</p>
       ${renderDynamicFactors(construction, results, ctx.input.results.methodNotes ?? [], anchor, ctx.display)}
-      ${view === undefined ? html`` : renderFactorSeries(construction.id, view, resultsSha256, ctx.display)}
+      ${view === undefined ? html`` : renderFactorSeries(construction.id, view, resultsSha256)}
     `;
   });
   return html`

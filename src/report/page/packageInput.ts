@@ -33,6 +33,8 @@ export interface PackageInput {
   readonly runtimeVersion: string;
   /** The exact text written as results.json. */
   readonly resultsJsonText: string;
+  /** The text the package embeds: results.json with long response-factor series cut (`packageResultsCopy`). */
+  readonly embeddedResultsText: string;
 }
 
 /** Ids and anchors shared by the sections of one rendering. */

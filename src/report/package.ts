@@ -2,6 +2,8 @@
 import { renderInputsAppendix, renderResultsAppendix } from "./appendices/appendices.ts";
 import { renderChecksAppendix, renderFactorsAppendix } from "./appendices/checksAppendices.ts";
 import { renderCalculationSection } from "./calculationSection.ts";
+import { hasHourlyAppendix, HOURLY_APPENDIX, renderHourlyAppendix } from "./scenarios/hourlyAppendix.ts";
+import { renderSensitivityAppendix, SENSITIVITY_APPENDIX } from "./scenarios/sensitivityOutput.ts";
 import { renderChecksSection } from "./registers/checksSection.ts";
 import { renderCover, STATUS_LABEL, watermarkFor } from "./front/cover.ts";
 import { packageCss } from "./page/css.ts";
@@ -42,6 +44,8 @@ const CONTENTS: readonly (readonly [string, string])[] = [
   ["s-b", "Appendix B Results (results.json)"],
   ["s-c", "Appendix C Numerical checks"],
   ["s-d", "Appendix D Dynamic factors"],
+  HOURLY_APPENDIX,
+  SENSITIVITY_APPENDIX,
 ];
 
 function renderContents(ctx: RenderContext): Trusted {
@@ -61,7 +65,11 @@ function renderContents(ctx: RenderContext): Trusted {
   const sensitivity = ctx.input.results.sensitivity === undefined
     ? html``
     : html`<li><a href="#s-2-${sensitivityNumber}">2.${sensitivityNumber} Sensitivity study</a></li>`;
-  const shown = CONTENTS.filter(([id]) => id !== "s-summary" || ctx.input.results.summary !== undefined);
+  const absent = new Set<string>();
+  if (ctx.input.results.summary === undefined) absent.add("s-summary");
+  if (!hasHourlyAppendix(ctx)) absent.add(HOURLY_APPENDIX[0]);
+  if (ctx.input.results.sensitivity === undefined) absent.add(SENSITIVITY_APPENDIX[0]);
+  const shown = CONTENTS.filter(([id]) => !absent.has(id));
   const items = shown.map(([id, title]) =>
     id === "s-2"
       ? html`<li><a href="#${id}">${title}</a><ol>${docs}${sensitivity}</ol></li>`
@@ -122,6 +130,8 @@ export function renderPackage(input: PackageInput): string {
     ${renderResultsAppendix(ctx)}
     ${renderChecksAppendix(ctx)}
     ${renderFactorsAppendix(ctx)}
+    ${renderHourlyAppendix(ctx)}
+    ${renderSensitivityAppendix(ctx)}
     </main>
     ${endMarker(input)}
       </body>

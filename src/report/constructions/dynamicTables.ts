@@ -92,7 +92,7 @@ export function dynamicSummaryTable(view: DynamicView, d: DisplayUnits): Trusted
   ];
   return html`
     <table class="dynamic-summary">
-      <caption>Dynamic characteristics. Upper part: the response-factor calculation; lower part: ISO 13786:2017 at a period of 24 h, side 1 = inside, surface resistances included.</caption>
+      <caption>Dynamic characteristics: ISO 13786:2017 at a period of 24 h, side 1 = inside, surface resistances included. On screen also the response-factor calculation (τ₁, poles, time step, terms, residual), as in results.json.</caption>
       <thead>
         <tr>
           <th>Quantity</th>
@@ -101,7 +101,10 @@ export function dynamicSummaryTable(view: DynamicView, d: DisplayUnits): Trusted
           <th>Unit / note</th>
         </tr>
       </thead>
-      <tbody>${rowsOf(method)}${rowsOf(iso.slice(0, 1), "group-start")}${rowsOf(iso.slice(1))}</tbody>
+      <tbody>${rowsOf(method.slice(0, 1))}${rowsOf(method.slice(1), "rf-detail screen-only")}${rowsOf(
+        iso.slice(0, 1),
+        "group-start",
+      )}${rowsOf(iso.slice(1))}</tbody>
     </table>
     ${lagNote(view)}
   `;

@@ -105,6 +105,11 @@ table.assumptions td.applies-to { font-size: 7.5pt; }
   table, table.hourly { break-inside: auto; }
   thead { display: table-header-group; }
   tfoot { display: table-footer-group; }
+  figure.plot-figure svg, figure.tornado svg { max-width: 125mm; }
+  figure svg.section-drawing { max-width: 140mm; }
+  .hourly-appendix table.compact { font-size: 7pt; }
+  .hourly-appendix table.compact th, .hourly-appendix table.compact td { padding: 0.2mm 0.8mm; }
+  tr.screen-only { display: none; }
 }
 `);
 

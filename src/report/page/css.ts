@@ -72,6 +72,7 @@ table.hourly { break-inside: auto; }
 table.hourly th .unit { font-weight: normal; }
 table.hourly td.total-col { font-weight: bold; }
 table.conditions th { width: 32mm; }
+.default-mark { margin-left: 0.35em; }
 table.conditions td, .scenario-notes { font-size: 9pt; }
 .scenario-notes { margin: 1mm 0 3mm; padding-left: 5mm; }
 .legend { display: inline; }

@@ -94,7 +94,16 @@ table.assumptions td.applies-to { font-size: 7.5pt; }
 .print-only { display: none; }
 @media print {
   html { background: none; }
-  body { max-width: none; margin: 0; padding: 0; font-size: 10pt; }
+  body { max-width: none; margin: 0; padding: 0; font-size: 10pt; line-height: 1.35; }
+  p { margin: 1.6mm 0; }
+  h2 { margin-top: 7mm; }
+  h3 { margin-top: 5mm; margin-bottom: 2mm; }
+  h4, h5, h6 { margin-top: 3mm; margin-bottom: 1.5mm; }
+  table, figure { margin: 2mm 0; }
+  ul, ol { margin: 1.6mm 0; }
+  .block-output { margin: 1.5mm 0 4mm; }
+  .dynamic-response { margin-top: 3mm; }
+  .dynamic-response h4 { margin: 3mm 0 1mm; }
   .running-header { display: none; }
   .embedded-file, details.input-echo { display: none; }
   details { display: block; }
@@ -106,6 +115,10 @@ table.assumptions td.applies-to { font-size: 7.5pt; }
   table, table.hourly { break-inside: auto; }
   thead { display: table-header-group; }
   tfoot { display: table-footer-group; }
+  table.layer-table { width: 100%; font-size: 8.5pt; }
+  table.layer-table th, table.layer-table td { padding: 0.5mm 1.2mm; }
+  table.layer-table th:nth-child(2) { width: 40%; }
+  table.dynamic-summary th, table.dynamic-summary td { padding: 0.3mm 1.2mm; }
   figure.plot-figure svg, figure.tornado svg { max-width: 125mm; }
   figure svg.section-drawing { max-width: 140mm; }
   .hourly-appendix table.compact { font-size: 7pt; }

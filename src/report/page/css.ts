@@ -47,6 +47,9 @@ nav.contents ol { list-style: none; padding-left: 0; }
 .dynamic-response h4 { font-size: 11pt; margin: 5mm 0 1mm; border-top: 1px solid var(--rule); padding-top: 2mm; }
 .dynamic-response h5 { font-size: 10pt; margin: 4mm 0 1mm; }
 .dynamic-response table { font-size: 8.5pt; }
+.dynamic-summary-pair { display: flex; flex-wrap: wrap; gap: 0 4mm; align-items: flex-start; }
+.dynamic-summary-caption { font-family: system-ui, -apple-system, "Segoe UI", Arial, sans-serif; font-size: 9pt;
+  color: var(--muted); margin-bottom: 0; }
 .dynamic-response th, .dynamic-response td { padding: 0.6mm 1.5mm; }
 tr.group-start td { border-top: 2px solid var(--ink); }
 .ctf-table tr.group-start td { border-top: 1.5px solid var(--ink); }

@@ -3,7 +3,7 @@
  * material used, where its values are stated (a project material's table in section 2, a library material's
  * values here), the number of its source in the list of section 7.2 and whether that source is confirmed.
  */
-import type { MaterialDef } from "../../project/model.ts";
+import type { MaterialDef, ResolvedLayer } from "../../project/model.ts";
 import { formatPosition } from "../../project/position.ts";
 import { UNCONFIRMED_SOURCE } from "../../results/openItems.ts";
 import { type DisplayUnits, type QuantityKind, toDisplay, unitLabel } from "../page/displayUnits.ts";
@@ -11,13 +11,21 @@ import { formatTrim } from "../page/format.ts";
 import { html, type Trusted } from "../page/html.ts";
 import type { RenderContext } from "../page/packageInput.ts";
 
-/** Materials referenced by at least one construction layer, in first-use order. */
+/** The material ids a layer uses: its own, and those of a framed layer's two parts. */
+function layerMaterialIds(layer: ResolvedLayer): string[] {
+  const ids = [layer.materialId, layer.bridge?.base.materialId, layer.bridge?.bridge.materialId];
+  return ids.filter((id): id is string => id !== undefined);
+}
+
+/** Materials referenced by at least one construction layer (framed layers' parts included), in first-use order. */
 export function usedMaterials(ctx: RenderContext): MaterialDef[] {
   const out: MaterialDef[] = [];
   for (const c of ctx.input.model.constructions) {
     for (const layer of c.layers) {
-      const m = ctx.input.model.materials.find((x) => x.id === layer.materialId);
-      if (m !== undefined && !out.includes(m)) out.push(m);
+      for (const id of layerMaterialIds(layer)) {
+        const m = ctx.input.model.materials.find((x) => x.id === id);
+        if (m !== undefined && !out.includes(m)) out.push(m);
+      }
     }
   }
   return out;
@@ -49,7 +57,7 @@ function cell(value: number | undefined, kind: QuantityKind, d: DisplayUnits): T
 
 function usedIn(ctx: RenderContext, id: string): string {
   return ctx.input.model.constructions
-    .filter((c) => c.layers.some((l) => l.materialId === id))
+    .filter((c) => c.layers.some((l) => layerMaterialIds(l).includes(id)))
     .map((c) => c.id)
     .join(", ");
 }

@@ -49,6 +49,28 @@ function appliesTo(group: AssumptionGroup): Trusted {
   return html`<td class="applies-to">${String(group.members.length)}: ${items}</td>`;
 }
 
+/**
+ * The rows of library materials folded into one: each material's values and source are its line in section 6,
+ * so the register names the choice once and lists every material with the line that uses it.
+ */
+function foldLibraryMaterials(groups: readonly AssumptionGroup[]): AssumptionGroup[] {
+  const library = groups.filter((g) => g.kind === "library:material");
+  if (library.length < 2) return [...groups];
+  const folded: AssumptionGroup = {
+    kind: "library:material",
+    text:
+      "Material taken from the built-in library (no project block defines it); its values λ, ρ, c and its source are its line in section 6",
+    source: "the built-in library's source of each material (section 6, list 7.2)",
+    members: library.flatMap((g) => g.members),
+  };
+  const first = groups.indexOf(library[0]!);
+  return [
+    ...groups.slice(0, first),
+    folded,
+    ...groups.slice(first).filter((g) => g.kind !== "library:material"),
+  ];
+}
+
 /** The basis column: a library material's source as its number in 7.2, other sources as written. */
 function basisCell(group: AssumptionGroup, sources: readonly string[]): Trusted {
   const ref = group.kind === "library:material" ? sourceReference(sources, group.source) : undefined;
@@ -63,7 +85,7 @@ function basisCell(group: AssumptionGroup, sources: readonly string[]): Trusted 
  */
 export function renderAssumptionsSection(ctx: RenderContext): Trusted {
   const list = ctx.input.results.assumptions;
-  const groups = groupAssumptions(list, ctx.input.model.constructions.map((c) => c.id));
+  const groups = foldLibraryMaterials(groupAssumptions(list, ctx.input.model.constructions.map((c) => c.id)));
   const sources = citedSources(ctx);
   const body = list.length === 0 ? html`<p>No assumptions were recorded.</p>` : html`
     <table class="assumptions">

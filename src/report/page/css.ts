@@ -75,6 +75,7 @@ table.hourly { break-inside: auto; }
 table.hourly th .unit { font-weight: normal; }
 table.hourly td.total-col { font-weight: bold; }
 table.conditions th { width: 32mm; }
+table.heating-conditions th { width: auto; white-space: nowrap; }
 .default-mark { margin-left: 0.35em; }
 table.conditions td, .scenario-notes { font-size: 9pt; }
 .scenario-notes { margin: 1mm 0 3mm; padding-left: 5mm; }
@@ -122,8 +123,8 @@ table.assumptions td.applies-to { font-size: 7.5pt; }
   table.layer-table th, table.layer-table td { padding: 0.5mm 1.2mm; }
   table.layer-table th:nth-child(2) { width: 40%; }
   table.dynamic-summary th, table.dynamic-summary td { padding: 0.3mm 1.2mm; }
-  figure.plot-figure svg, figure.tornado svg { max-width: 125mm; }
-  figure svg.section-drawing { max-width: 140mm; }
+  figure.plot-figure svg, figure.tornado svg { max-width: 118mm; }
+  figure svg.section-drawing { max-width: 128mm; }
   .hourly-appendix table.compact { font-size: 7pt; }
   .hourly-appendix table.compact th, .hourly-appendix table.compact td { padding: 0.2mm 0.8mm; }
   tr.screen-only { display: none; }

@@ -119,6 +119,11 @@ table.assumptions td.applies-to { font-size: 7.5pt; }
   table, table.hourly { break-inside: auto; }
   thead { display: table-header-group; }
   tfoot { display: table-footer-group; }
+  table.material-table { width: 100%; font-size: 8.5pt; }
+  table.material-table th:nth-child(1) { width: 17%; }
+  table.material-table th:nth-child(2) { width: 19%; }
+  table.material-table th:nth-child(7) { width: 34%; }
+  #s-7 li { font-size: 9pt; }
   table.layer-table { width: 100%; font-size: 8.5pt; }
   table.layer-table th, table.layer-table td { padding: 0.5mm 1.2mm; }
   table.layer-table th:nth-child(2) { width: 40%; }

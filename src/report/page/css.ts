@@ -76,6 +76,7 @@ table.hourly th .unit { font-weight: normal; }
 table.hourly td.total-col { font-weight: bold; }
 table.conditions th { width: 32mm; }
 table.heating-conditions th { width: auto; white-space: nowrap; }
+table.heating-surfaces td:first-child, table.scenario-surfaces td:first-child { white-space: nowrap; }
 .default-mark { margin-left: 0.35em; }
 table.conditions td, .scenario-notes { font-size: 9pt; }
 .scenario-notes { margin: 1mm 0 3mm; padding-left: 5mm; }
@@ -104,6 +105,7 @@ table.assumptions td.applies-to { font-size: 7.5pt; }
   h3 { margin-top: 5mm; margin-bottom: 2mm; }
   h4, h5, h6 { margin-top: 3mm; margin-bottom: 1.5mm; }
   table, figure { margin: 2mm 0; }
+  th, td { padding: 0.6mm 1.5mm; }
   ul, ol { margin: 1.6mm 0; }
   .block-output { margin: 1.5mm 0 4mm; }
   .dynamic-response { margin-top: 3mm; }
@@ -126,10 +128,14 @@ table.assumptions td.applies-to { font-size: 7.5pt; }
   #s-7 li { font-size: 9pt; }
   table.layer-table { width: 100%; font-size: 8.5pt; }
   table.layer-table th, table.layer-table td { padding: 0.5mm 1.2mm; }
-  table.layer-table th:nth-child(2) { width: 40%; }
+  table.layer-table th:nth-child(2) { width: 34%; }
+  table.layer-table th:nth-child(8) { width: 17%; }
   table.dynamic-summary th, table.dynamic-summary td { padding: 0.3mm 1.2mm; }
-  figure.plot-figure svg, figure.tornado svg { max-width: 118mm; }
+  figure.plot-figure svg, figure.tornado svg { max-width: 110mm; }
   figure svg.section-drawing { max-width: 128mm; }
+  figure svg.section-stack { max-width: 112mm; }
+  .scenario-notes, table.conditions td { font-size: 8.5pt; }
+  table.assumptions { font-size: 8pt; }
   .hourly-appendix table.compact { font-size: 7pt; }
   .hourly-appendix table.compact th, .hourly-appendix table.compact td { padding: 0.2mm 0.8mm; }
   tr.screen-only { display: none; }

@@ -13,6 +13,36 @@ function splitAt(at: string): [string, string] {
 }
 
 /**
+ * Positions "line:col" written compactly: consecutive lines at one column as a range, "73–77:5"; others as
+ * they are, in their order.
+ */
+export function lineRanges(positions: readonly string[]): string {
+  const out: string[] = [];
+  let run: { first: number; last: number; col: string } | undefined;
+  const flush = () => {
+    if (run === undefined) return;
+    out.push(run.first === run.last ? `${run.first}:${run.col}` : `${run.first}\u2013${run.last}:${run.col}`);
+    run = undefined;
+  };
+  for (const p of positions) {
+    const m = /^(\d+):(\d+)$/.exec(p);
+    if (m === null) {
+      flush();
+      out.push(p);
+      continue;
+    }
+    const line = Number(m[1]);
+    if (run !== undefined && run.col === m[2] && line === run.last + 1) run.last = line;
+    else {
+      flush();
+      run = { first: line, last: line, col: m[2]! };
+    }
+  }
+  flush();
+  return out.join(", ");
+}
+
+/**
  * The subjects a row applies to, compactly: members that share a scenario (the part before "/") and a file are
  * listed together, "july-design-day: ew1-south, ew1-west (40-scenarios.md 73:5, 74:5)"; every subject and
  * position stays.
@@ -44,7 +74,7 @@ function appliesTo(group: AssumptionGroup): Trusted {
   const items = [...parts.values()].map((p, i) =>
     html`${i === 0 ? "" : "; "}${p.owner === "" ? "" : `${p.owner}: `}${p.names.join(", ")} (<code>${
       p.file === "" ? "" : `${p.file} `
-    }${p.lines.join(", ")}</code>)`
+    }${lineRanges(p.lines)}</code>)`
   );
   return html`<td class="applies-to">${String(group.members.length)}: ${items}</td>`;
 }

@@ -134,7 +134,7 @@ function tornado(id: string, effects: readonly SensitivityEffect[], display: Dis
   const names = shown.map((e) => clipName(`${materialLabel(e.material)}: ${PROPERTY_NAMES[e.property]}`));
   return renderPlotSvg(
     {
-      height: 60 + 26 * shown.length,
+      height: 60 + 21 * shown.length,
       marginLeft: 262,
       marginBottom: 40,
       x: {

@@ -11,7 +11,7 @@ import { html, type Trusted } from "../page/html.ts";
 import type { RenderContext } from "../page/packageInput.ts";
 
 /** Rows the body's ranked table shows; the rest are in Appendix F. */
-export const RANKED_SHOWN = 12;
+export const RANKED_SHOWN = 10;
 
 /** Names of the material properties varied. */
 export const PROPERTY_NAMES: Readonly<Record<SensitivityEffect["property"], string>> = {

@@ -62,9 +62,16 @@ function usedIn(ctx: RenderContext, id: string): string {
     .join(", ");
 }
 
+/** Whether a material block of this id is in the project's documents (its table is then in section 2). */
+function hasBlock(ctx: RenderContext, id: string): boolean {
+  return ctx.input.model.documents.some((d) =>
+    d.segments.some((s) => s.kind === "block" && s.blockKind === "material" && s.id === id)
+  );
+}
+
 function row(ctx: RenderContext, m: MaterialDef, sources: readonly string[]): Trusted {
   const d = ctx.display;
-  const values = m.origin === "project"
+  const values = m.origin === "project" && hasBlock(ctx, m.id)
     ? html`<td colspan="4" class="muted">table in section 2 (${formatPosition(m.at)})</td>`
     : html`${cell(m.conductivity, "conductivity", d)}${cell(m.density, "density", d)}${
       cell(m.specificHeat, "specificHeat", d)

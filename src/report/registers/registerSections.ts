@@ -50,13 +50,7 @@ export function lineRanges(positions: readonly string[]): string {
 function appliesTo(group: AssumptionGroup): Trusted {
   const subjectOf = (id: string) => id.slice(group.kind.length + 1);
   if (group.members.length === 1) {
-    const m = group.members[0]!;
-    const subject = subjectOf(m.id);
-    return html`<td class="applies-to">${
-      subject === "" ? html`` : html`
-        <code>${subject}</code> at
-      `
-    }<code>${m.at}</code></td>`;
+    return html`<td class="applies-to"><code>${group.members[0]!.at}</code></td>`;
   }
   const parts = new Map<string, { owner: string; file: string; names: string[]; lines: string[] }>();
   for (const m of group.members) {
@@ -130,7 +124,7 @@ export function renderAssumptionsSection(ctx: RenderContext): Trusted {
       <tbody>${groups.map((g) =>
         html`
           <tr>
-            <td><code>${g.kind}</code></td>
+            <td><code>${g.members.length === 1 ? g.members[0]!.id : g.kind}</code></td>
             <td>${g.text}</td>
             ${basisCell(g, sources)}
             ${appliesTo(g)}

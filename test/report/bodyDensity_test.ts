@@ -120,8 +120,26 @@ Deno.test("the body's sensitivity table ranks effects across constructions above
     (c as any).U.map((e: any) => Math.max(Math.abs(e.minus), Math.abs(e.plus)) / results.constructions[id].U)
   ).reduce((a: number, b: number) => Math.max(a, b), 0);
   assert.ok(shares[0]! >= Number((top * 100).toPrecision(2)) - 1e-9, `${shares[0]} vs ${top * 100}`);
-  // Every per-construction table moved to Appendix F, none lost.
+  // Every per-construction table moved to Appendix F, none lost: in input order, every effect kept a row.
   const appendix = doc.querySelector("#s-f")!;
+  const headings = Array.from(appendix.querySelectorAll("h3")).map((h) => text(h)).filter((t) =>
+    t.startsWith("Construction ")
+  );
+  // projects/demo defines EW-1 … EW-4 in 20-walls.md, then RF-1 in 30-roof.md.
+  assert.deepEqual(headings, [
+    "Construction EW-1",
+    "Construction EW-2",
+    "Construction EW-3",
+    "Construction EW-4",
+    "Construction RF-1",
+  ]);
+  const kept = Object.values(study.scenarios).reduce(
+    // deno-lint-ignore no-explicit-any
+    (n: number, s: any) => n + s.peakHeatGain.length + s.conditions.length,
+    // deno-lint-ignore no-explicit-any
+    Object.values(study.constructions).reduce((n: number, c: any) => n + c.U.length + c.timeLag_h.length, 0),
+  );
+  assert.equal(appendix.querySelectorAll("tbody tr").length, kept, "one row per effect kept");
   for (const id of Object.keys(study.constructions)) {
     assert.ok(text(appendix).includes(`Effect on the U-value of ${id}`), id);
     assert.ok(text(appendix).includes(`Effect on the time lag of ${id}`), id);

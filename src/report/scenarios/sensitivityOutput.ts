@@ -14,6 +14,7 @@ import { html, type Trusted } from "../page/html.ts";
 import type { RenderContext } from "../page/packageInput.ts";
 import { namePlaceholder, renderPlotSvg } from "../page/plotSvg.ts";
 
+/** Bars in a tornado chart; the tables of Appendix F list every effect kept. */
 const SHOWN = 10;
 
 /** The sentence on the effects left out: how many and the threshold. */
@@ -81,7 +82,7 @@ function effectTable(
   if (effects.length === 0) {
     return html`<p class="muted">${caption}: no material property changes it by the threshold. ${droppedNote}</p>`;
   }
-  const rows = effects.slice(0, SHOWN).map((e, i) =>
+  const rows = effects.map((e, i) =>
     html`
       <tr>
         <td class="num">${String(i + 1)}</td>
@@ -92,14 +93,6 @@ function effectTable(
       </tr>
     `
   );
-  const more = effects.length > SHOWN
-    ? html`
-      <p
-        class="muted">${String(
-          effects.length - SHOWN,
-        )} smaller effects are in results.json (Appendix B), key <code>sensitivity</code>.</p>
-    `
-    : html``;
   return html`
     <table>
       <caption>${caption}</caption>
@@ -113,7 +106,8 @@ function effectTable(
         </tr>
       </thead>
       <tbody>${rows}</tbody>
-    </table>${more}<p class="muted">${droppedNote}</p>
+    </table>
+    <p class="muted">${droppedNote}</p>
   `;
 }
 
@@ -222,7 +216,10 @@ ${
     }
 ${conditionTable(id, s.conditions, s.dropped.conditions, study, display)}`
   );
-  const constructions = Object.entries(study.constructions).map(([id, c]) =>
+  const order = ctx.input.model.constructions.map((c) => c.id);
+  const rank = (id: string) => order.includes(id) ? order.indexOf(id) : order.length;
+  const byInput = Object.entries(study.constructions).sort(([a], [b]) => rank(a) - rank(b));
+  const constructions = byInput.map(([id, c]) =>
     html`<h3>Construction ${id}</h3>
 ${effectTable(`Effect on the U-value of ${id}`, c.U, c.dropped.U, study, display, "transmittance")}
 ${effectTable(`Effect on the time lag of ${id}`, c.timeLag_h, c.dropped.timeLag_h, study, display, "time")}`

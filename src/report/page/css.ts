@@ -131,7 +131,8 @@ table.assumptions td.applies-to { font-size: 7.5pt; }
   table.layer-table th:nth-child(2) { width: 34%; }
   table.layer-table th:nth-child(8) { width: 17%; }
   table.dynamic-summary th, table.dynamic-summary td { padding: 0.3mm 1.2mm; }
-  figure.plot-figure svg, figure.tornado svg { max-width: 110mm; }
+  figure.plot-figure svg { max-width: 110mm; }
+  figure.tornado svg { max-width: 135mm; }
   figure svg.section-drawing { max-width: 128mm; }
   figure svg.section-stack { max-width: 112mm; }
   .scenario-notes, table.conditions td { font-size: 8.5pt; }

@@ -5,6 +5,8 @@ import { APPENDIX_CSS } from "./appendices/appendixCss.ts";
 import { documentTitle, renderCalculationSection } from "./calculationSection.ts";
 import { contentsOutputs } from "./front/contentsOutputs.ts";
 import { documentAnchor, SENSITIVITY_ANCHOR, sensitivityAnchor } from "./page/anchors.ts";
+import { hasHourlyAppendix, HOURLY_APPENDIX, renderHourlyAppendix } from "./scenarios/hourlyAppendix.ts";
+import { renderSensitivityAppendix, SENSITIVITY_APPENDIX } from "./scenarios/sensitivityOutput.ts";
 import { renderChecksSection } from "./registers/checksSection.ts";
 import { renderCover, STATUS_LABEL, watermarkFor } from "./front/cover.ts";
 import { packageCss } from "./page/css.ts";
@@ -45,6 +47,8 @@ const OWN_SECTIONS: readonly (readonly [string, string])[] = [
   ["s-b", "Appendix B Results (results.json)"],
   ["s-c", "Appendix C Numerical checks"],
   ["s-d", "Appendix D Dynamic factors"],
+  HOURLY_APPENDIX,
+  SENSITIVITY_APPENDIX,
 ];
 
 function entry(anchor: string, title: string, nested: readonly Trusted[] = []): Trusted {
@@ -76,12 +80,16 @@ function renderContents(ctx: RenderContext): Trusted {
     ),
   ]);
   const summary = ctx.input.results.summary === undefined ? html`` : entry("s-summary", "Summary of results");
+  const absent = new Set<string>();
+  if (!hasHourlyAppendix(ctx)) absent.add(HOURLY_APPENDIX[0]);
+  if (ctx.input.results.sensitivity === undefined) absent.add(SENSITIVITY_APPENDIX[0]);
+  const ownSections = OWN_SECTIONS.filter(([id]) => !absent.has(id));
   return html`
     <nav class="contents" aria-label="Contents">
       <h2>Contents</h2>
       <p
         class="muted">The project's files come first, in build order, each under its own first heading with the file name in small print; the tool's output follows each input block. The package's own sections come after them, unnumbered, so the numbers in the project's headings are the only section numbers.</p>
-      <ol>${summary}${docs}${sensitivity}${OWN_SECTIONS.map(([id, title]) => entry(id, title))}</ol>
+      <ol>${summary}${docs}${sensitivity}${ownSections.map(([id, title]) => entry(id, title))}</ol>
     </nav>
   `;
 }
@@ -134,6 +142,8 @@ export function renderPackage(input: PackageInput): string {
     ${renderResultsAppendix(ctx)}
     ${renderChecksAppendix(ctx)}
     ${renderFactorsAppendix(ctx)}
+    ${renderHourlyAppendix(ctx)}
+    ${renderSensitivityAppendix(ctx)}
     </main>
     ${endMarker(input)}
       </body>

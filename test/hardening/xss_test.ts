@@ -181,7 +181,8 @@ Deno.test({
               (doc.querySelector("title")?.textContent ?? "").includes(payload),
               "<title> lost the text",
             );
-            const nameCells = Array.from(doc.querySelectorAll("td")).filter((td) =>
+            // The material's table in section 2 (section 6 names the material by its id only).
+            const nameCells = Array.from(doc.querySelectorAll("table.material-table td")).filter((td) =>
               td.previousElementSibling?.textContent === "board-x"
             );
             assert.ok(nameCells.length > 0, "no material row for board-x");

@@ -33,9 +33,11 @@ Deno.test("package: the cooling load section prints the series, its source (esca
     "Invented test series <b>not</b> from any table",
   );
   assert.equal(section.querySelector(".rts-source b"), null);
-  const loads = Array.from(section.querySelectorAll('table.cooling-load td[data-q="total-load"]')).map((td) =>
-    num(td.textContent)
-  );
+  // The hourly loads print in Appendix E (hourly scenario values), not in the body's cooling load section.
+  assert.equal(section.querySelectorAll("table.cooling-load").length, 0);
+  const loads = Array.from(doc.querySelectorAll('#s-e table.cooling-load td[data-q="total-load"]')).map((
+    td,
+  ) => num(td.textContent));
   assert.deepStrictEqual(loads, cl.total.map((v) => Math.round(v)));
   assert.equal(
     num(section.querySelector('[data-q="total-load-peak"]')?.textContent),

@@ -213,7 +213,8 @@ Deno.test("the sensitivity study comes out in construction block order, in resul
   // Block order of the demo: 20-walls.md EW-1 … EW-4, then 30-roof.md RF-1.
   const order = ["EW-1", "EW-2", "EW-3", "EW-4", "RF-1"];
   assert.deepEqual(Object.keys(results.sensitivity.constructions), order);
-  const study = doc.getElementById("s-sensitivity")!;
+  // The per-construction tables are Appendix F's (the body keeps one ranked table).
+  const study = doc.getElementById("s-f")!;
   const shown = Array.from(study.querySelectorAll("h3")).map(headingText).filter((t) =>
     t.startsWith("Construction")
   );

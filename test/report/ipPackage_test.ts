@@ -121,6 +121,7 @@ Deno.test("IP: the layer table, the section drawing and the material tables use 
   assert.ok(labels.includes(formatTrim(0.12 / 0.0254, 4)), "120 mm EPS is 4.724 in");
   assert.ok(labels.some((l) => /^[\d.]+\u2009in overall/.test(l)), labels.join(" | "));
   assert.ok(!labels.some((l) => /mm/.test(l)), labels.join(" | "));
+  // The fixture's materials have no block in a document, so section 6 gives their values.
   const material = rowOf(ipDoc, "#s-6 table", "eps-board");
   assert.equal(text(material.children[2]), formatTrim(0.035 / (U_FACTOR * 0.0254), 4));
 });

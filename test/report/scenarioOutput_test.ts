@@ -46,7 +46,9 @@ Deno.test("scenario output: the peak shown is the peak in results.json and the l
   // Hourly steps: the peak's time is its hour, written hh:00.
   const hour = String(results.peak.time_h).padStart(2, "0");
   assert.equal(output.querySelector(".peak-time")?.textContent, `${hour}:00 local standard time`);
-  const gains = output.querySelector("table.hourly-gains")!;
+  // The step tables print in Appendix E (hourly scenario values).
+  assert.equal(output.querySelector("table.hourly-gains"), null);
+  const gains = doc.querySelector("#s-e table.hourly-gains")!;
   const totals = column(gains, "total");
   assert.equal(totals.length, 24);
   assert.equal(Math.max(...totals), Math.round(results.peak.heatGain));
@@ -171,9 +173,13 @@ Deno.test("scenario output: defaults are marked, constructions linked, checks li
   const link = rows[0]!.querySelector("td:nth-child(2) a");
   assert.equal(link?.getAttribute("href"), "#c-ew-9");
   assert.ok(doc.getElementById("c-ew-9"), "the link target exists");
-  const checkRows = doc.querySelectorAll(".scenario-output table.subject-checks tbody tr");
-  // Two checks per surface (periodic-convergence, energy-balance) from designDay.ts.
-  assert.equal(checkRows.length, 2 * 4);
+  // Two checks per surface (periodic-convergence, energy-balance) from designDay.ts, all passed: one line in the
+  // body, the rows in Appendix C.
+  assert.equal(doc.querySelectorAll(".scenario-output table.subject-checks tbody tr").length, 0);
+  assert.match(
+    doc.querySelector(".scenario-output .checks-line")?.textContent ?? "",
+    new RegExp(`^${2 * 4} numerical checks passed \\(Appendix C\\)`),
+  );
   assert.match(
     doc.querySelector(".cover")?.textContent ?? "",
     new RegExp(`all ${input.results.checks.length} passed`),

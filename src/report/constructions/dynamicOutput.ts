@@ -85,23 +85,22 @@ export function renderDynamicResponse(
     ? html`
       ${dynamicSummaryTable(view, d)}
       <p
-        class="muted">A large project (more than ${String(
-          COMPACT_ABOVE_CONSTRUCTIONS,
-        )} constructions): the response factors, CTF coefficients, periodic factors and plots of ${construction
+        class="muted">Numbers as in results.json <code>constructions</code> entry for ${construction
+          .id} (Appendix B); method in the calculation methods. A large project (more than ${String(
+            COMPACT_ABOVE_CONSTRUCTIONS,
+          )} constructions): the response factors, CTF coefficients, periodic factors and plots of ${construction
           .id} are in results.json (Appendix B) and csv/factors-${construction.id}.csv.</p>
     `
     : html`
       ${dynamicSummaryTable(view, d)}
       <p
-        class="muted">Response factors, conduction transfer functions, periodic factors and plots of ${construction
-          .id}: <a href="#d-${anchor}">Appendix D</a> (leading terms; every term in results.json and csv/factors-${construction
+        class="muted">Numbers as in results.json <code>constructions</code> entry for ${construction
+          .id} (Appendix B); method in the calculation methods. Response factors, conduction transfer functions, periodic factors and plots: <a href="#d-${anchor}">Appendix D</a> (leading terms; every term in results.json and csv/factors-${construction
           .id}.csv).</p>
     `;
   return html`
     <div class="dynamic-response">
       <h4 class="output-heading">Dynamic response of ${construction.id}</h4>
-      <p class="muted">Numbers as in results.json <code>constructions</code> entry for ${construction
-        .id} (Appendix B); method in the calculation methods.</p>
       ${body}
       ${checksList.markup === ""
         ? html`<p>No automated check is recorded for this construction.</p>`

@@ -61,18 +61,18 @@ export function dynamicSummaryTable(view: DynamicView, d: DisplayUnits): Trusted
   const iso: Row[] = [
     ["Periodic thermal transmittance", "|Y₁₂|", u(iso13786.periodicTransmittance.amplitude), perDegree],
     [
-      "Time shift of Y₁₂ (negative = lag, unwrapped)",
+      "Time shift of Y₁₂ (− = lag, unwrapped)",
       "Δt₁₂",
       formatSig(iso13786.periodicTransmittance.timeShift_h, 3),
       "h",
     ],
     ["Decrement factor |Y₁₂| / U", "f", formatSig(iso13786.decrementFactor, 3), "–"],
-    ["Time lag, unwrapped from ω → 0", "φ", formatSig(iso13786.timeLag_h, 3), "h"],
+    ["Time lag (unwrapped from ω → 0)", "φ", formatSig(iso13786.timeLag_h, 3), "h"],
     ["Inside admittance", "|Y₁₁|", u(iso13786.admittanceInside.amplitude), perDegree],
-    ["Time shift of Y₁₁ (positive = lead)", "Δt₁₁", formatSig(iso13786.admittanceInside.timeShift_h, 3), "h"],
+    ["Time shift of Y₁₁ (+ = lead)", "Δt₁₁", formatSig(iso13786.admittanceInside.timeShift_h, 3), "h"],
     ["Outside admittance", "|Y₂₂|", u(iso13786.admittanceOutside.amplitude), perDegree],
     [
-      "Time shift of Y₂₂ (positive = lead)",
+      "Time shift of Y₂₂ (+ = lead)",
       "Δt₂₂",
       formatSig(iso13786.admittanceOutside.timeShift_h, 3),
       "h",
@@ -90,19 +90,30 @@ export function dynamicSummaryTable(view: DynamicView, d: DisplayUnits): Trusted
       unitLabel(d, "arealHeatCapacity"),
     ],
   ];
+  const head = html`
+    <thead>
+      <tr>
+        <th>Quantity</th>
+        <th>Symbol</th>
+        <th>Value</th>
+        <th>Unit / note</th>
+      </tr>
+    </thead>
+  `;
+  // Two tables side by side in print: transmittance, lag and inside capacity; then the admittances.
   return html`
-    <table class="dynamic-summary">
-      <caption>Dynamic characteristics. Upper part: the response-factor calculation; lower part: ISO 13786:2017 at a period of 24 h, side 1 = inside, surface resistances included.</caption>
-      <thead>
-        <tr>
-          <th>Quantity</th>
-          <th>Symbol</th>
-          <th>Value</th>
-          <th>Unit / note</th>
-        </tr>
-      </thead>
-      <tbody>${rowsOf(method)}${rowsOf(iso.slice(0, 1), "group-start")}${rowsOf(iso.slice(1))}</tbody>
-    </table>
+    <p
+      class="dynamic-summary-caption caption-like">Dynamic characteristics: ISO 13786:2017 at a period of 24 h, side 1 = inside, surface resistances included. On screen also the response-factor calculation (τ₁, poles, time step, terms, residual), as in results.json.</p>
+    <div class="dynamic-summary-pair">
+      <table
+        class="dynamic-summary">${head}<tbody>${rowsOf(method.slice(0, 1))}${rowsOf(
+          method.slice(1),
+          "rf-detail screen-only",
+        )}${rowsOf(iso.slice(0, 4), "group-start")}${rowsOf(iso.slice(8, 9))}</tbody></table>
+      <table class="dynamic-summary">${head}<tbody>${rowsOf(iso.slice(4, 8))}${rowsOf(
+        iso.slice(9),
+      )}</tbody></table>
+    </div>
     ${lagNote(view)}
   `;
 }

@@ -47,6 +47,9 @@ nav.contents ol { list-style: none; padding-left: 0; }
 .dynamic-response h4 { font-size: 11pt; margin: 5mm 0 1mm; border-top: 1px solid var(--rule); padding-top: 2mm; }
 .dynamic-response h5 { font-size: 10pt; margin: 4mm 0 1mm; }
 .dynamic-response table { font-size: 8.5pt; }
+.dynamic-summary-pair { display: flex; flex-wrap: wrap; gap: 0 4mm; align-items: flex-start; }
+.dynamic-summary-caption { font-family: system-ui, -apple-system, "Segoe UI", Arial, sans-serif; font-size: 9pt;
+  color: var(--muted); margin-bottom: 0; }
 .dynamic-response th, .dynamic-response td { padding: 0.6mm 1.5mm; }
 tr.group-start td { border-top: 2px solid var(--ink); }
 .ctf-table tr.group-start td { border-top: 1.5px solid var(--ink); }
@@ -72,6 +75,9 @@ table.hourly { break-inside: auto; }
 table.hourly th .unit { font-weight: normal; }
 table.hourly td.total-col { font-weight: bold; }
 table.conditions th { width: 32mm; }
+table.heating-conditions th { width: auto; white-space: nowrap; }
+table.heating-surfaces td:first-child, table.scenario-surfaces td:first-child { white-space: nowrap; }
+.default-mark { margin-left: 0.35em; }
 table.conditions td, .scenario-notes { font-size: 9pt; }
 .scenario-notes { margin: 1mm 0 3mm; padding-left: 5mm; }
 .legend { display: inline; }
@@ -95,7 +101,17 @@ table.assumptions td.applies-to { font-size: 7.5pt; }
 .print-only { display: none; }
 @media print {
   html { background: none; }
-  body { max-width: none; margin: 0; padding: 0; font-size: 10pt; }
+  body { max-width: none; margin: 0; padding: 0; font-size: 10pt; line-height: 1.35; }
+  p { margin: 1.6mm 0; }
+  h2 { margin-top: 7mm; }
+  h3 { margin-top: 5mm; margin-bottom: 2mm; }
+  h4, h5, h6 { margin-top: 3mm; margin-bottom: 1.5mm; }
+  table, figure { margin: 2mm 0; }
+  th, td { padding: 0.6mm 1.5mm; }
+  ul, ol { margin: 1.6mm 0; }
+  .block-output { margin: 1.5mm 0 4mm; }
+  .dynamic-response { margin-top: 3mm; }
+  .dynamic-response h4 { margin: 3mm 0 1mm; }
   .running-header { display: none; }
   .embedded-file, details.input-echo { display: none; }
   details { display: block; }
@@ -107,6 +123,25 @@ table.assumptions td.applies-to { font-size: 7.5pt; }
   table, table.hourly { break-inside: auto; }
   thead { display: table-header-group; }
   tfoot { display: table-footer-group; }
+  table.material-table { width: 100%; font-size: 8.5pt; }
+  table.material-table th:nth-child(1) { width: 17%; }
+  table.material-table th:nth-child(2) { width: 19%; }
+  table.material-table th:nth-child(7) { width: 34%; }
+  #s-7 li { font-size: 9pt; }
+  table.layer-table { width: 100%; font-size: 8.5pt; }
+  table.layer-table th, table.layer-table td { padding: 0.5mm 1.2mm; }
+  table.layer-table th:nth-child(2) { width: 34%; }
+  table.layer-table th:nth-child(8) { width: 17%; }
+  table.dynamic-summary th, table.dynamic-summary td { padding: 0.3mm 1.2mm; }
+  figure.plot-figure svg { max-width: 110mm; }
+  figure.tornado svg { max-width: 135mm; }
+  figure svg.section-drawing { max-width: 128mm; }
+  figure svg.section-stack { max-width: 112mm; }
+  .scenario-notes, table.conditions td { font-size: 8.5pt; }
+  table.assumptions { font-size: 8pt; }
+  .hourly-appendix table.compact { font-size: 7pt; }
+  .hourly-appendix table.compact th, .hourly-appendix table.compact td { padding: 0.2mm 0.8mm; }
+  tr.screen-only { display: none; }
 }
 `);
 

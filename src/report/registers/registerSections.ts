@@ -1,27 +1,117 @@
-/** Sections 5 to 7: the assumptions register, the materials used with their sources, and the sources. */
-import type { MaterialDef } from "../../project/model.ts";
+/** Sections 5 and 7: the assumptions register and the sources (section 6: materialSources.ts). */
 import { type AssumptionGroup, groupAssumptions } from "./assumptionGroups.ts";
 import { html, type Trusted } from "../page/html.ts";
-import { materialTableHead, materialTableRow } from "../constructions/materialRows.ts";
 import type { RenderContext } from "../page/packageInput.ts";
+import { citedSources, sourceReference } from "./materialSources.ts";
 
+export { renderMaterialsSection, usedMaterials } from "./materialSources.ts";
+
+/** "file:line:col" split into the file and the rest; a position without a file stays whole. */
+function splitAt(at: string): [string, string] {
+  const m = /^(.*?):(\d+(?::\d+)?)$/.exec(at);
+  return m === null ? ["", at] : [m[1]!, m[2]!];
+}
+
+/**
+ * Positions "line:col" written compactly: consecutive lines at one column as a range, "73–77:5"; others as
+ * they are, in their order.
+ */
+export function lineRanges(positions: readonly string[]): string {
+  const out: string[] = [];
+  let run: { first: number; last: number; col: string } | undefined;
+  const flush = () => {
+    if (run === undefined) return;
+    out.push(run.first === run.last ? `${run.first}:${run.col}` : `${run.first}\u2013${run.last}:${run.col}`);
+    run = undefined;
+  };
+  for (const p of positions) {
+    const m = /^(\d+):(\d+)$/.exec(p);
+    if (m === null) {
+      flush();
+      out.push(p);
+      continue;
+    }
+    const line = Number(m[1]);
+    if (run !== undefined && run.col === m[2] && line === run.last + 1) run.last = line;
+    else {
+      flush();
+      run = { first: line, last: line, col: m[2]! };
+    }
+  }
+  flush();
+  return out.join(", ");
+}
+
+/**
+ * The subjects a row applies to, compactly: members that share a scenario (the part before "/") and a file are
+ * listed together, "july-design-day: ew1-south, ew1-west (40-scenarios.md 73:5, 74:5)"; every subject and
+ * position stays.
+ */
 function appliesTo(group: AssumptionGroup): Trusted {
+  const subjectOf = (id: string) => id.slice(group.kind.length + 1);
   if (group.members.length === 1) {
     return html`<td class="applies-to"><code>${group.members[0]!.at}</code></td>`;
   }
-  const items = group.members.map((m, i) =>
-    html`${i === 0 ? "" : "; "}<code>${m.id.slice(group.kind.length + 1)}</code> at <code>${m.at}</code>`
+  const parts = new Map<string, { owner: string; file: string; names: string[]; lines: string[] }>();
+  for (const m of group.members) {
+    const subject = subjectOf(m.id);
+    const cut = subject.indexOf("/");
+    const owner = cut < 0 ? "" : subject.slice(0, cut);
+    const name = cut < 0 ? subject : subject.slice(cut + 1);
+    const [file, line] = splitAt(m.at);
+    const key = JSON.stringify([owner, file]);
+    const part = parts.get(key) ?? { owner, file, names: [], lines: [] };
+    part.names.push(name);
+    part.lines.push(line);
+    parts.set(key, part);
+  }
+  const items = [...parts.values()].map((p, i) =>
+    html`${i === 0 ? "" : "; "}${p.owner === "" ? "" : `${p.owner}: `}${p.names.join(", ")} (<code>${
+      p.file === "" ? "" : `${p.file} `
+    }${lineRanges(p.lines)}</code>)`
   );
   return html`<td class="applies-to">${String(group.members.length)}: ${items}</td>`;
 }
 
 /**
- * Renders the assumptions register: one row per kind of assumption and statement, with the subjects and input lines it
+ * The rows of library materials folded into one: each material's values and source are its line in section 6,
+ * so the register names the choice once and lists every material with the line that uses it.
+ */
+function foldLibraryMaterials(groups: readonly AssumptionGroup[]): AssumptionGroup[] {
+  const library = groups.filter((g) => g.kind === "library:material");
+  if (library.length < 2) return [...groups];
+  const folded: AssumptionGroup = {
+    kind: "library:material",
+    text:
+      "Material taken from the built-in library (no project block defines it); its values λ, ρ, c and its source are its line in Materials and their sources",
+    source:
+      "the built-in library's source of each material (Materials and their sources; numbered in Sources)",
+    members: library.flatMap((g) => g.members),
+  };
+  const first = groups.indexOf(library[0]!);
+  return [
+    ...groups.slice(0, first),
+    folded,
+    ...groups.slice(first).filter((g) => g.kind !== "library:material"),
+  ];
+}
+
+/** The basis column: a library material's source as its number in 7.2, other sources as written. */
+function basisCell(group: AssumptionGroup, sources: readonly string[]): Trusted {
+  const ref = group.kind === "library:material" ? sourceReference(sources, group.source) : undefined;
+  return ref === undefined
+    ? html`<td>${group.source}</td>`
+    : html`<td>source <a href="#s-7-2">${ref}</a> of the material data sources</td>`;
+}
+
+/**
+ * Renders section 5: one row per kind of assumption and statement, with the subjects and input lines it
  * applies to; the review's "Default in use" notes are folded into it.
  */
 export function renderAssumptionsSection(ctx: RenderContext): Trusted {
   const list = ctx.input.results.assumptions;
-  const groups = groupAssumptions(list, ctx.input.model.constructions.map((c) => c.id));
+  const groups = foldLibraryMaterials(groupAssumptions(list, ctx.input.model.constructions.map((c) => c.id)));
+  const sources = citedSources(ctx);
   const body = list.length === 0 ? html`<p>No assumptions were recorded.</p>` : html`
     <table class="assumptions">
       <thead>
@@ -37,7 +127,7 @@ export function renderAssumptionsSection(ctx: RenderContext): Trusted {
           <tr>
             <td><code>${g.members.length === 1 ? g.members[0]!.id : g.kind}</code></td>
             <td>${g.text}</td>
-            <td>${g.source}</td>
+            ${basisCell(g, sources)}
             ${appliesTo(g)}
           </tr>
         `
@@ -62,50 +152,9 @@ ${siNote}${folded}${body}
 </section>`;
 }
 
-/** Materials referenced by at least one construction layer, in first-use order. */
-export function usedMaterials(ctx: RenderContext): MaterialDef[] {
-  const out: MaterialDef[] = [];
-  for (const c of ctx.input.model.constructions) {
-    for (const layer of c.layers) {
-      const m = ctx.input.model.materials.find((x) => x.id === layer.materialId);
-      if (m !== undefined && !out.includes(m)) out.push(m);
-    }
-  }
-  return out;
-}
-
-/** Renders the materials and their sources: each material used, with properties, source and origin. */
-export function renderMaterialsSection(ctx: RenderContext): Trusted {
-  const used = usedMaterials(ctx);
-  const unused = ctx.input.model.materials.filter((m) => m.origin === "project" && !used.includes(m));
-  const table = used.length === 0
-    ? html`<p>No named material is used by a construction.</p>`
-    : html`<table>${materialTableHead(ctx.display)}<tbody>${
-      used.map((m) => materialTableRow(m, ctx.display))
-    }</tbody></table>`;
-  const unusedNote = unused.length === 0
-    ? html``
-    : html`<p class="muted">Defined in the project but not used by any construction: ${
-      unused.map((m) => m.id).join(", ")
-    }.</p>`;
-  return html`<section id="s-6"><h2>Materials and their sources</h2>
-<p>Layers given inline (without a material id) show their values in the layer tables of their constructions.</p>
-${table}
-${unusedNote}
-</section>`;
-}
-
-/** Renders the sources: the standards the tool applied and the distinct material sources. */
+/** Renders section 7: the standards the tool applied and the distinct material sources. */
 export function renderSourcesSection(ctx: RenderContext): Trusted {
-  const sources: string[] = [];
-  for (const m of usedMaterials(ctx)) {
-    if (m.source.trim() !== "" && !sources.includes(m.source)) sources.push(m.source);
-  }
-  for (const c of ctx.input.model.constructions) {
-    for (const l of c.layers) {
-      if (l.source.trim() !== "" && !sources.includes(l.source)) sources.push(l.source);
-    }
-  }
+  const sources = citedSources(ctx);
   const list = sources.length === 0
     ? html`<p class="fail">No material source is cited in the inputs.</p>`
     : html`<ol>${sources.map((s) => html`<li>${s}</li>`)}</ol>`;

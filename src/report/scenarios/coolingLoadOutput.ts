@@ -1,4 +1,4 @@
-/** The cooling load part of a design day's output: the user's radiant time series, peaks, hourly table, plots. */
+/** The cooling load part of a design day's output: the user's radiant time series, peaks, plots (hourly table: Appendix E). */
 import * as Plot from "@observablehq/plot";
 import type { CoolingLoadResults } from "../../scenarios/heatingTypes.ts";
 import type { ScenarioResults } from "../../results/types.ts";
@@ -75,7 +75,13 @@ function peakTable(results: ScenarioResults, cl: CoolingLoadResults, d: DisplayU
   `;
 }
 
-function hourlyTable(id: string, results: ScenarioResults, cl: CoolingLoadResults, d: DisplayUnits): Trusted {
+/** The hourly heat gain and cooling load per surface and in total (printed in Appendix E). */
+export function coolingLoadHourlyTable(
+  id: string,
+  results: ScenarioResults,
+  cl: CoolingLoadResults,
+  d: DisplayUnits,
+): Trusted {
   const w = (v: number) => formatFixed(toDisplay(d, "heatGain", v), 0);
   const surfaces = Object.entries(results.surfaces);
   const body = HOURS.map((h) =>
@@ -219,7 +225,6 @@ export function renderCoolingLoad(
       <p>Cooling load of each surface = convective part of its heat gain + Σ r<sub>j</sub> × radiant part j hours earlier (ASHRAE Handbook—Fundamentals, nonresidential cooling load chapter). Values are per hour, at the full hours; results.json key <code>coolingLoad</code>.</p>
       ${rtsTable(cl)}
       ${peakTable(results, cl, d)}
-      ${hourlyTable(id, results, cl, d)}
       ${plots(id, results, cl, prefix, d)}
       ${limits(cl)}
     </section>

@@ -4,6 +4,7 @@ import type { ScenarioResults, SurfaceResults } from "../../results/types.ts";
 import { type DisplayUnits, toDisplay, unitLabel } from "../page/displayUnits.ts";
 import { formatFixed, formatSig, formatTrim, MINUS } from "../page/format.ts";
 import { html, type Trusted } from "../page/html.ts";
+import { renderScenarioNotes } from "./scenarioNotes.ts";
 import {
   coverageLabel,
   MONTH_NAMES,
@@ -169,10 +170,19 @@ function conditionRows(scenario: Scenario, results: ScenarioResults, d: DisplayU
   ];
 }
 
+/** The notes the conditions table quotes word for word (a design day's outdoor and sky rows). */
+function quotedNotes(scenario: Scenario, results: ScenarioResults): string[] {
+  if (scenario.kind !== "design-day") return [];
+  const quoted: string[] = [];
+  if (scenario.outdoor.kind === "daily-range") quoted.push(noteStarting(results.notes, "Outdoor dry bulb:"));
+  if (scenario.sky.kind !== "none") quoted.push(noteStarting(results.notes, "Irradiance:"));
+  return quoted.filter((n) => n !== "");
+}
+
 function marked(text: string, basis: ParameterBasis): Trusted {
   if (basis === "given") return html`${text}`;
   const note = basis === "default" ? "(default)" : "(given; differs from 1/R_se)";
-  return html`${text}<br><span class="muted">${note}</span>`;
+  return html`${text}<span class="muted default-mark">${note}</span>`;
 }
 
 function orientationCell(surface: ScenarioSurface | undefined, computed: SurfaceResults): Trusted {
@@ -186,7 +196,7 @@ function orientationCell(surface: ScenarioSurface | undefined, computed: Surface
   const tiltText = `${formatTrim(tilt, 4)}°${surface.tiltDeg === undefined ? " (default)" : ""}`;
   return html`<td>${
     orientationWord(azimuth, tilt)
-  }<br><span class="muted">azimuth ${azimuthText}, tilt ${tiltText}</span></td>`;
+  }<span class="muted default-mark">azimuth ${azimuthText}, tilt ${tiltText}</span></td>`;
 }
 
 /** Input to the surface table: the scenario, its results, the register that marks defaults and the display units. */
@@ -227,7 +237,6 @@ function surfaceRow(input: SurfaceTableInput, id: string, computed: SurfaceResul
 export function renderConditions(input: SurfaceTableInput): Trusted {
   const { scenario, results, display: d } = input;
   const rows = Object.entries(results.surfaces).map(([id, s]) => surfaceRow(input, id, s));
-  const notes = results.notes.map((n) => html`<li>${n}</li>`);
   return html`
     <table class="conditions">
       <caption>Conditions of scenario ${scenario.id} as computed</caption>
@@ -252,11 +261,6 @@ export function renderConditions(input: SurfaceTableInput): Trusted {
       </thead>
       <tbody>${rows}</tbody>
     </table>
-    ${notes.length === 0 ? html`` : html`
-      <p class="muted">Conventions applied (results.json notes${d.system === "SI"
-        ? ""
-        : ", quoted as recorded, so any value in them is in SI units"}):</p>
-      <ul class="scenario-notes">${notes}</ul>
-    `}
+    ${renderScenarioNotes(results.notes, quotedNotes(scenario, results), d.system === "SI")}
   `;
 }

@@ -1,4 +1,7 @@
-/** The computed output shown after a scenario block: peak summary, conditions, step tables, plots, checks, caution. */
+/**
+ * The computed output shown after a scenario block: peak summary, conditions, plots, cooling load peaks, the
+ * checks line and the caution; the step tables print in Appendix E (hourlyAppendix.ts).
+ */
 import type { Assumption, Scenario } from "../../project/model.ts";
 import type { CheckResult, ScenarioResults } from "../../results/types.ts";
 import { checksTable } from "../constructions/constructionOutput.ts";
@@ -27,7 +30,7 @@ import {
   surfaceStyle,
 } from "./scenarioStyle.ts";
 import { renderPeakSummary } from "./scenarioSummary.ts";
-import { renderMonthlyTable, renderStepTables } from "./scenarioTables.ts";
+import { renderMonthlyTable } from "./scenarioTables.ts";
 import { stampSyntheticOutput, syntheticBanner } from "./syntheticStamp.ts";
 
 /** What the scenario output reads: the block's scenario, its results entry, the register, checks and anchors. */
@@ -81,13 +84,49 @@ function designDayPlots(id: string, results: ScenarioResults, prefix: string, d:
   `;
 }
 
-function designDayBody(id: string, results: ScenarioResults, prefix: string, d: DisplayUnits): Trusted {
+function designDayBody(
+  id: string,
+  results: ScenarioResults,
+  prefix: string,
+  d: DisplayUnits,
+  anchor: string,
+): Trusted {
   return html`
-    <h5>Values at every step</h5>
-    ${renderStepTables(id, results, d)}
+    <p
+      class="muted hourly-pointer">The values at every step (air and sol-air temperatures, irradiance, heat gain${results
+          .coolingLoad === undefined
+        ? ""
+        : " and cooling load"} of each surface) are in <a href="#${hourlyAnchor(
+          anchor,
+        )}">Appendix E</a> and in <code>csv/scenario-${id}.csv</code>.</p>
     <h5>Plots</h5>
     ${designDayPlots(id, results, prefix, d)}
   `;
+}
+
+/** The fragment id of a scenario's part of Appendix E, from the id of its output. */
+export function hourlyAnchor(anchor: string): string {
+  return `e-${anchor}`;
+}
+
+/**
+ * The body's line on a scenario's numerical checks: failures tabled beside their values, then
+ * "N numerical checks passed (Appendix C)".
+ */
+function scenarioChecksLine(checks: readonly CheckResult[], id: string): Trusted {
+  const own = scenarioChecks(checks, id);
+  if (own.length === 0) return html`<p>No automated check is recorded for this scenario.</p>`;
+  const failed = own.filter((c) => !c.pass);
+  const passed = own.length - failed.length;
+  const line = failed.length === 0
+    ? html`<p class="pass checks-line">${
+      String(passed)
+    } numerical checks passed (<a href="#s-c">Appendix C</a>).</p>`
+    : html`<p class="checks-line">${String(passed)} of ${String(own.length)} numerical checks passed (<a
+        href="#s-c">Appendix C</a>); the ${String(failed.length)} failed above.</p>`;
+  return html`${
+    failed.length === 0 ? html`` : checksTable(failed, (c) => surfaceOfSubject(c.subject, id), "Surface")
+  }${line}`;
 }
 
 function summaryBody(id: string, results: ScenarioResults, prefix: string, d: DisplayUnits): Trusted {
@@ -154,13 +193,8 @@ export function renderScenarioOutput(input: ScenarioOutputInput): Trusted {
   const prefix = scenarioFigurePrefix(anchor);
   const d = input.display;
   const body = hasStepSeries(results)
-    ? designDayBody(id, results, prefix, d)
+    ? designDayBody(id, results, prefix, d, anchor)
     : summaryBody(id, results, prefix, d);
-  const checks = checksTable(
-    scenarioChecks(input.checks, id),
-    (c) => surfaceOfSubject(c.subject, id),
-    "Surface",
-  );
   const output = html`
     <div class="scenario-output" id="${anchor}">
       <h4 class="output-heading">Results of scenario ${id}</h4>${results.synthetic === undefined
@@ -173,7 +207,7 @@ export function renderScenarioOutput(input: ScenarioOutputInput): Trusted {
       ${body}
       ${renderCoolingLoad(id, results, prefix, d)}
       <h5>Checks on ${id}</h5>
-      ${checks.markup === "" ? html`<p>No automated check is recorded for this scenario.</p>` : checks}
+      ${scenarioChecksLine(input.checks, id)}
       ${caution(results)}
     </div>
   `;

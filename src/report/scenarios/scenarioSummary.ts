@@ -54,7 +54,11 @@ function surfaceRows(results: ScenarioResults, weather: boolean, d: DisplayUnits
   });
 }
 
-/** Renders the prominent peak box and the per-surface peak table of one scenario in the display units. */
+/**
+ * Renders the prominent peak box and the per-surface peak table of one scenario in the display units; with a
+ * cooling load the per-surface peaks are the cooling-load peak table's (gain and load side by side), so the box
+ * points there instead of printing them twice.
+ */
 export function renderPeakSummary(id: string, results: ScenarioResults, d: DisplayUnits): Trusted {
   const gainUnit = unitLabel(d, "heatGain");
   const energyUnit = unitLabel(d, "energy");
@@ -104,10 +108,19 @@ export function renderPeakSummary(id: string, results: ScenarioResults, d: Displ
         d,
         results.totals.loss_J,
       )} ${energyUnit}</strong> (gain counts steps with a positive total, loss those with a negative total).</p>
-      <table class="surface-peaks compact">
-        <thead><tr><th>Surface</th>${head}</tr></thead>
-        <tbody>${surfaceRows(results, weather, d)}</tbody>
-      </table>
+      ${results.coolingLoad === undefined
+        ? html`
+          <table class="surface-peaks compact">
+            <thead>
+              <tr><th>Surface</th>${head}</tr>
+            </thead>
+            <tbody>${surfaceRows(results, weather, d)}</tbody>
+          </table>
+        `
+        : html`
+          <p
+            class="muted">Peak heat gain and peak cooling load of each surface: the table under "Cooling load" below.</p>
+        `}
     </div>
   `;
 }

@@ -1,28 +1,22 @@
 /** The sensitivity study in the package: which material property moves U, time lag and the peak heat gain most. */
 import * as Plot from "@observablehq/plot";
 import type { ConditionEffect, SensitivityEffect, SensitivityResults } from "../../sensitivity/study.ts";
+import {
+  CONDITION_NAMES,
+  materialLabel,
+  PROPERTY_NAMES,
+  renderRankedEffects,
+  signed,
+} from "./sensitivityRanking.ts";
 import { type DisplayUnits, type QuantityKind, toDisplay, unitLabel } from "../page/displayUnits.ts";
-import { formatSig, formatTrim } from "../page/format.ts";
+import { formatTrim } from "../page/format.ts";
 import { html, type Trusted } from "../page/html.ts";
 import { sensitivityAnchor } from "../page/anchors.ts";
 import type { RenderContext } from "../page/packageInput.ts";
 import { namePlaceholder, renderPlotSvg } from "../page/plotSvg.ts";
 
-const PROPERTY_NAMES: Readonly<Record<SensitivityEffect["property"], string>> = {
-  conductivity: "conductivity λ",
-  density: "density ρ",
-  specificHeat: "specific heat c",
-  resistance: "thermal resistance R",
-};
+/** Bars in a tornado chart; the tables of Appendix F list every effect kept. */
 const SHOWN = 10;
-
-const CONDITION_NAMES: Readonly<Record<ConditionEffect["condition"], string>> = {
-  absorptance: "solar absorptance α of every sunlit surface",
-  outsideCoefficient: "outside film h_o of every sunlit surface (and its R_se = 1/h_o)",
-  maxDryBulb: "design maximum dry bulb (the whole outdoor profile shifted)",
-  dailyRange: "daily range of the outdoor dry bulb",
-  indoor: "indoor temperature",
-};
 
 /** The sentence on the effects left out: how many and the threshold. */
 function droppedText(count: number, study: SensitivityResults, what: string): string {
@@ -74,16 +68,6 @@ function clipName(text: string): string {
   return text.length <= 44 ? text : `${text.slice(0, 43)}\u2026`;
 }
 
-function materialLabel(key: string): string {
-  return key.startsWith("inline:") ? `${key.slice(7)} (inline layer)` : key;
-}
-
-function signed(value: number, display: DisplayUnits, kind: QuantityKind): string {
-  const shown = kind === "time" ? value : toDisplay(display, kind, value) - toDisplay(display, kind, 0);
-  const text = formatSig(shown, 3);
-  return shown > 0 ? `+${text}` : text;
-}
-
 function effectTable(
   caption: string,
   allEffects: readonly SensitivityEffect[],
@@ -99,7 +83,7 @@ function effectTable(
   if (effects.length === 0) {
     return html`<p class="muted">${caption}: no material property changes it by the threshold. ${droppedNote}</p>`;
   }
-  const rows = effects.slice(0, SHOWN).map((e, i) =>
+  const rows = effects.map((e, i) =>
     html`
       <tr>
         <td class="num">${String(i + 1)}</td>
@@ -110,14 +94,6 @@ function effectTable(
       </tr>
     `
   );
-  const more = effects.length > SHOWN
-    ? html`
-      <p
-        class="muted">${String(
-          effects.length - SHOWN,
-        )} smaller effects are in Appendix B (results.json, key sensitivity).</p>
-    `
-    : html``;
   return html`
     <table>
       <caption>${caption}</caption>
@@ -131,7 +107,8 @@ function effectTable(
         </tr>
       </thead>
       <tbody>${rows}</tbody>
-    </table>${more}<p class="muted">${droppedNote}</p>
+    </table>
+    <p class="muted">${droppedNote}</p>
   `;
 }
 
@@ -152,7 +129,7 @@ function tornado(id: string, effects: readonly SensitivityEffect[], display: Dis
   const names = shown.map((e) => clipName(`${materialLabel(e.material)}: ${PROPERTY_NAMES[e.property]}`));
   return renderPlotSvg(
     {
-      height: 60 + 26 * shown.length,
+      height: 60 + 21 * shown.length,
       marginLeft: 262,
       marginBottom: 40,
       x: {
@@ -180,22 +157,56 @@ function tornado(id: string, effects: readonly SensitivityEffect[], display: Dis
   );
 }
 
+/** The design days' tornado charts: change of the peak heat gain by material property. */
+function tornadoFigures(study: SensitivityResults, display: DisplayUnits): Trusted[] {
+  const percent = formatTrim(study.variation * 100, 3);
+  return Object.entries(study.scenarios).flatMap(([id, s]) =>
+    s.peakHeatGain.length === 0 ? [] : [
+      html`
+        <figure
+          class="tornado">${tornado(
+            id,
+            s.peakHeatGain,
+            display,
+          )}<figcaption>Change of the peak total heat gain of design day ${id} when one property of one material is lowered (blue) or raised (red) by ${percent} %, largest effects first; each bar is labelled by material and property (table in Appendix F).</figcaption></figure>
+      `,
+    ]
+  );
+}
+
 /**
- * Renders the sensitivity study: per construction U and lag, then per design day a ranked table and bar chart of the
- * peak gain, each in block order (the order of results.json).
+ * Renders the body's sensitivity study: the method, one ranked table of the largest effects across
+ * constructions and design days, and the design days' tornado charts; the tables per construction and design
+ * day are Appendix F's (`renderSensitivityAppendix`).
  */
 export function renderSensitivity(ctx: RenderContext, sectionId: string): Trusted {
   const study = ctx.input.results.sensitivity;
   if (study === undefined) return html``;
-  const display = ctx.display;
   const percent = formatTrim(study.variation * 100, 3);
+  return html`<section class="document sensitivity" id="${sectionId}"><h2>Sensitivity study</h2>
+<p>Each material property was lowered and raised by ${percent} % in every layer that uses the material, one property at a time, with all else held; the affected constructions were recomputed (root method) and so was each design day. Each design day's conditions were varied the same way, one at a time, by the steps stated in the table (absorptance ±0.1, h_o ±${percent} %, design maximum dry bulb and daily range ±2 K, indoor temperature ±1 K: our stated steps, common practice, no source). Effects whose changes are both below ${
+    formatTrim(study.threshold * 100, 3)
+  } % of the base value are left out and counted. The study shows which inputs the results depend on most, so that their sources can be checked first; it is not a statement of uncertainty.</p>
+${renderRankedEffects(ctx, study)}
+${tornadoFigures(study, ctx.display)}
+</section>`;
+}
+
+/** Appendix F's fragment id and title, for the contents. */
+export const SENSITIVITY_APPENDIX: readonly [id: string, title: string] = [
+  "s-f",
+  "Appendix F Sensitivity tables",
+];
+
+/** Renders Appendix F: per design day and per construction the ranked tables of the study; nothing without one. */
+export function renderSensitivityAppendix(ctx: RenderContext): Trusted {
+  const study = ctx.input.results.sensitivity;
+  if (study === undefined) return html``;
+  const display = ctx.display;
   const scenarios = Object.entries(study.scenarios).map(([id, s]) =>
     html`<h3 id="${
       sensitivityAnchor(ctx.scenarioAnchors.get(id) ?? id)
     }">Design day ${id}: peak total heat gain</h3>
-<figure>${
-      tornado(id, s.peakHeatGain, display)
-    }<figcaption>Change of the peak total heat gain of ${id} when one property of one material is lowered (blue) or raised (red) by ${percent} %, largest effects first; each bar is labelled by material and property, in the order of the table below.</figcaption></figure>
 ${
       effectTable(
         `Effect on the peak total heat gain of ${id}`,
@@ -208,15 +219,18 @@ ${
     }
 ${conditionTable(id, s.conditions, s.dropped.conditions, study, display)}`
   );
-  const constructions = Object.entries(study.constructions).map(([id, c]) =>
+  const order = ctx.input.model.constructions.map((c) => c.id);
+  const rank = (id: string) => order.includes(id) ? order.indexOf(id) : order.length;
+  const byInput = Object.entries(study.constructions).sort(([a], [b]) => rank(a) - rank(b));
+  const constructions = byInput.map(([id, c]) =>
     html`<h3 id="${sensitivityAnchor(ctx.constructionAnchors.get(id) ?? id)}">Construction ${id}</h3>
 ${effectTable(`Effect on the U-value of ${id}`, c.U, c.dropped.U, study, display, "transmittance")}
 ${effectTable(`Effect on the time lag of ${id}`, c.timeLag_h, c.dropped.timeLag_h, study, display, "time")}`
   );
-  return html`<section class="document" id="${sectionId}"><h2>Sensitivity study</h2>
-<p>Each material property was lowered and raised by ${percent} % in every layer that uses the material, one property at a time, with all else held; the affected constructions were recomputed (root method) and so was each design day. Each design day's conditions were varied the same way, one at a time, by the steps stated in its table (absorptance ±0.1, h_o ±${percent} %, design maximum dry bulb and daily range ±2 K, indoor temperature ±1 K: our stated steps, common practice, no source). Effects whose changes are both below ${
-    formatTrim(study.threshold * 100, 3)
-  } % of the base value are left out and counted. The study shows which inputs the results depend on most, so that their sources can be checked first; it is not a statement of uncertainty.</p>
+  return html`<section id="${SENSITIVITY_APPENDIX[0]}" class="appendix sensitivity-appendix"><h2>${
+    SENSITIVITY_APPENDIX[1]
+  }</h2>
+<p>The sensitivity study in full: for each construction and each design day the effects kept, largest first, and the count of those left out below the threshold; method and steps with the study in the body.</p>
 ${constructions}
 ${scenarios}
 </section>`;

@@ -1,4 +1,4 @@
-/** Shared pieces of the section drawings: placed layers, layer names, square tags, studs and the key. */
+/** Shared pieces of the section drawings: placed layers, square tags, studs and the hatch key. */
 import type { Construction, ResolvedLayer } from "../../../project/model.ts";
 import { type DisplayUnits, toDisplay, unitLabel } from "../../page/displayUnits.ts";
 import { formatTrim, THIN_SPACE } from "../../page/format.ts";
@@ -9,7 +9,6 @@ import { patternFill } from "./sectionPatterns.ts";
 export const FONT = "system-ui, -apple-system, 'Segoe UI', sans-serif";
 export const TAG_SIZE = 15;
 export const KEY_ROW_PX = 17;
-const KEY_TEXT_MAX = 92;
 
 /** Shortens text to `max` characters with an ellipsis. */
 export function clip(text: string, max: number): string {
@@ -74,14 +73,6 @@ export function thicknessText(l: DrawnLayer, d: DisplayUnits): string {
   return l.thickness === undefined
     ? "resistive, not to scale"
     : `${formatTrim(l.thickness, 4)}${THIN_SPACE}${unitLabel(d, "thickness")}`;
-}
-
-/** The name of a layer as the key shows it, framed layers with their studs and fraction. */
-export function layerTitle(l: DrawnLayer): string {
-  const bridge = l.layer.bridge;
-  if (bridge === undefined) return l.layer.name;
-  const percent = formatTrim(bridge.fraction * 100, 3);
-  return `${bridge.base.name} between ${bridge.bridge.name} (${percent}${THIN_SPACE}% framing)`;
 }
 
 /** A square layer tag centred on (x, y). */
@@ -150,33 +141,46 @@ export function studs(
   return html`${parts}`;
 }
 
-/** The key below a drawing: per layer its tag, a hatch swatch, its name and thickness. */
-export function layerKey(
-  layers: readonly DrawnLayer[],
+/** Width of one entry of the hatch key (swatch and family name), px. */
+const KEY_ENTRY_PX = 150;
+
+/** Rows the hatch key takes in a drawing `width` px wide. */
+export function hatchKeyRows(kinds: readonly LayerKind[], width: number): number {
+  const perRow = Math.max(1, Math.floor((width - 24) / KEY_ENTRY_PX));
+  return Math.max(1, Math.ceil(kinds.length / perRow));
+}
+
+/**
+ * The hatch key below a drawing: one swatch per material family drawn, laid out in rows. The layers
+ * themselves are not listed again: the square tags point at the rows of the layer table.
+ */
+export function hatchKey(
+  kinds: readonly LayerKind[],
   top: number,
-  d: DisplayUnits,
+  width: number,
   prefix: string,
 ): Trusted {
-  const rows = layers.map((l, i) => {
-    const y = top + i * KEY_ROW_PX;
-    const swatch = html`
-      <rect x="32" y="${coord(y - 6)}" width="26" height="12" fill="${patternFill(
-        prefix,
-        l.kind,
-      )}" stroke="#111" stroke-width="0.7"
-        ${l.kind === "air"
-          ? html`
-            stroke-dasharray="3 2"
-          `
-          : html``} />
-    `;
-    const family = l.studKind === undefined ? ` (${LAYER_KIND_LABEL[l.kind]})` : "";
+  const perRow = Math.max(1, Math.floor((width - 24) / KEY_ENTRY_PX));
+  const entries = kinds.map((kind, i) => {
+    const x = 12 + (i % perRow) * KEY_ENTRY_PX;
+    const y = top + Math.floor(i / perRow) * KEY_ROW_PX;
     return html`
-      ${squareTag(l.number, 19, y)}${swatch}<text x="66" y="${coord(y + 3.5)}" font-size="10.5"
-        class="key-label">${clip(`${layerTitle(l)}, ${thicknessText(l, d)}${family}`, KEY_TEXT_MAX)}</text>
+      <g class="hatch-key">
+        <rect x="${coord(x)}" y="${coord(y - 6)}" width="26" height="12" fill="${patternFill(
+          prefix,
+          kind,
+        )}" stroke="#111"
+          stroke-width="0.7" ${kind === "air"
+            ? html`
+              stroke-dasharray="3 2"
+            `
+            : html``} />
+        <text x="${coord(x + 32)}" y="${coord(y + 3.5)}" font-size="10.5"
+          class="key-label">${LAYER_KIND_LABEL[kind]}</text>
+      </g>
     `;
   });
-  return html`${rows}`;
+  return html`${entries}`;
 }
 
 /** The families drawn, in a fixed order, studs included. */

@@ -15,9 +15,10 @@ import {
   type DrawnLayer,
   drawnLayers,
   FONT,
+  hatchKey,
+  hatchKeyRows,
   KEY_ROW_PX,
   kindsUsed,
-  layerKey,
   spread,
   squareTag,
   studs,
@@ -169,7 +170,8 @@ export function renderStackSvg(construction: Construction, d: DisplayUnits, scal
   const labelYs = spread(stacked.map((l) => l.y + l.height / 2), LABEL_SPACING, 12, bottom + 40);
   const scaleY = Math.max(bottom, labelYs[labelYs.length - 1] ?? bottom) + 30;
   const keyTop = scaleY + 44;
-  const height = keyTop + stacked.length * KEY_ROW_PX + 4;
+  const kinds = kindsUsed(stacked);
+  const height = keyTop + hatchKeyRows(kinds, WIDTH) * KEY_ROW_PX;
   const [upper, lower] = roof ? ["exterior face", "interior face"] : ["interior face", "exterior face"];
   const what = roof ? "roof" : "floor";
   const label = `Section of ${what} construction ${construction.id}: ${upper} on top, ${lower} below`;
@@ -179,7 +181,7 @@ export function renderStackSvg(construction: Construction, d: DisplayUnits, scal
         height,
       )}" role="img"
       aria-label="${label}" font-family="${FONT}"
-      fill="#111"><title>${label}</title>${patternDefs(prefix, kindsUsed(stacked))}${face(
+      fill="#111"><title>${label}</title>${patternDefs(prefix, kinds)}${face(
         upper,
         TOP - 10,
       )}${stacked.map((l) => layerBody(l, prefix))}${face(lower, bottom + 18)}${stacked.map((l, i) =>
@@ -190,6 +192,6 @@ export function renderStackSvg(construction: Construction, d: DisplayUnits, scal
         d,
         LEFT,
         scaleY,
-      )}${layerKey(stacked, keyTop, d, prefix)}</svg>
+      )}${hatchKey(kinds, keyTop, WIDTH, prefix)}</svg>
   `;
 }

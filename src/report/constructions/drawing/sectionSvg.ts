@@ -13,9 +13,10 @@ import {
   type DrawnLayer,
   drawnLayers,
   FONT,
+  hatchKey,
+  hatchKeyRows,
   KEY_ROW_PX,
   kindsUsed,
-  layerKey,
   spread,
   squareTag,
   studs,
@@ -206,7 +207,8 @@ function renderWallSvg(construction: Construction, d: DisplayUnits): Trusted {
   const { placed, pxPerMm } = placeLayers(drawnLayers(construction, d));
   const prefix = patternPrefix(construction.id);
   const tagXs = spread(placed.map((l) => l.x + l.width / 2), TAG_SIZE + 5, 12, WIDTH - 12);
-  const height = KEY_TOP + placed.length * KEY_ROW_PX + 4;
+  const kinds = kindsUsed(placed);
+  const height = KEY_TOP + hatchKeyRows(kinds, WIDTH) * KEY_ROW_PX;
   const label =
     `Section of construction ${construction.id}: exterior face on the left, interior face on the right`;
   return html`
@@ -215,7 +217,7 @@ function renderWallSvg(construction: Construction, d: DisplayUnits): Trusted {
         height,
       )}" role="img"
       aria-label="${label}" font-family="${FONT}"
-      fill="#111"><title>${label}</title>${patternDefs(prefix, kindsUsed(placed))}${placed.map((l) =>
+      fill="#111"><title>${label}</title>${patternDefs(prefix, kinds)}${placed.map((l) =>
         layerBody(l, prefix)
       )}${placed.map((l, i) => tagWithLeader(l, tagXs[i] ?? 0))}${faceLabel(
         "exterior face",
@@ -229,7 +231,7 @@ function renderWallSvg(construction: Construction, d: DisplayUnits): Trusted {
         d,
         SECTION_LEFT,
         270,
-      )}${layerKey(placed, KEY_TOP, d, prefix)}</svg>
+      )}${hatchKey(kinds, KEY_TOP, WIDTH, prefix)}</svg>
   `;
 }
 

@@ -20,7 +20,7 @@ export function materialTableHead(d: DisplayUnits): Trusted {
 }
 
 function cell(value: number | undefined, kind: QuantityKind, d: DisplayUnits): Trusted {
-  return html`<td class="num">${value === undefined ? "—" : formatTrim(toDisplay(d, kind, value), 4)}</td>`;
+  return html`<td class="num">${value === undefined ? "—" : formatTrim(toDisplay(d, kind, value), 3)}</td>`;
 }
 
 /** One material as a table row in the display units; a missing source is shown as a visible gap. */

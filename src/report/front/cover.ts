@@ -1,6 +1,8 @@
 /** The cover: identity, status, sign-off, input hash, tool version and the summary of checks. */
 import type { ProjectStatus } from "../../project/model.ts";
 import { html, type Trusted } from "../page/html.ts";
+import { quotedNumbers } from "../page/quotedText.ts";
+import { displayUnitsFor } from "../page/displayUnits.ts";
 import type { PackageInput } from "../page/packageInput.ts";
 import { limitsCoverLine } from "../constructions/limitsOutput.ts";
 
@@ -106,9 +108,9 @@ function acknowledgedItems(input: PackageInput): Trusted {
   const acknowledged = (input.results.summary?.openItems ?? []).filter((i) => i.acknowledged !== null);
   if (acknowledged.length === 0) return html``;
   const items = acknowledged.map((i) =>
-    html`<li><code>${i.id}</code>: ${i.text} — acknowledged by ${i.acknowledged?.by ?? ""}: ${
-      i.acknowledged?.reason ?? ""
-    }</li>`
+    html`<li><code>${i.id}</code>: ${
+      quotedNumbers(i.text, displayUnitsFor(input.model.info.units))
+    } — acknowledged by ${i.acknowledged?.by ?? ""}: ${i.acknowledged?.reason ?? ""}</li>`
   );
   return html`
     <div class="check-summary acknowledged-items">

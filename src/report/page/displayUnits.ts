@@ -4,7 +4,7 @@
  * definitions, and a temperature difference is never converted as an absolute temperature.
  */
 import type { ProjectInfo } from "../../project/model.ts";
-import { formatTrim } from "./format.ts";
+import { formatFixed, formatTrim } from "./format.ts";
 import { html, type Trusted } from "./html.ts";
 
 /** The unit system of the display, as written in the front matter. */
@@ -186,4 +186,18 @@ export function filmCoefficientText(display: DisplayUnits, wPerM2K: number): str
   return `${formatTrim(toDisplay(display, "transmittance", wPerM2K), 3)} ${
     unitLabel(display, "transmittance")
   }`;
+}
+
+/**
+ * A layer thickness (metres in SI) as the package prints it: in SI millimetres to 0.1 mm, as layers are
+ * specified (a 102.5 mm brick leaf, a 12.5 mm board); in IP inches to three significant figures (7.09 in).
+ */
+export function formatThickness(display: DisplayUnits, metres: number): string {
+  return thicknessFigure(display, toDisplay(display, "thickness", metres));
+}
+
+/** A thickness already in the display unit (mm or in), printed as {@link formatThickness} prints it. */
+export function thicknessFigure(display: DisplayUnits, shown: number): string {
+  if (display.system === "IP") return formatTrim(shown, 3);
+  return formatFixed(shown, 1).replace(/\.0$/, "");
 }

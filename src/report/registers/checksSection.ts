@@ -3,6 +3,7 @@ import { formatPosition } from "../../project/position.ts";
 import { sortDiagnostics } from "../../project/diagnostic.ts";
 import { formatSig } from "../page/format.ts";
 import { html, type Trusted } from "../page/html.ts";
+import { quotedNumbers } from "../page/quotedText.ts";
 import type { RenderContext } from "../page/packageInput.ts";
 import type { CheckResult } from "../../results/types.ts";
 
@@ -31,11 +32,11 @@ export function allChecksTable(ctx: RenderContext): Trusted {
 function checksTable(ctx: RenderContext, checks: readonly CheckResult[]): Trusted {
   if (checks.length === 0) return html`<p>No automated checks apply yet.</p>`;
   const rows = checks.map((c) =>
-    html`<tr><td>${c.id}</td>${subjectCell(c.subject, ctx)}<td>${c.description}</td><td class="num">${
-      formatSig(c.value, 3)
-    }</td><td class="num">${formatSig(c.limit, 3)}</td><td class="${c.pass ? "pass" : "fail"}">${
-      c.pass ? "PASS" : "FAIL"
-    }</td></tr>`
+    html`<tr><td>${c.id}</td>${subjectCell(c.subject, ctx)}<td>${
+      quotedNumbers(c.description, ctx.display)
+    }</td><td class="num">${formatSig(c.value, 3)}</td><td class="num">${
+      formatSig(c.limit, 3)
+    }</td><td class="${c.pass ? "pass" : "fail"}">${c.pass ? "PASS" : "FAIL"}</td></tr>`
   );
   return html`
     <table class="checks-list">
@@ -72,7 +73,9 @@ function methodNotesTable(ctx: RenderContext): Trusted {
   const notes = ctx.input.results.methodNotes ?? [];
   if (notes.length === 0) return html``;
   const rows = notes.map((n) =>
-    html`<tr><td>${n.id}</td>${subjectCell(n.subject, ctx)}<td>${n.text}</td><td class="note">NOTE</td></tr>`
+    html`<tr><td>${n.id}</td>${subjectCell(n.subject, ctx)}<td>${
+      quotedNumbers(n.text, ctx.display)
+    }</td><td class="note">NOTE</td></tr>`
   );
   return html`
     <p>Method notes: choices of numerical form, not checks. A polynomial CTF that is not published is replaced by the modal form, which every computed flux uses; its acceptance figures are in results.json <code>methodNotes</code> and, for the air-to-air CTFs, with the construction.</p>

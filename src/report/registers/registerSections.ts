@@ -2,6 +2,7 @@
 import type { MaterialDef } from "../../project/model.ts";
 import { type AssumptionGroup, groupAssumptions } from "./assumptionGroups.ts";
 import { html, type Trusted } from "../page/html.ts";
+import { quotedNumbers } from "../page/quotedText.ts";
 import { materialTableHead, materialTableRow } from "../constructions/materialRows.ts";
 import type { RenderContext } from "../page/packageInput.ts";
 
@@ -36,7 +37,7 @@ export function renderAssumptionsSection(ctx: RenderContext): Trusted {
         html`
           <tr>
             <td><code>${g.members.length === 1 ? g.members[0]!.id : g.kind}</code></td>
-            <td>${g.text}</td>
+            <td>${quotedNumbers(g.text, ctx.display)}</td>
             <td>${g.source}</td>
             ${appliesTo(g)}
           </tr>

@@ -5,6 +5,7 @@ import { type DisplayUnits, toDisplay, unitLabel } from "../page/displayUnits.ts
 import { DELTA_F_PER_K } from "../page/displayUnits.ts";
 import { formatFixed, formatSig } from "../page/format.ts";
 import { html, type Trusted } from "../page/html.ts";
+import { quotedNumbers } from "../page/quotedText.ts";
 import type { RenderContext } from "../page/packageInput.ts";
 
 /** What the heating output reads: the block's scenario, its `heating.<id>` entry, anchor and display units. */
@@ -150,15 +151,15 @@ export function renderHeatingOutput(input: HeatingOutputInput): Trusted {
         toDisplay(d, "heatGain", r.totalHeatLoss),
         0,
       )} ${unitLabel(d, "heatGain")}</strong> (Σ U<sub>c</sub>·A = ${d.system === "SI"
-        ? `${formatSig(r.totalUA, 4)} W/K`
+        ? `${formatSig(r.totalUA, 3)} W/K`
         : `${
-          formatSig(toDisplay(d, "heatGain", r.totalUA) / DELTA_F_PER_K, 4)
+          formatSig(toDisplay(d, "heatGain", r.totalUA) / DELTA_F_PER_K, 3)
         } Btu/(h·°F)`}). ${failures === 0
         ? "Every surface passes the surface-condensation and mould checks at this condition."
         : `${failures} surface(s) fail a check: see the table.`}</p>
       ${conditions(r, d)}
       ${surfaceTable(scenario.id, r, d)}
-      <ul class="scenario-notes">${r.notes.map((n) => html`<li>${n}</li>`)}</ul>
+      <ul class="scenario-notes">${r.notes.map((n) => html`<li>${quotedNumbers(n, d)}</li>`)}</ul>
       <div class="caution-box" role="note">
         <p><strong>Limits:</strong> a steady-state screening at one design condition for the plane elements listed; ${rsi ===
             undefined

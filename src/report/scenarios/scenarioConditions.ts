@@ -4,6 +4,7 @@ import type { ScenarioResults, SurfaceResults } from "../../results/types.ts";
 import { type DisplayUnits, toDisplay, unitLabel } from "../page/displayUnits.ts";
 import { formatFixed, formatSig, formatTrim, MINUS } from "../page/format.ts";
 import { html, type Trusted } from "../page/html.ts";
+import { quotedNumbers } from "../page/quotedText.ts";
 import {
   coverageLabel,
   MONTH_NAMES,
@@ -35,7 +36,7 @@ function siteText(site: Site | undefined, d: DisplayUnits): string {
   if (site === undefined) return "Not given (no sun position is needed without a sky model).";
   const elevation = site.elevationM === undefined
     ? "elevation not given"
-    : `elevation ${formatTrim(toDisplay(d, "length", site.elevationM), 5)} ${unitLabel(d, "length")}`;
+    : `elevation ${formatTrim(toDisplay(d, "length", site.elevationM), 3)} ${unitLabel(d, "length")}`;
   return `Latitude ${signedDeg(site.latitudeDeg, "N", "S")}, longitude ${
     signedDeg(site.longitudeDeg, "E", "W")
   }, time zone ${utcOffset(site.timeZoneH)}, ${elevation}.`;
@@ -134,7 +135,7 @@ function weatherRows(path: string, results: ScenarioResults, d: DisplayUnits): T
       global === undefined
         ? "Irradiance from the weather file (see the notes)."
         : `Irradiance from the weather file; global horizontal ${
-          formatTrim(toDisplay(d, "irradiation", global), 4)
+          formatTrim(toDisplay(d, "irradiation", global), 3)
         } ${unitLabel(d, "irradiation")} over the file (see the notes for the transposition).`,
     ),
   ];
@@ -209,10 +210,10 @@ function surfaceRow(input: SurfaceTableInput, id: string, computed: SurfaceResul
     : html`<a href="#${anchor}">${computed.construction}</a>`;
   return html`<tr><td>${id}</td><td>${construction}</td>${
     orientationCell(surface, computed)
-  }<td class="num">${formatTrim(toDisplay(d, "area", computed.area), 4)}</td><td>${
+  }<td class="num">${formatTrim(toDisplay(d, "area", computed.area), 3)}</td><td>${
     p.absorptance === null ? DASH : formatTrim(p.absorptance, 3)
   }</td><td>${marked(formatTrim(p.emittance, 3), basis("emittance"))}</td><td>${
-    marked(formatTrim(toDisplay(d, "transmittance", p.outsideCoefficient), 4), basis("outside-coefficient"))
+    marked(formatTrim(toDisplay(d, "transmittance", p.outsideCoefficient), 3), basis("outside-coefficient"))
   }</td><td>${
     marked(
       formatFixed(toDisplay(d, "temperatureDifference", p.longwaveCorrection), 2),
@@ -227,7 +228,7 @@ function surfaceRow(input: SurfaceTableInput, id: string, computed: SurfaceResul
 export function renderConditions(input: SurfaceTableInput): Trusted {
   const { scenario, results, display: d } = input;
   const rows = Object.entries(results.surfaces).map(([id, s]) => surfaceRow(input, id, s));
-  const notes = results.notes.map((n) => html`<li>${n}</li>`);
+  const notes = results.notes.map((n) => html`<li>${quotedNumbers(n, d)}</li>`);
   return html`
     <table class="conditions">
       <caption>Conditions of scenario ${scenario.id} as computed</caption>

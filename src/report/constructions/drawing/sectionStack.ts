@@ -6,7 +6,7 @@
 import type { Construction } from "../../../project/model.ts";
 import type { DisplayUnits } from "../../page/displayUnits.ts";
 import { formatTrim, THIN_SPACE } from "../../page/format.ts";
-import { unitLabel } from "../../page/displayUnits.ts";
+import { thicknessFigure, unitLabel } from "../../page/displayUnits.ts";
 import { html, type Trusted } from "../../page/html.ts";
 import {
   battLine,
@@ -107,7 +107,7 @@ function leaderLabel(l: StackedLayer, labelY: number, d: DisplayUnits): Trusted 
   `;
 }
 
-function chain(stacked: readonly StackedLayer[]): Trusted {
+function chain(stacked: readonly StackedLayer[], d: DisplayUnits): Trusted {
   const last = stacked[stacked.length - 1];
   const bottom = last === undefined ? TOP : last.y + last.height;
   const ticks = stacked.map((l) =>
@@ -117,7 +117,7 @@ function chain(stacked: readonly StackedLayer[]): Trusted {
       )}" stroke="#111" stroke-width="0.6" />${l.thickness !== undefined && l.height >= 12
         ? html`<text x="${String(LEFT - 28)}" y="${
           coord(l.y + l.height / 2 + 3.5)
-        }" text-anchor="end" font-size="10">${formatTrim(l.thickness, 4)}</text>`
+        }" text-anchor="end" font-size="10">${thicknessFigure(d, l.thickness)}</text>`
         : html``}
     `
   );
@@ -145,7 +145,7 @@ function overall(stacked: readonly StackedLayer[], d: DisplayUnits): Trusted {
     <text x="${String(x - 6)}" y="${coord(mid)}" transform="rotate(-90 ${String(x - 6)} ${coord(
       mid,
     )})" text-anchor="middle"
-      font-size="11">${formatTrim(total, 4)}${THIN_SPACE}${unitLabel(d, "thickness")} overall</text>
+      font-size="11">${thicknessFigure(d, total)}${THIN_SPACE}${unitLabel(d, "thickness")} overall</text>
   `;
 }
 
@@ -184,7 +184,7 @@ export function renderStackSvg(construction: Construction, d: DisplayUnits, scal
         TOP - 10,
       )}${stacked.map((l) => layerBody(l, prefix))}${face(lower, bottom + 18)}${stacked.map((l, i) =>
         leaderLabel(l, labelYs[i] ?? 0, d)
-      )}${chain(stacked)}${overall(stacked, d)}${scaleBar(
+      )}${chain(stacked, d)}${overall(stacked, d)}${scaleBar(
         pxPerMm,
         stacked.some((l) => l.thickness === undefined),
         d,

@@ -8,33 +8,12 @@
  * formula quoted in an assumption (610.5·exp(17.269θ/(237.3+θ)), ISO 13788 as written).
  */
 import assert from "node:assert/strict";
-import { cp } from "node:fs/promises";
-import { join } from "node:path";
-import { runBuild } from "../../src/commands/build.ts";
 import { IP_DISPLAY, SI_DISPLAY } from "../../src/report/page/displayUnits.ts";
 import { PA_PER_IN_HG, quotedNumbers } from "../../src/report/page/quotedText.ts";
+import { demoPackage } from "./demoBuild.ts";
 import { parseDocument } from "./dom.ts";
 
-const DEMO = new URL("../../projects/demo/", import.meta.url).pathname;
-
-/** Builds the demo with `units:` set to `units` and returns the package's document. */
-async function buildDemo(units: "SI" | "IP"): Promise<Document> {
-  const root = await Deno.makeTempDir();
-  const project = join(root, "demo");
-  await cp(DEMO, project, { recursive: true });
-  const front = join(project, "project.md");
-  const text = await Deno.readTextFile(front);
-  await Deno.writeTextFile(front, text.replace(/^units: SI$/m, `units: ${units}`));
-  const out = join(root, "out");
-  assert.equal(await runBuild({ project, out }, { stdout: () => {}, stderr: () => {} }), 0);
-  return parseDocument(await Deno.readTextFile(join(out, "package.html")));
-}
-
-const built = new Map<string, Promise<Document>>();
-const demo = (units: "SI" | "IP") => {
-  if (!built.has(units)) built.set(units, buildDemo(units));
-  return built.get(units)!;
-};
+const demo = async (units: "SI" | "IP") => parseDocument(await Deno.readTextFile(await demoPackage(units)));
 
 /** What is not the package's own number output (see the module comment). */
 const NOT_SCANNED = [

@@ -6,6 +6,7 @@ import {
   formatThickness,
   siEquivalent,
   toDisplay,
+  unitHead,
   unitLabel,
 } from "../page/displayUnits.ts";
 import { formatSig, formatTrim } from "../page/format.ts";
@@ -206,12 +207,12 @@ export function renderConstructionOutput(
         <tr>
           <th>No.</th>
           <th>Layer</th>
-          <th>Thickness ${unitLabel(d, "thickness")}</th>
-          <th>λ ${unitLabel(d, "conductivity")}</th>
-          <th>ρ ${unitLabel(d, "density")}</th>
-          <th>c ${unitLabel(d, "specificHeat")}</th>
-          <th>R ${unitLabel(d, "resistance")}</th>
-          <th>ρ·c·d, heat capacity per area ${unitLabel(d, "arealHeatCapacity")} (total row: Σ ρ·c·d)</th>
+          <th>Thickness ${unitHead(d, "thickness")}</th>
+          <th>λ ${unitHead(d, "conductivity")}</th>
+          <th>ρ ${unitHead(d, "density")}</th>
+          <th>c ${unitHead(d, "specificHeat")}</th>
+          <th>R ${unitHead(d, "resistance")}</th>
+          <th>ρ·c·d, heat capacity per area (total row: Σ ρ·c·d) ${unitHead(d, "arealHeatCapacity")}</th>
         </tr>
       </thead>
       <tbody>

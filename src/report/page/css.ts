@@ -15,6 +15,7 @@ h4, h5, h6 { font-size: 10.5pt; }
 table { border-collapse: collapse; margin: 3mm 0; font-size: 9.5pt; break-inside: avoid; }
 th, td { border: 1px solid var(--rule); padding: 1mm 2mm; vertical-align: top; text-align: left; }
 th { background: #f0f0f0; font-weight: 600; }
+th .unit { display: block; font-weight: normal; }
 td.num { text-align: right; font-variant-numeric: tabular-nums; white-space: nowrap; }
 tr.total td { font-weight: bold; border-top: 2px solid var(--ink); }
 figure { margin: 3mm 0; break-inside: avoid; }

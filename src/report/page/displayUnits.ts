@@ -5,7 +5,7 @@
  */
 import type { ProjectInfo } from "../../project/model.ts";
 import { formatFixed, formatTrim } from "./format.ts";
-import { html, type Trusted } from "./html.ts";
+import { escapeHtml, html, raw, type Trusted } from "./html.ts";
 
 /** The unit system of the display, as written in the front matter. */
 export type UnitSystem = ProjectInfo["units"];
@@ -200,4 +200,12 @@ export function formatThickness(display: DisplayUnits, metres: number): string {
 export function thicknessFigure(display: DisplayUnits, shown: number): string {
   if (display.system === "IP") return formatTrim(shown, 3);
   return formatFixed(shown, 1).replace(/\.0$/, "");
+}
+
+/**
+ * The unit of a table column under its symbol: `<span class="unit">` on a line of its own, with a break
+ * opportunity after each "/" so that a long IP unit (Btu·in/(h·ft²·°F)) wraps inside a narrow column.
+ */
+export function unitHead(display: DisplayUnits, kind: QuantityKind): Trusted {
+  return raw(`<span class="unit">${escapeHtml(unitLabel(display, kind)).replaceAll("/", "/<wbr>")}</span>`);
 }

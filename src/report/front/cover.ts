@@ -1,6 +1,7 @@
 /** The cover: identity, status, sign-off, input hash, tool version and the summary of checks. */
 import type { ProjectStatus } from "../../project/model.ts";
 import { html, type Trusted } from "../page/html.ts";
+import { findingCountsText } from "../page/findingCounts.ts";
 import { quotedNumbers } from "../page/quotedText.ts";
 import { displayUnitsFor } from "../page/displayUnits.ts";
 import type { PackageInput } from "../page/packageInput.ts";
@@ -61,12 +62,9 @@ export function checkSummary(input: PackageInput): Trusted {
 }
 
 function findingSummary(input: PackageInput): Trusted {
-  const count = (severity: string, noun: string) => {
-    const n = input.findings.filter((f) => f.severity === severity).length;
-    return `${n} ${noun}${n === 1 ? "" : "s"}`;
-  };
-  const counts = `${count("error", "error")}, ${count("warning", "warning")}, ${count("note", "note")}`;
-  return html`<p class="check-summary">Review findings: ${counts} (see section 4).</p>`;
+  return html`<p class="check-summary">Review findings: ${
+    findingCountsText(input.findings)
+  }; see section 4.</p>`;
 }
 
 /**

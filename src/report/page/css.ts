@@ -16,6 +16,7 @@ table { border-collapse: collapse; margin: 3mm 0; font-size: 9.5pt; break-inside
 th, td { border: 1px solid var(--rule); padding: 1mm 2mm; vertical-align: top; text-align: left; }
 th { background: #f0f0f0; font-weight: 600; }
 th .unit { display: block; font-weight: normal; }
+th.num { text-align: right; }
 td.num { text-align: right; font-variant-numeric: tabular-nums; white-space: nowrap; }
 tr.total td { font-weight: bold; border-top: 2px solid var(--ink); }
 figure { margin: 3mm 0; break-inside: avoid; }
@@ -105,6 +106,8 @@ table.assumptions td.applies-to { font-size: 7.5pt; }
   tr, figure, .input-block { break-inside: avoid; }
   table, table.hourly { break-inside: auto; }
   thead { display: table-header-group; }
+  thead, thead tr { break-inside: avoid; break-after: avoid; page-break-after: avoid; }
+  tbody > tr:first-child { break-before: avoid; page-break-before: avoid; }
   tfoot { display: table-footer-group; }
 }
 `);

@@ -3,6 +3,7 @@ import { formatPosition } from "../../project/position.ts";
 import { sortDiagnostics } from "../../project/diagnostic.ts";
 import { formatSig } from "../page/format.ts";
 import { html, type Trusted } from "../page/html.ts";
+import { findingCountsText, FOLDED_RULE } from "../page/findingCounts.ts";
 import { quotedNumbers } from "../page/quotedText.ts";
 import type { RenderContext } from "../page/packageInput.ts";
 import type { CheckResult } from "../../results/types.ts";
@@ -93,18 +94,15 @@ function methodNotesTable(ctx: RenderContext): Trusted {
   `;
 }
 
-/** Review notes folded into the assumptions register (one per default assumption). */
-const FOLDED_RULE = "default-used";
-
 function findingsTable(ctx: RenderContext): Trusted {
   const all = sortDiagnostics(ctx.input.findings);
   const findings = all.filter((f) => f.rule !== FOLDED_RULE);
   const foldedCount = all.length - findings.length;
-  const folded = foldedCount === 0 ? html`` : html`
-    <p
-      class="muted">${String(
-        foldedCount,
-      )} notes "Default in use" (rule <code>${FOLDED_RULE}</code>) are folded into the <a href="#s-5">assumptions register</a>, one row per default with the lines it applies to.</p>
+  const counts = html`<p class="finding-counts">Review findings: ${findingCountsText(all)}.</p>`;
+  const folded = foldedCount === 0 ? counts : html`
+    ${counts}
+        <p
+      class="muted">The "Default in use" notes (rule <code>${FOLDED_RULE}</code>) are rows of the <a href="#s-5">assumptions register</a>, one row per default with the lines it applies to.</p>
   `;
   if (findings.length === 0) {
     return html`${folded}${foldedCount === 0 ? html`<p>No findings were raised on the inputs.</p>` : html``}`;

@@ -2,6 +2,7 @@
 import type { MaterialDef } from "../../project/model.ts";
 import { type AssumptionGroup, groupAssumptions } from "./assumptionGroups.ts";
 import { html, type Trusted } from "../page/html.ts";
+import { FOLDED_RULE } from "../page/findingCounts.ts";
 import { quotedNumbers } from "../page/quotedText.ts";
 import { materialTableHead, materialTableRow } from "../constructions/materialRows.ts";
 import type { RenderContext } from "../page/packageInput.ts";
@@ -46,9 +47,10 @@ export function renderAssumptionsSection(ctx: RenderContext): Trusted {
     </table>
   `;
   const siNote = ctx.display.system === "SI" ? html`` : html`
-    <p class="muted">The statements are quoted as recorded in results.json, so their values are in SI units.</p>
+    <p
+      class="muted">The statements are quoted from results.json with their values in IP units; a formula keeps its SI form.</p>
   `;
-  const defaults = list.filter((a) => a.id.startsWith("default:")).length;
+  const defaults = ctx.input.findings.filter((f) => f.rule === FOLDED_RULE).length;
   const folded = defaults === 0 ? html`` : html`
     <p
       class="muted">The review's ${String(

@@ -17,19 +17,22 @@ function gainAt(results: ScenarioResults, series: readonly number[], h: number):
 }
 
 function rtsTable(cl: CoolingLoadResults): Trusted {
-  const half = (start: number) => {
-    const js = HOURS.slice(start, start + 12);
-    return html`
-      <tr><th scope="row">j</th>${js.map((j) => html`<td class="num">${String(j)}</td>`)}</tr>
-      <tr><th scope="row">r<sub>j</sub></th>${js.map((j) =>
+  // Two halves of twelve hours; the hour row of each is a header row, the first one the table's thead.
+  const hours = (start: number) =>
+    html`<tr><th scope="col">j</th>${
+      HOURS.slice(start, start + 12).map((j) => html`<th scope="col" class="num">${String(j)}</th>`)
+    }</tr>`;
+  const shares = (start: number) =>
+    html`<tr><th scope="row">r<sub>j</sub></th>${
+      HOURS.slice(start, start + 12).map((j) =>
         html`<td class="num" data-q="rts">${formatTrim(cl.radiantTimeSeries.values[j] ?? NaN, 4)}</td>`
-      )}</tr>
-    `;
-  };
+      )
+    }</tr>`;
   return html`
     <table class="rts-table compact">
       <caption>Radiant time series used (r<sub>j</sub>: share of a radiant gain that becomes cooling load j hours later), as given in the input.</caption>
-      <tbody>${half(0)}${half(12)}</tbody>
+      <thead>${hours(0)}</thead>
+      <tbody>${shares(0)}${hours(12)}${shares(12)}</tbody>
     </table>
   `;
 }

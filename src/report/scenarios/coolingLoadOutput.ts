@@ -5,9 +5,10 @@ import type { ScenarioResults } from "../../results/types.ts";
 import { type DisplayUnits, toDisplay, unitLabel } from "../page/displayUnits.ts";
 import { formatFixed, formatTrim } from "../page/format.ts";
 import { html, type Trusted } from "../page/html.ts";
-import { type PlotSpec, renderPlotSvg } from "../page/plotSvg.ts";
+import { namePlaceholder, type PlotSpec, renderPlotSvg } from "../page/plotSvg.ts";
+import { endLabels } from "../constructions/dynamicPlots.ts";
 import { clockTime } from "./scenarioData.ts";
-import { legendEntry, lineSwatch, OUTDOOR_STYLE, type SeriesStyle, surfaceStyle } from "./scenarioStyle.ts";
+import { OUTDOOR_STYLE, type SeriesStyle, surfaceStyle } from "./scenarioStyle.ts";
 
 const HOURS = Array.from({ length: 24 }, (_, h) => h);
 const DASHED: SeriesStyle = { colour: "#b5470f", dash: "5 3" };
@@ -118,6 +119,7 @@ function spec(yLabel: string, marks: Plot.Markish[]): PlotSpec {
   return {
     height: 280,
     marginLeft: 56,
+    marginRight: 96,
     marginBottom: 40,
     style: { fontSize: "11px" },
     x: {
@@ -150,6 +152,22 @@ function line(values: readonly number[], style: SeriesStyle, d: DisplayUnits, wi
   });
 }
 
+/** Names at the right ends of hourly lines (hour 23), spread apart so that they do not overlap. */
+function hourEnds(
+  lines: readonly { name: string; values: readonly number[] }[],
+  d: DisplayUnits,
+): Plot.Markish {
+  const shown = lines.map((l) => l.values.map((v) => toDisplay(d, "heatGain", v)));
+  return endLabels(
+    lines.map((l, i) => {
+      const v = shown[i]!;
+      return { name: l.name, end: v.length === 0 ? undefined : { t: v.length - 1, v: v[v.length - 1]! } };
+    }),
+    shown.flat(),
+    true,
+  );
+}
+
 function plots(
   id: string,
   results: ScenarioResults,
@@ -163,6 +181,10 @@ function plots(
       Plot.ruleY([0], { stroke: "#444" }),
       line(cl.totalHeatGain, DASHED, d),
       line(cl.total, OUTDOOR_STYLE, d, 2.2),
+      hourEnds(
+        [{ name: "heat gain", values: cl.totalHeatGain }, { name: "cooling load", values: cl.total }],
+        d,
+      ),
     ]),
     `${prefix}-cooling-total`,
     "Total heat gain and total cooling load over the design day",
@@ -175,24 +197,17 @@ function plots(
         line(HOURS.map((h) => gainAt(results, s.heatGain, h)), { ...surfaceStyle(i), dash: "2 3" }, d, 1.1)
       ),
       ...entries.map((s, i) => line(s.coolingLoad ?? [], { ...surfaceStyle(i), dash: "none" }, d)),
+      hourEnds(entries.map((s, i) => ({ name: namePlaceholder(i), values: s.coolingLoad ?? [] })), d),
     ]),
     `${prefix}-cooling-surfaces`,
     "Heat gain and cooling load of each surface over the design day",
-  );
-  const names = Object.keys(results.surfaces).map((sid, i) =>
-    legendEntry(lineSwatch({ ...surfaceStyle(i), dash: "none" }), sid)
+    Object.keys(results.surfaces),
   );
   return html`
     <figure
-      class="plot-figure">${totalSvg}<figcaption><strong>Total heat gain and cooling load, scenario ${id}.</strong> <span class="legend">${legendEntry(
-        lineSwatch(DASHED),
-        "heat gain",
-      )}${legendEntry(
-        lineSwatch(OUTDOOR_STYLE, 2.2),
-        "cooling load",
-      )}</span> At the full hours.</figcaption></figure>
+      class="plot-figure">${totalSvg}<figcaption><strong>Total heat gain and cooling load, scenario ${id}.</strong> Each line is named at its right end: heat gain dashed, cooling load solid and thicker. At the full hours.</figcaption></figure>
     <figure
-      class="plot-figure">${surfaceSvg}<figcaption><strong>Heat gain (dotted) and cooling load (solid) by surface, scenario ${id}.</strong> <span class="legend">${names}</span></figcaption></figure>
+      class="plot-figure">${surfaceSvg}<figcaption><strong>Heat gain (dotted) and cooling load (solid) by surface, scenario ${id}.</strong> Each surface's cooling load line is named at its right end by surface id; its heat gain is the dotted line of the same colour.</figcaption></figure>
   `;
 }
 

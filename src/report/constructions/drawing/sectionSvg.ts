@@ -5,7 +5,7 @@
  */
 import type { Construction } from "../../../project/model.ts";
 import { type DisplayUnits, thicknessFigure, toDisplay, unitLabel } from "../../page/displayUnits.ts";
-import { formatTrim, THIN_SPACE } from "../../page/format.ts";
+import { THIN_SPACE } from "../../page/format.ts";
 import { html, type Trusted } from "../../page/html.ts";
 import {
   battLine,

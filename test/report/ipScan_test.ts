@@ -16,7 +16,7 @@ const J_PER_KBTU = 1055055.85262;
 /**
  * Parts that are not display output: SI beside IP, the exact definitions, input blocks and prose as written,
  * checks and register statements quoted from results.json (relative values, SI text), the calculation methods section,
- * the sources, the scenario notes and the appendices.
+ * the sources and the appendices (the scenario notes are scanned: their values are converted).
  */
 const QUOTED = [
   ".si-equivalent",
@@ -24,7 +24,6 @@ const QUOTED = [
   ".input-block",
   ".prose",
   "table.subject-checks",
-  "ul.scenario-notes",
   "#s-3",
   "#s-4",
   "#s-5",

@@ -105,7 +105,7 @@ Deno.test("IP: the layer table, the section drawing and the material tables use 
   const head = text(ipDoc.querySelector("table.layer-table thead"));
   assert.equal(
     head,
-    "No. Layer Thickness in λ Btu·in/(h·ft²·°F) ρ lb/ft³ c Btu/(lb·°F) R h·ft²·°F/Btu ρ·c·d, heat capacity per area Btu/(ft²·°F) (total row: Σ ρ·c·d)",
+    "No. Layer Thickness in λ Btu·in/(h·ft²·°F) ρ lb/ft³ c Btu/(lb·°F) R h·ft²·°F/Btu ρ·c·d, heat capacity per area (total row: Σ ρ·c·d) Btu/(ft²·°F)",
   );
   // Layer 2: 120 mm EPS, λ 0.035, ρ 20, c 1450.
   const eps = rowOf(ipDoc, "table.layer-table", "EPS board");

@@ -207,5 +207,10 @@ export function thicknessFigure(display: DisplayUnits, shown: number): string {
  * opportunity after each "/" so that a long IP unit (Btu·in/(h·ft²·°F)) wraps inside a narrow column.
  */
 export function unitHead(display: DisplayUnits, kind: QuantityKind): Trusted {
-  return raw(`<span class="unit">${escapeHtml(unitLabel(display, kind)).replaceAll("/", "/<wbr>")}</span>`);
+  return html`<span class="unit">${unitBreakable(display, kind)}</span>`;
+}
+
+/** A unit label with a break opportunity after each "/" (`Btu/<wbr>(h·ft²·°F)`), for narrow table heads. */
+export function unitBreakable(display: DisplayUnits, kind: QuantityKind): Trusted {
+  return raw(escapeHtml(unitLabel(display, kind)).replaceAll("/", "/<wbr>"));
 }

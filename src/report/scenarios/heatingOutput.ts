@@ -1,7 +1,7 @@
 /** The computed output of a heating scenario: design heat loss and the ISO 13788 surface checks per surface. */
 import type { HeatingScenario } from "../../project/model.ts";
 import type { HeatingResults, Verdict } from "../../scenarios/heatingTypes.ts";
-import { type DisplayUnits, toDisplay, unitHead, unitLabel } from "../page/displayUnits.ts";
+import { type DisplayUnits, toDisplay, unitBreakable, unitHead, unitLabel } from "../page/displayUnits.ts";
 import { DELTA_F_PER_K } from "../page/displayUnits.ts";
 import { formatFixed, formatSig } from "../page/format.ts";
 import { html, type Trusted } from "../page/html.ts";
@@ -73,11 +73,10 @@ function conditions(r: HeatingResults, d: DisplayUnits): Trusted {
 /** The R_si of the f_Rsi column under its head, with the unit on its own line so that the column stays narrow. */
 function rsiHead(r: HeatingResults, d: DisplayUnits): Trusted {
   const rsi = Object.values(r.surfaces)[0]?.moistureSurfaceResistance;
-  return rsi === undefined
-    ? html``
-    : html`<span class="unit">R_si = ${formatSig(toDisplay(d, "resistance", rsi), 3)}</span>${
-      unitHead(d, "resistance")
-    }`;
+  if (rsi === undefined) return html``;
+  const value = formatSig(toDisplay(d, "resistance", rsi), 3);
+  const unit = unitBreakable(d, "resistance");
+  return html`<span class="unit">(R_si = ${value} ${unit})</span>`;
 }
 
 function surfaceTable(id: string, r: HeatingResults, d: DisplayUnits): Trusted {
@@ -112,16 +111,16 @@ function surfaceTable(id: string, r: HeatingResults, d: DisplayUnits): Trusted {
       <thead>
         <tr>
           <th>Surface</th>
-          <th>Con\\u00adstruc\\u00adtion</th>
+          <th>Con&shy;struc&shy;tion</th>
           <th>U ${unitHead(d, "transmittance")}</th>
           <th>U<sub>c</sub> ${unitHead(d, "transmittance")}</th>
           <th>Area ${unitHead(d, "area")}</th>
           <th>Heat loss ${unitHead(d, "heatGain")}</th>
           <th>θ<sub>si</sub> ${unitHead(d, "temperature")}</th>
-          <th>f<sub>Rsi</sub>${rsiHead(r, d)}</th>
+          <th>f<sub>Rsi</sub> ${rsiHead(r, d)}</th>
           <th>f<sub>Rsi,min</sub></th>
           <th>Dew point ${unitHead(d, "temperature")}</th>
-          <th>Surface conden\\u00adsation</th>
+          <th>Surface conden&shy;sation</th>
           <th>Mould</th>
         </tr>
       </thead>

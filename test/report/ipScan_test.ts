@@ -4,7 +4,7 @@
  * the text quoted verbatim from the inputs or results.json.
  */
 import assert from "node:assert/strict";
-import { formatFixed, formatSig } from "../../src/report/page/format.ts";
+import { formatSig } from "../../src/report/page/format.ts";
 import { renderPackage } from "../../src/report/package.ts";
 import type { ScenarioResults } from "../../src/results/types.ts";
 import { parseDocument } from "./dom.ts";

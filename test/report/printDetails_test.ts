@@ -40,6 +40,8 @@ Deno.test("print rules: a table's header rows are never the last lines of a page
   assert.match(print, /thead, thead tr \{[^}]*break-after: avoid/);
   assert.match(print, /tbody > tr:first-child \{[^}]*break-before: avoid/);
   assert.match(print, /thead \{ display: table-header-group; \}/);
+  // A caption is not split over two pages either (the open-items caption ended page 2 of the demo).
+  assert.match(print, /caption \{ break-inside: avoid;/);
 });
 
 Deno.test("demo: the cover and section 4 count the review findings alike, folded notes included", async () => {

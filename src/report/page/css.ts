@@ -103,6 +103,7 @@ table.assumptions td.applies-to { font-size: 7.5pt; }
   .print-only { display: block; }
   a { color: inherit; text-decoration: none; }
   h1, h2, h3, h4, h5, h6, .input-label, caption { break-after: avoid; page-break-after: avoid; }
+  caption { break-inside: avoid; page-break-inside: avoid; }
   tr, figure, .input-block { break-inside: avoid; }
   table, table.hourly { break-inside: auto; }
   thead { display: table-header-group; }

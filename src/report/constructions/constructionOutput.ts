@@ -235,7 +235,11 @@ export function renderConstructionOutput(
     ${countMismatch}${renderBridgedOutput(results, d)}
     ${uLine(construction, results, d)}${renderLimitsOutput(results, d)}
     <figure>${renderSectionSvg(construction, d)}<figcaption>Section of ${construction
-      .id}, drawn from outside (left) to inside (right); numbers refer to the table above.</figcaption></figure>
+      .id}, drawn from outside (${construction.heatFlow === "horizontal"
+      ? "left"
+      : "top"}) to inside (${construction.heatFlow === "horizontal"
+      ? "right"
+      : "bottom"}); numbers refer to the table above.</figcaption></figure>
     ${renderDynamicResponse(
       construction,
       results,

@@ -217,7 +217,7 @@ function unmetLimitItems(results: ResultsJson): Draft[] {
       id: `unmet-limit:${l.id}`,
       kind: "unmet-limit",
       text: `Limit ${l.limitKey} not met by ${l.id.split(":").slice(1).join(":")}: ${
-        l.value === null ? "not computed" : String(l.value)
+        l.value === null ? "not computed" : `${Number(l.value.toPrecision(3))} ${l.unit}`
       } against ${l.limit} ${l.unit} (${l.clause})`,
       at: l.at,
     }))

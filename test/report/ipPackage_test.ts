@@ -105,25 +105,25 @@ Deno.test("IP: the layer table, the section drawing and the material tables use 
   const head = text(ipDoc.querySelector("table.layer-table thead"));
   assert.equal(
     head,
-    "No. Layer Thickness in λ Btu·in/(h·ft²·°F) ρ lb/ft³ c Btu/(lb·°F) R h·ft²·°F/Btu ρ·c·d, heat capacity per area Btu/(ft²·°F) (total row: Σ ρ·c·d)",
+    "No. Layer Thickness in λ Btu·in/(h·ft²·°F) ρ lb/ft³ c Btu/(lb·°F) R h·ft²·°F/Btu ρ·c·d, heat capacity per area (total row: Σ ρ·c·d) Btu/(ft²·°F)",
   );
   // Layer 2: 120 mm EPS, λ 0.035, ρ 20, c 1450.
   const eps = rowOf(ipDoc, "table.layer-table", "EPS board");
   const cells = Array.from(eps.querySelectorAll("td.num")).map(text);
   assert.deepEqual(cells.slice(1, 5), [
-    formatTrim(0.12 / 0.0254, 4),
-    formatTrim(0.035 / (U_FACTOR * 0.0254), 4), // Btu·in/(h·ft²·°F) = 5.678263 W/(m²·K) × 0.0254 m
-    formatTrim(20 / (0.45359237 / 0.3048 ** 3), 4),
-    formatTrim(1450 / 4186.8, 4),
+    formatTrim(0.12 / 0.0254, 3), // three significant figures (ISSUE 11 item 9): 4.72 in
+    formatTrim(0.035 / (U_FACTOR * 0.0254), 3), // Btu·in/(h·ft²·°F) = 5.678263 W/(m²·K) × 0.0254 m
+    formatTrim(20 / (0.45359237 / 0.3048 ** 3), 3),
+    formatTrim(1450 / 4186.8, 3),
   ]);
   const drawing = ipDoc.querySelector("svg.section-drawing")!;
   const labels = Array.from(drawing.querySelectorAll("text")).map(text);
-  assert.ok(labels.includes(formatTrim(0.12 / 0.0254, 4)), "120 mm EPS is 4.724 in");
+  assert.ok(labels.includes(formatTrim(0.12 / 0.0254, 3)), "120 mm EPS is 4.72 in");
   assert.ok(labels.some((l) => /^[\d.]+\u2009in overall/.test(l)), labels.join(" | "));
   assert.ok(!labels.some((l) => /mm/.test(l)), labels.join(" | "));
   // The fixture's materials have no block in a document, so section 6 gives their values.
   const material = rowOf(ipDoc, "#s-6 table", "eps-board");
-  assert.equal(text(material.children[2]), formatTrim(0.035 / (U_FACTOR * 0.0254), 4));
+  assert.equal(text(material.children[2]), formatTrim(0.035 / (U_FACTOR * 0.0254), 3));
 });
 
 Deno.test("IP: the plots are drawn in IP values with IP axis labels", () => {

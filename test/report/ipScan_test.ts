@@ -4,7 +4,7 @@
  * the text quoted verbatim from the inputs or results.json.
  */
 import assert from "node:assert/strict";
-import { formatFixed } from "../../src/report/page/format.ts";
+import { formatSig } from "../../src/report/page/format.ts";
 import { renderPackage } from "../../src/report/package.ts";
 import type { ScenarioResults } from "../../src/results/types.ts";
 import { parseDocument } from "./dom.ts";
@@ -16,7 +16,7 @@ const J_PER_KBTU = 1055055.85262;
 /**
  * Parts that are not display output: SI beside IP, the exact definitions, input blocks and prose as written,
  * checks and register statements quoted from results.json (relative values, SI text), the calculation methods section,
- * the sources, the scenario notes and the appendices.
+ * the sources and the appendices (the scenario notes are scanned: their values are converted).
  */
 const QUOTED = [
   ".si-equivalent",
@@ -24,7 +24,6 @@ const QUOTED = [
   ".input-block",
   ".prose",
   "table.subject-checks",
-  "ul.scenario-notes",
   "#s-3",
   "#s-4",
   "#s-5",
@@ -85,7 +84,7 @@ Deno.test("IP weather year: monthly energy in kBtu, dry bulb in °F, the monthly
   const head = doc.querySelector("table.monthly thead")?.textContent?.replace(/\s+/g, " ").trim();
   assert.equal(head, "Month Heat gain kBtu Heat loss kBtu Net (gain − loss) kBtu");
   const january = Array.from(doc.querySelectorAll("table.monthly tbody tr")[0]!.querySelectorAll("td"));
-  assert.equal(january[2]?.textContent, formatFixed(monthly.loss_J / J_PER_KBTU, 2));
+  assert.equal(january[2]?.textContent, formatSig(monthly.loss_J / J_PER_KBTU, 3));
   assert.ok(monthly.loss_J > 0, "a 5 °C year against 20 °C indoors loses heat");
   const conditions = doc.querySelector("table.conditions")?.textContent ?? "";
   // 5 °C constant: 41.0 °F; indoor 20 °C: 68 °F.

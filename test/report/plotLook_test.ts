@@ -126,3 +126,38 @@ Deno.test("plots: hostile surface names at line ends are escaped text", () => {
   const texts = Array.from(body.querySelectorAll("text")).map((t) => t.textContent ?? "");
   for (const n of names) assert.ok(texts.includes(`\u2068${n}\u2069`), n);
 });
+
+Deno.test("plots: y-axis titles run along the axis (rotated beside the ticks), not at the top left", async () => {
+  const doc = await built();
+  for (const p of Array.from(doc.querySelectorAll("svg.plot"))) {
+    const title = p.querySelector("g[aria-label='y-axis label'] text");
+    if (title === null) continue; // the tornado chart names its bars instead
+    assert.match(title.getAttribute("transform") ?? "", /rotate\(-90\)/, p.getAttribute("aria-label") ?? "");
+  }
+});
+
+Deno.test("plots: stacked gain, monthly and cooling-load plots name their series in the plot, no caption legends", async () => {
+  const doc = await built();
+  // Surfaces of the demo's design-day scenario (projects/demo/40-scenarios.md).
+  const surfaces = ["ew1-south", "ew1-west", "ew2-east", "ew3-north", "ew4-west", "roof"];
+  const stacked = plots(doc, "Heat gain stacked")[0];
+  assert.ok(stacked !== undefined);
+  for (const n of [...surfaces, "total"]) assert.ok(textsOf(stacked).includes(n), `stacked: ${n}`);
+  const total = plots(doc, "Total heat gain and total cooling load")[0];
+  assert.ok(total !== undefined);
+  for (const n of ["heat gain", "cooling load"]) assert.ok(textsOf(total).includes(n), `cooling total: ${n}`);
+  const bySurface = plots(doc, "Heat gain and cooling load of each")[0];
+  assert.ok(bySurface !== undefined);
+  for (const n of surfaces) assert.ok(textsOf(bySurface).includes(n), `cooling by surface: ${n}`);
+  const monthly = plots(doc, "Monthly heat gain and heat loss")[0];
+  assert.ok(monthly !== undefined);
+  for (const n of ["heat gain", "heat loss"]) assert.ok(textsOf(monthly).includes(n), `monthly: ${n}`);
+  for (const p of [stacked, total, bySurface, monthly]) {
+    const figure = p.closest("figure");
+    assert.equal(
+      figure?.querySelectorAll(".legend, .legend-entry, svg.swatch").length,
+      0,
+      p.getAttribute("aria-label") ?? "",
+    );
+  }
+});

@@ -56,13 +56,14 @@ Deno.test("weather scenario: monthly losses equal U·A·ΔT·hours, month by mon
   for (const [m, hours] of HOURS.entries()) {
     const loss = num(rows[m]!.querySelector('td[data-q="loss"]')?.textContent);
     const gain = num(rows[m]!.querySelector('td[data-q="gain"]')?.textContent);
-    // Loss energy = U · A · (21 − 5) K · hours, in kWh (W·h / 1000); printed to 0.01 kWh.
+    // Loss energy = U · A · (21 − 5) K · hours, in kWh (W·h / 1000); printed to three significant figures.
     const expected = (WALL_U * AREA * 16 * hours) / 1000;
-    assert.ok(Math.abs(loss - expected) <= 0.006, `month ${m + 1}: ${loss} vs ${expected}`);
+    assert.ok(Math.abs(loss - expected) <= 0.0051 * expected, `month ${m + 1}: ${loss} vs ${expected}`);
     assert.equal(gain, 0);
   }
   const year = rows[12]!.querySelectorAll("td");
-  assert.ok(Math.abs(num(year[2]?.textContent) - (WALL_U * AREA * 16 * 8760) / 1000) <= 0.006);
+  const yearLoss = (WALL_U * AREA * 16 * 8760) / 1000;
+  assert.ok(Math.abs(num(year[2]?.textContent) - yearLoss) <= 0.0051 * yearLoss);
 });
 
 Deno.test("weather scenario: a results entry without the extension keys still renders its summary", () => {

@@ -133,3 +133,25 @@ Deno.test("section drawing: walls name their faces, no OUTSIDE/INSIDE strip labe
     assert.ok(all.includes("exterior face") && all.includes("interior face"), c.id);
   }
 });
+
+Deno.test("section drawing: a floor (heat flow downward) is stacked with its exterior face on top too, faces noted", async () => {
+  const roof = (await demoConstructions()).find((x) => x.id === "RF-1");
+  assert.ok(roof !== undefined);
+  // The demo roof's layers read as a floor: same build-up, heat flow downward (exterior = the underside).
+  const floor: Construction = { ...roof, id: "FL-1", heatFlow: "downward" };
+  const svg = parseFragment(renderSectionSvg(floor, SI_DISPLAY).markup).querySelector("svg");
+  assert.ok(svg !== null);
+  const rects = Array.from(svg.querySelectorAll("rect.layer"));
+  const ys = rects.map((r) => Number(r.getAttribute("y")));
+  for (let i = 1; i < ys.length; i++) {
+    assert.ok((ys[i] ?? 0) > (ys[i - 1] ?? 0), "layer 1 (the exterior) on top");
+  }
+  const faceY = (t: string) =>
+    Number(
+      Array.from(svg.querySelectorAll("text.face-label")).find((e) => e.textContent === t)?.getAttribute("y"),
+    );
+  assert.ok(faceY("exterior face") < faceY("interior face"));
+  const notes = texts(svg, "text.face-note");
+  assert.ok(notes.some((n) => /underside in place/.test(n)), notes.join(" | "));
+  assert.ok(notes.some((n) => /floor surface/.test(n)), notes.join(" | "));
+});

@@ -50,8 +50,8 @@ export function renderBridgedOutput(results: ConstructionResults | undefined, d:
 
 function combinedTable(c: CombinedMethodJson | undefined, d: DisplayUnits): Trusted {
   if (c === undefined) return html``;
-  const r = (v: number) => formatSig(toDisplay(d, "resistance", v), 4);
-  const k = (v: number) => formatSig(toDisplay(d, "conductivity", v), 4);
+  const r = (v: number) => formatSig(toDisplay(d, "resistance", v), 3);
+  const k = (v: number) => formatSig(toDisplay(d, "conductivity", v), 3);
   const rUnit = unitLabel(d, "resistance");
   const paths = c.paths.map((p) =>
     html`
@@ -112,10 +112,10 @@ function combinedTable(c: CombinedMethodJson | undefined, d: DisplayUnits): Trus
         c.equivalentLayer.conductivity,
       )} ${unitLabel(d, "conductivity")} (reproduces R_T), ρ = Σ f ρ = ${formatSig(
         toDisplay(d, "density", c.equivalentLayer.density),
-        4,
+        3,
       )} ${unitLabel(d, "density")}, c = Σ f ρ c / Σ f ρ = ${formatSig(
         toDisplay(d, "specificHeat", c.equivalentLayer.specificHeat),
-        4,
+        3,
       )} ${unitLabel(
         d,
         "specificHeat",

@@ -1,9 +1,17 @@
 /** The computed output shown after a construction block: layer table, R and U, checks, section drawing. */
 import type { Construction, ResolvedLayer } from "../../project/model.ts";
 import type { CheckResult, ConstructionResults, MethodNoteResult } from "../../results/types.ts";
-import { type DisplayUnits, siEquivalent, toDisplay, unitLabel } from "../page/displayUnits.ts";
+import {
+  type DisplayUnits,
+  formatThickness,
+  siEquivalent,
+  toDisplay,
+  unitHead,
+  unitLabel,
+} from "../page/displayUnits.ts";
 import { formatSig, formatTrim } from "../page/format.ts";
 import { html, type Trusted } from "../page/html.ts";
+import { quotedNumbers } from "../page/quotedText.ts";
 import { renderDynamicResponse } from "./dynamicOutput.ts";
 import { renderSectionSvg } from "./drawing/sectionSvg.ts";
 import { bridgedLayerLabel, bridgedLayerName, renderBridgedOutput } from "./bridgedOutput.ts";
@@ -21,10 +29,10 @@ function layerCells(layer: ResolvedLayer, d: DisplayUnits): Trusted {
     `;
   }
   return html`
-    <td class="num">${formatTrim(toDisplay(d, "thickness", layer.thicknessM), 4)}</td>
-    <td class="num">${formatTrim(toDisplay(d, "conductivity", layer.conductivity), 4)}</td>
-    <td class="num">${formatTrim(toDisplay(d, "density", layer.density), 4)}</td>
-    <td class="num">${formatTrim(toDisplay(d, "specificHeat", layer.specificHeat), 4)}</td>
+    <td class="num thickness">${formatThickness(d, layer.thicknessM)}</td>
+    <td class="num">${formatTrim(toDisplay(d, "conductivity", layer.conductivity), 3)}</td>
+    <td class="num">${formatTrim(toDisplay(d, "density", layer.density), 3)}</td>
+    <td class="num">${formatTrim(toDisplay(d, "specificHeat", layer.specificHeat), 3)}</td>
   `;
 }
 
@@ -63,7 +71,7 @@ function surfaceRow(label: string, value: number, defaulted: boolean, d: Display
       <td class="num">${DASH}</td>
       <td class="num">${DASH}</td>
       <td class="num">${DASH}</td>
-      <td class="num">${formatTrim(toDisplay(d, "resistance", value), 4)}</td>
+      <td class="num">${formatTrim(toDisplay(d, "resistance", value), 3)}</td>
       <td class="num">0</td>
     </tr>
   `;
@@ -131,7 +139,7 @@ export function checksTable(
         <td class="result">${c.pass ? "PASS" : "FAIL"}</td>
         ${subjectLabel === undefined ? html`` : html`<td>${subjectLabel(c)}</td>`}
         <td><code>${c.id}</code></td>
-        <td>${c.description}</td>
+        <td>${quotedNumbers(c.description)}</td>
         <td class="num">${formatSig(c.value, 3)}</td>
         <td class="num">${formatSig(c.limit, 3)}</td>
       </tr>
@@ -199,12 +207,12 @@ export function renderConstructionOutput(
         <tr>
           <th>No.</th>
           <th>Layer</th>
-          <th>Thickness ${unitLabel(d, "thickness")}</th>
-          <th>λ ${unitLabel(d, "conductivity")}</th>
-          <th>ρ ${unitLabel(d, "density")}</th>
-          <th>c ${unitLabel(d, "specificHeat")}</th>
-          <th>R ${unitLabel(d, "resistance")}</th>
-          <th>ρ·c·d, heat capacity per area ${unitLabel(d, "arealHeatCapacity")} (total row: Σ ρ·c·d)</th>
+          <th>Thickness ${unitHead(d, "thickness")}</th>
+          <th>λ ${unitHead(d, "conductivity")}</th>
+          <th>ρ ${unitHead(d, "density")}</th>
+          <th>c ${unitHead(d, "specificHeat")}</th>
+          <th>R ${unitHead(d, "resistance")}</th>
+          <th>ρ·c·d, heat capacity per area (total row: Σ ρ·c·d) ${unitHead(d, "arealHeatCapacity")}</th>
         </tr>
       </thead>
       <tbody>
@@ -227,7 +235,11 @@ export function renderConstructionOutput(
     ${countMismatch}${renderBridgedOutput(results, d)}
     ${uLine(construction, results, d)}${renderLimitsOutput(results, d)}
     <figure>${renderSectionSvg(construction, d)}<figcaption>Section of ${construction
-      .id}, drawn from outside (left) to inside (right); numbers refer to the table above.</figcaption></figure>
+      .id}, drawn from outside (${construction.heatFlow === "horizontal"
+      ? "left"
+      : "top"}) to inside (${construction.heatFlow === "horizontal"
+      ? "right"
+      : "bottom"}); numbers refer to the table above.</figcaption></figure>
     ${renderDynamicResponse(
       construction,
       results,

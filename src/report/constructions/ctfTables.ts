@@ -4,6 +4,7 @@ import type { DynamicView } from "./dynamicData.ts";
 import { type DisplayUnits, toDisplay, unitLabel } from "../page/displayUnits.ts";
 import { formatSig, formatTrim } from "../page/format.ts";
 import { html, joinHtml, raw, type Trusted } from "../page/html.ts";
+import { quotedNumbers } from "../page/quotedText.ts";
 
 type CtfJson = NonNullable<DynamicView["ctf"]>;
 
@@ -70,11 +71,11 @@ function noteFigures(notes: readonly MethodNoteResult[], subject: string, method
     return html`<p class="fail">No method note is recorded for it in results.json.</p>`;
   }
   return html`
-    <p>${note.text}.</p>
+    <p>${quotedNumbers(note.text)}.</p>
     <ul class="rejection-figures">${note.figures.map((f) =>
-      html`<li>${f.id} (${f.description}): value ${formatSig(f.value, 3)}, limit ${formatSig(f.limit, 3)}${
-        Math.abs(f.value) <= f.limit ? "" : " (over)"
-      }</li>`
+      html`<li>${f.id} (${quotedNumbers(f.description)}): value ${formatSig(f.value, 3)}, limit ${
+        formatSig(f.limit, 3)
+      }${Math.abs(f.value) <= f.limit ? "" : " (over)"}</li>`
     )}</ul>
   `;
 }

@@ -2,7 +2,7 @@
 import type { LimitResult } from "../../results/limitResults.ts";
 import type { ConstructionResults } from "../../results/types.ts";
 import { type DisplayUnits, toDisplay, unitLabel } from "../page/displayUnits.ts";
-import { formatSig } from "../page/format.ts";
+import { formatSig, formatTrim } from "../page/format.ts";
 import { html, type Trusted } from "../page/html.ts";
 import type { PackageInput } from "../page/packageInput.ts";
 
@@ -33,9 +33,9 @@ export function limitsOf(results: ConstructionResults | undefined): readonly Lim
 function shown(v: number, unit: string, d: DisplayUnits): string {
   if (unit === "-") return formatSig(v, 3);
   if (unit === "W/(m²K)") {
-    return `${formatSig(toDisplay(d, "transmittance", v), 4)} ${unitLabel(d, "transmittance")}`;
+    return `${formatTrim(toDisplay(d, "transmittance", v), 3)} ${unitLabel(d, "transmittance")}`;
   }
-  return `${formatSig(v, 4)} ${unit}`;
+  return `${formatTrim(v, 3)} ${unit}`;
 }
 
 /** Renders the Requirements table of a construction in the display units `d`; nothing when it has no limits. */

@@ -1,26 +1,30 @@
 /** Table rows describing materials: properties in the display units, source and origin. */
 import type { MaterialDef } from "../../project/model.ts";
-import { type DisplayUnits, type QuantityKind, toDisplay, unitLabel } from "../page/displayUnits.ts";
+import { type DisplayUnits, type QuantityKind, toDisplay, unitHead } from "../page/displayUnits.ts";
 import { formatTrim } from "../page/format.ts";
-import { escapeHtml, html, raw, type Trusted } from "../page/html.ts";
+import { html, type Trusted } from "../page/html.ts";
 
 /** Header row of a material table, with the display units of λ, ρ, c and R. */
 export function materialTableHead(d: DisplayUnits): Trusted {
   const heads = [
-    "Id",
-    "Name",
-    `λ ${unitLabel(d, "conductivity")}`,
-    `ρ ${unitLabel(d, "density")}`,
-    `c ${unitLabel(d, "specificHeat")}`,
-    `R ${unitLabel(d, "resistance")}`,
-    "Source",
-    "Origin",
+    html`Id`,
+    html`Name`,
+    html`λ ${unitHead(d, "conductivity")}`,
+    html`ρ ${unitHead(d, "density")}`,
+    html`c ${unitHead(d, "specificHeat")}`,
+    html`R ${unitHead(d, "resistance")}`,
+    html`Source`,
+    html`Origin`,
   ];
-  return raw(`<thead><tr>${heads.map((h) => `<th>${escapeHtml(h)}</th>`).join("")}</tr></thead>`);
+  return html`
+    <thead>
+      <tr>${heads.map((h) => html`<th>${h}</th>`)}</tr>
+    </thead>
+  `;
 }
 
 function cell(value: number | undefined, kind: QuantityKind, d: DisplayUnits): Trusted {
-  return html`<td class="num">${value === undefined ? "—" : formatTrim(toDisplay(d, kind, value), 4)}</td>`;
+  return html`<td class="num">${value === undefined ? "—" : formatTrim(toDisplay(d, kind, value), 3)}</td>`;
 }
 
 /** One material as a table row in the display units; a missing source is shown as a visible gap. */

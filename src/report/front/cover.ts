@@ -1,6 +1,9 @@
 /** The cover: identity, status, sign-off, input hash, tool version and the summary of checks. */
 import type { ProjectStatus } from "../../project/model.ts";
 import { html, type Trusted } from "../page/html.ts";
+import { findingCountsText } from "../page/findingCounts.ts";
+import { quotedNumbers } from "../page/quotedText.ts";
+import { displayUnitsFor } from "../page/displayUnits.ts";
 import type { PackageInput } from "../page/packageInput.ts";
 import { limitsCoverLine } from "../constructions/limitsOutput.ts";
 
@@ -58,12 +61,9 @@ export function checkSummary(input: PackageInput): Trusted {
 }
 
 function findingSummary(input: PackageInput): Trusted {
-  const count = (severity: string, noun: string) => {
-    const n = input.findings.filter((f) => f.severity === severity).length;
-    return `${n} ${noun}${n === 1 ? "" : "s"}`;
-  };
-  const counts = `${count("error", "error")}, ${count("warning", "warning")}, ${count("note", "note")}`;
-  return html`<p class="check-summary">Review findings: ${counts} (see the checks and findings).</p>`;
+  return html`<p class="check-summary">Review findings: ${
+    findingCountsText(input.findings)
+  }; see the checks and findings.</p>`;
 }
 
 /**
@@ -105,9 +105,9 @@ function acknowledgedItems(input: PackageInput): Trusted {
   const acknowledged = (input.results.summary?.openItems ?? []).filter((i) => i.acknowledged !== null);
   if (acknowledged.length === 0) return html``;
   const items = acknowledged.map((i) =>
-    html`<li><code>${i.id}</code>: ${i.text} — acknowledged by ${i.acknowledged?.by ?? ""}: ${
-      i.acknowledged?.reason ?? ""
-    }</li>`
+    html`<li><code>${i.id}</code>: ${
+      quotedNumbers(i.text, displayUnitsFor(input.model.info.units))
+    } — acknowledged by ${i.acknowledged?.by ?? ""}: ${i.acknowledged?.reason ?? ""}</li>`
   );
   return html`
     <div class="check-summary acknowledged-items">

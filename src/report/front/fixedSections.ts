@@ -67,7 +67,7 @@ limits, whatever the project's own scope says; the calculation rests on these si
 <thead><tr><th>Item</th><th>Convention</th></tr></thead>
 <tbody>
 <tr><td>Heat flow sign</td><td>Positive from outside to inside (a heat gain to the room is positive).</td></tr>
-<tr><td>Layer order</td><td>Layers are listed and drawn from outside (left, first) to inside (right, last).</td></tr>
+<tr><td>Layer order</td><td>Layers are listed from outside (first) to inside (last) and drawn so: walls from left to right, roofs and floors from top to bottom.</td></tr>
 <tr><td>Time</td><td>Hour k is the value at k:00 local standard time (no daylight saving).</td></tr>
 `,
     )

@@ -6,6 +6,9 @@ import type { OpenItem, OpenItemKind, SummaryJson } from "../../results/summaryT
 import { outsideFilmCautions } from "../../results/outsideFilmCautions.ts";
 import { filmCoefficientText } from "../page/displayUnits.ts";
 import { html, type Trusted } from "../page/html.ts";
+import { quotedNumbers } from "../page/quotedText.ts";
+import { formatSig } from "../page/format.ts";
+import type { DisplayUnits } from "../page/displayUnits.ts";
 import type { RenderContext } from "../page/packageInput.ts";
 import { constructionsTable, scenariosTable } from "./summaryTables.ts";
 
@@ -20,12 +23,14 @@ export const OPEN_ITEM_LABEL: Readonly<Record<OpenItemKind, string>> = {
   "acknowledged-finding": "Acknowledged finding",
 };
 
-function failedChecks(summary: SummaryJson): Trusted {
+function failedChecks(summary: SummaryJson, d: DisplayUnits): Trusted {
   if (summary.failedChecks.length === 0) {
     return html`<p class="check-summary">Failed checks: none.</p>`;
   }
   const items = summary.failedChecks.map((c) =>
-    html`<li>${c.id} on ${c.subject}: ${String(c.value)} against ${String(c.limit)} (${c.description})</li>`
+    html`<li>${c.id} on ${c.subject}: ${formatSig(c.value, 3)} against ${formatSig(c.limit, 3)} (${
+      quotedNumbers(c.description, d)
+    })</li>`
   );
   return html`
     <div class="check-summary has-failures">
@@ -42,13 +47,14 @@ function itemStatus(item: OpenItem): Trusted {
   return item.blocking ? html`<span class="fail">blocks issue</span>` : html`open`;
 }
 
-function openItems(summary: SummaryJson): Trusted {
+function openItems(summary: SummaryJson, d: DisplayUnits): Trusted {
   if (summary.openItems.length === 0) return html`<p>Open items: none.</p>`;
   const rows = summary.openItems.map((item) =>
     html`
       <tr class="${item.blocking && item.acknowledged === null ? "fail" : ""}">
         <td>${OPEN_ITEM_LABEL[item.kind]}</td>
-        <td>${item.text}<br><span class="muted">at ${item.at}; id <code>${item.id}</code></span></td>
+        <td>${quotedNumbers(item.text, d)}<br><span class="muted">at ${item.at}; id <code>${item
+          .id}</code></span></td>
         <td>${itemStatus(item)}</td>
       </tr>
     `
@@ -88,7 +94,7 @@ export function renderSummarySection(ctx: RenderContext): Trusted {
 ${constructionsTable(summary.constructions, ctx.display)}
 ${scenariosTable(summary.scenarios, ctx.display)}
 ${outsideFilm(ctx)}
-${failedChecks(summary)}
-${openItems(summary)}
+${failedChecks(summary, ctx.display)}
+${openItems(summary, ctx.display)}
 </section>`;
 }

@@ -16,7 +16,7 @@ export function clockTime(hours: number): string {
 
 function peak(d: DisplayUnits, p: PeakSummary | null): Trusted {
   if (p === null) return html`—`;
-  return html`${quantity(d, "heatGain", p.value, 4)} <span class="muted">at ${
+  return html`${quantity(d, "heatGain", p.value, 3)} <span class="muted">at ${
     p.time ?? clockTime(p.time_h)
   }</span>`;
 }
@@ -108,7 +108,7 @@ export function scenariosTable(rows: readonly ScenarioSummary[], d: DisplayUnits
         <td class="num">${peak(d, s.peakGain)}</td>
         <td class="num">${energy(d, s)}</td>
         <td class="num">${peak(d, s.peakCoolingLoad)}</td>
-        <td class="num">${quantity(d, "heatGain", s.designHeatLoss, 4)}</td>
+        <td class="num">${quantity(d, "heatGain", s.designHeatLoss, 3)}</td>
         <td>${surfaceVerdicts(s)}</td>
       </tr>
     `

@@ -15,6 +15,8 @@ h4, h5, h6 { font-size: 10.5pt; }
 table { border-collapse: collapse; margin: 3mm 0; font-size: 9.5pt; break-inside: avoid; }
 th, td { border: 1px solid var(--rule); padding: 1mm 2mm; vertical-align: top; text-align: left; }
 th { background: #f0f0f0; font-weight: 600; }
+th .unit { display: block; font-weight: normal; }
+th.num { text-align: right; }
 td.num { text-align: right; font-variant-numeric: tabular-nums; white-space: nowrap; }
 tr.total td { font-weight: bold; border-top: 2px solid var(--ink); }
 figure { margin: 3mm 0; break-inside: avoid; }
@@ -119,9 +121,12 @@ table.assumptions td.applies-to { font-size: 7.5pt; }
   .print-only { display: block; }
   a { color: inherit; text-decoration: none; }
   h1, h2, h3, h4, h5, h6, .input-label, caption { break-after: avoid; page-break-after: avoid; }
+  caption { break-inside: avoid; page-break-inside: avoid; }
   tr, figure, .input-block { break-inside: avoid; }
   table, table.hourly { break-inside: auto; }
   thead { display: table-header-group; }
+  thead, thead tr { break-inside: avoid; break-after: avoid; page-break-after: avoid; }
+  tbody > tr:first-child { break-before: avoid; page-break-before: avoid; }
   tfoot { display: table-footer-group; }
   table.material-table { width: 100%; font-size: 8.5pt; }
   table.material-table th:nth-child(1) { width: 17%; }
@@ -139,6 +144,8 @@ table.assumptions td.applies-to { font-size: 7.5pt; }
   figure svg.section-stack { max-width: 112mm; }
   .scenario-notes, table.conditions td { font-size: 8.5pt; }
   table.assumptions { font-size: 8pt; }
+  table.scenario-surfaces { font-size: 7.5pt; }
+  table.scenario-surfaces th, table.scenario-surfaces td { padding: 0.2mm 0.7mm; }
   .hourly-appendix table.compact { font-size: 7pt; }
   .hourly-appendix table.compact th, .hourly-appendix table.compact td { padding: 0.2mm 0.8mm; }
   tr.screen-only { display: none; }

@@ -4,8 +4,8 @@
  * definitions, and a temperature difference is never converted as an absolute temperature.
  */
 import type { ProjectInfo } from "../../project/model.ts";
-import { formatTrim } from "./format.ts";
-import { html, type Trusted } from "./html.ts";
+import { formatFixed, formatTrim } from "./format.ts";
+import { escapeHtml, html, raw, type Trusted } from "./html.ts";
 
 /** The unit system of the display, as written in the front matter. */
 export type UnitSystem = ProjectInfo["units"];
@@ -186,4 +186,31 @@ export function filmCoefficientText(display: DisplayUnits, wPerM2K: number): str
   return `${formatTrim(toDisplay(display, "transmittance", wPerM2K), 3)} ${
     unitLabel(display, "transmittance")
   }`;
+}
+
+/**
+ * A layer thickness (metres in SI) as the package prints it: in SI millimetres to 0.1 mm, as layers are
+ * specified (a 102.5 mm brick leaf, a 12.5 mm board); in IP inches to three significant figures (7.09 in).
+ */
+export function formatThickness(display: DisplayUnits, metres: number): string {
+  return thicknessFigure(display, toDisplay(display, "thickness", metres));
+}
+
+/** A thickness already in the display unit (mm or in), printed as {@link formatThickness} prints it. */
+export function thicknessFigure(display: DisplayUnits, shown: number): string {
+  if (display.system === "IP") return formatTrim(shown, 3);
+  return formatFixed(shown, 1).replace(/\.0$/, "");
+}
+
+/**
+ * The unit of a table column under its symbol: `<span class="unit">` on a line of its own, with a break
+ * opportunity after each "/" so that a long IP unit (Btu·in/(h·ft²·°F)) wraps inside a narrow column.
+ */
+export function unitHead(display: DisplayUnits, kind: QuantityKind): Trusted {
+  return html`<span class="unit">${unitBreakable(display, kind)}</span>`;
+}
+
+/** A unit label with a break opportunity after each "/" (`Btu/<wbr>(h·ft²·°F)`), for narrow table heads. */
+export function unitBreakable(display: DisplayUnits, kind: QuantityKind): Trusted {
+  return raw(escapeHtml(unitLabel(display, kind)).replaceAll("/", "/<wbr>"));
 }

@@ -41,6 +41,16 @@ function renameIds(svg: Element, prefix: string): void {
   }
 }
 
+/**
+ * The y-axis title set along the axis, rotated and centred beside the tick labels (Plot's default puts it at the
+ * top left, above the axis), without an arrow; a plot that sets its own anchor keeps it.
+ */
+function alongTheAxis(spec: PlotSpec): PlotSpec {
+  const y = spec.y;
+  if (y === undefined || y === null || y.label === null || y.label === undefined) return spec;
+  return { ...spec, y: { labelAnchor: "center", labelArrow: "none", ...y } };
+}
+
 /** The placeholder a plot mark draws for the i-th project name, replaced by the escaped name afterwards. */
 export function namePlaceholder(i: number): string {
   return `@name-${String(i)}@`;
@@ -59,7 +69,11 @@ export function renderPlotSvg(
   names: readonly string[] = [],
 ): Trusted {
   const { document } = parseHTML("<!doctype html><html><head></head><body></body></html>");
-  const node = Plot.plot({ ...spec, width: PLOT_WIDTH, document: document as unknown as Document });
+  const node = Plot.plot({
+    ...alongTheAxis(spec),
+    width: PLOT_WIDTH,
+    document: document as unknown as Document,
+  });
   const svg = node as unknown as Element;
   if (svg.tagName.toLowerCase() !== "svg") {
     throw new Error(`Cannot inline plot "${label}": Plot returned <${svg.tagName}> instead of <svg>`);

@@ -3,6 +3,8 @@ import { formatPosition } from "../../project/position.ts";
 import { sortDiagnostics } from "../../project/diagnostic.ts";
 import { formatSig } from "../page/format.ts";
 import { html, type Trusted } from "../page/html.ts";
+import { findingCountsText, FOLDED_RULE } from "../page/findingCounts.ts";
+import { quotedNumbers } from "../page/quotedText.ts";
 import type { RenderContext } from "../page/packageInput.ts";
 import type { CheckResult } from "../../results/types.ts";
 import { acknowledgementFor } from "../../project/acknowledgedFindings.ts";
@@ -34,11 +36,11 @@ export function allChecksTable(ctx: RenderContext): Trusted {
 export function checksTable(ctx: RenderContext, checks: readonly CheckResult[]): Trusted {
   if (checks.length === 0) return html`<p>No automated checks apply yet.</p>`;
   const rows = checks.map((c) =>
-    html`<tr><td>${c.id}</td>${subjectCell(c.subject, ctx)}<td>${c.description}</td><td class="num">${
-      formatSig(c.value, 3)
-    }</td><td class="num">${formatSig(c.limit, 3)}</td><td class="${c.pass ? "pass" : "fail"}">${
-      c.pass ? "PASS" : "FAIL"
-    }</td></tr>`
+    html`<tr><td>${c.id}</td>${subjectCell(c.subject, ctx)}<td>${
+      quotedNumbers(c.description, ctx.display)
+    }</td><td class="num">${formatSig(c.value, 3)}</td><td class="num">${
+      formatSig(c.limit, 3)
+    }</td><td class="${c.pass ? "pass" : "fail"}">${c.pass ? "PASS" : "FAIL"}</td></tr>`
   );
   return html`
     <table class="checks-list">
@@ -75,7 +77,9 @@ function methodNotesTable(ctx: RenderContext): Trusted {
   const notes = ctx.input.results.methodNotes ?? [];
   if (notes.length === 0) return html``;
   const rows = notes.map((n) =>
-    html`<tr><td>${n.id}</td>${subjectCell(n.subject, ctx)}<td>${n.text}</td><td class="note">NOTE</td></tr>`
+    html`<tr><td>${n.id}</td>${subjectCell(n.subject, ctx)}<td>${
+      quotedNumbers(n.text, ctx.display)
+    }</td><td class="note">NOTE</td></tr>`
   );
   return html`
     <p>Method notes: choices of numerical form, not checks. A polynomial CTF that is not published is replaced by the modal form, which every computed flux uses; its acceptance figures are in results.json <code>methodNotes</code> and, for the air-to-air CTFs, with the construction.</p>
@@ -93,18 +97,15 @@ function methodNotesTable(ctx: RenderContext): Trusted {
   `;
 }
 
-/** Review notes folded into the assumptions register (one per default assumption). */
-const FOLDED_RULE = "default-used";
-
 function findingsTable(ctx: RenderContext): Trusted {
   const all = sortDiagnostics(ctx.input.findings);
   const findings = all.filter((f) => f.rule !== FOLDED_RULE);
   const foldedCount = all.length - findings.length;
-  const folded = foldedCount === 0 ? html`` : html`
-    <p
-      class="muted">${String(
-        foldedCount,
-      )} notes "Default in use" (rule <code>${FOLDED_RULE}</code>) are folded into the <a href="#s-5">assumptions register</a>, one row per default with the lines it applies to.</p>
+  const counts = html`<p class="finding-counts">Review findings: ${findingCountsText(all)}.</p>`;
+  const folded = foldedCount === 0 ? counts : html`
+    ${counts}
+        <p
+      class="muted">The "Default in use" notes (rule <code>${FOLDED_RULE}</code>) are rows of the <a href="#s-5">assumptions register</a>, one row per default with the lines it applies to.</p>
   `;
   if (findings.length === 0) {
     return html`${folded}${foldedCount === 0 ? html`<p>No findings were raised on the inputs.</p>` : html``}`;

@@ -52,7 +52,7 @@ export function sourceReference(sources: readonly string[], source: string): str
 }
 
 function cell(value: number | undefined, kind: QuantityKind, d: DisplayUnits): Trusted {
-  return html`<td class="num">${value === undefined ? "—" : formatTrim(toDisplay(d, kind, value), 4)}</td>`;
+  return html`<td class="num">${value === undefined ? "—" : formatTrim(toDisplay(d, kind, value), 3)}</td>`;
 }
 
 function usedIn(ctx: RenderContext, id: string): string {

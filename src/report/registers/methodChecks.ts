@@ -2,6 +2,7 @@
 import type { CheckResult } from "../../results/types.ts";
 import { formatSig } from "../page/format.ts";
 import { html, type Trusted } from "../page/html.ts";
+import { quotedNumbers } from "../page/quotedText.ts";
 
 /** Plain statement of what each known check verifies, in the order the engine runs them. */
 const CHECK_MEANING: readonly (readonly [id: string, meaning: string])[] = [
@@ -74,7 +75,7 @@ export function methodChecksTable(checks: readonly CheckResult[]): Trusted {
   for (const c of checks) if (!ids.includes(c.id)) ids.push(c.id);
   const rows = ids.map((id) => {
     const meaning = meaningOf(id);
-    const own = checks.find((c) => c.id === id)?.description ?? "";
+    const own = quotedNumbers(checks.find((c) => c.id === id)?.description ?? "");
     return html`
       <tr>
         <td><code>${id}</code></td>

@@ -105,7 +105,7 @@ function harmonic(): Trusted {
   return html`<h3 id="s-3-9">Harmonic cross-check</h3>
 <p>The first harmonic of the hourly periodic cross factors, H_1 = Σ_j Y_P,j e^(−i2πj/24), must equal Y_12 · sinc²(π/24)
 (sinc x = sin x / x; sinc²(π/24) = ${
-    formatSig(sinc2, 6)
+    formatSig(sinc2, 3)
   }) plus the aliased harmonics 24m + 1 (|m| ≤ 60 are added). This ties the time-domain results (poles to conduction time series above) to
 the frequency-domain quantities of ISO 13786 by an independent route.</p>`;
 }

@@ -1,6 +1,8 @@
 /** Sections 5 and 7: the assumptions register and the sources (section 6: materialSources.ts). */
 import { type AssumptionGroup, groupAssumptions } from "./assumptionGroups.ts";
 import { html, type Trusted } from "../page/html.ts";
+import { FOLDED_RULE } from "../page/findingCounts.ts";
+import { quotedNumbers } from "../page/quotedText.ts";
 import type { RenderContext } from "../page/packageInput.ts";
 import { citedSources, sourceReference } from "./materialSources.ts";
 
@@ -126,7 +128,7 @@ export function renderAssumptionsSection(ctx: RenderContext): Trusted {
         html`
           <tr>
             <td><code>${g.members.length === 1 ? g.members[0]!.id : g.kind}</code></td>
-            <td>${g.text}</td>
+            <td>${quotedNumbers(g.text, ctx.display)}</td>
             ${basisCell(g, sources)}
             ${appliesTo(g)}
           </tr>
@@ -135,9 +137,10 @@ export function renderAssumptionsSection(ctx: RenderContext): Trusted {
     </table>
   `;
   const siNote = ctx.display.system === "SI" ? html`` : html`
-    <p class="muted">The statements are quoted as recorded in results.json, so their values are in SI units.</p>
+    <p
+      class="muted">The statements are quoted from results.json with their values in IP units; a formula keeps its SI form.</p>
   `;
-  const defaults = list.filter((a) => a.id.startsWith("default:")).length;
+  const defaults = ctx.input.findings.filter((f) => f.rule === FOLDED_RULE).length;
   const folded = defaults === 0 ? html`` : html`
     <p
       class="muted">The review's ${String(

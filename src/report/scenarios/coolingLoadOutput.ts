@@ -6,9 +6,10 @@ import { type DisplayUnits, toDisplay, unitLabel } from "../page/displayUnits.ts
 import { formatFixed, formatTrim } from "../page/format.ts";
 import { coolingLoadAnchor } from "../page/anchors.ts";
 import { html, type Trusted } from "../page/html.ts";
-import { type PlotSpec, renderPlotSvg } from "../page/plotSvg.ts";
+import { namePlaceholder, type PlotSpec, renderPlotSvg } from "../page/plotSvg.ts";
+import { endLabels } from "../constructions/dynamicPlots.ts";
 import { clockTime } from "./scenarioData.ts";
-import { legendEntry, lineSwatch, OUTDOOR_STYLE, type SeriesStyle, surfaceStyle } from "./scenarioStyle.ts";
+import { OUTDOOR_STYLE, type SeriesStyle, surfaceStyle } from "./scenarioStyle.ts";
 
 const HOURS = Array.from({ length: 24 }, (_, h) => h);
 const DASHED: SeriesStyle = { colour: "#b5470f", dash: "5 3" };
@@ -18,19 +19,22 @@ function gainAt(results: ScenarioResults, series: readonly number[], h: number):
 }
 
 function rtsTable(cl: CoolingLoadResults): Trusted {
-  const half = (start: number) => {
-    const js = HOURS.slice(start, start + 12);
-    return html`
-      <tr><th scope="row">j</th>${js.map((j) => html`<td class="num">${String(j)}</td>`)}</tr>
-      <tr><th scope="row">r<sub>j</sub></th>${js.map((j) =>
+  // Two halves of twelve hours; the hour row of each is a header row, the first one the table's thead.
+  const hours = (start: number) =>
+    html`<tr><th scope="col">j</th>${
+      HOURS.slice(start, start + 12).map((j) => html`<th scope="col" class="num">${String(j)}</th>`)
+    }</tr>`;
+  const shares = (start: number) =>
+    html`<tr><th scope="row">r<sub>j</sub></th>${
+      HOURS.slice(start, start + 12).map((j) =>
         html`<td class="num" data-q="rts">${formatTrim(cl.radiantTimeSeries.values[j] ?? NaN, 4)}</td>`
-      )}</tr>
-    `;
-  };
+      )
+    }</tr>`;
   return html`
     <table class="rts-table compact">
       <caption>Radiant time series used (r<sub>j</sub>: share of a radiant gain that becomes cooling load j hours later), as given in the input.</caption>
-      <tbody>${half(0)}${half(12)}</tbody>
+      <thead>${hours(0)}</thead>
+      <tbody>${shares(0)}${hours(12)}${shares(12)}</tbody>
     </table>
   `;
 }
@@ -122,6 +126,7 @@ function spec(yLabel: string, marks: Plot.Markish[]): PlotSpec {
   return {
     height: 280,
     marginLeft: 56,
+    marginRight: 96,
     marginBottom: 40,
     style: { fontSize: "11px" },
     x: {
@@ -154,6 +159,22 @@ function line(values: readonly number[], style: SeriesStyle, d: DisplayUnits, wi
   });
 }
 
+/** Names at the right ends of hourly lines (hour 23), spread apart so that they do not overlap. */
+function hourEnds(
+  lines: readonly { name: string; values: readonly number[] }[],
+  d: DisplayUnits,
+): Plot.Markish {
+  const shown = lines.map((l) => l.values.map((v) => toDisplay(d, "heatGain", v)));
+  return endLabels(
+    lines.map((l, i) => {
+      const v = shown[i]!;
+      return { name: l.name, end: v.length === 0 ? undefined : { t: v.length - 1, v: v[v.length - 1]! } };
+    }),
+    shown.flat(),
+    true,
+  );
+}
+
 function plots(
   id: string,
   results: ScenarioResults,
@@ -167,6 +188,10 @@ function plots(
       Plot.ruleY([0], { stroke: "#444" }),
       line(cl.totalHeatGain, DASHED, d),
       line(cl.total, OUTDOOR_STYLE, d, 2.2),
+      hourEnds(
+        [{ name: "heat gain", values: cl.totalHeatGain }, { name: "cooling load", values: cl.total }],
+        d,
+      ),
     ]),
     `${prefix}-cooling-total`,
     "Total heat gain and total cooling load over the design day",
@@ -179,24 +204,17 @@ function plots(
         line(HOURS.map((h) => gainAt(results, s.heatGain, h)), { ...surfaceStyle(i), dash: "2 3" }, d, 1.1)
       ),
       ...entries.map((s, i) => line(s.coolingLoad ?? [], { ...surfaceStyle(i), dash: "none" }, d)),
+      hourEnds(entries.map((s, i) => ({ name: namePlaceholder(i), values: s.coolingLoad ?? [] })), d),
     ]),
     `${prefix}-cooling-surfaces`,
     "Heat gain and cooling load of each surface over the design day",
-  );
-  const names = Object.keys(results.surfaces).map((sid, i) =>
-    legendEntry(lineSwatch({ ...surfaceStyle(i), dash: "none" }), sid)
+    Object.keys(results.surfaces),
   );
   return html`
     <figure
-      class="plot-figure">${totalSvg}<figcaption><strong>Total heat gain and cooling load, scenario ${id}.</strong> <span class="legend">${legendEntry(
-        lineSwatch(DASHED),
-        "heat gain",
-      )}${legendEntry(
-        lineSwatch(OUTDOOR_STYLE, 2.2),
-        "cooling load",
-      )}</span> At the full hours.</figcaption></figure>
+      class="plot-figure">${totalSvg}<figcaption><strong>Total heat gain and cooling load, scenario ${id}.</strong> Each line is named at its right end: heat gain dashed, cooling load solid and thicker. At the full hours.</figcaption></figure>
     <figure
-      class="plot-figure">${surfaceSvg}<figcaption><strong>Heat gain (dotted) and cooling load (solid) by surface, scenario ${id}.</strong> <span class="legend">${names}</span></figcaption></figure>
+      class="plot-figure">${surfaceSvg}<figcaption><strong>Heat gain (dotted) and cooling load (solid) by surface, scenario ${id}.</strong> Each surface's cooling load line is named at its right end by surface id; its heat gain is the dotted line of the same colour.</figcaption></figure>
   `;
 }
 

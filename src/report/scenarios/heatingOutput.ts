@@ -1,11 +1,12 @@
 /** The computed output of a heating scenario: design heat loss and the ISO 13788 surface checks per surface. */
 import type { HeatingScenario } from "../../project/model.ts";
 import type { HeatingResults, Verdict } from "../../scenarios/heatingTypes.ts";
-import { type DisplayUnits, toDisplay, unitLabel } from "../page/displayUnits.ts";
+import { type DisplayUnits, toDisplay, unitBreakable, unitHead, unitLabel } from "../page/displayUnits.ts";
 import { DELTA_F_PER_K } from "../page/displayUnits.ts";
 import { formatFixed, formatSig } from "../page/format.ts";
 import { heatingAnchor } from "../page/anchors.ts";
 import { html, type Trusted } from "../page/html.ts";
+import { PA_PER_IN_HG, quotedNumbers } from "../page/quotedText.ts";
 import type { RenderContext } from "../page/packageInput.ts";
 
 /** What the heating output reads: the block's scenario, its `heating.<id>` entry, anchor and display units. */
@@ -20,6 +21,11 @@ function verdictCell(v: Verdict, q: string, failText: string): Trusted {
   return v.pass
     ? html`<td class="pass" data-q="${q}">pass</td>`
     : html`<td class="fail" data-q="${q}">${failText}</td>`;
+}
+
+/** A vapour pressure in Pa, or in in. Hg in IP (ASHRAE's inch-pound unit for vapour pressure, from memory). */
+function vapourPressureText(pa: number, d: DisplayUnits): string {
+  return d.system === "SI" ? `${formatFixed(pa, 0)} Pa` : `${formatSig(pa / PA_PER_IN_HG, 3)} in. Hg`;
 }
 
 function conditions(r: HeatingResults, d: DisplayUnits): Trusted {
@@ -42,7 +48,7 @@ function conditions(r: HeatingResults, d: DisplayUnits): Trusted {
         </tr>
         <tr>
           <th scope="row">Indoor vapour pressure p<sub>i</sub></th>
-          <td>${formatFixed(r.indoorVapourPressure, 0)} Pa</td>
+          <td data-q="vapour-pressure">${vapourPressureText(r.indoorVapourPressure, d)}</td>
         </tr>
         <tr>
           <th scope="row">Indoor dew point θ<sub>dew</sub></th>
@@ -65,12 +71,13 @@ function conditions(r: HeatingResults, d: DisplayUnits): Trusted {
   `;
 }
 
-/** " (R_si = 0.25 m²·K/W)": the one moisture R_si of the scenario's surfaces, shown with every f_Rsi. */
-function rsiLabel(r: HeatingResults, d: DisplayUnits): string {
+/** The R_si of the f_Rsi column under its head, with the unit on its own line so that the column stays narrow. */
+function rsiHead(r: HeatingResults, d: DisplayUnits): Trusted {
   const rsi = Object.values(r.surfaces)[0]?.moistureSurfaceResistance;
-  return rsi === undefined
-    ? ""
-    : ` (R_si = ${formatSig(toDisplay(d, "resistance", rsi), 3)} ${unitLabel(d, "resistance")})`;
+  if (rsi === undefined) return html``;
+  const value = formatSig(toDisplay(d, "resistance", rsi), 3);
+  const unit = unitBreakable(d, "resistance");
+  return html`<span class="unit">(R_si = ${value} ${unit})</span>`;
 }
 
 function surfaceTable(id: string, r: HeatingResults, d: DisplayUnits): Trusted {
@@ -105,16 +112,16 @@ function surfaceTable(id: string, r: HeatingResults, d: DisplayUnits): Trusted {
       <thead>
         <tr>
           <th>Surface</th>
-          <th>Construction</th>
-          <th>U ${unitLabel(d, "transmittance")}</th>
-          <th>U<sub>c</sub> ${unitLabel(d, "transmittance")}</th>
-          <th>Area ${unitLabel(d, "area")}</th>
-          <th>Heat loss ${unitLabel(d, "heatGain")}</th>
-          <th>θ<sub>si</sub> ${unitLabel(d, "temperature")}</th>
-          <th>f<sub>Rsi</sub>${rsiLabel(r, d)}</th>
+          <th>Con&shy;struc&shy;tion</th>
+          <th>U ${unitHead(d, "transmittance")}</th>
+          <th>U<sub>c</sub> ${unitHead(d, "transmittance")}</th>
+          <th>Area ${unitHead(d, "area")}</th>
+          <th>Heat loss ${unitHead(d, "heatGain")}</th>
+          <th>θ<sub>si</sub> ${unitHead(d, "temperature")}</th>
+          <th>f<sub>Rsi</sub> ${rsiHead(r, d)}</th>
           <th>f<sub>Rsi,min</sub></th>
-          <th>Dew point ${unitLabel(d, "temperature")}</th>
-          <th>Surface condensation</th>
+          <th>Dew point ${unitHead(d, "temperature")}</th>
+          <th>Surface conden&shy;sation</th>
           <th>Mould</th>
         </tr>
       </thead>
@@ -151,15 +158,15 @@ export function renderHeatingOutput(input: HeatingOutputInput): Trusted {
         toDisplay(d, "heatGain", r.totalHeatLoss),
         0,
       )} ${unitLabel(d, "heatGain")}</strong> (Σ U<sub>c</sub>·A = ${d.system === "SI"
-        ? `${formatSig(r.totalUA, 4)} W/K`
+        ? `${formatSig(r.totalUA, 3)} W/K`
         : `${
-          formatSig(toDisplay(d, "heatGain", r.totalUA) / DELTA_F_PER_K, 4)
+          formatSig(toDisplay(d, "heatGain", r.totalUA) / DELTA_F_PER_K, 3)
         } Btu/(h·°F)`}). ${failures === 0
         ? "Every surface passes the surface-condensation and mould checks at this condition."
         : `${failures} surface(s) fail a check: see the table.`}</p>
       ${conditions(r, d)}
       ${surfaceTable(scenario.id, r, d)}
-      <ul class="scenario-notes">${r.notes.map((n) => html`<li>${n}</li>`)}</ul>
+      <ul class="scenario-notes">${r.notes.map((n) => html`<li>${quotedNumbers(n, d)}</li>`)}</ul>
       <div class="caution-box" role="note">
         <p><strong>Limits:</strong> a steady-state screening at one design condition for the plane elements listed; ${rsi ===
             undefined

@@ -36,7 +36,7 @@ function siteText(site: Site | undefined, d: DisplayUnits): string {
   if (site === undefined) return "Not given (no sun position is needed without a sky model).";
   const elevation = site.elevationM === undefined
     ? "elevation not given"
-    : `elevation ${formatTrim(toDisplay(d, "length", site.elevationM), 5)} ${unitLabel(d, "length")}`;
+    : `elevation ${formatTrim(toDisplay(d, "length", site.elevationM), 3)} ${unitLabel(d, "length")}`;
   return `Latitude ${signedDeg(site.latitudeDeg, "N", "S")}, longitude ${
     signedDeg(site.longitudeDeg, "E", "W")
   }, time zone ${utcOffset(site.timeZoneH)}, ${elevation}.`;
@@ -135,7 +135,7 @@ function weatherRows(path: string, results: ScenarioResults, d: DisplayUnits): T
       global === undefined
         ? "Irradiance from the weather file (see the notes)."
         : `Irradiance from the weather file; global horizontal ${
-          formatTrim(toDisplay(d, "irradiation", global), 4)
+          formatTrim(toDisplay(d, "irradiation", global), 3)
         } ${unitLabel(d, "irradiation")} over the file (see the notes for the transposition).`,
     ),
   ];
@@ -219,10 +219,10 @@ function surfaceRow(input: SurfaceTableInput, id: string, computed: SurfaceResul
     : html`<a href="#${anchor}">${computed.construction}</a>`;
   return html`<tr><td>${id}</td><td>${construction}</td>${
     orientationCell(surface, computed)
-  }<td class="num">${formatTrim(toDisplay(d, "area", computed.area), 4)}</td><td>${
+  }<td class="num">${formatTrim(toDisplay(d, "area", computed.area), 3)}</td><td>${
     p.absorptance === null ? DASH : formatTrim(p.absorptance, 3)
   }</td><td>${marked(formatTrim(p.emittance, 3), basis("emittance"))}</td><td>${
-    marked(formatTrim(toDisplay(d, "transmittance", p.outsideCoefficient), 4), basis("outside-coefficient"))
+    marked(formatTrim(toDisplay(d, "transmittance", p.outsideCoefficient), 3), basis("outside-coefficient"))
   }</td><td>${
     marked(
       formatFixed(toDisplay(d, "temperatureDifference", p.longwaveCorrection), 2),
@@ -261,6 +261,6 @@ export function renderConditions(input: SurfaceTableInput): Trusted {
       </thead>
       <tbody>${rows}</tbody>
     </table>
-    ${renderScenarioNotes(results.notes, quotedNotes(scenario, results), d.system === "SI")}
+    ${renderScenarioNotes(results.notes, quotedNotes(scenario, results), d)}
   `;
 }

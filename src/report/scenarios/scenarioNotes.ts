@@ -4,6 +4,8 @@
  * line naming each surface with its value.
  */
 import { html, type Trusted } from "../page/html.ts";
+import type { DisplayUnits } from "../page/displayUnits.ts";
+import { quotedNumbers } from "../page/quotedText.ts";
 
 const LONGWAVE = /^Surface "(.+)": long-wave correction (.+) \((.+)\)\.$/;
 
@@ -34,14 +36,14 @@ export function printedNotes(notes: readonly string[], quoted: readonly string[]
 export function renderScenarioNotes(
   notes: readonly string[],
   quoted: readonly string[],
-  si: boolean,
+  d: DisplayUnits,
 ): Trusted {
   const shown = printedNotes(notes, quoted);
   if (shown.length === 0) return html``;
   return html`
-    <p class="muted">Conventions applied (results.json notes${si
+    <p class="muted">Conventions applied (results.json notes${d.system === "SI"
       ? ""
       : ", quoted as recorded, so any value in them is in SI units"}):</p>
-    <ul class="scenario-notes">${shown.map((n) => html`<li>${n}</li>`)}</ul>
+    <ul class="scenario-notes">${shown.map((n) => html`<li>${quotedNumbers(n, d)}</li>`)}</ul>
   `;
 }

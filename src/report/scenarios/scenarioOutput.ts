@@ -20,15 +20,6 @@ import {
   surfaceOfSubject,
 } from "./scenarioData.ts";
 import { insideFluxPlot, monthlyPlot, solAirPlot, stackedGainPlot } from "./scenarioPlots.ts";
-import {
-  fillSwatch,
-  GAIN_STYLE,
-  legendEntry,
-  lineSwatch,
-  LOSS_STYLE,
-  OUTDOOR_STYLE,
-  surfaceStyle,
-} from "./scenarioStyle.ts";
 import { renderPeakSummary } from "./scenarioSummary.ts";
 import { renderMonthlyTable } from "./scenarioTables.ts";
 import { stampSyntheticOutput, syntheticBanner } from "./syntheticStamp.ts";
@@ -54,9 +45,6 @@ function figure(svg: Trusted, title: Trusted, caption: Trusted): Trusted {
 }
 
 function designDayPlots(id: string, results: ScenarioResults, prefix: string, d: DisplayUnits): Trusted {
-  const barLegend = Object.keys(results.surfaces).map((sid, i) =>
-    legendEntry(fillSwatch(surfaceStyle(i)), sid)
-  );
   return html`
     ${figure(
       solAirPlot(results, prefix, d),
@@ -73,13 +61,7 @@ function designDayPlots(id: string, results: ScenarioResults, prefix: string, d:
     ${figure(
       stackedGainPlot(results, prefix, d),
       html`Heat gain stacked by surface, scenario ${id}.`,
-      html`
-        <span
-          class="legend">${barLegend}${legendEntry(
-            lineSwatch(OUTDOOR_STYLE),
-            "total (line with dots)",
-          )}</span> Bars stack from zero in the order listed; gains above zero, losses below.
-      `,
+      html`Each surface's bar is named at its right end by surface id, the total (line with dots) likewise. Bars stack from zero in input order; gains above zero, losses below.`,
     )}
   `;
 }
@@ -158,9 +140,9 @@ function summaryBody(id: string, results: ScenarioResults, prefix: string, d: Di
       ${figure(
         monthlyPlot(months, prefix, d),
         html`Monthly heat gain and heat loss, scenario ${id}.`,
-        html`<span class="legend">${legendEntry(fillSwatch(GAIN_STYLE), "heat gain (above zero)")}${
-          legendEntry(fillSwatch(LOSS_STYLE), "heat loss (below zero)")
-        }</span> All surfaces together, ${unitLabel(d, "energy")} per month.`,
+        html`Heat gain above zero, heat loss below (lighter), each named at its largest month. All surfaces together, ${
+          unitLabel(d, "energy")
+        } per month.`,
       )}
     `;
   return html`${csvLine}${monthly}${dailyLine}`;

@@ -144,10 +144,12 @@ export function stackedGainPlot(results: ScenarioResults, idPrefix: string, d: D
   );
   const totals = [...results.totalHeatGain, results.totalHeatGain[0] ?? 0];
   const total = totals.map((g, k) => ({ t: k * dt, gain: gainOf(g) }));
+  const ids = Object.keys(results.surfaces);
   return renderPlotSvg(
     {
       height: HEIGHT,
       marginLeft: 56,
+      marginRight: 96,
       marginBottom: 40,
       style: { fontSize: "11px" },
       x: {
@@ -180,11 +182,64 @@ export function stackedGainPlot(results: ScenarioResults, idPrefix: string, d: D
         Plot.ruleY([0], { stroke: "#111" }),
         Plot.line(total, { x: "t", y: "gain", stroke: "#111", strokeWidth: 1.6 }),
         Plot.dot(total, { x: "t", y: "gain", r: 2, fill: "#111" }),
+        stackEndLabels(results, gainOf, total[total.length - 1]),
       ],
     },
     `${idPrefix}-stack`,
     "Heat gain stacked by surface with the total",
+    ids,
   );
+}
+
+/**
+ * Names at the right end of the stacked bars: each surface at the middle of its bar at 24:00 (gains stack up
+ * from zero in input order, losses down), and the total at the end of its line.
+ */
+function stackEndLabels(
+  results: ScenarioResults,
+  gainOf: (w: number) => number,
+  totalEnd: { t: number; gain: number } | undefined,
+): Plot.Markish {
+  let up = 0;
+  let down = 0;
+  const ends = Object.values(results.surfaces).map((s, i) => {
+    const g = gainOf(s.heatGain[0] ?? 0);
+    const middle = g >= 0 ? up + g / 2 : down + g / 2;
+    if (g >= 0) up += g;
+    else down += g;
+    return { name: namePlaceholder(i), end: { t: 24, v: middle } };
+  });
+  const all = Object.values(results.surfaces).flatMap((s) => s.heatGain.map(gainOf));
+  const total = totalEnd === undefined ? [] : [{ name: "total", end: { t: 24, v: totalEnd.gain } }];
+  return endLabels([...ends, ...total], [...all, up, down, totalEnd?.gain ?? 0], true);
+}
+
+/** The months of largest gain and largest loss, where the monthly plot names its two bar series. */
+function monthlyLabels(
+  gain: readonly { month: string; energy: number }[],
+  loss: readonly { month: string; energy: number }[],
+): Plot.Markish[] {
+  const largest = (rows: readonly { month: string; energy: number }[], sign: number) =>
+    rows.reduce((best, r) => (sign * r.energy > sign * best.energy ? r : best), rows[0]!);
+  if (gain.length === 0) return [];
+  const up = largest(gain, 1);
+  const down = largest(loss, -1);
+  return [
+    Plot.text([{ ...up, label: "heat gain" }], {
+      x: "month",
+      y: "energy",
+      text: "label",
+      dy: -8,
+      fill: "#111",
+    }),
+    Plot.text([{ ...down, label: "heat loss" }], {
+      x: "month",
+      y: "energy",
+      text: "label",
+      dy: 10,
+      fill: "#111",
+    }),
+  ];
 }
 
 /** (d) Monthly heat gain (above zero) and heat loss (below zero) of a weather year, kWh or kBtu. */
@@ -220,6 +275,7 @@ export function monthlyPlot(
         Plot.barY(gain, { x: "month", y: "energy", fill: GAIN_STYLE.colour }),
         Plot.barY(loss, { x: "month", y: "energy", fill: LOSS_STYLE.colour }),
         Plot.ruleY([0], { stroke: "#111" }),
+        ...monthlyLabels(gain, loss),
       ],
     },
     `${idPrefix}-monthly`,

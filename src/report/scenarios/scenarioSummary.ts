@@ -12,9 +12,9 @@ export function heatGainText(d: DisplayUnits, watts: number): string {
   return formatFixed(toDisplay(d, "heatGain", watts), 0);
 }
 
-/** Energy in J printed with two decimals in the display unit (kWh, or kBtu in IP). */
+/** Energy in J printed to three significant figures in the display unit (kWh, or kBtu in IP). */
 export function energyText(d: DisplayUnits, joules: number): string {
-  return formatFixed(toDisplay(d, "energy", joules), 2);
+  return formatSig(toDisplay(d, "energy", joules), 3);
 }
 
 const wholeWatts = (w: number) => formatFixed(w, 0);

@@ -12,6 +12,7 @@ import { type DisplayUnits, type QuantityKind, toDisplay, unitLabel } from "../p
 import { formatTrim } from "../page/format.ts";
 import { html, type Trusted } from "../page/html.ts";
 import { sensitivityAnchor } from "../page/anchors.ts";
+import { quotedNumbers } from "../page/quotedText.ts";
 import type { RenderContext } from "../page/packageInput.ts";
 import { namePlaceholder, renderPlotSvg } from "../page/plotSvg.ts";
 
@@ -40,7 +41,7 @@ function conditionTable(
     html`
       <tr>
         <td>${CONDITION_NAMES[e.condition]}</td>
-        <td>${e.step}</td>
+        <td>${quotedNumbers(e.step, display)}</td>
         <td class="num">${signed(e.minus, display, "heatGain")}</td>
         <td class="num">${signed(e.plus, display, "heatGain")}</td>
       </tr>

@@ -1,7 +1,7 @@
 /** Shared pieces of the section drawings: placed layers, square tags, studs and the hatch key. */
 import type { Construction, ResolvedLayer } from "../../../project/model.ts";
-import { type DisplayUnits, toDisplay, unitLabel } from "../../page/displayUnits.ts";
-import { formatTrim, THIN_SPACE } from "../../page/format.ts";
+import { type DisplayUnits, thicknessFigure, toDisplay, unitLabel } from "../../page/displayUnits.ts";
+import { THIN_SPACE } from "../../page/format.ts";
 import { html, type Trusted } from "../../page/html.ts";
 import { LAYER_KIND_LABEL, type LayerKind, layerKind, materialKind } from "./layerKind.ts";
 import { patternFill } from "./sectionPatterns.ts";
@@ -72,7 +72,7 @@ export function drawnLayers(construction: Construction, d: DisplayUnits): DrawnL
 export function thicknessText(l: DrawnLayer, d: DisplayUnits): string {
   return l.thickness === undefined
     ? "resistive, not to scale"
-    : `${formatTrim(l.thickness, 4)}${THIN_SPACE}${unitLabel(d, "thickness")}`;
+    : `${thicknessFigure(d, l.thickness)}${THIN_SPACE}${unitLabel(d, "thickness")}`;
 }
 
 /** A square layer tag centred on (x, y). */

@@ -1,12 +1,12 @@
 /**
- * Draws a roof or floor section as a vertical stack to scale: a roof (heat flow upward) with its exterior
- * face on top, a floor (heat flow downward) with its interior face on top and the exterior face below.
+ * Draws a roof or floor section as a vertical stack to scale, the exterior face on top for both (the order
+ * of the layer table): a roof as it sits, a floor upside down, its faces labelled with where they are in place.
  * Every layer gets a square tag with a leader and a label with its thickness, thin layers included.
  */
 import type { Construction } from "../../../project/model.ts";
 import type { DisplayUnits } from "../../page/displayUnits.ts";
-import { formatTrim, THIN_SPACE } from "../../page/format.ts";
-import { unitLabel } from "../../page/displayUnits.ts";
+import { THIN_SPACE } from "../../page/format.ts";
+import { thicknessFigure, unitLabel } from "../../page/displayUnits.ts";
 import { html, type Trusted } from "../../page/html.ts";
 import {
   battLine,
@@ -108,7 +108,7 @@ function leaderLabel(l: StackedLayer, labelY: number, d: DisplayUnits): Trusted 
   `;
 }
 
-function chain(stacked: readonly StackedLayer[]): Trusted {
+function chain(stacked: readonly StackedLayer[], d: DisplayUnits): Trusted {
   const last = stacked[stacked.length - 1];
   const bottom = last === undefined ? TOP : last.y + last.height;
   const ticks = stacked.map((l) =>
@@ -118,7 +118,7 @@ function chain(stacked: readonly StackedLayer[]): Trusted {
       )}" stroke="#111" stroke-width="0.6" />${l.thickness !== undefined && l.height >= 12
         ? html`<text x="${String(LEFT - 28)}" y="${
           coord(l.y + l.height / 2 + 3.5)
-        }" text-anchor="end" font-size="10">${formatTrim(l.thickness, 4)}</text>`
+        }" text-anchor="end" font-size="10">${thicknessFigure(d, l.thickness)}</text>`
         : html``}
     `
   );
@@ -146,35 +146,43 @@ function overall(stacked: readonly StackedLayer[], d: DisplayUnits): Trusted {
     <text x="${String(x - 6)}" y="${coord(mid)}" transform="rotate(-90 ${String(x - 6)} ${coord(
       mid,
     )})" text-anchor="middle"
-      font-size="11">${formatTrim(total, 4)}${THIN_SPACE}${unitLabel(d, "thickness")} overall</text>
+      font-size="11">${thicknessFigure(d, total)}${THIN_SPACE}${unitLabel(d, "thickness")} overall</text>
   `;
 }
 
-function face(text: string, y: number): Trusted {
+function face(text: string, y: number, note: string): Trusted {
   return html`
     <text class="face-label" x="${String((LEFT + RIGHT) / 2)}" y="${coord(
       y,
     )}" text-anchor="middle" font-size="11"
       font-style="italic">${text}</text>
+    <text class="face-note" x="${String((LEFT + RIGHT) / 2)}" y="${coord(
+      y + 12,
+    )}" text-anchor="middle" font-size="9">${note}</text>
   `;
 }
 
 /** Renders a roof or floor section as a vertical stack (see the module comment). */
 export function renderStackSvg(construction: Construction, d: DisplayUnits, scaleBar: ScaleBar): Trusted {
   const roof = construction.heatFlow === "upward";
-  const outsideFirst = drawnLayers(construction, d);
-  const { stacked, pxPerMm } = stack(roof ? outsideFirst : [...outsideFirst].reverse());
+  // Outside on top for roofs and floors alike, in the order of the layer table; a floor is therefore drawn
+  // upside down, which its face notes say.
+  const { stacked, pxPerMm } = stack(drawnLayers(construction, d));
   const prefix = patternPrefix(construction.id);
   const last = stacked[stacked.length - 1];
   const bottom = last === undefined ? TOP : last.y + last.height;
   const labelYs = spread(stacked.map((l) => l.y + l.height / 2), LABEL_SPACING, 12, bottom + 40);
-  const scaleY = Math.max(bottom, labelYs[labelYs.length - 1] ?? bottom) + 30;
+  const scaleY = Math.max(bottom + 14, labelYs[labelYs.length - 1] ?? bottom) + 30;
   const keyTop = scaleY + 44;
   const kinds = kindsUsed(stacked);
   const height = keyTop + hatchKeyRows(kinds, WIDTH) * KEY_ROW_PX;
-  const [upper, lower] = roof ? ["exterior face", "interior face"] : ["interior face", "exterior face"];
+  const [upper, lower] = ["exterior face", "interior face"];
+  const [upperNote, lowerNote] = roof
+    ? ["weather side", "room side"]
+    : ["the underside in place, drawn on top", "floor surface, room side"];
   const what = roof ? "roof" : "floor";
-  const label = `Section of ${what} construction ${construction.id}: ${upper} on top, ${lower} below`;
+  const label =
+    `Section of ${what} construction ${construction.id}: ${upper} on top (${upperNote}), ${lower} below (${lowerNote})`;
   return html`
     <svg xmlns="http://www.w3.org/2000/svg" class="section-drawing section-stack"
       viewBox="0 0 ${String(WIDTH)} ${String(height)}" width="${String(WIDTH)}" height="${String(
@@ -183,10 +191,12 @@ export function renderStackSvg(construction: Construction, d: DisplayUnits, scal
       aria-label="${label}" font-family="${FONT}"
       fill="#111"><title>${label}</title>${patternDefs(prefix, kinds)}${face(
         upper,
-        TOP - 10,
-      )}${stacked.map((l) => layerBody(l, prefix))}${face(lower, bottom + 18)}${stacked.map((l, i) =>
-        leaderLabel(l, labelYs[i] ?? 0, d)
-      )}${chain(stacked)}${overall(stacked, d)}${scaleBar(
+        TOP - 22,
+        upperNote,
+      )}${stacked.map((l) => layerBody(l, prefix))}${face(lower, bottom + 18, lowerNote)}${stacked.map((
+        l,
+        i,
+      ) => leaderLabel(l, labelYs[i] ?? 0, d))}${chain(stacked, d)}${overall(stacked, d)}${scaleBar(
         pxPerMm,
         stacked.some((l) => l.thickness === undefined),
         d,

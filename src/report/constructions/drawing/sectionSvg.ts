@@ -4,8 +4,8 @@
  * (sectionStack.ts).
  */
 import type { Construction } from "../../../project/model.ts";
-import { type DisplayUnits, toDisplay, unitLabel } from "../../page/displayUnits.ts";
-import { formatTrim, THIN_SPACE } from "../../page/format.ts";
+import { type DisplayUnits, thicknessFigure, toDisplay, unitLabel } from "../../page/displayUnits.ts";
+import { THIN_SPACE } from "../../page/format.ts";
 import { html, type Trusted } from "../../page/html.ts";
 import {
   battLine,
@@ -120,7 +120,7 @@ function chainDimension(l: PlacedLayer): Trusted {
 
 /** Thickness figures under the chain; thin layers get a leader label dropped below, spread apart. */
 function chainFigures(layers: readonly PlacedLayer[], d: DisplayUnits): Trusted {
-  const fig = (l: PlacedLayer) => formatTrim(l.thickness ?? 0, 4);
+  const fig = (l: PlacedLayer) => thicknessFigure(d, l.thickness ?? 0);
   const fits = (l: PlacedLayer) => l.width >= fig(l).length * 6 + 6;
   const wide = layers.filter((l) => l.thickness !== undefined && fits(l));
   const thin = layers.filter((l) => l.thickness !== undefined && !fits(l));
@@ -153,7 +153,7 @@ function overallDimension(layers: readonly PlacedLayer[], d: DisplayUnits): Trus
   const hasGaps = layers.some((l) => l.kind === "air" && l.thickness === undefined);
   const x1 = first.x;
   const x2 = last.x + last.width;
-  const text = `${formatTrim(total, 4)}${THIN_SPACE}${unitLabel(d, "thickness")} overall${
+  const text = `${thicknessFigure(d, total)}${THIN_SPACE}${unitLabel(d, "thickness")} overall${
     hasGaps ? " (resistive layers not counted)" : ""
   }`;
   const tick = (x: number) =>
@@ -186,9 +186,9 @@ export function scaleBar(pxPerMm: number, hasGaps: boolean, d: DisplayUnits, x: 
   const barPx = length * pxPerUnit;
   return html`
     <rect x="${coord(x)}" y="${coord(y)}" width="${coord(barPx)}" height="4" fill="#111" />
-    <text x="${coord(x + barPx + 6)}" y="${coord(y + 6)}" font-size="10">${formatTrim(
+    <text x="${coord(x + barPx + 6)}" y="${coord(y + 6)}" font-size="10">${thicknessFigure(
+      d,
       length,
-      4,
     )}${THIN_SPACE}${unitLabel(d, "thickness")}</text>
     <text x="12" y="${coord(y + 22)}" font-size="10">${note}</text>
   `;

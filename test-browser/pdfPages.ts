@@ -89,16 +89,18 @@ export function strandedHeadings(headings: readonly PrintedHeading[], lines: rea
 }
 
 /**
- * The last page of the body (cover to the cautions and the records after them): the page before the first
- * appendix's heading (h2) in the outline, or that page when the appendix starts below other text on it.
- * 0 when the print has no appendix.
+ * The last page of the body, cover to cautions (issue 11's measure): the page before the heading (h2) of the
+ * section that follows the cautions, or that page when the section starts below other text on it. 0 when the
+ * print has no cautions or nothing after them.
  */
 export function bodyEndPage(
   headings: readonly PrintedHeading[],
   outline: readonly { title: string; page: number }[],
   lines: readonly PdfLine[],
 ): number {
-  const first = headings.find((h) => (h.level === "h2" || h.level === "h1") && /^Appendix\b/.test(h.text));
+  const sections = headings.filter((h) => h.level === "h2" || h.level === "h1");
+  const cautions = sections.findIndex((h) => /^Cautions$/.test(squeeze(h.text)));
+  const first = cautions < 0 ? undefined : sections[cautions + 1];
   if (first === undefined) return 0;
   const entry = outline.find((e) => squeeze(e.title) === squeeze(first.text));
   if (entry === undefined) return 0;

@@ -17,7 +17,7 @@ function page(lines: readonly (readonly [number, string])[]): string {
 const HEADER: readonly [number, string] = [23, "Title | REF rev B"];
 const FOOTER: readonly [number, string] = [800, "Page 1 of 3"];
 const HEADINGS = [
-  { level: "h2", text: "8 Cautions" },
+  { level: "h2", text: "Cautions" },
   { level: "h3", text: "8.1 A long heading that wraps onto a second line" },
   { level: "h2", text: "Appendix A Embedded inputs" },
 ];
@@ -44,9 +44,9 @@ Deno.test("the page reader leaves out the margins and finds a wrapped heading at
 
 Deno.test("the body ends on the page before the first appendix when the appendix opens its page", () => {
   const lines = pdfLines(PDF);
-  const outline = [{ title: "8 Cautions", page: 1 }, { title: "Appendix A Embedded inputs", page: 3 }];
+  const outline = [{ title: "Cautions", page: 1 }, { title: "Appendix A Embedded inputs", page: 3 }];
   assert.equal(bodyEndPage(HEADINGS, outline, lines), 2);
   // An appendix starting below other text on its page: the body ends on that page.
-  const sharedOutline = [{ title: "8 Cautions", page: 1 }, { title: "Appendix A Embedded inputs", page: 2 }];
+  const sharedOutline = [{ title: "Cautions", page: 1 }, { title: "Appendix A Embedded inputs", page: 2 }];
   assert.equal(bodyEndPage(HEADINGS, sharedOutline, lines), 2);
 });

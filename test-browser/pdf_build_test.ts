@@ -93,7 +93,8 @@ Deno.test({
       assert.ok(!titles.some((t) => /^2\.\d+ \S+\.md$/.test(t) || t === "2 Calculation"), titles.join(" | "));
       // Every output block has its contents line with the page its named destination (its element) is on.
       const dests = namedDestinations(await Deno.readFile(pdfPath));
-      const lines = text.split("\n");
+      // The printed contents runs in two columns: pdftotext sets both on one line, so split at wide gaps.
+      const lines = text.split("\n").flatMap((l) => l.split(/(?<=…\s*\d+)\s{3,}(?=\S)/));
       for (
         const [label, id] of [
           ["Results of construction EW-1", "c-ew-1"],

@@ -2,6 +2,7 @@
 import { renderInputsAppendix, renderResultsAppendix } from "./appendices/appendices.ts";
 import { renderChecksAppendix, renderFactorsAppendix } from "./appendices/checksAppendices.ts";
 import { APPENDIX_CSS } from "./appendices/appendixCss.ts";
+import { METHODS_APPENDIX_TITLE } from "./registers/methodSection.ts";
 import { documentTitle, renderCalculationSection } from "./calculationSection.ts";
 import { contentsOutputs } from "./front/contentsOutputs.ts";
 import { documentAnchor, SENSITIVITY_ANCHOR, sensitivityAnchor } from "./page/anchors.ts";
@@ -35,12 +36,11 @@ export const PACKAGE_CSP = "default-src 'none'; img-src data:; style-src 'unsafe
  * in the project's headings are the only section numbers; the appendices are lettered.
  */
 const OWN_SECTIONS: readonly (readonly [string, string])[] = [
-  ["s-3", "Calculation methods"],
   ["s-4", "Checks and findings"],
   ["s-5", "Assumptions register"],
   ["s-6", "Materials and their sources"],
-  ["s-7", "Sources"],
   ["s-8", "Cautions"],
+  ["s-7", "Sources"],
   ["s-9", "Revision history"],
   ["s-10", "Reproducibility"],
   ["s-a", "Appendix A Embedded inputs"],
@@ -49,6 +49,7 @@ const OWN_SECTIONS: readonly (readonly [string, string])[] = [
   ["s-d", "Appendix D Dynamic factors"],
   HOURLY_APPENDIX,
   SENSITIVITY_APPENDIX,
+  ["s-3", METHODS_APPENDIX_TITLE],
 ];
 
 function entry(anchor: string, title: string, nested: readonly Trusted[] = []): Trusted {
@@ -124,11 +125,9 @@ export function renderPackage(input: PackageInput): string {
     ${renderContents(ctx)}
     <main>
     ${renderCalculationSection(ctx)}
-    ${renderMethodSection(ctx, renderScopeSection(ctx.display))}
     ${renderChecksSection(ctx)}
     ${renderAssumptionsSection(ctx)}
     ${renderMaterialsSection(ctx)}
-    ${renderSourcesSection(ctx)}
     ${renderCautionsSection(
       input,
       outsideFilmCautions(
@@ -136,6 +135,7 @@ export function renderPackage(input: PackageInput): string {
         (w) => filmCoefficientText(ctx.display, w),
       ),
     )}
+    ${renderSourcesSection(ctx)}
     ${renderRevisionSection(ctx)}
     ${renderReproducibilitySection(ctx)}
     ${renderInputsAppendix(ctx)}
@@ -144,6 +144,7 @@ export function renderPackage(input: PackageInput): string {
     ${renderFactorsAppendix(ctx)}
     ${renderHourlyAppendix(ctx)}
     ${renderSensitivityAppendix(ctx)}
+    ${renderMethodSection(ctx, renderScopeSection(ctx.display))}
     </main>
     ${endMarker(input)}
       </body>

@@ -16,14 +16,15 @@ function limitCell(doc: Document, id: string): string | undefined {
   return row?.querySelectorAll("td")[2]?.textContent ?? undefined;
 }
 
-Deno.test("renderPackage() places the calculation methods after the project's files, listed in the contents", () => {
+Deno.test("renderPackage() places the calculation methods in the last appendix, listed in the contents", () => {
   const out = renderPackage(fixture());
   const doc = parseDocument(out);
-  assert.match(text(doc, "#s-3 h2"), /^Calculation methods$/);
+  assert.match(text(doc, "#s-3 h2"), /^Appendix G Calculation methods$/);
   assert.ok(out.indexOf('id="s-2"') < out.indexOf('<section id="s-3"'));
-  assert.ok(out.indexOf('<section id="s-3"') < out.indexOf('<section id="s-4"'));
+  // Results and verdicts first: the methods come after every other appendix.
+  assert.ok(out.indexOf('<section id="s-3"') > out.indexOf('<section id="s-d"'));
   const link = doc.querySelector('nav.contents a[href="#s-3"]');
-  assert.equal(link?.textContent, "Calculation methods");
+  assert.equal(link?.textContent, "Appendix G Calculation methods");
   assert.match(text(doc, "#s-4 h2"), /^Checks and findings$/);
 });
 

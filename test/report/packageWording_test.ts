@@ -44,7 +44,7 @@ Deno.test("demo package: no internal wording (design rules, our stated rules, to
 
 Deno.test('demo package: the methods section is "Calculation methods", not "Method statement" (a site-safety document)', async () => {
   const { doc, text } = await built();
-  assert.equal(doc.querySelector("#s-3 h2")?.textContent, "Calculation methods");
+  assert.equal(doc.querySelector("#s-3 h2")?.textContent, "Appendix G Calculation methods");
   assert.equal(count(text, "Method statement"), 0);
 });
 

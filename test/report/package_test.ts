@@ -129,7 +129,8 @@ Deno.test("renderPackage() prints R and U of the wall as computed by hand", () =
 
 Deno.test("renderPackage() orders the sections and ends with the end marker and input hash", () => {
   const out = renderPackage(fixture());
-  const ids = ["s-2", "s-3", "s-4", "s-5", "s-6", "s-7", "s-8", "s-9", "s-10", "s-a", "s-b"];
+  // The body (results, registers, cautions), the records, then the appendices; the methods are Appendix G.
+  const ids = ["s-2", "s-4", "s-5", "s-6", "s-8", "s-7", "s-9", "s-10", "s-a", "s-b", "s-3"];
   const positions = ids.map((id) => out.indexOf(` id="${id}"`));
   assert.ok(positions.every((p) => p > 0), "every section present");
   assert.deepEqual([...positions].sort((a, b) => a - b), positions);

@@ -27,7 +27,7 @@ export function renderFactorSeries(
   const printed = Math.min(PRINTED_TERMS, rf.Y.length);
   const q = slowestRatio(view);
   const tail = q === undefined ? html`` : html`
-    Beyond RF₁ each series is the modal form set out in the calculation methods (${String(
+    Beyond RF₁ each series is the modal form set out in the calculation methods (Appendix G; ${String(
       view.modal.ratios.length,
     )} modes, results.json <code>modal</code>): a sum of geometric terms, the slowest shrinking by the ratio ${formatSig(
       q,

@@ -86,7 +86,7 @@ export function renderDynamicResponse(
       ${dynamicSummaryTable(view, d)}
       <p
         class="muted">Numbers as in results.json <code>constructions</code> entry for ${construction
-          .id} (Appendix B); method in the calculation methods. A large project (more than ${String(
+          .id} (Appendix B); method in Appendix G. A large project (more than ${String(
             COMPACT_ABOVE_CONSTRUCTIONS,
           )} constructions): the response factors, CTF coefficients, periodic factors and plots of ${construction
           .id} are in results.json (Appendix B) and csv/factors-${construction.id}.csv.</p>
@@ -95,7 +95,7 @@ export function renderDynamicResponse(
       ${dynamicSummaryTable(view, d)}
       <p
         class="muted">Numbers as in results.json <code>constructions</code> entry for ${construction
-          .id} (Appendix B); method in the calculation methods. Response factors, conduction transfer functions, periodic factors and plots: <a href="#d-${anchor}">Appendix D</a> (leading terms; every term in results.json and csv/factors-${construction
+          .id} (Appendix B); method in Appendix G. Response factors, conduction transfer functions, periodic factors and plots: <a href="#d-${anchor}">Appendix D</a> (leading terms; every term in results.json and csv/factors-${construction
           .id}.csv).</p>
     `;
   return html`

@@ -60,7 +60,8 @@ function openItems(summary: SummaryJson, d: DisplayUnits): Trusted {
     `
   );
   return html`
-    <table class="compact summary-open-items">
+    ${openItemsByKind(summary)}
+    <table class="compact summary-open-items screen-only">
       <caption>Open items: ${String(
         summary.openItems.length,
       )}. Sources from memory, synthetic data and failed checks block issue until each is resolved or acknowledged in project.md (<code>acknowledged: [{ item: &lt;id or kind&gt;, reason, by }]</code>).</caption>
@@ -68,6 +69,56 @@ function openItems(summary: SummaryJson, d: DisplayUnits): Trusted {
         <tr>
           <th>Kind</th>
           <th>Item</th>
+          <th>Status</th>
+        </tr>
+      </thead>
+      <tbody>${rows}</tbody>
+    </table>
+  `;
+}
+
+/** An open item named by its id without the kind, and its file and line: `material:eps-graphite-031 (10-materials.md:33)`. */
+function shortItem(item: OpenItem): string {
+  const name = item.id.startsWith(`${item.kind}:`) ? item.id.slice(item.kind.length + 1) : item.id;
+  const line = item.at.replace(/:\d+$/, "");
+  const ack = item.acknowledged === null
+    ? ""
+    : ` — acknowledged by ${item.acknowledged.by}: ${item.acknowledged.reason}`;
+  return `${name} (${line})${ack}`;
+}
+
+/**
+ * The printed open items: one row per kind and status with every item named by its id and line; each item's full
+ * text is in the table on screen, results.json `summary.openItems` and csv/summary.csv.
+ */
+function openItemsByKind(summary: SummaryJson): Trusted {
+  const groups = new Map<string, OpenItem[]>();
+  for (const item of summary.openItems) {
+    const status = item.acknowledged !== null ? "acknowledged" : item.blocking ? "blocks issue" : "open";
+    const key = `${item.kind}\u0000${status}`;
+    groups.set(key, [...(groups.get(key) ?? []), item]);
+  }
+  const rows = [...groups].map(([key, items]) => {
+    const [kind, status] = key.split("\u0000") as [OpenItemKind, string];
+    return html`
+      <tr class="${status === "blocks issue" ? "fail" : ""}">
+        <td>${OPEN_ITEM_LABEL[kind]} (${String(items.length)})</td>
+        <td>${items.map(shortItem).join("; ")}</td>
+        <td>${status}</td>
+      </tr>
+    `;
+  });
+  return html`
+    <table class="compact summary-open-items-by-kind print-only">
+      <caption>Open items: ${String(
+        summary.openItems.length,
+      )}, by kind. Sources from memory, synthetic data and failed checks block issue until each is resolved or acknowledged in project.md (<code>acknowledged: [{ item: &lt;id or kind&gt;, reason, by }]</code>, the id being the kind and the name below, e.g. <code>${summary
+        .openItems[0]?.id ??
+        "from-memory-source:material:…"}</code>). Each item's full text: the electronic package, results.json <code>summary.openItems</code> and csv/summary.csv.</caption>
+      <thead>
+        <tr>
+          <th>Kind (count)</th>
+          <th>Items (id without the kind, and where)</th>
           <th>Status</th>
         </tr>
       </thead>

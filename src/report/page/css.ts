@@ -119,6 +119,7 @@ table.assumptions td.applies-to { font-size: 7.5pt; }
   details { display: block; }
   details.screen-only, .screen-only { display: none; }
   .print-only { display: block; }
+  table.print-only { display: table; }
   a { color: inherit; text-decoration: none; }
   h1, h2, h3, h4, h5, h6, .input-label, caption { break-after: avoid; page-break-after: avoid; }
   caption { break-inside: avoid; page-break-inside: avoid; }
@@ -148,6 +149,10 @@ table.assumptions td.applies-to { font-size: 7.5pt; }
   table.scenario-surfaces th, table.scenario-surfaces td { padding: 0.2mm 0.7mm; }
   .hourly-appendix table.compact { font-size: 7pt; }
   .hourly-appendix table.compact th, .hourly-appendix table.compact td { padding: 0.2mm 0.8mm; }
+  nav.contents > ol { column-count: 2; column-gap: 8mm; font-size: 9pt; }
+  nav.contents > ol > li { break-inside: avoid; }
+  .dynamic-summary-pair { flex-wrap: nowrap; }
+  .dynamic-summary-pair table.dynamic-summary { width: auto; flex: 1 1 0; margin-top: 0; }
   tr.screen-only { display: none; }
 }
 `);

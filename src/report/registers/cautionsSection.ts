@@ -48,7 +48,7 @@ export function renderCautionsSection(input: PackageInput, extra: readonly strin
 surface and interstitial condensation. Review the inputs, the assumptions register and the findings before use.</li>
 <li>The quality of the inputs bounds the quality of the outputs: material values without a cited source, defaults
 and unverified assumptions carry their uncertainty into every result.</li>
-<li>The exclusions in the scope of the calculation (calculation methods) apply. Where an excluded effect matters (thermal bridges, moisture, non-linear
+<li>The exclusions in the scope of the calculation (Appendix G, calculation methods) apply. Where an excluded effect matters (thermal bridges, moisture, non-linear
 surface exchange), assess it separately.</li>`,
     )}${synthetic.length === 0 ? html`` : html`
       <li

@@ -110,12 +110,15 @@ function harmonic(): Trusted {
 the frequency-domain quantities of ISO 13786 by an independent route.</p>`;
 }
 
+/** The methods' appendix title: the last appendix, so the body keeps to results and the letters stay in order. */
+export const METHODS_APPENDIX_TITLE = "Appendix G Calculation methods";
+
 /**
- * Renders the calculation methods, opening with `scope` (the tool's scope of the calculation), reading the limit of
+ * Renders Appendix G, the calculation methods, opening with `scope` (the tool's scope of the calculation), reading the limit of
  * each check from results.json.
  */
 export function renderMethodSection(ctx: RenderContext, scope: Trusted): Trusted {
-  return html`<section id="s-3"><h2>Calculation methods</h2>
+  return html`<section id="s-3"><h2>${METHODS_APPENDIX_TITLE}</h2>
 <p>Each construction's steady state follows ISO 6946:2017 (R = d/λ per layer, surface resistances, U = 1/R). Its
 dynamic response, printed after its steady-state output with each construction, is computed from the same layers by the methods
 below; the equations are written in plain text, with subscripts after an underscore.</p>

@@ -1,6 +1,6 @@
 /**
  * The appendices' own rules: the checks by subject and kind (Appendix C), and their compact print — the input
- * files in small monospace (Appendix A), the factor tables and plots of Appendix D set tight, two plots a row.
+ * files in small monospace in two columns (Appendix A), the factor tables and plots of Appendix D set tight, three plots a row, and Appendix F's tables two a row.
  */
 import { raw, type Trusted } from "../page/html.ts";
 
@@ -18,6 +18,9 @@ table.checks-by-kind code { font-size: 7.5pt; }
   #s-a pre.printed-file, #s-a pre.embedded-library {
     font-size: 6.8pt; line-height: 1.18; padding: 0.8mm 1.2mm; margin: 0 0 1mm;
     white-space: pre-wrap; overflow-wrap: anywhere; break-inside: auto; }
+  #s-a pre.printed-file, #s-a .library-entries {
+    column-count: 2; column-gap: 4mm; column-rule: 0.5pt solid #bbb; font-size: 6.5pt; }
+  #s-a .library-entries pre.embedded-library { break-inside: avoid; }
   #s-a .block-as-written { display: none; }
   #s-c table.method-checks { font-size: 8pt; }
   #s-c table.method-checks th:nth-child(1) { width: 30%; }
@@ -31,9 +34,18 @@ table.checks-by-kind code { font-size: 7.5pt; }
   #s-d caption, #s-d figcaption, #s-d p.muted, #s-d p.factor-pointer, #s-d .ctf-method-note {
     font-size: 7pt; line-height: 1.25; }
   #s-d p { margin: 0.5mm 0; font-size: 8pt; line-height: 1.3; }
+  #s-f h3 { font-size: 10.5pt; margin: 3mm 0 1mm; break-after: avoid; }
+  #s-f .table-pair { display: grid; grid-template-columns: minmax(0, 1fr) minmax(0, 1fr); column-gap: 4mm;
+    align-items: start; }
+  #s-f .table-pair > div { min-width: 0; }
+  #s-f table { font-size: 7.5pt; width: 100%; margin: 0 0 0.5mm; }
+  #s-f caption { font-size: 7.5pt; }
+  #s-f th, #s-f td { padding: 0.2mm 1mm; line-height: 1.2; overflow-wrap: anywhere; }
+  #s-f p.muted { font-size: 7pt; line-height: 1.25; margin: 0 0 1mm; }
   #s-a .hash, #s-c .hash, #s-d .hash { font-size: 7pt; }
-  #s-d figure.plot-figure { display: inline-block; width: 49%; margin: 0.5mm 0; vertical-align: top; }
-  #s-d figure.plot-figure + p.factor-pointer { display: inline-block; width: 49%; margin-left: 1%;
+  #s-d figure.plot-figure { display: inline-block; width: 32.6%; margin: 0.5mm 0.5% 0.5mm 0;
     vertical-align: top; }
+  #s-d figure.plot-figure figcaption { font-size: 6.5pt; line-height: 1.2; }
+  #s-d figure.plot-figure + p.factor-pointer { margin: 0.5mm 0 1mm; }
 }
 `);

@@ -22,10 +22,13 @@ table.checks-by-kind code { font-size: 7.5pt; }
     column-count: 2; column-gap: 4mm; column-rule: 0.5pt solid #bbb; font-size: 6.5pt; }
   #s-a .library-entries pre.embedded-library { break-inside: avoid; }
   #s-a .block-as-written { display: none; }
-  #s-c table.method-checks { font-size: 8pt; }
+  #s-c table.method-checks { font-size: 7.5pt; }
+  #s-c table.method-checks th, #s-c table.method-checks td { padding: 0.2mm 1.2mm; line-height: 1.2; }
   #s-c table.method-checks th:nth-child(1) { width: 30%; }
   #s-c table.method-checks th:nth-child(3) { width: 16%; }
-  #s-c table.checks-by-kind { font-size: 8pt; }
+  #s-c table.checks-by-kind { font-size: 7.5pt; }
+  #s-c table.checks-by-kind th, #s-c table.checks-by-kind td { padding: 0 1.2mm; line-height: 1.15; }
+  #s-c table code { font-size: 7pt; }
   #s-d h3 { margin-top: 4mm; font-size: 11pt; }
   #s-d h4 { font-size: 9.5pt; margin: 1.5mm 0 0.5mm; clear: both; }
   #s-d table.rf-table { float: left; margin-right: 3mm; }
@@ -40,7 +43,7 @@ table.checks-by-kind code { font-size: 7.5pt; }
   #s-f .table-pair > div { min-width: 0; }
   #s-f table { font-size: 7.5pt; width: 100%; margin: 0 0 0.5mm; }
   #s-f caption { font-size: 7.5pt; }
-  #s-f th, #s-f td { padding: 0.2mm 1mm; line-height: 1.2; overflow-wrap: anywhere; }
+  #s-f th, #s-f td { padding: 0.2mm 1mm; line-height: 1.2; overflow-wrap: break-word; }
   #s-f p.muted { font-size: 7pt; line-height: 1.25; margin: 0 0 1mm; }
   #s-a .hash, #s-c .hash, #s-d .hash { font-size: 7pt; }
   #s-d figure.plot-figure { float: left; width: 32.6%; margin: 0.5mm 0.5% 0.5mm 0; break-inside: avoid; }

@@ -49,13 +49,13 @@ function conditionTable(
   );
   return html`
     <table>
-      <caption>Effect of the design-day conditions on the peak total heat gain of ${id}, largest first</caption>
+      <caption>Effect of the design-day conditions on the peak total heat gain of ${id}, largest first (changes in ${unit})</caption>
       <thead>
         <tr>
           <th>Condition varied</th>
           <th>Step</th>
-          <th>Change at − step (${unit})</th>
-          <th>Change at + step (${unit})</th>
+          <th>Change at − step</th>
+          <th>Change at + step</th>
         </tr>
       </thead>
       <tbody>${rows}</tbody>
@@ -97,14 +97,14 @@ function effectTable(
   );
   return html`
     <table>
-      <caption>${caption}</caption>
+      <caption>${caption} (changes in ${unit})</caption>
       <thead>
         <tr>
           <th>Rank</th>
           <th>Material</th>
           <th>Property varied</th>
-          <th>Change at −${percent} % (${unit})</th>
-          <th>Change at +${percent} % (${unit})</th>
+          <th>Change at −${percent} %</th>
+          <th>Change at +${percent} %</th>
         </tr>
       </thead>
       <tbody>${rows}</tbody>

@@ -12,14 +12,14 @@ table.checks-by-kind tr { break-inside: avoid; }
 table.checks-by-kind tr.subject-start td { border-top: 1.5px solid var(--ink); }
 table.checks-by-kind code { font-size: 7.5pt; }
 @media print {
-  #s-a h3 { font-size: 10pt; margin: 3mm 0 0; }
+  #s-a h3 { font-size: 10pt; margin: 2.5mm 0 0; }
   #s-a h3 + p.muted { margin: 0 0 0.5mm; font-size: 7.5pt; }
   #s-a .printed-input > p.muted { display: none; }
   #s-a pre.printed-file, #s-a pre.embedded-library {
-    font-size: 6.8pt; line-height: 1.18; padding: 0.8mm 1.2mm; margin: 0 0 1mm;
+    font-size: 6.4pt; line-height: 1.15; padding: 0.8mm 1.2mm; margin: 0 0 1mm;
     white-space: pre-wrap; overflow-wrap: anywhere; break-inside: auto; }
   #s-a pre.printed-file, #s-a .library-entries {
-    column-count: 2; column-gap: 4mm; column-rule: 0.5pt solid #bbb; font-size: 6.5pt; }
+    column-count: 2; column-gap: 4mm; column-rule: 0.5pt solid #bbb; }
   #s-a .library-entries pre.embedded-library { break-inside: avoid; }
   #s-a .block-as-written { display: none; }
   #s-c table.method-checks { font-size: 7.5pt; }

@@ -157,3 +157,28 @@ Deno.test("the inputs appendix prints every file in full in small monospace, eac
     assert.ok(header?.textContent?.includes(`${file.bytes.length} bytes`), file.path);
   }
 });
+
+Deno.test("the inputs appendix prints its files and the library entries in two columns", () => {
+  const doc = parseDocument(renderPackage(fixture()));
+  const print = printCss(doc);
+  // Two text columns on A4 (common practice for code listings in print, no source): each printed file and the
+  // library entries' block flow into two columns, so the short lines of the blocks do not leave half a line empty.
+  const rule = print.match(/#s-a pre\.printed-file, #s-a \.library-entries \{([^}]*)\}/)?.[1] ?? "";
+  assert.match(rule, /column-count: 2/);
+  const entries = doc.querySelectorAll("#s-a .library-entries pre.embedded-library");
+  assert.equal(entries.length, doc.querySelectorAll("pre.embedded-library").length);
+  assert.ok(entries.length > 0, "the fixture uses a library entry");
+});
+
+Deno.test("the factors appendix prints a construction's three plots in one row", () => {
+  const doc = parseDocument(renderPackage(fixture()));
+  const figures = doc.querySelectorAll("#s-d figure.plot-figure");
+  assert.ok(figures.length >= 3, "the fixture's construction has its plots");
+  // Three a row: each plot floats at most a third of the column wide; the pointer after them starts below.
+  const rule = printCss(doc).match(/#s-d figure\.plot-figure \{([^}]*)\}/)?.[1] ?? "";
+  assert.match(rule, /float: left/);
+  const width = Number(rule.match(/width: ([\d.]+)%/)?.[1]);
+  const right = Number(rule.match(/margin: [\d.]+mm ([\d.]+)%/)?.[1] ?? 0);
+  assert.ok(width > 25 && 3 * (width + right) <= 100, rule);
+  assert.match(printCss(doc), /#s-d figure\.plot-figure \+ p\.factor-pointer \{ clear: both;/);
+});

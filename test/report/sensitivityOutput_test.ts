@@ -32,3 +32,42 @@ Deno.test("the package's sensitivity study ranks the effects of results.json and
   assert.ok(page.includes("lowered and raised by 10 %"));
   await Deno.remove(folder, { recursive: true });
 });
+
+Deno.test("the sensitivity appendix prints each construction's two tables side by side, units in the captions", async () => {
+  const folder = await Deno.makeTempDir();
+  const minimal = new URL("../fixtures/good/minimal/", import.meta.url).pathname;
+  Deno.writeTextFileSync(
+    join(folder, "project.md"),
+    Deno.readTextFileSync(join(minimal, "project.md")).replace(
+      "units: SI\n",
+      "units: SI\nsensitivity: { variation: 0.1 }\n",
+    ),
+  );
+  Deno.copyFileSync(join(minimal, "walls.md"), join(folder, "walls.md"));
+  assert.equal(await runBuild({ project: folder }, quiet), 0);
+  const page = Deno.readTextFileSync(join(folder, "out", "package.html"));
+  const doc = new DOMParser().parseFromString(page, "text/html");
+  const pairs = [...doc.querySelectorAll("#s-f .table-pair")];
+  assert.ok(pairs.length > 0, "Appendix F pairs its tables");
+  for (const pair of pairs) {
+    const cells = [...pair.children];
+    assert.equal(cells.length, 2);
+    for (const cell of cells) {
+      // Each half holds one table (or the note that no effect reached the threshold).
+      assert.ok(cell.querySelectorAll("table").length <= 1);
+    }
+  }
+  // The unit is stated once in the caption, so the narrow half-width headers carry no long unit.
+  const uTable = [...doc.querySelectorAll("#s-f table")].find((t) =>
+    t.querySelector("caption")?.textContent?.startsWith("Effect on the U-value of EW-1")
+  );
+  assert.ok(uTable?.querySelector("caption")?.textContent?.includes("(changes in W/(m²·K))"));
+  assert.ok([...uTable.querySelectorAll("th")].every((th) => !(th.textContent ?? "").includes("W/")));
+  // Printed two a row: a two-column grid in the print rules.
+  const css = [...doc.querySelectorAll("style")].map((s) => s.textContent ?? "").join("\n");
+  assert.match(
+    css,
+    /#s-f \.table-pair \{ display: grid; grid-template-columns: minmax\(0, 1fr\) minmax\(0, 1fr\)/,
+  );
+  await Deno.remove(folder, { recursive: true });
+});

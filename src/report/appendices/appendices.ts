@@ -54,11 +54,11 @@ ${renderBlocksAsWritten(ctx)}
 ${
     ctx.input.libraryEntries.length === 0 ? "" : html`<h3 id="s-a-lib">Built-in library entries used</h3>
 <p>The canonical text of each library entry the project used; these are hashed with the inputs.</p>
-${
+<div class="library-entries">${
       ctx.input.libraryEntries.map((entry) =>
         html`<pre class="embedded-library" data-id="${entry.id}" data-sha256="${entry.sha256}">${entry.canonical}</pre>`
       )
-    }`
+    }</div>`
   }
 </section>`;
 }

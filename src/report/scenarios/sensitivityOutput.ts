@@ -49,13 +49,13 @@ function conditionTable(
   );
   return html`
     <table>
-      <caption>Effect of the design-day conditions on the peak total heat gain of ${id}, largest first</caption>
+      <caption>Effect of the design-day conditions on the peak total heat gain of ${id}, largest first (changes in ${unit})</caption>
       <thead>
         <tr>
           <th>Condition varied</th>
           <th>Step</th>
-          <th>Change at − step (${unit})</th>
-          <th>Change at + step (${unit})</th>
+          <th>Change at − step</th>
+          <th>Change at + step</th>
         </tr>
       </thead>
       <tbody>${rows}</tbody>
@@ -97,14 +97,14 @@ function effectTable(
   );
   return html`
     <table>
-      <caption>${caption}</caption>
+      <caption>${caption} (changes in ${unit})</caption>
       <thead>
         <tr>
           <th>Rank</th>
           <th>Material</th>
           <th>Property varied</th>
-          <th>Change at −${percent} % (${unit})</th>
-          <th>Change at +${percent} % (${unit})</th>
+          <th>Change at −${percent} %</th>
+          <th>Change at +${percent} %</th>
         </tr>
       </thead>
       <tbody>${rows}</tbody>
@@ -205,28 +205,48 @@ export function renderSensitivityAppendix(ctx: RenderContext): Trusted {
   if (study === undefined) return html``;
   const display = ctx.display;
   const scenarios = Object.entries(study.scenarios).map(([id, s]) =>
-    html`<h3 id="${
-      sensitivityAnchor(ctx.scenarioAnchors.get(id) ?? id)
-    }">Design day ${id}: peak total heat gain</h3>
-${
-      effectTable(
-        `Effect on the peak total heat gain of ${id}`,
-        s.peakHeatGain,
-        s.dropped.peakHeatGain,
-        study,
-        display,
-        "heatGain",
-      )
-    }
-${conditionTable(id, s.conditions, s.dropped.conditions, study, display)}`
+    html`
+      <h3 id="${sensitivityAnchor(
+        ctx.scenarioAnchors.get(id) ?? id,
+      )}">Design day ${id}: peak total heat gain</h3>
+      <div class="table-pair">
+        <div>${effectTable(
+          `Effect on the peak total heat gain of ${id}`,
+          s.peakHeatGain,
+          s.dropped.peakHeatGain,
+          study,
+          display,
+          "heatGain",
+        )}</div>
+        <div>${conditionTable(id, s.conditions, s.dropped.conditions, study, display)}</div>
+      </div>
+    `
   );
   const order = ctx.input.model.constructions.map((c) => c.id);
   const rank = (id: string) => order.includes(id) ? order.indexOf(id) : order.length;
   const byInput = Object.entries(study.constructions).sort(([a], [b]) => rank(a) - rank(b));
   const constructions = byInput.map(([id, c]) =>
-    html`<h3 id="${sensitivityAnchor(ctx.constructionAnchors.get(id) ?? id)}">Construction ${id}</h3>
-${effectTable(`Effect on the U-value of ${id}`, c.U, c.dropped.U, study, display, "transmittance")}
-${effectTable(`Effect on the time lag of ${id}`, c.timeLag_h, c.dropped.timeLag_h, study, display, "time")}`
+    html`
+      <h3 id="${sensitivityAnchor(ctx.constructionAnchors.get(id) ?? id)}">Construction ${id}</h3>
+      <div class="table-pair">
+        <div>${effectTable(
+          `Effect on the U-value of ${id}`,
+          c.U,
+          c.dropped.U,
+          study,
+          display,
+          "transmittance",
+        )}</div>
+        <div>${effectTable(
+          `Effect on the time lag of ${id}`,
+          c.timeLag_h,
+          c.dropped.timeLag_h,
+          study,
+          display,
+          "time",
+        )}</div>
+      </div>
+    `
   );
   return html`<section id="${SENSITIVITY_APPENDIX[0]}" class="appendix sensitivity-appendix"><h2>${
     SENSITIVITY_APPENDIX[1]

@@ -46,7 +46,7 @@ table.checks-by-kind code { font-size: 7.5pt; }
   #s-f th, #s-f td { padding: 0.2mm 1mm; line-height: 1.2; overflow-wrap: break-word; }
   #s-f p.muted { font-size: 7pt; line-height: 1.25; margin: 0 0 1mm; }
   #s-a .hash, #s-c .hash, #s-d .hash { font-size: 7pt; }
-  #s-d figure.plot-figure { float: left; width: 32.6%; margin: 0.5mm 0.5% 0.5mm 0; break-inside: avoid; }
+  #s-d figure.plot-figure { float: left; width: 49%; margin: 0.5mm 0.5% 0.5mm 0; break-inside: avoid; }
   #s-d figure.plot-figure figcaption { font-size: 6.5pt; line-height: 1.2; }
   #s-d figure.plot-figure + p.factor-pointer { clear: both; margin: 0.5mm 0 1mm; }
   #s-d h3 { clear: both; }

@@ -6,9 +6,10 @@ import { type DisplayUnits, toDisplay, unitLabel } from "../page/displayUnits.ts
 import { formatFixed, formatTrim } from "../page/format.ts";
 import { coolingLoadAnchor } from "../page/anchors.ts";
 import { html, type Trusted } from "../page/html.ts";
-import { namePlaceholder, type PlotSpec, renderPlotSvg } from "../page/plotSvg.ts";
+import { namePlaceholder, renderPlotSvg } from "../page/plotSvg.ts";
 import { endLabels } from "../constructions/dynamicPlots.ts";
 import { clockTime } from "./scenarioData.ts";
+import { daySpec } from "./dayPlot.ts";
 import { OUTDOOR_STYLE, type SeriesStyle, surfaceStyle } from "./scenarioStyle.ts";
 
 const HOURS = Array.from({ length: 24 }, (_, h) => h);
@@ -122,32 +123,6 @@ export function coolingLoadHourlyTable(
   `;
 }
 
-function spec(yLabel: string, marks: Plot.Markish[]): PlotSpec {
-  return {
-    height: 280,
-    marginLeft: 56,
-    marginRight: 96,
-    marginBottom: 40,
-    style: { fontSize: "11px" },
-    x: {
-      domain: [0, 24],
-      ticks: [0, 3, 6, 9, 12, 15, 18, 21, 24],
-      tickFormat: clockTime,
-      label: "Hour, local standard time",
-      labelAnchor: "center",
-      labelArrow: "none",
-    },
-    y: {
-      label: yLabel,
-      labelArrow: "none",
-      grid: true,
-      nice: true,
-      tickFormat: (v: number) => formatTrim(v, 4),
-    },
-    marks,
-  };
-}
-
 function line(values: readonly number[], style: SeriesStyle, d: DisplayUnits, width = 1.6): Plot.Markish {
   const points = values.map((v, h) => ({ h, v: toDisplay(d, "heatGain", v) }));
   return Plot.line(points, {
@@ -184,7 +159,7 @@ function plots(
 ) {
   const y = `Heat gain, cooling load (${unitLabel(d, "heatGain")})`;
   const totalSvg = renderPlotSvg(
-    spec(y, [
+    daySpec(y, [
       Plot.ruleY([0], { stroke: "#444" }),
       line(cl.totalHeatGain, DASHED, d),
       line(cl.total, OUTDOOR_STYLE, d, 2.2),
@@ -198,7 +173,7 @@ function plots(
   );
   const entries = Object.values(results.surfaces);
   const surfaceSvg = renderPlotSvg(
-    spec(y, [
+    daySpec(y, [
       Plot.ruleY([0], { stroke: "#444" }),
       ...entries.map((s, i) =>
         line(HOURS.map((h) => gainAt(results, s.heatGain, h)), { ...surfaceStyle(i), dash: "2 3" }, d, 1.1)

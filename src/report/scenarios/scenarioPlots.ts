@@ -2,11 +2,11 @@
 import * as Plot from "@observablehq/plot";
 import type { ScenarioResults } from "../../results/types.ts";
 import { type DisplayUnits, type QuantityKind, toDisplay, unitLabel } from "../page/displayUnits.ts";
-import { formatTrim } from "../page/format.ts";
 import type { Trusted } from "../page/html.ts";
-import { namePlaceholder, type PlotSpec, renderPlotSvg } from "../page/plotSvg.ts";
+import { namePlaceholder, renderPlotSvg } from "../page/plotSvg.ts";
 import { endLabels } from "../constructions/dynamicPlots.ts";
-import { clockTime, MONTH_NAMES } from "./scenarioData.ts";
+import { MONTH_NAMES } from "./scenarioData.ts";
+import { DAY_PLOT_HEIGHT, daySpec, tick } from "./dayPlot.ts";
 import {
   GAIN_STYLE,
   INDOOR_STYLE,
@@ -16,16 +16,10 @@ import {
   surfaceStyle,
 } from "./scenarioStyle.ts";
 
-const HEIGHT = 300;
-const DAY_TICKS = [0, 3, 6, 9, 12, 15, 18, 21, 24];
-const TIME_LABEL = "Time of day, local standard time (hh:mm)";
-
 interface Point {
   readonly t: number;
   readonly v: number;
 }
-
-const tick = (d: number) => formatTrim(d, 4);
 
 /**
  * Points (kΔ, values[k]) in the display unit of `kind`, plus a closing point at 24 h equal to the first (the
@@ -50,26 +44,6 @@ function line(points: readonly Point[], style: SeriesStyle, width = 1.6): Plot.M
     strokeDasharray: style.dash,
     strokeWidth: width,
   });
-}
-
-function daySpec(yLabel: string, marks: Plot.Markish[]): PlotSpec {
-  return {
-    height: HEIGHT,
-    marginLeft: 56,
-    marginRight: 96,
-    marginBottom: 40,
-    style: { fontSize: "11px" },
-    x: {
-      domain: [0, 24],
-      ticks: DAY_TICKS,
-      tickFormat: clockTime,
-      label: TIME_LABEL,
-      labelAnchor: "center",
-      labelArrow: "none",
-    },
-    y: { label: yLabel, labelArrow: "none", grid: true, tickFormat: tick, nice: true },
-    marks,
-  };
 }
 
 /** (a) Outdoor and indoor air and each surface's sol-air temperature over the day, °C or °F. */
@@ -147,26 +121,7 @@ export function stackedGainPlot(results: ScenarioResults, idPrefix: string, d: D
   const ids = Object.keys(results.surfaces);
   return renderPlotSvg(
     {
-      height: HEIGHT,
-      marginLeft: 56,
-      marginRight: 96,
-      marginBottom: 40,
-      style: { fontSize: "11px" },
-      x: {
-        domain: [0, 24],
-        ticks: DAY_TICKS,
-        tickFormat: clockTime,
-        label: TIME_LABEL,
-        labelAnchor: "center",
-        labelArrow: "none",
-      },
-      y: {
-        label: `Heat gain (${unitLabel(d, "heatGain")})`,
-        labelArrow: "none",
-        grid: true,
-        tickFormat: tick,
-        nice: true,
-      },
+      ...daySpec(`Heat gain (${unitLabel(d, "heatGain")})`, []),
       color: { type: "identity" },
       marks: [
         Plot.rectY(bars, {
@@ -253,7 +208,7 @@ export function monthlyPlot(
   const loss = months.map((m, i) => ({ month: names[i]!, energy: -toDisplay(d, "energy", m.loss_J) }));
   return renderPlotSvg(
     {
-      height: HEIGHT,
+      height: DAY_PLOT_HEIGHT,
       marginLeft: 62,
       marginBottom: 40,
       style: { fontSize: "11px" },

@@ -13,35 +13,15 @@ import { CHROMIUM_ARGS, CHROMIUM_PATH } from "../src/commands/pdf.ts";
 import { pageNumbersFromOutline } from "../src/commands/pdfOutline.ts";
 import { bodyEndPage, type PdfLine, pdfLines, type PrintedHeading, strandedHeadings } from "./pdfPages.ts";
 
+import { copyDir, HAS_CHROMIUM, tool } from "./browserTools.ts";
+
 const DEMO = new URL("../projects/demo/", import.meta.url).pathname;
-const HAS_CHROMIUM = (() => {
-  try {
-    return Deno.statSync(CHROMIUM_PATH).isFile;
-  } catch {
-    return false;
-  }
-})();
 
 /** The budgets of issue 11 for the demo, on A4. */
 const BODY_BUDGET = 30;
 const PACKAGE_BUDGET = 60;
 /** A4 (210 mm, ISO 216, from memory) less the package's 18 mm side margins (src/report/page/css.ts @page). */
 const A4_COLUMN_PX = Math.floor(((210 - 2 * 18) / 25.4) * 96);
-
-async function copyDir(from: string, to: string): Promise<void> {
-  await Deno.mkdir(to, { recursive: true });
-  for await (const entry of Deno.readDir(from)) {
-    if (entry.name === "out" || entry.name === "screenshots" || entry.name.startsWith(".")) continue;
-    if (entry.isDirectory) await copyDir(join(from, entry.name), join(to, entry.name));
-    else if (entry.isFile) await Deno.copyFile(join(from, entry.name), join(to, entry.name));
-  }
-}
-
-async function tool(cmd: string, args: string[]): Promise<string> {
-  const result = await new Deno.Command(cmd, { args, stdout: "piped", stderr: "piped" }).output();
-  assert.ok(result.success, `${cmd} failed: ${new TextDecoder().decode(result.stderr)}`);
-  return new TextDecoder().decode(result.stdout);
-}
 
 /** Builds a copy of the demo with the given display units and `--pdf`; returns the output folder. */
 async function printDemo(dir: string, units: "SI" | "IP"): Promise<string> {

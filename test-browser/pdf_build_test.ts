@@ -7,37 +7,17 @@ import assert from "node:assert/strict";
 import { join } from "node:path";
 import { runBuild } from "../src/commands/build.ts";
 import { runVerify } from "../src/commands/verify.ts";
-import { CHROMIUM_PATH, NO_CHROMIUM_MESSAGE } from "../src/commands/pdf.ts";
+import { NO_CHROMIUM_MESSAGE } from "../src/commands/pdf.ts";
 import { namedDestinations, pageNumbersFromOutline } from "../src/commands/pdfOutline.ts";
 
+import { copyDir, HAS_CHROMIUM, tool } from "./browserTools.ts";
+
 const DEMO = new URL("../projects/demo/", import.meta.url).pathname;
-const HAS_CHROMIUM = (() => {
-  try {
-    return Deno.statSync(CHROMIUM_PATH).isFile;
-  } catch {
-    return false;
-  }
-})();
 
 function capture() {
   const out: string[] = [];
   const err: string[] = [];
   return { io: { stdout: (l: string) => out.push(l), stderr: (l: string) => err.push(l) }, out, err };
-}
-
-async function copyDir(from: string, to: string): Promise<void> {
-  await Deno.mkdir(to, { recursive: true });
-  for await (const entry of Deno.readDir(from)) {
-    if (entry.name === "out" || entry.name === "screenshots" || entry.name.startsWith(".")) continue;
-    if (entry.isDirectory) await copyDir(join(from, entry.name), join(to, entry.name));
-    else if (entry.isFile) await Deno.copyFile(join(from, entry.name), join(to, entry.name));
-  }
-}
-
-async function tool(cmd: string, args: string[]): Promise<string> {
-  const result = await new Deno.Command(cmd, { args, stdout: "piped", stderr: "piped" }).output();
-  assert.ok(result.success, `${cmd} failed: ${new TextDecoder().decode(result.stderr)}`);
-  return new TextDecoder().decode(result.stdout);
 }
 
 async function buildPdf(paper: "A4" | "Letter") {

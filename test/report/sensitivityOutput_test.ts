@@ -5,7 +5,8 @@ import { runBuild } from "../../src/commands/build.ts";
 
 const quiet = { stdout: () => {}, stderr: () => {} };
 
-Deno.test("the package's sensitivity study ranks the effects of results.json and draws an inert bar chart", async () => {
+/** The minimal fixture with a ±10 % sensitivity study, built into a temporary folder (its output in out/). */
+async function builtMinimalWithStudy(): Promise<string> {
   const folder = await Deno.makeTempDir();
   const minimal = new URL("../fixtures/good/minimal/", import.meta.url).pathname;
   Deno.writeTextFileSync(
@@ -17,6 +18,11 @@ Deno.test("the package's sensitivity study ranks the effects of results.json and
   );
   Deno.copyFileSync(join(minimal, "walls.md"), join(folder, "walls.md"));
   assert.equal(await runBuild({ project: folder }, quiet), 0);
+  return folder;
+}
+
+Deno.test("the package's sensitivity study ranks the effects of results.json and draws an inert bar chart", async () => {
+  const folder = await builtMinimalWithStudy();
   const results = JSON.parse(Deno.readTextFileSync(join(folder, "out", "results.json")));
   const top = results.sensitivity.constructions["EW-1"].U[0];
   // The largest effect on U of the minimal wall is the mineral wool's conductivity: its layer holds most of R_T
@@ -34,17 +40,7 @@ Deno.test("the package's sensitivity study ranks the effects of results.json and
 });
 
 Deno.test("the sensitivity appendix prints each construction's two tables side by side, units in the captions", async () => {
-  const folder = await Deno.makeTempDir();
-  const minimal = new URL("../fixtures/good/minimal/", import.meta.url).pathname;
-  Deno.writeTextFileSync(
-    join(folder, "project.md"),
-    Deno.readTextFileSync(join(minimal, "project.md")).replace(
-      "units: SI\n",
-      "units: SI\nsensitivity: { variation: 0.1 }\n",
-    ),
-  );
-  Deno.copyFileSync(join(minimal, "walls.md"), join(folder, "walls.md"));
-  assert.equal(await runBuild({ project: folder }, quiet), 0);
+  const folder = await builtMinimalWithStudy();
   const page = Deno.readTextFileSync(join(folder, "out", "package.html"));
   const doc = new DOMParser().parseFromString(page, "text/html");
   const pairs = [...doc.querySelectorAll("#s-f .table-pair")];

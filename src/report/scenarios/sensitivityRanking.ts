@@ -59,6 +59,25 @@ function relativeOf(e: { minus: number; plus: number }, base: number | undefined
   return base === undefined || !Number.isFinite(base) || base === 0 ? NaN : size / Math.abs(base);
 }
 
+/** One material property's effect on `result`, as a row of the ranked table. */
+function materialEffect(
+  e: SensitivityEffect,
+  result: string,
+  kind: QuantityKind,
+  step: string,
+  base: number | undefined,
+): RankedEffect {
+  return {
+    result,
+    input: `${materialLabel(e.material)}: ${PROPERTY_NAMES[e.property]}`,
+    step,
+    minus: e.minus,
+    plus: e.plus,
+    kind,
+    relative: relativeOf(e, base),
+  };
+}
+
 /** Every effect the study kept (all above its threshold), largest relative change first. */
 export function rankedEffects(ctx: RenderContext, study: SensitivityResults): RankedEffect[] {
   const percent = `±${formatTrim(study.variation * 100, 3)} %`;
@@ -68,33 +87,13 @@ export function rankedEffects(ctx: RenderContext, study: SensitivityResults): Ra
       ? ctx.input.results.constructions[id]
       : undefined;
     const lag = readDynamic(own)?.dynamic.timeLag_h;
-    const add = (effects: readonly SensitivityEffect[], result: string, kind: QuantityKind, base?: number) =>
-      effects.forEach((e) =>
-        all.push({
-          result,
-          input: `${materialLabel(e.material)}: ${PROPERTY_NAMES[e.property]}`,
-          step: percent,
-          minus: e.minus,
-          plus: e.plus,
-          kind,
-          relative: relativeOf(e, base),
-        })
-      );
-    add(c.U, `U of ${id}`, "transmittance", own?.U);
-    add(c.timeLag_h, `time lag of ${id}`, "time", lag);
+    all.push(...c.U.map((e) => materialEffect(e, `U of ${id}`, "transmittance", percent, own?.U)));
+    all.push(...c.timeLag_h.map((e) => materialEffect(e, `time lag of ${id}`, "time", percent, lag)));
   }
   for (const [id, s] of Object.entries(study.scenarios)) {
     const result = `peak heat gain of ${id}`;
-    s.peakHeatGain.forEach((e) =>
-      all.push({
-        result,
-        input: `${materialLabel(e.material)}: ${PROPERTY_NAMES[e.property]}`,
-        step: percent,
-        minus: e.minus,
-        plus: e.plus,
-        kind: "heatGain",
-        relative: relativeOf(e, s.basePeakHeatGain),
-      })
+    all.push(
+      ...s.peakHeatGain.map((e) => materialEffect(e, result, "heatGain", percent, s.basePeakHeatGain)),
     );
     s.conditions.forEach((e) =>
       all.push({

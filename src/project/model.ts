@@ -1,5 +1,7 @@
 import type { Layer } from "../engine/layer.ts";
 import type { Position } from "./position.ts";
+import type { Room } from "./roomModel.ts";
+import type { TemperatureProfile } from "./temperatureProfile.ts";
 import type { Acknowledgement, OpenPoint } from "./signOff.ts";
 
 export type ProjectStatus = "draft" | "for-review" | "issued";
@@ -152,10 +154,7 @@ export interface Construction {
   readonly at: Position;
 }
 
-/** A temperature given as one constant or as 24 hourly values (index k = k:00 local standard time), °C. */
-export type TemperatureProfile =
-  | { readonly kind: "constant"; readonly valueC: number }
-  | { readonly kind: "hourly"; readonly hourlyC: readonly number[] };
+export type { TemperatureProfile } from "./temperatureProfile.ts";
 
 /** A site: latitude and longitude in degrees (east positive), standard-time offset from UTC in hours (east positive). */
 export interface Site {
@@ -282,6 +281,8 @@ export interface Model {
   readonly assumptions: readonly Assumption[];
   /** `kind: heating` scenario blocks, in reading order (absent when there are none). */
   readonly heatingScenarios?: readonly HeatingScenario[];
+  /** `room` blocks, in reading order (absent when there are none). */
+  readonly rooms?: readonly Room[];
 }
 
 /** Looks up a material id among the project's blocks and the built-in library. */

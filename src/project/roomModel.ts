@@ -35,8 +35,15 @@ export type RoomBoundary =
   | { readonly kind: "outdoor" }
   /** The ground: the floor's U by ISO 13370; the design day holds its far side at the ground temperature. */
   | { readonly kind: "ground" }
-  /** A space held at a given temperature (constant or hourly), °C. */
-  | { readonly kind: "adjacent"; readonly temperature: TemperatureProfile }
+  /**
+   * A space held at a given temperature (constant or hourly), °C, on the design day; `heatingC` is its temperature
+   * in the heating case (extension key `heating-temperature`; absent = the room's own heating set point, b = 0, logged).
+   */
+  | {
+    readonly kind: "adjacent";
+    readonly temperature: TemperatureProfile;
+    readonly heatingC?: number;
+  }
   /** A space like this one: the surface stores and releases heat but passes none across. */
   | { readonly kind: "same-as-room" };
 

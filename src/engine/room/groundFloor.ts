@@ -197,24 +197,22 @@ export function groundFloorU(input: GroundFloorInput): GroundFloorResult {
     ? ((2 * lambda) / (Math.PI * bPrime + dt)) * Math.log((Math.PI * bPrime) / dt + 1)
     : lambda / (0.457 * bPrime + dt);
 
+  const slab = "ISO 13370:2017, slab-on-ground floor; 9.1";
+  const eq = (n: number) => `(${slab}, Eq. (${n}) of the 2007 edition, from memory)`;
+  const dtSum = `${fig(w)} + ${fig(lambda)} × (${fig(rsi)} + ${fig(rf)} + ${fig(rse)})`;
+  const formula = branch === "thin"
+    ? "d_t < B′ (uninsulated or moderately insulated floor): U = 2λ/(πB′ + d_t)·ln(πB′/d_t + 1)"
+    : "d_t ≥ B′ (well-insulated floor): U = λ/(0.457 B′ + d_t)";
   const statements = [
     `B′ = A / (0.5 P) = ${fig(a)} / (0.5 × ${fig(p)}) = ${fig(bPrime)} m ` +
     "(ISO 13370:2017, characteristic dimension of the floor; clause 8, Eq. (2) of the 2007 edition, from memory)",
-    `d_t = w + λ (R_si + R_f + R_se) = ${fig(w)} + ${fig(lambda)} × (${fig(rsi)} + ${fig(rf)} + ${
-      fig(rse)
-    }) = ` +
-    `${
-      fig(dt)
-    } m (ISO 13370:2017, slab-on-ground floor, equivalent thickness; 9.1, Eq. (3) of the 2007 edition, from memory)`,
-    branch === "thin"
-      ? `d_t < B′ (uninsulated or moderately insulated floor): U = 2λ/(πB′ + d_t)·ln(πB′/d_t + 1) = ` +
-        `${
-          fig(u)
-        } W/(m² K) (ISO 13370:2017, slab-on-ground floor; 9.1, Eq. (4) of the 2007 edition, from memory)`
-      : `d_t ≥ B′ (well-insulated floor): U = λ/(0.457 B′ + d_t) = ${fig(u)} W/(m² K) ` +
-        "(ISO 13370:2017, slab-on-ground floor; 9.1, Eq. (5) of the 2007 edition, from memory)",
+    `d_t = w + λ (R_si + R_f + R_se) = ${dtSum} = ${fig(dt)} m ${eq(3)}`,
+    `${formula} = ${fig(u)} W/(m² K) ${eq(branch === "thin" ? 4 : 5)}`,
     "Steady-state U of the floor and the ground together, no edge insulation; the periodic (seasonal) part of " +
     "ISO 13370 is not included",
+    "A and P are used as given: P counts only the edges towards outdoor air or unheated space, not those towards " +
+    "other heated parts of the building (ISO 13370:2017, characteristic dimension; clause 8 of the 2007 edition, " +
+    "from memory); for a room inside a larger floor, EN 12831-1 takes B′ of the whole building (from memory)",
   ];
   return {
     kind: "ground-floor",

@@ -100,6 +100,20 @@ Deno.test("ground floor, near d_t = B′ the two formulas differ by the standard
   close(below.uValueWPerM2K, (0.6862483 * 2) / 0.72, 1e-6, "log formula at B′ = d_t");
   close(at.uValueWPerM2K, (0.6863418 * 2) / 0.72, 1e-6, "well-insulated formula at B′ = d_t");
   close(at.uValueWPerM2K / below.uValueWPerM2K - 1, 1.3628e-4, 1e-3, "jump");
+  // Exactly d_t = B′ belongs to the well-insulated formula ("d_t ≥ B′"): with R_si = R_se = 0 given, R_f = 0.25,
+  // λ = 2, w = 0.5: d_t = 0.5 + 2 × 0.25 = 1 m; A = 5, P = 10: B′ = 5/5 = 1 m (both exact in binary).
+  const exact = ok(groundFloorU({
+    areaM2: 5,
+    exposedPerimeterM: 10,
+    floorResistanceM2KPerW: 0.25,
+    soilConductivityWPerMK: 2,
+    wallThicknessM: 0.5,
+    insideResistanceM2KPerW: 0,
+    outsideResistanceM2KPerW: 0,
+  }));
+  assert.equal(exact.characteristicDimensionM, exact.equivalentThicknessM);
+  assert.equal(exact.branch, "thick");
+  close(exact.uValueWPerM2K, 2 / 1.457, 1e-12, "λ/(1.457 B′) at d_t = B′ = 1 m");
 });
 
 Deno.test("ground floor: the uninsulated floors on clay of the UK handbook table", () => {

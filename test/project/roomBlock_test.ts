@@ -200,7 +200,7 @@ Deno.test("a project without room blocks has no rooms in its model", () => {
 });
 
 Deno.test("windows that fill their surface exactly leave a zero net area and are accepted", () => {
-  const { messages } = resolveRooms(`\`\`\`room
+  const { model, messages } = resolveRooms(`\`\`\`room
 id: glazed
 design-day: july
 air-temperature: 24 degC
@@ -213,6 +213,7 @@ windows:
 \`\`\`
 `);
   assert.deepStrictEqual(messages, []);
+  assert.deepStrictEqual(model?.rooms?.[0]?.windows.map((w) => w.id), ["w1", "w2"]);
 });
 
 Deno.test("a room naming a construction or scenario that has errors of its own adds no error", () => {
@@ -235,12 +236,23 @@ surfaces:
 windows:
   - { id: w1, in: roof, area: 1 m^2, u-value: 1.1 W/(m^2 K), solar-factor: 0.5, frame-fraction: 0.1 }
 \`\`\`
+
+\`\`\`room
+id: r2
+design-day: july
+air-temperature: 24 degC
+volume: 30 m^3
+surfaces:
+  - { id: roof, construction: EW-7, area: 12 m^2, tilt: 0 deg, boundary: outdoor }
+\`\`\`
 `,
     },
   ]);
   const messages = resolved.diagnostics.map(formatDiagnostic);
-  assert.ok(messages.length > 0);
-  assert.deepStrictEqual(messages.filter((m) => m.startsWith("rooms.md")), [], messages.join("\n"));
+  // Only r2's construction, which no block defines, is an error of the rooms file.
+  assert.deepStrictEqual(messages.filter((m) => m.startsWith("rooms.md")), [
+    'rooms.md:18:31: error: Unknown construction "EW-7" in surface roof\n  hint: did you mean "EW-1"? Constructions defined: EW-1, EW-9',
+  ], messages.join("\n"));
 });
 
 Deno.test("an unclosed room fence is reported, never read to the end of the file in silence", () => {

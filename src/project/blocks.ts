@@ -5,8 +5,9 @@ import { describeCodePoints } from "./quantity.ts";
 import type { SourceText } from "./sourceText.ts";
 import { parseYamlAt, type YamlValue } from "./yamlTree.ts";
 
-export type InputBlockKind = "material" | "construction" | "scenario";
-const INPUT_KINDS: readonly string[] = ["material", "construction", "scenario"];
+export type InputBlockKind = "material" | "construction" | "scenario" | "room";
+/** The fence info words that open an input block. */
+export const INPUT_KINDS: readonly InputBlockKind[] = ["material", "construction", "scenario", "room"];
 
 /** One piece of a file in reading order, with input blocks already parsed to YAML trees. */
 export type FilePiece =
@@ -79,7 +80,7 @@ export function splitFile(source: SourceText, isProjectFile: boolean, out: Diagn
       pieces.push(piece);
       continue;
     }
-    if (!INPUT_KINDS.includes(piece.info)) {
+    if (!(INPUT_KINDS as readonly string[]).includes(piece.info)) {
       const near = nearBlockKind(piece.infoString, INPUT_KINDS);
       if (near !== undefined) {
         out.push(

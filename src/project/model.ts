@@ -258,7 +258,7 @@ export type Segment =
   | { readonly kind: "prose"; readonly markdown: string; readonly at: Position }
   | {
     readonly kind: "block";
-    readonly blockKind: "material" | "construction" | "scenario";
+    readonly blockKind: "material" | "construction" | "scenario" | "room";
     /** id read from the block, when it has one */
     readonly id?: string;
     /** the exact fence text, for display */

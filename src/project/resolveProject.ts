@@ -1,7 +1,7 @@
 import { canonicalLibraryEntry, findLibraryMaterial, libraryIds } from "../materials/library.ts";
 import { isResistiveLibraryMaterial, type LibraryMaterial } from "../materials/libraryMaterial.ts";
 import { defaultSurfaceResistances } from "../materials/surfaceResistance.ts";
-import { type SplitFile, splitFile } from "./blocks.ts";
+import { INPUT_KINDS, type SplitFile, splitFile } from "./blocks.ts";
 import { brokenIds } from "./brokenBlocks.ts";
 import { type ConstructionDraft, type MaterialLookup, readConstructionBlock } from "./constructionBlock.ts";
 import { type Diagnostic, error, errorCount } from "./diagnostic.ts";
@@ -20,6 +20,7 @@ import type {
   Segment,
 } from "./model.ts";
 import { formatPosition, type Position } from "./position.ts";
+import { readRooms, roomReferences } from "./roomBlock.ts";
 import { readScenarioBlock } from "./scenarioBlock.ts";
 import type { SourceText } from "./sourceText.ts";
 import { parseYamlAt } from "./yamlTree.ts";
@@ -113,12 +114,13 @@ export function resolveProject(
   // A scenario naming a construction that has errors (reported at the construction) adds no error of its own.
   const constructionIds = constructions.map((c) => c.id);
   const brokenConstructions = brokenIds(files, "construction", new Set(constructionIds));
+  const allConstructionIds = [...constructionIds, ...brokenConstructions];
   const heatingScenarios: HeatingScenario[] = [];
-  const scenarios = readScenarios(
+  const scenarios = readScenarios(files, allConstructionIds, out, heatingScenarios);
+  const rooms = readRooms(
     files,
-    [...constructionIds, ...brokenConstructions],
+    roomReferences(files, allConstructionIds, [...scenarios, ...heatingScenarios]),
     out,
-    heatingScenarios,
   );
   for (const entry of [...libraryUsed.values()].sort((a, b) => a.id < b.id ? -1 : 1)) {
     assumptions.push({
@@ -145,6 +147,7 @@ export function resolveProject(
     scenarios,
     assumptions,
     ...(heatingScenarios.length === 0 ? {} : { heatingScenarios }),
+    ...(rooms.length === 0 ? {} : { rooms }),
   };
   return { model, diagnostics: out, libraryUsed: libraryList };
 }
@@ -152,7 +155,7 @@ export function resolveProject(
 /** Input fences that would otherwise be misread in silence: never closed, or nested in a list, quote or indented code. */
 function fenceProblems(source: SourceText): Diagnostic[] {
   const split = splitFrontMatter(source.text);
-  return findFenceProblems(split.body, split.bodyLine, ["material", "construction", "scenario"]).map((p) =>
+  return findFenceProblems(split.body, split.bodyLine, INPUT_KINDS).map((p) =>
     p.kind === "unterminated"
       ? error(
         { file: source.path, line: p.line, col: p.col },

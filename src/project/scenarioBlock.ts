@@ -206,7 +206,8 @@ function readSeries(
   return values.every((v) => v !== undefined) ? values as number[] : undefined;
 }
 
-function readTemperatureProfile(
+/** Reads a required temperature under `key`: one value with its unit, or a list of 24 hourly values (hour 0 first). */
+export function readTemperatureProfile(
   fields: Fields,
   key: string,
   out: Diagnostic[],

@@ -79,6 +79,19 @@ function constructionOutput(block: BlockSegment, ctx: RenderContext): Trusted {
   );
 }
 
+/** A room as read and checked; its loads are not computed by this version, and the output says so. */
+function roomOutput(block: BlockSegment, ctx: RenderContext): Trusted {
+  const room = ctx.input.model.rooms?.find((r) => r.id === block.id);
+  if (room === undefined) return unresolved(block);
+  const count = (n: number, one: string) => `${n} ${one}${n === 1 ? "" : "s"}`;
+  return html`
+    <p>Room ${room.id} (${room.name}) read and checked: ${count(room.surfaces.length, "surface")}, ${count(
+      room.windows.length,
+      "window",
+    )}, ${count(room.gains.length, "gain")}. This version computes no room loads.</p>
+  `;
+}
+
 function outputFor(block: BlockSegment, ctx: RenderContext): Trusted {
   if (block.id === undefined) return unresolved(block);
   switch (block.blockKind) {
@@ -88,6 +101,8 @@ function outputFor(block: BlockSegment, ctx: RenderContext): Trusted {
       return constructionOutput(block, ctx);
     case "scenario":
       return scenarioOutput(block, ctx);
+    case "room":
+      return roomOutput(block, ctx);
   }
 }
 

@@ -1,12 +1,12 @@
 /**
- * Reads the examples out of README.md: the fenced input blocks (`material`, `construction`, `scenario`), the
+ * Reads the examples out of README.md: the fenced input blocks (`material`, `construction`, `scenario`, `room`), the
  * example front matter of project.md, and the `fluxnote <command>` lines of the usage block. Used by the tests
  * that build the README's examples and check its command lines against the command line itself.
  */
 
 /** One fenced input block of the README, with the README line its fence opens on (1-based). */
 export interface ReadmeBlock {
-  readonly kind: "material" | "construction" | "scenario";
+  readonly kind: "material" | "construction" | "scenario" | "room";
   readonly text: string;
   readonly line: number;
 }
@@ -17,7 +17,7 @@ export interface ReadmeExamples {
   readonly blocks: readonly ReadmeBlock[];
 }
 
-const INPUT_KINDS = ["material", "construction", "scenario"] as const;
+const INPUT_KINDS = ["material", "construction", "scenario", "room"] as const;
 
 interface Fence {
   readonly info: string;

@@ -64,7 +64,7 @@ Deno.test("README example blocks build together as a project with no errors", as
     const kinds = new Set(blocks.map((b) => b.kind));
     assert.deepEqual(
       [...kinds].sort(),
-      ["construction", "material", "scenario"],
+      ["construction", "material", "room", "scenario"],
       "the README shows every kind",
     );
     const check = collect();
@@ -77,7 +77,16 @@ Deno.test("README example blocks build together as a project with no errors", as
     // Every block was read and used, not skipped: each construction and scenario id shows in the results,
     // and each material's name in the layer table of a construction that uses it.
     const results = await Deno.readTextFile(join(out, "results.json"));
-    for (const b of blocks) {
+    // Rooms are read and checked but not computed yet: each room id shows as its block's label in the package.
+    const page = await Deno.readTextFile(join(out, "package.html"));
+    for (const b of blocks.filter((b) => b.kind === "room")) {
+      const id = /^id: *(.+?) *(#.*)?$/m.exec(b.text)?.[1];
+      assert.ok(
+        id !== undefined && page.includes(`Room ${id} (`),
+        `README.md:${b.line}: room "${id}" is missing from the package`,
+      );
+    }
+    for (const b of blocks.filter((b) => b.kind !== "room")) {
       const key = b.kind === "material" ? "name" : "id";
       const value = new RegExp(`^${key}: *(.+?) *(#.*)?$`, "m").exec(b.text)?.[1];
       assert.ok(value !== undefined, `README.md:${b.line}: the ${b.kind} example has no ${key}`);

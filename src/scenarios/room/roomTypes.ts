@@ -20,8 +20,10 @@ export interface RoomCoolingLoadResults {
   /** Sensible cooling load by the radiant time series method, W per hour (24 values). */
   readonly rtsMethod: readonly number[];
   readonly rtsMethodPeak: LoadPeak;
-  /** Extension: heat balance at the full hours minus the radiant time series method, W (24 values). */
+  /** Extension: radiant time series method minus heat balance at the full hours, W (24 values). */
   readonly difference: readonly number[];
+  /** Extension: (RTS-method peak − heat balance peak) / heat balance peak. */
+  readonly peakDifference: number;
   /** Extension: the heat balance load split by source (superposition), W per step; sums to `heatBalance`. */
   readonly bySource: Readonly<Record<string, readonly number[]>>;
   /** Extension: latent gains, W per step, reported apart from the sensible load. */
@@ -46,6 +48,37 @@ export interface GroundFloorResults {
   readonly characteristicDimension: number;
   /** d_t, m */
   readonly equivalentThickness: number;
+  /** Extension: which formula applied ("thin": d_t < B′, "thick": d_t ≥ B′). */
+  readonly branch: "thin" | "thick";
+  /** Extension: every input used, SI, and whether it was defaulted (A m², P m, R_f m²K/W, λ_g W/(m K), w m, R_si, R_se). */
+  readonly inputs: Readonly<
+    Record<string, { readonly value: number; readonly defaulted: boolean; readonly source: string }>
+  >;
+  /** Extension: the ground temperature the floor's far side sees on the design day, °C. */
+  readonly designDayGroundTemperature: number;
+}
+
+/** Extension: one line of the design heat loss table, which a reviewer can add up by hand. */
+export interface HeatLossLineResults {
+  readonly group: "transmission" | "windows" | "ground" | "thermalBridges" | "ventilation";
+  readonly id: string;
+  /** e.g. "U·A·b", "ψ·L", "ρc·V̇" */
+  readonly formula: string;
+  readonly quantities: readonly { readonly symbol: string; readonly value: number; readonly unit: string }[];
+  /** W/K */
+  readonly H: number;
+  /** K */
+  readonly deltaT: number;
+  /** W */
+  readonly phi: number;
+}
+
+export interface RoomWindowResults {
+  readonly in: string;
+  /** m² */
+  readonly area: number;
+  /** Solar transmitted into the room, W per step. */
+  readonly transmittedSolar: readonly number[];
 }
 
 export interface RoomHeatingResults {
@@ -56,6 +89,12 @@ export interface RoomHeatingResults {
   readonly thermalBridges: number;
   readonly ventilation: number;
   readonly total: number;
+  /** Extension: the heating scenario, its indoor and outdoor design temperatures, °C. */
+  readonly scenario: string;
+  readonly indoor: number;
+  readonly outdoor: number;
+  /** Extension: the table's lines in order; they add up to `total`. */
+  readonly lines: readonly HeatLossLineResults[];
 }
 
 export interface RoomResults {
@@ -65,6 +104,9 @@ export interface RoomResults {
   /** Room air set point, °C per step. */
   readonly airTemperature: readonly number[];
   readonly coolingLoad: RoomCoolingLoadResults;
+  /** Extension: outdoor air temperature, °C per step (windows, ventilation, thermal bridges). */
+  readonly outdoor: readonly number[];
+  readonly windows: Readonly<Record<string, RoomWindowResults>>;
   readonly surfaces: Readonly<Record<string, RoomSurfaceResults>>;
   /** Extension: area-weighted mean of the inside surface temperatures, °C per step. */
   readonly meanRadiantTemperature: readonly number[];

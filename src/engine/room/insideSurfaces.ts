@@ -40,12 +40,22 @@ export interface InsideSurface {
   readonly Z: Spectrum;
 }
 
+/** The modal form of X, Y, Z of a construction (air to air: both given surface resistances included). */
+export interface ConstructionModes {
+  readonly kind: "modes";
+  readonly X: PulseModes;
+  readonly Y: PulseModes;
+  readonly Z: PulseModes;
+  /** W/(m² K) */
+  readonly uValue: number;
+}
+
 /** The modal form of X, Y, Z of a construction's chain with the given surface resistances. */
 export function constructionModes(
   construction: ConstructionInput,
   timestepS: number,
   id: string,
-): { X: PulseModes; Y: PulseModes; Z: PulseModes; uValue: number } | RoomFailure {
+): ConstructionModes | RoomFailure {
   if (!isValidTimestep(timestepS)) {
     return roomFailure(
       `Cannot compute the room at time step ${timestepS} s: expected whole seconds dividing 3600 s`,
@@ -59,6 +69,7 @@ export function constructionModes(
   }
   const { ramp } = polesAndRamp(chain, timestepS);
   return {
+    kind: "modes",
     X: pulseModes(ramp, "X", timestepS),
     Y: pulseModes(ramp, "Y", timestepS),
     Z: pulseModes(ramp, "Z", timestepS),

@@ -1,3 +1,4 @@
+import { type EngineCheck, engineCheck } from "../check.ts";
 import { FourierDay } from "./dft.ts";
 import { type InsideSurface, insideSurfaces, type RoomFailure } from "./insideSurfaces.ts";
 import {
@@ -67,6 +68,8 @@ export interface HeatBalanceResult {
   readonly radiationWPerM2K: number;
   /** Harmonics solved (= steps per day): the periodic state is solved directly, no day is repeated. */
   readonly harmonics: number;
+  /** The checks of every build: energy balance, split sum, adiabatic far faces (each against 1e-9). */
+  readonly checks: readonly EngineCheck[];
   readonly notes: readonly RoomNote[];
 }
 
@@ -236,6 +239,27 @@ export function roomHeatBalance(room: RoomInput): HeatBalanceResult | RoomFailur
     adiabaticResidual,
     radiationWPerM2K: radiation,
     harmonics: n,
+    checks: [
+      engineCheck(
+        "room-energy-balance",
+        "Conduction + absorbed radiant − convection − long-wave of every inside face, and the room's sum with gains, " +
+          "ventilation and bridges against the load, at every step: worst |residual| / largest flow",
+        balanceResidual,
+        1e-9,
+      ),
+      engineCheck(
+        "room-load-split",
+        "Load of each source run alone, summed, against the load: max |difference| / peak load",
+        splitResidual,
+        1e-9,
+      ),
+      engineCheck(
+        "room-adiabatic-far-face",
+        "Flux through the far face of the same-as-room surfaces: max |flux| / peak load",
+        adiabaticResidual,
+        1e-9,
+      ),
+    ],
     notes: heatBalanceNotes(room, radiation),
   };
 }

@@ -1,3 +1,4 @@
+import { type EngineCheck, engineCheck } from "../check.ts";
 import { steadyPeriodicFlux } from "../surfaceFlux.ts";
 import { circularConvolution, FourierDay } from "./dft.ts";
 import type { LoadSource } from "./heatBalance.ts";
@@ -15,6 +16,8 @@ export interface RadiantTimeSeries {
   /** Σ of the hourly loads of the 1 W pulse before normalising: the share not conducted out of the room. */
   readonly nonsolarRetained: number;
   readonly solarRetained: number;
+  /** Both series sum to 1 and are non-negative. */
+  readonly checks: readonly EngineCheck[];
 }
 
 /**
@@ -50,8 +53,24 @@ export function roomRadiantTimeSeries(room: RoomInput): RadiantTimeSeries | Room
     solar: solar.fractions,
     nonsolarRetained: nonsolar.sum,
     solarRetained: solar.sum,
+    checks: [
+      engineCheck(
+        "room-rts-sum",
+        "|Σ r_j − 1| of the non-solar and solar series, the larger",
+        Math.max(Math.abs(sumOf(nonsolar.fractions) - 1), Math.abs(sumOf(solar.fractions) - 1)),
+        1e-12,
+      ),
+      engineCheck(
+        "room-rts-non-negative",
+        "Most negative r_j of both series (0 if none)",
+        Math.max(0, -Math.min(...nonsolar.fractions, ...solar.fractions)),
+        1e-12,
+      ),
+    ],
   };
 }
+
+const sumOf = (xs: readonly number[]) => xs.reduce((a, b) => a + b, 0);
 
 /** Hourly sensible cooling load by the radiant time series method with the room's own series. */
 export interface RtsMethodResult {

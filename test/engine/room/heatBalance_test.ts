@@ -99,6 +99,11 @@ for (const timestepS of [3600, 600]) {
     // largest flow (issue 13's check; energy conservation, no other source needed).
     assert.ok(r.balanceResidual < 1e-9, `residual ${r.balanceResidual}`);
     assert.ok(r.adiabaticResidual < 1e-9, `adiabatic far face ${r.adiabaticResidual}`);
+    assert.deepEqual(r.checks.map((c) => [c.id, c.pass]), [
+      ["room-energy-balance", true],
+      ["room-load-split", true],
+      ["room-adiabatic-far-face", true],
+    ]);
     const peak = Math.max(...r.loadW);
     for (const w of r.balanceResidualW) assert.ok(Math.abs(w) < 1e-9 * peak);
   });

@@ -28,6 +28,7 @@ Deno.test("room radiant time series sum to 1 and are non-negative", () => {
       assert.ok(Math.abs(sum(r) - 1) < 1e-12);
       for (const v of r) assert.ok(v >= 0, `r_j = ${v}`);
     }
+    assert.ok(s.checks.every((c) => c.pass));
     // Part of the pulse leaves through the envelope: 0 < retained < 1 (energy conservation).
     assert.ok(s.nonsolarRetained > 0.5 && s.nonsolarRetained < 1);
     assert.ok(s.solarRetained > 0.5 && s.solarRetained < 1);

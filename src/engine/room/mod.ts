@@ -15,7 +15,8 @@ export type {
 export { DEFAULT_CONVECTION, DEFAULT_RADIANT_SPLIT } from "./roomInput.ts";
 export type { RoomFailure } from "./insideSurfaces.ts";
 export type { RoomNote } from "./roomNotes.ts";
-export { type FaceResult, type HeatBalanceResult, type LoadSource, roomHeatBalance } from "./heatBalance.ts";
+export { type FaceResult, type HeatBalanceResult, roomHeatBalance } from "./heatBalance.ts";
+export type { LoadSource } from "./loadSources.ts";
 export {
   type RadiantTimeSeries,
   roomRadiantTimeSeries,

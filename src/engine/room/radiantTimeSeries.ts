@@ -1,7 +1,7 @@
 import { type EngineCheck, engineCheck } from "../check.ts";
 import { steadyPeriodicFlux } from "../surfaceFlux.ts";
 import { circularConvolution, FourierDay } from "./dft.ts";
-import type { LoadSource } from "./heatBalance.ts";
+import type { LoadSource } from "./loadSources.ts";
 import { constructionModes, insideSurfaces, type RoomFailure } from "./insideSurfaces.ts";
 import { solveBalance } from "./periodicBalance.ts";
 import { checkRoomSeries, radiationCoefficient, shareByArea, solarShare, spread } from "./radiantGains.ts";

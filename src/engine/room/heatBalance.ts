@@ -23,6 +23,10 @@ export interface FaceResult {
   readonly conductionW: readonly number[];
   /** Convection from the surface into the room air, W. */
   readonly convectionW: readonly number[];
+  /** Net long-wave radiation from the surface to the other inside surfaces, W. */
+  readonly radiationW: readonly number[];
+  /** Radiant gains (solar and internal) absorbed on the surface, W. */
+  readonly absorbedW: readonly number[];
 }
 
 /** Steady-periodic sensible cooling load by the heat balance method. */
@@ -130,6 +134,8 @@ export function roomHeatBalance(room: RoomInput): HeatBalanceResult | RoomFailur
       insideSurfaceTemperatureC: solution.surfaceC[i]!,
       conductionW: flows[i]!.conductionW,
       convectionW: flows[i]!.convectionW,
+      radiationW: flows[i]!.radiationW,
+      absorbedW: flows[i]!.absorbedW,
     })),
     meanRadiantTemperatureC: meanRadiantTemperature(faces, solution.surfaceC),
     split,

@@ -1,3 +1,4 @@
+import { isValidTimestep } from "../analyse.ts";
 import type { InsideSurface } from "./insideSurfaces.ts";
 import { type RoomFailure, roomFailure } from "./insideSurfaces.ts";
 import { type RoomInput, STEFAN_BOLTZMANN } from "./roomInput.ts";
@@ -37,6 +38,11 @@ export function sumSeries(n: number, series: readonly (readonly number[])[]): nu
 
 /** Checks every per-step series of the room has one value per step of the day, finite. */
 export function checkRoomSeries(room: RoomInput): RoomFailure | null {
+  if (!isValidTimestep(room.timestepS)) {
+    return roomFailure(
+      `Give the room a time step of whole seconds dividing 3600 s (at least 60 s), found time step ${room.timestepS} s`,
+    );
+  }
   const n = 86400 / room.timestepS;
   const series: [string, readonly number[], string?][] = [
     ["air temperature", room.airTemperatureC],

@@ -131,7 +131,7 @@ Deno.test("room heat balance of a single massless surface equals the closed-form
   const gain = Array.from({ length: n }, (_, k) => (k >= 9 && k < 17 ? 300 : 0));
   const area = 12;
   const resistance = 0.04 + 0.5;
-  const hc = 2.5;
+  const hc = 3.1; // given for the surface, replacing the wall default 2.5
   const r = balance({
     timestepS: 3600,
     airTemperatureC: new Array<number>(n).fill(22),
@@ -146,6 +146,7 @@ Deno.test("room heat balance of a single massless surface equals the closed-form
       areaM2: area,
       orientation: "wall",
       farSide: { kind: "temperature", temperatureC: far },
+      convectionWPerM2K: hc,
     }],
     windows: [],
     gains: [{ name: "equipment", sensibleW: gain, radiantFraction: 0.4 }],
@@ -178,11 +179,30 @@ Deno.test("room heat balance of a room with only same-as-room surfaces turns the
   assert.ok(r.peak.loadW < 850 && Math.min(...r.loadW) > 0);
 });
 
-Deno.test("room heat balance refuses a series of the wrong length with the series named", () => {
+Deno.test("room heat balance refuses bad input with the series, window or step named", () => {
   const room = ordinaryRoom(HEAVY, { timestepS: 3600, steady: true });
-  const r = roomHeatBalance({ ...room, outdoorAirC: room.outdoorAirC.slice(0, 23) });
-  assert.equal(r.kind, "room-failure");
-  assert.match(r.kind === "room-failure" ? r.message : "", /outdoor air temperature as 24 finite values/);
+  const message = (input: RoomInput) => {
+    const r = roomHeatBalance(input);
+    assert.equal(r.kind, "room-failure");
+    return r.kind === "room-failure" ? r.message : "";
+  };
+  assert.match(
+    message({ ...room, outdoorAirC: room.outdoorAirC.slice(0, 23) }),
+    /outdoor air temperature as 24 finite values/,
+  );
+  // A window cannot conduct more than its inside film passes: U_w < 1/R_si (ISO 6946 series resistances).
+  assert.match(
+    message({ ...room, windows: room.windows.map((w) => ({ ...w, uValue: 9 })) }),
+    /Give window "window" a U-value between 0 and 7\.6\d W\/\(m² K\)/,
+  );
+  assert.match(message({ ...room, timestepS: 7 * 60 }), /time step 420 s/);
+  assert.match(
+    message({
+      ...room,
+      gains: [{ name: "lamp", sensibleW: room.gains[0]!.sensibleW, radiantFraction: 1.5 }],
+    }),
+    /Give gain "lamp" a radiant fraction from 0 to 1, found 1\.5/,
+  );
 });
 
 Deno.test("room heat balance of one massive same-as-room slab under a swinging air temperature matches its admittance", () => {

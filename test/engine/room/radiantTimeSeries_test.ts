@@ -146,3 +146,12 @@ for (const [name, set] of [["heavy", HEAVY], ["light", LIGHT]] as const) {
     });
   }
 }
+
+Deno.test("room radiant time series of a room without a floor puts the sun where the other radiant gains go", () => {
+  // Stated distribution: without a floor, transmitted solar is spread over all inside surfaces by area, as the
+  // non-solar gains are, so both series are the same pulse response (same inputs, same linear system).
+  const room = ordinaryRoom(HEAVY, { timestepS: 3600, steady: false });
+  const s = series({ ...room, surfaces: room.surfaces.filter((x) => x.orientation !== "floor") });
+  s.solar.forEach((v, j) => assert.ok(Math.abs(v - s.nonsolar[j]!) < 1e-14, `r_${j}`));
+  assert.ok(Math.abs(s.solarRetained - s.nonsolarRetained) < 1e-14);
+});

@@ -100,7 +100,10 @@ export function rtsNotes(split: RadiantSplit): RoomNote[] {
           ? " (ASHRAE Handbook—Fundamentals, RTS radiant/convective split table, from memory)"
           : " (given)") +
         "; radiant conduction and gains through the non-solar series, transmitted solar through the solar series; " +
-        "ventilation, thermal bridges and convective gains instantaneous. Sub-hourly inputs are sampled at whole hours.",
+        "ventilation, thermal bridges and convective gains instantaneous; same-as-room surfaces conduct nothing (their " +
+        "storage is in the series). Sub-hourly inputs are sampled at whole hours. The method counts all radiant heat " +
+        "as load (each series sums to 1) while the room conducts part of it out (the retained share printed with the " +
+        "series), so it reads higher than the heat balance.",
     },
   ];
 }

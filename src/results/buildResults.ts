@@ -12,6 +12,7 @@ import type { Assumption, Construction, Model } from "../project/model.ts";
 import { formatPosition } from "../project/position.ts";
 import { computeDesignDay, type ScenarioContext } from "../scenarios/designDay.ts";
 import { computeHeating } from "../scenarios/heating.ts";
+import { computeRooms } from "./roomResults.ts";
 import { heatingCsv } from "../scenarios/heatingCsv.ts";
 import type { CsvTable } from "../tables/csvTable.ts";
 import { computeWeatherYear } from "../scenarios/weatherYear.ts";
@@ -109,6 +110,9 @@ export function computeProject(
       computeHeating(s, new Map(model.constructions.map((c) => [c.id, c])), steady, correctedU),
     ] as const
   );
+  const rooms = computeRooms(model, steady, correctedU);
+  if (rooms.problems.length > 0) return { ok: false, diagnostics: rooms.problems };
+  checks.push(...rooms.checks);
   const variation = model.info.sensitivityVariation;
   if (variation !== undefined) progress("sensitivity study");
   const sensitivity = variation === undefined
@@ -127,17 +131,19 @@ export function computeProject(
       ...designAssumptions,
       ...scenarioParts.assumptions,
       ...heating.flatMap(([, h]) => h.assumptions),
+      ...rooms.assumptions,
     ].map((a) => ({
       id: a.id,
       text: a.text,
       source: a.source,
       at: a.at,
     })),
-    warnings: [...designWarnings, ...scenarioParts.warnings],
+    warnings: [...designWarnings, ...scenarioParts.warnings, ...rooms.warnings],
     ...(sensitivity === undefined ? {} : { sensitivity }),
     ...(heating.length === 0
       ? {}
       : { heating: Object.fromEntries(heating.map(([id, h]) => [id, h.results])) }),
+    ...(rooms.results === undefined ? {} : { rooms: rooms.results }),
   };
   const csvFiles = [...scenarioParts.csvFiles, ...heating.map(([id, h]) => heatingCsv(id, h.results))];
   return { ok: true, computed: { results, steady, analyses, csvFiles } };

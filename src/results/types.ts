@@ -17,6 +17,8 @@ export type {
 import type { SensitivityResults } from "../sensitivity/study.ts";
 import type { SummaryJson } from "./summaryTypes.ts";
 import type { HeatingResults } from "../scenarios/heatingTypes.ts";
+import type { RoomResults } from "../scenarios/room/roomTypes.ts";
+export type { RoomResults };
 /** The machine-readable results (results.json), contract `fluxnote-results/1` (DESIGN.md §4). */
 
 export interface InputFileRecord {
@@ -90,6 +92,8 @@ export interface ResultsJson {
   readonly sensitivity?: SensitivityResults;
   /** Extension: `kind: heating` scenarios (steady design heat loss, ISO 13788 surface checks), by id. */
   readonly heating?: Readonly<Record<string, HeatingResults>>;
+  /** `room` blocks (heat balance cooling load, radiant time series, ground floors, design heat loss), by id. */
+  readonly rooms?: Readonly<Record<string, RoomResults>>;
   /** Extension: every verdict on one page and the open items (see `summaryTypes.ts`). */
   readonly summary?: SummaryJson;
 }

@@ -12,7 +12,7 @@ const DEMO = new URL("../../projects/demo/", import.meta.url).pathname;
 
 /** A room on the demo's own constructions and scenarios, with each boundary kind, a window and the extensions. */
 const ROOM_BLOCK = `\`\`\`room
-id: reading-room
+id: study-room
 name: Reading room, first floor
 design-day: july-design-day
 heating: winter-design
@@ -58,10 +58,10 @@ Deno.test("check and build accept the demo with a room block, and the package sh
     // The block's text, escaped as the package escapes all user text (only `"` occurs here).
     const escaped = ROOM_BLOCK.replaceAll("&", "&amp;").replaceAll('"', "&quot;").replaceAll("<", "&lt;");
     assert.ok(page.includes(escaped), "the room block's text is missing from package.html");
-    assert.match(page, /room block &quot;reading-room&quot;, 50-winter\.md:\d+:1/);
+    assert.match(page, /room block &quot;study-room&quot;, 50-winter\.md:\d+:1/);
     assert.match(
       page,
-      /Room reading-room \(Reading room, first floor\) read and checked: 5 surfaces, 1 window, 1 gain/,
+      /Room study-room \(Reading room, first floor\) read and checked: 5 surfaces, 1 window, 1 gain/,
     );
   } finally {
     await Deno.remove(dir, { recursive: true });

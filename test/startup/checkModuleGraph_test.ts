@@ -39,6 +39,12 @@ Deno.test("check does not load mathjs: units are read by our own table-driven re
   assert.deepStrictEqual([...packages].filter((p) => p.startsWith("mathjs") || p.includes("mathjs")), []);
 });
 
+Deno.test("check does not load node:crypto: a project's small inputs are hashed by our own SHA-256", () => {
+  // node:crypto's polyfill took tens of ms to load; src/archive/hash.ts loads it only for data over 256 KiB.
+  const { packages } = reachable("src/commands/check.ts");
+  assert.ok(!packages.has("node:crypto"), [...packages].join(", "));
+});
+
 Deno.test("the module walk sees value imports and skips type-only ones", () => {
   // Guards the walk itself: quantity.ts on main imported mathjs's bundle by value and its types by `import type`.
   const sample = 'import type { unit } from "mathjs";\nimport bundle from "mathjs/lib/browser/math.js";\n' +

@@ -19,8 +19,18 @@ export type UnitExpression =
 const EXACT = new Map<string, UnitEntry>();
 for (const entry of UNITS) if (!EXACT.has(entry.name)) EXACT.set(entry.name, entry);
 
+type Found = { readonly entry: UnitEntry; readonly prefixFactor: number } | undefined;
+const FOUND = new Map<string, Found>();
+
 /** The unit a name stands for: the name itself, else the first unit it ends with after a prefix it takes. */
-export function findUnit(name: string): { entry: UnitEntry; prefixFactor: number } | undefined {
+export function findUnit(name: string): Found {
+  if (FOUND.has(name)) return FOUND.get(name);
+  const found = lookUp(name);
+  if (FOUND.size < 1000) FOUND.set(name, found);
+  return found;
+}
+
+function lookUp(name: string): Found {
   const exact = EXACT.get(name);
   if (exact !== undefined) return { entry: exact, prefixFactor: 1 };
   for (const entry of UNITS) {

@@ -1,39 +1,52 @@
 /**
- * Start-up time of the command line, before and after per-command loading, side by side: each command is
- * run as a fresh `deno run` process (warm module cache; one unmeasured run first) and the median and the
- * fastest of the runs are printed. "before" is bench/startup_eager.ts (every command module loaded first,
- * as src/cli.ts did), "after" is src/cli.ts. Not a test: figures depend on the machine and its load.
+ * Start-up time of the command line, side by side for three ways of starting: each command is run as a fresh
+ * `deno run` process (warm module cache; one unmeasured run first) and the median and the fastest of the runs
+ * are printed. "eager" is bench/startup_eager.ts (every command module loaded first, as src/cli.ts did before
+ * per-command loading), "mathjs" is bench/startup_mathjs.ts (mathjs's single-file build loaded first, as the
+ * unit reader did before our own; `check` only), "now" is src/cli.ts. Then where `check` of the template spends its time
+ * (bench/check_phases.ts, medians in ms): loading modules, reading, computing, reviewing. Not a test: figures
+ * depend on the machine and its load.
  *
  *   npx -y deno@2.9.6 run --allow-read --allow-run bench/startup.ts [runs]
  */
 import { fileURLToPath as fromFileUrl } from "node:url";
 
 const RUNS = Number(Deno.args[0] ?? "15");
-const ENTRIES = {
-  before: fromFileUrl(new URL("./startup_eager.ts", import.meta.url)),
-  after: fromFileUrl(new URL("../src/cli.ts", import.meta.url)),
-  empty: fromFileUrl(new URL("./startup_empty.ts", import.meta.url)),
-};
-const CONFIG = fromFileUrl(new URL("../deno.json", import.meta.url));
-const TEMPLATE = fromFileUrl(new URL("../templates/new-project/", import.meta.url));
+const here = (path: string): string => fromFileUrl(new URL(path, import.meta.url));
+const COLUMNS = [
+  { label: "eager", entry: here("./startup_eager.ts"), checkOnly: false },
+  { label: "mathjs", entry: here("./startup_mathjs.ts"), checkOnly: true },
+  { label: "now", entry: here("../src/cli.ts"), checkOnly: false },
+];
+const EMPTY = here("./startup_empty.ts");
+const PHASES = here("./check_phases.ts");
+const CONFIG = here("../deno.json");
+const TEMPLATE = here("../templates/new-project/");
 const CASES: { readonly label: string; readonly args: readonly string[] }[] = [
   { label: "fluxnote --version", args: ["--version"] },
   { label: "fluxnote --help", args: ["--help"] },
   { label: "fluxnote check <template>", args: ["check", TEMPLATE] },
 ];
 
-/** Wall-clock seconds of one run (the process's whole life, start-up included). */
-async function timeOnce(entry: string, args: readonly string[]): Promise<number> {
+/** Runs one fresh process; returns its wall-clock seconds (start-up included) and its standard output. */
+async function runOnce(entry: string, args: readonly string[]): Promise<{ seconds: number; stdout: string }> {
   const command = new Deno.Command(Deno.execPath(), {
     args: ["run", "--quiet", "--no-prompt", "--config", CONFIG, "--allow-read", entry, ...args],
-    stdout: "null",
+    stdout: "piped",
     stderr: "null",
   });
   const start = performance.now();
-  const { code } = await command.output();
+  const { code, stdout } = await command.output();
   const seconds = (performance.now() - start) / 1000;
   if (code !== 0) throw new Error(`${entry} ${args.join(" ")} exited ${code}`);
-  return seconds;
+  return { seconds, stdout: new TextDecoder().decode(stdout) };
+}
+
+async function times(entry: string, args: readonly string[]): Promise<number[]> {
+  await runOnce(entry, args); // fills the module cache
+  const out: number[] = [];
+  for (let i = 0; i < RUNS; i++) out.push((await runOnce(entry, args)).seconds);
+  return out;
 }
 
 function median(values: readonly number[]): number {
@@ -42,30 +55,46 @@ function median(values: readonly number[]): number {
   return sorted.length % 2 === 1 ? sorted[mid]! : (sorted[mid - 1]! + sorted[mid]!) / 2;
 }
 
-const rows: string[][] = [["command", "before median", "before min", "after median", "after min"]];
+function print(rows: string[][]): void {
+  const widths = rows[0]!.map((_, i) => Math.max(...rows.map((r) => r[i]!.length)));
+  for (const r of rows) {
+    console.log(
+      r.map((cell, i) => (i === 0 ? cell.padEnd(widths[i]!) : cell.padStart(widths[i]!))).join("  "),
+    );
+  }
+}
+
+const seconds = (values: readonly number[]): string[] => [
+  `${median(values).toFixed(3)} s`,
+  `${Math.min(...values).toFixed(3)} s`,
+];
+const rows: string[][] = [["command", ...COLUMNS.flatMap((c) => [`${c.label} median`, `${c.label} min`])]];
 for (const c of CASES) {
   const figures: string[] = [c.label];
-  for (const entry of [ENTRIES.before, ENTRIES.after]) {
-    await timeOnce(entry, c.args); // fills the module cache
-    const times: number[] = [];
-    for (let i = 0; i < RUNS; i++) times.push(await timeOnce(entry, c.args));
-    figures.push(`${median(times).toFixed(3)} s`, `${Math.min(...times).toFixed(3)} s`);
+  for (const column of COLUMNS) {
+    // mathjs was loaded by the unit reader: --version and --help never loaded it.
+    const applies = !column.checkOnly || c.args[0] === "check";
+    figures.push(...(applies ? seconds(await times(column.entry, c.args)) : ["", ""]));
   }
   rows.push(figures);
 }
 // The floor: Deno starting and running a module that does nothing.
-const floor: number[] = [];
-await timeOnce(ENTRIES.empty, []);
-for (let i = 0; i < RUNS; i++) floor.push(await timeOnce(ENTRIES.empty, []));
-rows.push([
-  "deno run <empty module>",
-  `${median(floor).toFixed(3)} s`,
-  `${Math.min(...floor).toFixed(3)} s`,
-  "",
-  "",
-]);
-const widths = rows[0]!.map((_, i) => Math.max(...rows.map((r) => r[i]!.length)));
+rows.push(["deno run <empty module>", ...seconds(await times(EMPTY, [])), "", "", "", ""]);
 console.log(`${RUNS} runs each, Deno ${Deno.version.deno}`);
-for (const r of rows) {
-  console.log(r.map((cell, i) => (i === 0 ? cell.padEnd(widths[i]!) : cell.padStart(widths[i]!))).join("  "));
+print(rows);
+
+// Where check of the template spends its time, in one process: medians in ms.
+const phaseRows: string[][] = [["check <template>, ms", "import", "load", "compute", "review"]];
+for (const [label, extra] of [["mathjs", ["--with-mathjs"]], ["now", []]] as const) {
+  await runOnce(PHASES, [TEMPLATE, ...extra]);
+  const samples: Record<string, number>[] = [];
+  for (let i = 0; i < RUNS; i++) {
+    samples.push(JSON.parse((await runOnce(PHASES, [TEMPLATE, ...extra])).stdout));
+  }
+  phaseRows.push([
+    label,
+    ...["import", "load", "compute", "review"].map((k) => median(samples.map((s) => s[k]!)).toFixed(0)),
+  ]);
 }
+console.log("");
+print(phaseRows);

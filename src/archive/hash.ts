@@ -1,8 +1,23 @@
-import { createHash } from "node:crypto";
+import process from "node:process";
+import { sha256HexSmall } from "./sha256.ts";
+
+/** Up to this size data is hashed here; above it node:crypto is loaded, the first time it is needed. */
+const SMALL = 256 * 1024;
+
+interface NodeCrypto {
+  createHash(algorithm: "sha256"): { update(data: Uint8Array | string): { digest(encoding: "hex"): string } };
+}
+let nodeCrypto: NodeCrypto | undefined;
 
 /** SHA-256 of bytes or UTF-8 text, lowercase hex. */
 export function sha256Hex(data: Uint8Array | string): string {
-  return createHash("sha256").update(data).digest("hex");
+  if (data.length <= SMALL / 4 || (typeof data !== "string" && data.length <= SMALL)) {
+    return sha256HexSmall(typeof data === "string" ? new TextEncoder().encode(data) : data);
+  }
+  nodeCrypto ??= (process as unknown as { getBuiltinModule(id: string): NodeCrypto }).getBuiltinModule(
+    "node:crypto",
+  );
+  return nodeCrypto.createHash("sha256").update(data).digest("hex");
 }
 
 /** The whole-input hash: SHA-256 of the lines `<sha256>  <path>\n` of every input in build order. */

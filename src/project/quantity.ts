@@ -1,10 +1,5 @@
-// mathjs's own single-file build (same package and version as the lockfile pins): it loads in about a quarter
-// of the time of the module tree behind "mathjs", which `check` and `build` wait for at start-up (README,
-// "Start-up"). Only `unit` is used.
-import mathjsBundle from "mathjs/lib/browser/math.js";
-import type { unit as unitType } from "mathjs";
-
-const unit: typeof unitType = mathjsBundle.unit;
+import { parseUnitExpression, type UnitTerm } from "./unitExpression.ts";
+import { suggestUnit } from "./unitSuggest.ts";
 
 /** The physical kinds of quantity a project can write, each with its SI unit. */
 export const QUANTITY_KINDS = {
@@ -99,6 +94,12 @@ export function parseQuantity(text: string, kind: QuantityKind, natural?: Natura
       `write the unit, e.g. "${numberText} ${natural?.unit ?? exampleUnit(kind)}"`,
     );
   }
+  if (/^\d/.test(unitText)) {
+    return fail(
+      `Cannot read ${spec.label} "${trimmed}": a space is not accepted in numbers`,
+      `write the digits together, without thousands separators, e.g. "${spec.example}"`,
+    );
+  }
   if (!UNIT_CHARS.test(unitText)) {
     return fail(
       `Cannot read the unit "${
@@ -113,30 +114,87 @@ export function parseQuantity(text: string, kind: QuantityKind, natural?: Natura
       `write the difference in kelvin, e.g. "${numberText} K" (or degR for a Fahrenheit difference)`,
     );
   }
-  try {
-    const parsed = unit(`${numberText} ${unitText}`);
-    const reference = unit(spec.si);
-    if (!parsed.equalBase(reference)) {
-      return fail(
-        `Wrong kind of unit in "${trimmed}": expected ${spec.label} (e.g. "${spec.example}"), found a unit of another dimension`,
-        `write ${spec.label} such as "${spec.example}"`,
-      );
-    }
-    const value = parsed.toNumber(spec.si);
-    if (!Number.isFinite(value)) {
-      return fail(
-        `Cannot read ${spec.label} "${trimmed}": the value is not finite`,
-        `write e.g. "${spec.example}"`,
-      );
-    }
-    return { ok: true, value };
-  } catch (cause) {
-    const reason = cause instanceof Error ? cause.message.replace(/\.$/, "") : "not understood";
+  const parsed = parseUnitExpression(unitText);
+  if (!parsed.ok) {
+    const near = parsed.unknown === undefined ? undefined : suggestUnit(parsed.unknown);
     return fail(
-      `Cannot read the unit "${unitText}" of ${spec.label}: ${reason}`,
+      `Cannot read the unit "${unitText}" of ${spec.label}: ${parsed.reason}`,
+      near === undefined
+        ? `write e.g. "${spec.example}"`
+        : `did you mean "${near}"${
+          near.includes(" ") ? " (a space between two units)" : ""
+        }? write e.g. "${spec.example}"`,
+    );
+  }
+  const target = targetOf(kind);
+  if (!sameDimension(parsed.dimension, target.dimension)) {
+    return fail(
+      `Wrong kind of unit in "${trimmed}": expected ${spec.label} (e.g. "${spec.example}"), found a unit of another dimension`,
+      `write ${spec.label} such as "${spec.example}"`,
+    );
+  }
+  const single = isSingle(parsed.terms) ? parsed.terms[0] : undefined;
+  if (kind === "temperatureDifference" && single?.entry.offset !== undefined) {
+    return fail(
+      `Cannot read ${spec.label} "${trimmed}": ${single.entry.name} is a temperature, not a difference`,
+      `write the difference in kelvin, e.g. "${numberText} K" (or degR for a Fahrenheit difference)`,
+    );
+  }
+  if (kind === "temperature" && single === undefined) {
+    return fail(
+      `Cannot read ${spec.label} "${trimmed}": a temperature is written with one unit, not a compound unit`,
+      `write e.g. "${spec.example}" (degC, degF or K)`,
+    );
+  }
+  const value = toTarget(number, parsed.terms, target.terms);
+  if (!Number.isFinite(value)) {
+    return fail(
+      `Cannot read ${spec.label} "${trimmed}": the value is not finite`,
       `write e.g. "${spec.example}"`,
     );
   }
+  return { ok: true, value };
+}
+
+type Parsed = Extract<ReturnType<typeof parseUnitExpression>, { ok: true }>;
+const TARGETS = new Map<QuantityKind, Parsed>();
+
+/** The kind's SI unit, read once. */
+function targetOf(kind: QuantityKind): Parsed {
+  let target = TARGETS.get(kind);
+  if (target === undefined) {
+    const parsed = parseUnitExpression(QUANTITY_KINDS[kind].si);
+    if (!parsed.ok) throw new Error(`the SI unit of ${kind} does not read: ${parsed.reason}`);
+    target = parsed;
+    TARGETS.set(kind, target);
+  }
+  return target;
+}
+
+function sameDimension(a: readonly number[], b: readonly number[]): boolean {
+  return a.every((x, i) => Math.abs(x - (b[i] ?? 0)) <= 1e-12);
+}
+
+/** One unit to the first power (a temperature scale's zero applies only then). */
+function isSingle(terms: readonly UnitTerm[]): terms is readonly [UnitTerm] {
+  return terms.length === 1 && Math.abs(terms[0]!.power - 1) <= 1e-15;
+}
+
+/**
+ * Converts `number` written in `from` to the unit `to`, with mathjs's operations in mathjs's order (so the
+ * result is the same to the last bit): to SI term by term, shift between temperature scales, from SI term by
+ * term.
+ */
+function toTarget(number: number, from: readonly UnitTerm[], to: readonly UnitTerm[]): number {
+  let value = number;
+  for (const t of from) value = value * Math.pow(t.entry.factor * t.prefixFactor, t.power);
+  if (isSingle(from) && isSingle(to)) {
+    const [a, b] = from[0].entry.offset ?? [0, 1];
+    const [c, d] = to[0].entry.offset ?? [0, 1];
+    if (a / b !== c / d) value = value + (a * d - c * b) / (b * d);
+  }
+  for (const t of to) value = value / Math.pow(t.entry.factor * t.prefixFactor, t.power);
+  return value;
 }
 
 function exampleUnit(kind: QuantityKind): string {

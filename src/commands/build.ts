@@ -101,7 +101,7 @@ export async function runBuild(options: BuildOptions, io: CommandIo): Promise<nu
         options.pdf === true ? ", package.pdf" : ""
       }, results.json and csv/ (${loaded.model?.constructions.length ?? 0} constructions, ${
         Object.keys(results.scenarios).length + Object.keys(results.heating ?? {}).length
-      } scenarios)`,
+      } scenarios${roomCount(results.rooms)})`,
     );
     const output = join(outDir, "package.html");
     const status = { results, findings: produced.outputs.findings, computedWarnings, output };
@@ -127,4 +127,10 @@ async function withPdf(
   if (page === undefined || !("text" in page)) return "package.html was not produced, so no package.pdf";
   const pdf = await renderPdf(page.text, paper, chromiumPath);
   return pdf.ok ? [...files, { path: "package.pdf", bytes: pdf.bytes }] : pdf.reason;
+}
+
+/** ", 1 room" / ", 2 rooms" after the scenario count, nothing without rooms. */
+function roomCount(rooms: Readonly<Record<string, unknown>> | undefined): string {
+  const n = Object.keys(rooms ?? {}).length;
+  return n === 0 ? "" : `, ${n} room${n === 1 ? "" : "s"}`;
 }

@@ -69,14 +69,15 @@ Deno.test("demo package: the general caution prints once, for any jurisdiction, 
   assert.match(cautions, /Design days use the summer design outside film h_o = 17/);
 });
 
-Deno.test("demo package: the runtime is named once; the build line counts the heating scenario", async () => {
+Deno.test("demo package: the runtime is named once; the build line counts the heating scenario and the room", async () => {
   const { doc, stdout } = await built();
   const row = Array.from(doc.querySelectorAll("#s-10 tr")).find((r) =>
     r.querySelector("th")?.textContent === "Runtime"
   );
   assert.match(row?.querySelector("td")?.textContent ?? "", /^Deno \d+\.\d+\.\d+$/);
-  // projects/demo: EW-1…EW-4 and RF-1; july-design-day, weather-year-synthetic and the heating scenario winter-design.
-  assert.match(stdout.join("\n"), /\(5 constructions, 3 scenarios\)/);
+  // projects/demo: EW-1…EW-4, RF-1, GF-1, IW-1, IW-2; july-design-day, weather-year-synthetic and the heating
+  // scenario winter-design; the room reading-room.
+  assert.match(stdout.join("\n"), /\(8 constructions, 3 scenarios, 1 room\)/);
 });
 
 Deno.test("built-in library: every source is a material-data source, not a simulation test case", () => {

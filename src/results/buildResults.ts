@@ -13,6 +13,7 @@ import { formatPosition } from "../project/position.ts";
 import { computeDesignDay, type ScenarioContext } from "../scenarios/designDay.ts";
 import { computeHeating } from "../scenarios/heating.ts";
 import { computeRooms } from "./roomResults.ts";
+import { roomCsvTables } from "../scenarios/room/roomCsv.ts";
 import { heatingCsv } from "../scenarios/heatingCsv.ts";
 import type { CsvTable } from "../tables/csvTable.ts";
 import { computeWeatherYear } from "../scenarios/weatherYear.ts";
@@ -145,7 +146,11 @@ export function computeProject(
       : { heating: Object.fromEntries(heating.map(([id, h]) => [id, h.results])) }),
     ...(rooms.results === undefined ? {} : { rooms: rooms.results }),
   };
-  const csvFiles = [...scenarioParts.csvFiles, ...heating.map(([id, h]) => heatingCsv(id, h.results))];
+  const csvFiles = [
+    ...scenarioParts.csvFiles,
+    ...heating.map(([id, h]) => heatingCsv(id, h.results)),
+    ...roomCsvTables(rooms.results),
+  ];
   return { ok: true, computed: { results, steady, analyses, csvFiles } };
 }
 

@@ -46,6 +46,7 @@ export const CSV_UNITS = {
   W: "W",
   W_m2: "W/m²",
   W_m2K: "W/(m²·K)",
+  W_K: "W/K",
   m2K_W: "m²·K/W",
   kJ_m2K: "kJ/(m²·K)",
   kWh: "kWh",

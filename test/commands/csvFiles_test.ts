@@ -23,7 +23,18 @@ const quiet = { stdout: () => {}, stderr: () => {} };
  */
 const UNITS = ["degC", "K", "h", "m2", "W", "W_m2", "W_m2K", "m2K_W", "kJ_m2K", "kWh", "1"];
 /** Columns without a unit (README): ids, names, time stamps, dates, the term index. */
-const TEXT_COLUMNS = ["id", "name", "surface", "construction", "time", "date", "j"];
+const TEXT_COLUMNS = [
+  "id",
+  "name",
+  "surface",
+  "construction",
+  "time",
+  "date",
+  "j",
+  "group",
+  "item",
+  "formula",
+];
 /** summary.csv is a long table: `value` and `limit` are in the row's `unit` (README). */
 const SUMMARY_HEADER = ["table", "subject", "quantity", "value", "unit", "limit", "verdict", "text", "at"];
 

@@ -8,6 +8,7 @@ import { loadProject } from "../../../src/commands/loadProject.ts";
 import { computeProject } from "../../../src/results/buildResults.ts";
 import { diffuseSolarFactorRatio, solarFactorRatio } from "../../../src/scenarios/room/roomBoundary.ts";
 import type { RoomWindow } from "../../../src/project/roomModel.ts";
+import { roomCsvTables } from "../../../src/scenarios/room/roomCsv.ts";
 
 const DEMO = new URL("../../../projects/demo/", import.meta.url).pathname;
 
@@ -144,4 +145,31 @@ Deno.test("a window's diffuse solar ratio is the hemispherical mean of its angle
   );
   close(diffuseSolarFactorRatio(window(table)), 2 / 3, 2e-4, "hemispherical mean of cos θ");
   close(solarFactorRatio(window(table), 60.5), Math.cos((60.5 * Math.PI) / 180), 1e-4, "interpolated");
+});
+
+Deno.test("the room's CSV tables: the split columns add up to the load and the heat loss lines to the total", async () => {
+  const { room } = await demoRoom();
+  const tables = roomCsvTables({ "reading-room": room });
+  assert.deepEqual(tables.map((t) => t.path), [
+    "csv/room-reading-room.csv",
+    "csv/room-reading-room-series.csv",
+    "csv/room-reading-room-heat-loss.csv",
+  ]);
+  const steps = tables[0]!;
+  const load = steps.header.indexOf("heat_balance_load_W");
+  const parts = steps.header.flatMap((h, i) => (h.endsWith(":load_W") ? [i] : []));
+  assert.equal(parts.length, Object.keys(room.coolingLoad.bySource).length);
+  for (const row of steps.rows()) {
+    const sum = parts.reduce((s, i) => s + (row[i] as number), 0);
+    close(sum, row[load] as number, 1e-9, `split at ${row[0]} h`);
+  }
+  const loss = [...tables[2]!.rows()];
+  const total = loss.pop()!;
+  assert.equal(total[0], "total");
+  close(
+    loss.reduce((s, r) => s + (r[5] as number), 0),
+    total[5] as number,
+    1e-12,
+    "lines add up to the total row",
+  );
 });

@@ -71,13 +71,24 @@ export function numeratorByConvolution(rf: readonly number[], d: readonly number
 
 /** Long division b(z)/d(z): the first `terms` response factors the CTF implies. */
 export function resynthesise(b: readonly number[], d: readonly number[], terms: number): number[] {
-  const out: number[] = [];
+  const out = new Float64Array(terms);
+  longDivision(b, d, out, terms);
+  return Array.from(out);
+}
+
+/**
+ * Writes the first `terms` terms of b(z)/d(z) into `out`, term k as b_k − Σ_(n=1…min(N,k)) d_n out_(k−n) in that
+ * order. Reads b only inside its length (a read past the end of an array is a slow path in the JIT).
+ */
+function longDivision(b: readonly number[], d: readonly number[], out: Float64Array, terms: number): void {
+  const nb = b.length;
+  const top = d.length - 1;
   for (let k = 0; k < terms; k++) {
-    let v = b[k] ?? 0;
-    for (let n = 1; n < d.length && n <= k; n++) v -= d[n]! * out[k - n]!;
-    out.push(v);
+    let v = k < nb ? b[k]! : 0;
+    const last = k < top ? k : top;
+    for (let n = 1; n <= last; n++) v -= d[n]! * out[k - n]!;
+    out[k] = v;
   }
-  return out;
 }
 
 /** max_k |long division − RF_k| / U, stopping early once it exceeds `stopAbove`. */
@@ -89,10 +100,13 @@ function maxError(
   stopAbove: number,
 ): number {
   const out = new Float64Array(rf.length);
+  const nb = b.length;
+  const top = d.length - 1;
   let worst = 0;
   for (let k = 0; k < rf.length; k++) {
-    let v = b[k] ?? 0;
-    for (let n = 1; n < d.length && n <= k; n++) v -= d[n]! * out[k - n]!;
+    let v = k < nb ? b[k]! : 0;
+    const last = k < top ? k : top;
+    for (let n = 1; n <= last; n++) v -= d[n]! * out[k - n]!;
     out[k] = v;
     const e = Math.abs(v - rf[k]!) / u;
     if (!(e <= worst)) worst = Number.isFinite(e) ? e : Infinity;

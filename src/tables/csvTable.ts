@@ -100,17 +100,19 @@ function trimZeros(text: string): string {
   return text.slice(0, end);
 }
 
-/** Exponent text `-d.ddddde±n` as a plain decimal: `0.000…ddd` or `ddd000…`. */
+/** Exponent text `-d.ddddde±n` as a plain decimal: `0.000…ddd` or `ddd000…` (string steps, no pattern: per cell). */
 function plainDecimal(text: string): string {
-  const [mantissa = "", exponentText = "0"] = text.split("e");
-  const sign = mantissa.startsWith("-") ? "-" : "";
-  const digits = mantissa.replace(/^-/, "").replace(".", "");
-  const exponent = Number(exponentText);
+  const e = text.indexOf("e");
+  const negative = text.charCodeAt(0) === 45;
+  const sign = negative ? "-" : "";
+  const mantissa = text.slice(negative ? 1 : 0, e);
+  const point = mantissa.indexOf(".");
+  const digits = point < 0 ? mantissa : mantissa.slice(0, point) + mantissa.slice(point + 1);
+  const exponent = Number(text.slice(e + 1));
   if (exponent < 0) return trimZeros(`${sign}0.${"0".repeat(-exponent - 1)}${digits}`);
   const whole = digits.padEnd(exponent + 1, "0");
-  return `${sign}${whole.slice(0, exponent + 1)}${
-    trimZeros(`.${whole.slice(exponent + 1)}`).replace(/^\.$/, "")
-  }`;
+  // trimZeros drops a bare point, so a whole number gets no fraction.
+  return `${sign}${whole.slice(0, exponent + 1)}${trimZeros(`.${whole.slice(exponent + 1)}`)}`;
 }
 
 /** Characters that start a formula in a spreadsheet, ASCII and full width (U+FF1D ＝, U+FF0B ＋, U+FF0D －, U+FF20 ＠). */

@@ -1,3 +1,4 @@
+import { type DivisionCounter, longDivision, resynthesis } from "./longDivision.ts";
 import type { ResponseFactors } from "./responseFactors.ts";
 
 /** Conduction transfer function: q_t = Σ X_n T_o,t−n − Σ Y_n T_i,t−n + Σ_(n≥1) Φ_n q_t−n (and Y, Z for q_i). */
@@ -76,45 +77,6 @@ export function resynthesise(b: readonly number[], d: readonly number[], terms: 
   return Array.from(out);
 }
 
-/**
- * Writes the first `terms` terms of b(z)/d(z) into `out`, term k as b_k − Σ_(n=1…min(N,k)) d_n out_(k−n) in that
- * order. Reads b only inside its length (a read past the end of an array is a slow path in the JIT).
- */
-function longDivision(b: readonly number[], d: readonly number[], out: Float64Array, terms: number): void {
-  const nb = b.length;
-  const top = d.length - 1;
-  for (let k = 0; k < terms; k++) {
-    let v = k < nb ? b[k]! : 0;
-    const last = k < top ? k : top;
-    for (let n = 1; n <= last; n++) v -= d[n]! * out[k - n]!;
-    out[k] = v;
-  }
-}
-
-/** max_k |long division − RF_k| / U, stopping early once it exceeds `stopAbove`. */
-function maxError(
-  b: readonly number[],
-  d: readonly number[],
-  rf: readonly number[],
-  u: number,
-  stopAbove: number,
-): number {
-  const out = new Float64Array(rf.length);
-  const nb = b.length;
-  const top = d.length - 1;
-  let worst = 0;
-  for (let k = 0; k < rf.length; k++) {
-    let v = k < nb ? b[k]! : 0;
-    const last = k < top ? k : top;
-    for (let n = 1; n <= last; n++) v -= d[n]! * out[k - n]!;
-    out[k] = v;
-    const e = Math.abs(v - rf[k]!) / u;
-    if (!(e <= worst)) worst = Number.isFinite(e) ? e : Infinity;
-    if (worst > stopAbove) break;
-  }
-  return worst;
-}
-
 function sum(values: readonly number[]): number {
   return values.reduce((s, v) => s + v, 0);
 }
@@ -163,6 +125,22 @@ export function ctfCandidate(
   uValue: number,
   stopAbove = Infinity,
 ): CtfCandidate {
+  return candidateWithSeries(ratios, rf, uValue, stopAbove).candidate;
+}
+
+/** A candidate with its long divisions (X, Y, Z) when they ran over every response-factor term. */
+interface CandidateWithSeries {
+  readonly candidate: CtfCandidate;
+  readonly series?: readonly [Float64Array, Float64Array, Float64Array];
+}
+
+function candidateWithSeries(
+  ratios: readonly number[],
+  rf: ResponseFactors,
+  uValue: number,
+  stopAbove: number,
+  counter?: DivisionCounter,
+): CandidateWithSeries {
   const d = denominatorFromPoles(ratios);
   const X = numeratorByConvolution(rf.X, d);
   const Y = numeratorByConvolution(rf.Y, d);
@@ -172,16 +150,13 @@ export function ctfCandidate(
   const all = [...X, ...Y, ...Z, ...Phi];
   const maxAbsCoefficient = all.reduce((m, v) => Math.max(m, Math.abs(v)), 0);
   // A candidate over the coefficient bound is rejected whatever its resynthesis: skip the long division.
-  const resynthesisError = maxAbsCoefficient > CTF_MAX_COEFFICIENT && stopAbove !== Infinity
-    ? Infinity
-    : Math.max(
-      maxError(X, d, rf.X, uValue, stopAbove),
-      maxError(Y, d, rf.Y, uValue, stopAbove),
-      maxError(Z, d, rf.Z, uValue, stopAbove),
-    );
+  const division = maxAbsCoefficient > CTF_MAX_COEFFICIENT && stopAbove !== Infinity
+    ? undefined
+    : resynthesis([X, Y, Z], d, [rf.X, rf.Y, rf.Z], uValue, stopAbove, counter);
+  const resynthesisError = division === undefined ? Infinity : Math.max(...division.errors);
   const roundoff = identityRoundoffBound(ratios, rf, uValue);
   const identityRoundoff = Number.isFinite(roundoff) ? roundoff : Infinity;
-  return {
+  const candidate: CtfCandidate = {
     ctf: { X, Y, Z, Phi },
     maxAbsCoefficient,
     resynthesisError: Number.isNaN(resynthesisError) ? Infinity : resynthesisError,
@@ -189,6 +164,7 @@ export function ctfCandidate(
     identityRoundoff,
     identityLimit: Math.max(CTF_MAX_IDENTITY_ERROR, identityRoundoff),
   };
+  return division?.series === undefined ? { candidate } : { candidate, series: division.series };
 }
 
 /** Worst of the acceptance ratios (≤ 1 means accepted). */
@@ -234,19 +210,37 @@ export function ctfRejectionReasons(c: CtfCandidate): string[] {
  * 1e-8 (or to its roundoff bound, if larger); otherwise the candidate with the best acceptance score.
  */
 export function selectCtf(ratios: readonly number[], rf: ResponseFactors, uValue: number): CtfCandidate {
+  return selectCtfWithSeries(ratios, rf, uValue).candidate;
+}
+
+/**
+ * `selectCtf` with the chosen CTF's long divisions (X, Y, Z over every response-factor term) when they ran to the
+ * end, so that a caller comparing them with other response factors does not divide again. `counter` counts the
+ * terms divided.
+ */
+export function selectCtfWithSeries(
+  ratios: readonly number[],
+  rf: ResponseFactors,
+  uValue: number,
+  counter?: DivisionCounter,
+): CandidateWithSeries {
   const usable = ratios.filter((q) => q > 1e-12);
-  let best: CtfCandidate | undefined;
+  let best: CandidateWithSeries | undefined;
   for (let n = 0; n <= usable.length; n++) {
-    const stopAbove = Math.max(best?.resynthesisError ?? Infinity, CTF_MAX_RESYNTHESIS_ERROR);
-    const candidate = ctfCandidate(usable.slice(0, n), rf, uValue, stopAbove);
-    if (best === undefined || score(candidate) < score(best)) best = candidate;
+    const stopAbove = Math.max(best?.candidate.resynthesisError ?? Infinity, CTF_MAX_RESYNTHESIS_ERROR);
+    const next = candidateWithSeries(usable.slice(0, n), rf, uValue, stopAbove, counter);
+    const candidate = next.candidate;
+    if (best === undefined || score(candidate) < score(best.candidate)) best = next;
     if (
       candidate.resynthesisError <= CTF_TARGET_ERROR &&
       candidate.identityError <= Math.max(10 * CTF_TARGET_ERROR, candidate.identityRoundoff)
     ) {
       break;
     }
-    if (candidate.maxAbsCoefficient > CTF_MAX_COEFFICIENT && best.maxAbsCoefficient <= CTF_MAX_COEFFICIENT) {
+    if (
+      candidate.maxAbsCoefficient > CTF_MAX_COEFFICIENT &&
+      best.candidate.maxAbsCoefficient <= CTF_MAX_COEFFICIENT
+    ) {
       break;
     }
     if (candidate.maxAbsCoefficient > 1e12) break;

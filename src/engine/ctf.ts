@@ -1,4 +1,10 @@
-import { type DivisionCounter, longDivision, resynthesis } from "./longDivision.ts";
+import {
+  type DivisionCounter,
+  type DivisionSeries,
+  divisionSpace,
+  longDivision,
+  resynthesis,
+} from "./longDivision.ts";
 import type { ResponseFactors } from "./responseFactors.ts";
 
 /** Conduction transfer function: q_t = Σ X_n T_o,t−n − Σ Y_n T_i,t−n + Σ_(n≥1) Φ_n q_t−n (and Y, Z for q_i). */
@@ -131,7 +137,7 @@ export function ctfCandidate(
 /** A candidate with its long divisions (X, Y, Z) when they ran over every response-factor term. */
 interface CandidateWithSeries {
   readonly candidate: CtfCandidate;
-  readonly series?: readonly [Float64Array, Float64Array, Float64Array];
+  readonly series?: DivisionSeries;
 }
 
 function candidateWithSeries(
@@ -140,6 +146,7 @@ function candidateWithSeries(
   uValue: number,
   stopAbove: number,
   counter?: DivisionCounter,
+  space?: DivisionSeries,
 ): CandidateWithSeries {
   const d = denominatorFromPoles(ratios);
   const X = numeratorByConvolution(rf.X, d);
@@ -152,7 +159,7 @@ function candidateWithSeries(
   // A candidate over the coefficient bound is rejected whatever its resynthesis: skip the long division.
   const division = maxAbsCoefficient > CTF_MAX_COEFFICIENT && stopAbove !== Infinity
     ? undefined
-    : resynthesis([X, Y, Z], d, [rf.X, rf.Y, rf.Z], uValue, stopAbove, counter);
+    : resynthesis([X, Y, Z], d, [rf.X, rf.Y, rf.Z], uValue, stopAbove, counter, space);
   const resynthesisError = division === undefined ? Infinity : Math.max(...division.errors);
   const roundoff = identityRoundoffBound(ratios, rf, uValue);
   const identityRoundoff = Number.isFinite(roundoff) ? roundoff : Infinity;
@@ -226,11 +233,17 @@ export function selectCtfWithSeries(
 ): CandidateWithSeries {
   const usable = ratios.filter((q) => q > 1e-12);
   let best: CandidateWithSeries | undefined;
+  // Two sets of division space: one the best candidate's series live in, one the next candidate writes.
+  let spare = divisionSpace(rf.X.length);
+  let kept = divisionSpace(rf.X.length);
   for (let n = 0; n <= usable.length; n++) {
     const stopAbove = Math.max(best?.candidate.resynthesisError ?? Infinity, CTF_MAX_RESYNTHESIS_ERROR);
-    const next = candidateWithSeries(usable.slice(0, n), rf, uValue, stopAbove, counter);
+    const next = candidateWithSeries(usable.slice(0, n), rf, uValue, stopAbove, counter, spare);
     const candidate = next.candidate;
-    if (best === undefined || score(candidate) < score(best.candidate)) best = next;
+    if (best === undefined || score(candidate) < score(best.candidate)) {
+      best = next;
+      if (next.series === spare) [spare, kept] = [kept, spare];
+    }
     if (
       candidate.resynthesisError <= CTF_TARGET_ERROR &&
       candidate.identityError <= Math.max(10 * CTF_TARGET_ERROR, candidate.identityRoundoff)

@@ -25,7 +25,7 @@ export interface Resynthesis {
   /** max_k |long division − RF_k| / U per series (X, Y, Z), each stopped once it exceeds the stop value. */
   readonly errors: readonly [number, number, number];
   /** The divisions, when every term of all three was computed (none stopped early). */
-  readonly series?: readonly [Float64Array, Float64Array, Float64Array];
+  readonly series?: DivisionSeries;
 }
 
 /** Work counter for tests: terms of long division computed (one per series and term). */
@@ -33,10 +33,19 @@ export interface DivisionCounter {
   terms: number;
 }
 
+/** Three series of division terms (X, Y, Z). */
+export type DivisionSeries = readonly [Float64Array, Float64Array, Float64Array];
+
+/** Space for three divisions of `terms` terms, to be reused from candidate to candidate. */
+export function divisionSpace(terms: number): DivisionSeries {
+  return [new Float64Array(terms), new Float64Array(terms), new Float64Array(terms)];
+}
+
 /**
  * The long divisions of the numerators `b` (X, Y, Z) by `d` against the response factors `rf` (equal lengths), in
  * one pass with the three independent chains side by side. Each series' error is what dividing it alone and
- * stopping once its worst exceeds `stopAbove` gives; the pass ends when all three have stopped.
+ * stopping once its worst exceeds `stopAbove` gives; the pass ends when all three have stopped. The terms are
+ * written into `space` when given (every term is written before it is read), else into new arrays.
  */
 export function resynthesis(
   b: readonly [readonly number[], readonly number[], readonly number[]],
@@ -45,11 +54,13 @@ export function resynthesis(
   u: number,
   stopAbove: number,
   counter?: DivisionCounter,
+  space?: DivisionSeries,
 ): Resynthesis {
   const terms = rf[0].length;
   const [bx, by, bz] = b;
   const [rx, ry, rz] = rf;
-  const ox = new Float64Array(terms), oy = new Float64Array(terms), oz = new Float64Array(terms);
+  const out = space !== undefined && space.every((s) => s.length === terms) ? space : divisionSpace(terms);
+  const [ox, oy, oz] = out;
   if (ry.length !== terms || rz.length !== terms) {
     const one = (i: 0 | 1 | 2) => seriesError(b[i], d, rf[i], u, stopAbove, counter);
     return { errors: [one(0), one(1), one(2)] };
@@ -90,7 +101,7 @@ export function resynthesis(
     }
   }
   if (counter !== undefined) counter.terms += 3 * k;
-  return { errors: [wx, wy, wz], ...(k === terms ? { series: [ox, oy, oz] as const } : {}) };
+  return { errors: [wx, wy, wz], ...(k === terms ? { series: out } : {}) };
 }
 
 /** max_k |b(z)/d(z) − RF_k| / U of one series, stopping once it exceeds `stopAbove`. */

@@ -3,7 +3,7 @@ import { reviewProject } from "../review/mod.ts";
 import { formatPosition } from "../project/position.ts";
 import { renderPackage } from "../report/package.ts";
 import { computeProject } from "../results/buildResults.ts";
-import { type ArrayTexts, resultsJsonText } from "../results/jsonText.ts";
+import { resultsJsonText } from "../results/jsonText.ts";
 import { packageResultsCopy } from "../results/packageCopy.ts";
 import { issueGate } from "../results/issueGate.ts";
 import { buildSummary } from "../results/summary.ts";
@@ -80,10 +80,9 @@ export function produceOutputs(
   };
   phaseDone("review");
   progress?.("rendering the package");
-  const arrayTexts: ArrayTexts = new WeakMap();
-  const resultsText = resultsJsonText(results, arrayTexts);
+  const resultsText = resultsJsonText(results);
   phaseDone("results-json");
-  const embeddedResultsText = resultsJsonText(packageResultsCopy(results), arrayTexts);
+  const embeddedResultsText = resultsJsonText(packageResultsCopy(results));
   phaseDone("package-copy");
   const page = renderPackage({
     model: loaded.model,

@@ -24,3 +24,21 @@ export function sha256Hex(data: Uint8Array | string): string {
 export function inputsHash(records: readonly { readonly path: string; readonly sha256: string }[]): string {
   return sha256Hex(records.map((r) => `${r.sha256}  ${r.path}\n`).join(""));
 }
+
+/** UTF-8 length of a text in bytes, without encoding it (a lone surrogate counts 3, as its U+FFFD replacement). */
+export function utf8Length(text: string): number {
+  let bytes = 0;
+  for (let i = 0; i < text.length; i++) {
+    const c = text.charCodeAt(i);
+    if (c < 0x80) bytes += 1;
+    else if (c < 0x800) bytes += 2;
+    else if (c >= 0xd800 && c <= 0xdbff && i + 1 < text.length) {
+      const next = text.charCodeAt(i + 1);
+      if (next >= 0xdc00 && next <= 0xdfff) {
+        bytes += 4;
+        i++;
+      } else bytes += 3;
+    } else bytes += 3;
+  }
+  return bytes;
+}

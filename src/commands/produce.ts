@@ -37,17 +37,23 @@ export function runtimeVersion(): string {
   return `Deno ${Deno.version.deno}`;
 }
 
+/** The phases of a build, in order, as `produceOutputs` reports their ends (for the build-cost benchmark). */
+export type ProducePhase = "compute" | "review" | "results-json" | "package-copy" | "render" | "csv";
+
 /**
  * Computes and renders a loaded project; pure apart from reading the runtime version. The CSV files are written
- * in `csvLocale` (comma-separated with a decimal point unless told otherwise).
+ * in `csvLocale` (comma-separated with a decimal point unless told otherwise). `phaseDone` is told when each phase
+ * ends (bench/marginal_build.ts times them).
  */
 export function produceOutputs(
   loaded: LoadedProject,
   progress?: (message: string) => void,
   csvLocale: CsvLocaleName = DEFAULT_CSV_LOCALE,
+  phaseDone: (phase: ProducePhase) => void = () => {},
 ): ProduceOutcome {
   if (loaded.model === undefined) return { ok: false, diagnostics: loaded.diagnostics };
   const outcome = computeProject(loaded.model, loaded.inputRecords, loaded.dataTexts, progress);
+  phaseDone("compute");
   if (!outcome.ok) return { ok: false, diagnostics: outcome.diagnostics };
   const computed = outcome.computed;
   const computedResults: ResultsJson = {
@@ -72,9 +78,12 @@ export function produceOutputs(
     ],
     summary,
   };
+  phaseDone("review");
   progress?.("rendering the package");
   const resultsText = resultsJsonText(results);
+  phaseDone("results-json");
   const embeddedResultsText = resultsJsonText(packageResultsCopy(results));
+  phaseDone("package-copy");
   const page = renderPackage({
     model: loaded.model,
     results,
@@ -86,6 +95,7 @@ export function produceOutputs(
     resultsJsonText: resultsText,
     embeddedResultsText,
   });
+  phaseDone("render");
   const files: OutputFile[] = [
     { path: "package.html", text: page },
     { path: "results.json", text: resultsText },
@@ -99,6 +109,7 @@ export function produceOutputs(
       ...computed.csvFiles,
     ], CSV_LOCALES[csvLocale]),
   ];
+  phaseDone("csv");
   return {
     ok: true,
     outputs: { results, resultsJsonText: resultsText, embeddedResultsText, page, findings, files },

@@ -1,3 +1,10 @@
+import {
+  type DivisionCounter,
+  type DivisionSeries,
+  divisionSpace,
+  longDivision,
+  resynthesis,
+} from "./longDivision.ts";
 import type { ResponseFactors } from "./responseFactors.ts";
 
 /** Conduction transfer function: q_t = Σ X_n T_o,t−n − Σ Y_n T_i,t−n + Σ_(n≥1) Φ_n q_t−n (and Y, Z for q_i). */
@@ -71,34 +78,9 @@ export function numeratorByConvolution(rf: readonly number[], d: readonly number
 
 /** Long division b(z)/d(z): the first `terms` response factors the CTF implies. */
 export function resynthesise(b: readonly number[], d: readonly number[], terms: number): number[] {
-  const out: number[] = [];
-  for (let k = 0; k < terms; k++) {
-    let v = b[k] ?? 0;
-    for (let n = 1; n < d.length && n <= k; n++) v -= d[n]! * out[k - n]!;
-    out.push(v);
-  }
-  return out;
-}
-
-/** max_k |long division − RF_k| / U, stopping early once it exceeds `stopAbove`. */
-function maxError(
-  b: readonly number[],
-  d: readonly number[],
-  rf: readonly number[],
-  u: number,
-  stopAbove: number,
-): number {
-  const out = new Float64Array(rf.length);
-  let worst = 0;
-  for (let k = 0; k < rf.length; k++) {
-    let v = b[k] ?? 0;
-    for (let n = 1; n < d.length && n <= k; n++) v -= d[n]! * out[k - n]!;
-    out[k] = v;
-    const e = Math.abs(v - rf[k]!) / u;
-    if (!(e <= worst)) worst = Number.isFinite(e) ? e : Infinity;
-    if (worst > stopAbove) break;
-  }
-  return worst;
+  const out = new Float64Array(terms);
+  longDivision(b, d, out, terms);
+  return Array.from(out);
 }
 
 function sum(values: readonly number[]): number {
@@ -149,6 +131,23 @@ export function ctfCandidate(
   uValue: number,
   stopAbove = Infinity,
 ): CtfCandidate {
+  return candidateWithSeries(ratios, rf, uValue, stopAbove).candidate;
+}
+
+/** A candidate with its long divisions (X, Y, Z) when they ran over every response-factor term. */
+interface CandidateWithSeries {
+  readonly candidate: CtfCandidate;
+  readonly series?: DivisionSeries;
+}
+
+function candidateWithSeries(
+  ratios: readonly number[],
+  rf: ResponseFactors,
+  uValue: number,
+  stopAbove: number,
+  counter?: DivisionCounter,
+  space?: DivisionSeries,
+): CandidateWithSeries {
   const d = denominatorFromPoles(ratios);
   const X = numeratorByConvolution(rf.X, d);
   const Y = numeratorByConvolution(rf.Y, d);
@@ -158,16 +157,13 @@ export function ctfCandidate(
   const all = [...X, ...Y, ...Z, ...Phi];
   const maxAbsCoefficient = all.reduce((m, v) => Math.max(m, Math.abs(v)), 0);
   // A candidate over the coefficient bound is rejected whatever its resynthesis: skip the long division.
-  const resynthesisError = maxAbsCoefficient > CTF_MAX_COEFFICIENT && stopAbove !== Infinity
-    ? Infinity
-    : Math.max(
-      maxError(X, d, rf.X, uValue, stopAbove),
-      maxError(Y, d, rf.Y, uValue, stopAbove),
-      maxError(Z, d, rf.Z, uValue, stopAbove),
-    );
+  const division = maxAbsCoefficient > CTF_MAX_COEFFICIENT && stopAbove !== Infinity
+    ? undefined
+    : resynthesis([X, Y, Z], d, [rf.X, rf.Y, rf.Z], uValue, stopAbove, counter, space);
+  const resynthesisError = division === undefined ? Infinity : Math.max(...division.errors);
   const roundoff = identityRoundoffBound(ratios, rf, uValue);
   const identityRoundoff = Number.isFinite(roundoff) ? roundoff : Infinity;
-  return {
+  const candidate: CtfCandidate = {
     ctf: { X, Y, Z, Phi },
     maxAbsCoefficient,
     resynthesisError: Number.isNaN(resynthesisError) ? Infinity : resynthesisError,
@@ -175,6 +171,7 @@ export function ctfCandidate(
     identityRoundoff,
     identityLimit: Math.max(CTF_MAX_IDENTITY_ERROR, identityRoundoff),
   };
+  return division?.series === undefined ? { candidate } : { candidate, series: division.series };
 }
 
 /** Worst of the acceptance ratios (≤ 1 means accepted). */
@@ -220,19 +217,43 @@ export function ctfRejectionReasons(c: CtfCandidate): string[] {
  * 1e-8 (or to its roundoff bound, if larger); otherwise the candidate with the best acceptance score.
  */
 export function selectCtf(ratios: readonly number[], rf: ResponseFactors, uValue: number): CtfCandidate {
+  return selectCtfWithSeries(ratios, rf, uValue).candidate;
+}
+
+/**
+ * `selectCtf` with the chosen CTF's long divisions (X, Y, Z over every response-factor term) when they ran to the
+ * end, so that a caller comparing them with other response factors does not divide again. `counter` counts the
+ * terms divided.
+ */
+export function selectCtfWithSeries(
+  ratios: readonly number[],
+  rf: ResponseFactors,
+  uValue: number,
+  counter?: DivisionCounter,
+): CandidateWithSeries {
   const usable = ratios.filter((q) => q > 1e-12);
-  let best: CtfCandidate | undefined;
+  let best: CandidateWithSeries | undefined;
+  // Two sets of division space: one the best candidate's series live in, one the next candidate writes.
+  let spare = divisionSpace(rf.X.length);
+  let kept = divisionSpace(rf.X.length);
   for (let n = 0; n <= usable.length; n++) {
-    const stopAbove = Math.max(best?.resynthesisError ?? Infinity, CTF_MAX_RESYNTHESIS_ERROR);
-    const candidate = ctfCandidate(usable.slice(0, n), rf, uValue, stopAbove);
-    if (best === undefined || score(candidate) < score(best)) best = candidate;
+    const stopAbove = Math.max(best?.candidate.resynthesisError ?? Infinity, CTF_MAX_RESYNTHESIS_ERROR);
+    const next = candidateWithSeries(usable.slice(0, n), rf, uValue, stopAbove, counter, spare);
+    const candidate = next.candidate;
+    if (best === undefined || score(candidate) < score(best.candidate)) {
+      best = next;
+      if (next.series === spare) [spare, kept] = [kept, spare];
+    }
     if (
       candidate.resynthesisError <= CTF_TARGET_ERROR &&
       candidate.identityError <= Math.max(10 * CTF_TARGET_ERROR, candidate.identityRoundoff)
     ) {
       break;
     }
-    if (candidate.maxAbsCoefficient > CTF_MAX_COEFFICIENT && best.maxAbsCoefficient <= CTF_MAX_COEFFICIENT) {
+    if (
+      candidate.maxAbsCoefficient > CTF_MAX_COEFFICIENT &&
+      best.candidate.maxAbsCoefficient <= CTF_MAX_COEFFICIENT
+    ) {
       break;
     }
     if (candidate.maxAbsCoefficient > 1e12) break;

@@ -1,4 +1,5 @@
-import { ctfAccepted, type CtfCandidate, resynthesise, selectCtf } from "./ctf.ts";
+import { ctfAccepted, type CtfCandidate, resynthesise, selectCtfWithSeries } from "./ctf.ts";
+import type { DivisionCounter } from "./longDivision.ts";
 import type { ConductionChain } from "./elements.ts";
 import type { ResponseFactors } from "./responseFactors.ts";
 import { gradedCellWidths } from "./stateSpaceMesh.ts";
@@ -83,13 +84,15 @@ function faceSpacing(rf0: number | undefined, uValue: number): number {
 
 /**
  * Runs the state-space model on a graded mesh sized once from the error model (re-meshed once if the error
- * model was optimistic) and compares its response factors with the root method's.
+ * model was optimistic) and compares its response factors with the root method's. `counter` counts the terms of
+ * CTF long division done (for tests).
  */
 export function stateSpaceAnalysis(
   chain: ConductionChain,
   timestepS: number,
   root: ResponseFactors,
   uValue: number,
+  counter?: DivisionCounter,
 ): StateSpaceAnalysis {
   const terms = Math.max(3, root.termCount);
   let outside = faceSpacing(root.X[0], uValue);
@@ -108,11 +111,20 @@ export function stateSpaceAnalysis(
     inside *= shrink;
   }
   const { widths, response, agreement } = result;
-  const ctfCandidate = selectCtf(response.ratios, response.responseFactors, uValue);
+  const chosen = selectCtfWithSeries(response.ratios, response.responseFactors, uValue, counter);
+  const ctfCandidate = chosen.candidate;
   let ctfVersusRoot = 0;
   const d = [1, ...ctfCandidate.ctf.Phi.map((p) => -p)];
-  for (const key of ["X", "Y", "Z"] as const) {
-    const r = resynthesise(ctfCandidate.ctf[key], d, root.termCount);
+  for (const [index, key] of (["X", "Y", "Z"] as const).entries()) {
+    // The selection's own division of these coefficients by the same d, when it ran over at least the root's
+    // terms: term k depends on the terms before it only, so its first terms are this division.
+    const done = chosen.series?.[index];
+    let r: ArrayLike<number>;
+    if (done !== undefined && done.length >= root.termCount) r = done.subarray(0, root.termCount);
+    else {
+      r = resynthesise(ctfCandidate.ctf[key], d, root.termCount);
+      if (counter !== undefined) counter.terms += root.termCount;
+    }
     for (let j = 0; j < r.length; j++) {
       const e = Math.abs(r[j]! - root[key][j]!) / uValue;
       if (!(e <= ctfVersusRoot)) ctfVersusRoot = Number.isFinite(e) ? e : Infinity;

@@ -17,6 +17,8 @@ export function ownLimits(model: Model): ReadonlyMap<string, readonly LimitSpec[
         continue;
       }
       if (byId.has(segment.id)) continue;
+      // No `limits` text (nor an escape that could spell it in a quoted key): nothing to read again.
+      if (!segment.source.includes("limits") && !segment.source.includes("\\")) continue;
       const fence = splitMarkdown(segment.source.replace(/^\n+/, ""), segment.at.line)
         .find((p) => p.kind === "fence");
       if (fence?.kind !== "fence") continue;

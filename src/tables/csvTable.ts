@@ -16,6 +16,8 @@
  * CSV is derived output for spreadsheets: the exact numbers are in results.json.
  */
 
+import { significantText } from "./significantText.ts";
+
 /** One cell: a number (rounded on writing), text, or `null` for an empty cell. */
 export type CsvValue = number | string | null;
 
@@ -86,32 +88,8 @@ export const CSV_LOCALE_NAMES = Object.keys(CSV_LOCALES) as readonly CsvLocaleNa
  */
 export function csvNumber(value: number, decimal: "." | "," = "."): string {
   if (!Number.isFinite(value)) return "";
-  const rounded = value.toPrecision(CSV_SIGNIFICANT_DIGITS);
-  let text = rounded.includes("e") ? plainDecimal(rounded) : trimZeros(rounded);
-  if (text === "-0") text = "0";
+  const text = significantText(value, CSV_SIGNIFICANT_DIGITS);
   return decimal === "." ? text : text.replace(".", decimal);
-}
-
-/** `toPrecision` text without the zeros it pads a fraction with (and without a bare point). */
-function trimZeros(text: string): string {
-  if (!text.includes(".")) return text;
-  let end = text.length;
-  while (text.charCodeAt(end - 1) === 48) end--;
-  if (text.charCodeAt(end - 1) === 46) end--;
-  return text.slice(0, end);
-}
-
-/** Exponent text `-d.ddddde±n` as a plain decimal: `0.000…ddd` or `ddd000…`. */
-function plainDecimal(text: string): string {
-  const [mantissa = "", exponentText = "0"] = text.split("e");
-  const sign = mantissa.startsWith("-") ? "-" : "";
-  const digits = mantissa.replace(/^-/, "").replace(".", "");
-  const exponent = Number(exponentText);
-  if (exponent < 0) return trimZeros(`${sign}0.${"0".repeat(-exponent - 1)}${digits}`);
-  const whole = digits.padEnd(exponent + 1, "0");
-  return `${sign}${whole.slice(0, exponent + 1)}${
-    trimZeros(`.${whole.slice(exponent + 1)}`).replace(/^\.$/, "")
-  }`;
 }
 
 /** Characters that start a formula in a spreadsheet, ASCII and full width (U+FF1D ＝, U+FF0B ＋, U+FF0D －, U+FF20 ＠). */

@@ -4,7 +4,6 @@ import { LEADING_TERMS } from "../../results/packageCopy.ts";
 import { renderBlocksAsWritten } from "./inputBlocks.ts";
 import { html, PRE_LEAD, type Trusted } from "../page/html.ts";
 import type { InputFile, RenderContext } from "../page/packageInput.ts";
-import { sha256Hex } from "../../archive/hash.ts";
 
 /** Decodes bytes as UTF-8 text, or undefined when they are not valid UTF-8. */
 function asText(bytes: Uint8Array): string | undefined {
@@ -77,10 +76,8 @@ function printedResults(ctx: RenderContext): Trusted {
   return html`
     <div class="print-only printed-results">
       <p>The results embedded in this package: results.json, schema ${ctx.input.results.schema}, ${String(
-        new TextEncoder().encode(ctx.input.resultsJsonText).length,
-      )} bytes, SHA-256 <span class="hash">${sha256Hex(
-        ctx.input.resultsJsonText,
-      )}</span>. Every value is in the
+        ctx.resultsDigest.bytes,
+      )} bytes, SHA-256 <span class="hash">${ctx.resultsDigest.sha256}</span>. Every value is in the
       electronic package and in results.json and the CSV files in csv/ beside it; the printout gives the numbers in
       the body and in Appendices C and D, long series by their leading terms.</p>
     </div>

@@ -7,7 +7,6 @@ import { renderFactorSeries } from "./factorSeries.ts";
 import { html, type Trusted } from "../page/html.ts";
 import type { RenderContext } from "../page/packageInput.ts";
 import { allChecksTable, checksTable, subjectAnchor } from "../registers/checksSection.ts";
-import { sha256Hex } from "../../archive/hash.ts";
 import { checksByKindTable } from "./checksByKind.ts";
 import { methodChecksTable } from "../registers/methodChecks.ts";
 
@@ -32,7 +31,7 @@ function everyCheck(ctx: RenderContext): Trusted {
         )} constructions): the ${String(
           checks.length,
         )} checks one by one, with description, value and limit, are in the embedded results (Appendix B) and results.json <code>checks[]</code>, SHA-256 <span
-            class="hash">${sha256Hex(ctx.input.resultsJsonText)}</span>.</p>
+            class="hash">${ctx.resultsDigest.sha256}</span>.</p>
     `;
   }
   return html`
@@ -44,7 +43,7 @@ function everyCheck(ctx: RenderContext): Trusted {
       class="print-only every-check-pointer">Not printed: the ${String(
         checks.length,
       )} checks one by one, with description, value and limit, are in the electronic package (this appendix) and in results.json <code>checks[]</code>, SHA-256 <span
-        class="hash">${sha256Hex(ctx.input.resultsJsonText)}</span> (Appendix B).</p>
+        class="hash">${ctx.resultsDigest.sha256}</span> (Appendix B).</p>
   `;
 }
 
@@ -74,7 +73,7 @@ export function renderChecksAppendix(ctx: RenderContext): Trusted {
 
 /** Renders Appendix D: per construction, response factors, both CTFs, periodic factors and plots. */
 export function renderFactorsAppendix(ctx: RenderContext): Trusted {
-  const resultsSha256 = sha256Hex(ctx.input.resultsJsonText);
+  const resultsSha256 = ctx.resultsDigest.sha256;
   if (isCompactPackage(ctx.input.model.constructions.length)) {
     return html`
       <section id="s-d">

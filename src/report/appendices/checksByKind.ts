@@ -39,10 +39,11 @@ export function checkKindRows(checks: readonly CheckResult[]): CheckKindRow[] {
     row.worst = Number.isNaN(ratio) || Number.isNaN(row.worst) ? NaN : Math.max(row.worst, ratio);
     rows.set(key, row);
   }
-  const order: string[] = [];
-  for (const c of checks) if (!order.includes(c.subject)) order.push(c.subject);
+  // Subject → first-appearance rank, looked up once per row (not searched per check: O(checks), not O(checks²)).
+  const order = new Map<string, number>();
+  for (const c of checks) if (!order.has(c.subject)) order.set(c.subject, order.size);
   return [...rows.values()]
-    .sort((a, b) => order.indexOf(a.subject) - order.indexOf(b.subject))
+    .sort((a, b) => order.get(a.subject)! - order.get(b.subject)!)
     .map((r) => ({ subject: r.subject, id: r.id, count: r.count, failed: r.failed, worstRatio: r.worst }));
 }
 

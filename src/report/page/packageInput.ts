@@ -3,6 +3,7 @@ import type { Diagnostic } from "../../project/diagnostic.ts";
 import type { Model } from "../../project/model.ts";
 import type { ResultsJson } from "../../results/types.ts";
 import { type DisplayUnits, displayUnitsFor } from "./displayUnits.ts";
+import { sha256Hex, utf8Length } from "../../archive/hash.ts";
 
 /** One input file of the project with its exact bytes and SHA-256 (hex). */
 export interface InputFile {
@@ -50,6 +51,8 @@ export interface RenderContext {
   readonly scenarioAnchors: ReadonlyMap<string, string>;
   /** Scenario ids whose output is already placed (a repeated block id then points back to it). */
   readonly placedScenarios: Set<string>;
+  /** results.json's SHA-256 (hex) and UTF-8 length, taken once per rendering (several sections print them). */
+  readonly resultsDigest: { readonly sha256: string; readonly bytes: number };
 }
 
 function anchorsFor(ids: readonly string[], prefix: string, fallback: string): Map<string, string> {
@@ -74,6 +77,7 @@ export function makeRenderContext(input: PackageInput): RenderContext {
     constructionAnchors: anchorsFor(input.model.constructions.map((c) => c.id), "c", "construction"),
     scenarioAnchors: anchorsFor(input.model.scenarios.map((s) => s.id), "sc", "scenario"),
     placedScenarios: new Set<string>(),
+    resultsDigest: { sha256: sha256Hex(input.resultsJsonText), bytes: utf8Length(input.resultsJsonText) },
   };
 }
 

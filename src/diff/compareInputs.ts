@@ -77,7 +77,7 @@ function wholeChange(s: Subject, kind: "added" | "removed", summary: string, at:
 }
 
 /** Compares two lists of items with ids: items on one side only are added or removed, the others key by key. */
-function compareById<T extends { readonly id: string; readonly at: Position }>(
+export function compareById<T extends { readonly id: string; readonly at: Position }>(
   section: ChangeSection,
   a: { side: InputSide; items: readonly T[] },
   b: { side: InputSide; items: readonly T[] },

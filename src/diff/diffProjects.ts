@@ -1,6 +1,7 @@
 import type { Model } from "../project/model.ts";
 import type { ResultsJson } from "../results/types.ts";
 import { compareInputs } from "./compareInputs.ts";
+import { compareRooms } from "./compareRooms.ts";
 import { compareResults } from "./effects.ts";
 import { compareChecks, compareVerdicts } from "./verdicts.ts";
 import { compareFiles } from "./files.ts";
@@ -31,10 +32,9 @@ function summary(side: DiffSide, fallback: string): SideSummary {
 
 /** Compares two revisions of a project: changed inputs with their places, changed files, and the effects on results. */
 export function diffProjects(a: DiffSide, b: DiffSide): ProjectDiff {
-  const changes = compareInputs(
-    { model: a.model, lines: sourceLines(a.sources ?? []) },
-    { model: b.model, lines: sourceLines(b.sources ?? []) },
-  );
+  const inputsA = { model: a.model, lines: sourceLines(a.sources ?? []) };
+  const inputsB = { model: b.model, lines: sourceLines(b.sources ?? []) };
+  const changes = [...compareInputs(inputsA, inputsB), ...compareRooms(inputsA, inputsB)];
   const files = compareFiles(
     { model: a.model, records: a.results.inputs?.files ?? [] },
     { model: b.model, records: b.results.inputs?.files ?? [] },

@@ -67,6 +67,12 @@ const QUANTITY_NAMES: Readonly<Record<EffectQuantity, string>> = {
   designHeatLoss: "design heat loss",
   insideSurfaceTemperature: "inside surface temperature",
   mouldMargin: "mould margin f_Rsi − f_Rsi,min",
+  heatBalancePeak: "peak cooling load, heat balance",
+  heatBalancePeakTime_h: "hour of peak cooling load, heat balance",
+  rtsMethodPeak: "peak cooling load, radiant time series method",
+  rtsMethodPeakTime_h: "hour of peak cooling load, radiant time series method",
+  heatLossCoefficient: "heat loss coefficient",
+  peakInsideSurfaceTemperature: "highest inside surface temperature",
 };
 
 /** A readable name of a result quantity. */
@@ -77,13 +83,22 @@ export function quantityName(q: EffectQuantity): string {
 /** The subject of an effect for people: `W-1`, `summer-day`, `summer-day / roof`. */
 export function effectSubject(e: Effect): string {
   const [kind = "", rest = ""] = e.subject.split(/:(.*)/s);
-  return kind === "construction" ? `construction ${rest}` : `scenario ${rest.replace("/", " / surface ")}`;
+  if (kind === "construction") return `construction ${rest}`;
+  return `${kind === "room" ? "room" : "scenario"} ${rest.replace("/", " / surface ")}`;
 }
 
 function clock(hours: number): string {
   const minutes = Math.round((((hours % 24) + 24) % 24) * 60);
   return `${String(Math.floor(minutes / 60)).padStart(2, "0")}:${String(minutes % 60).padStart(2, "0")}`;
 }
+
+/** Result quantities that are clock hours: printed as `HH:MM`. */
+const CLOCK_HOURS: ReadonlySet<EffectQuantity> = new Set([
+  "peakTime_h",
+  "peakCoolingLoadTime_h",
+  "heatBalancePeakTime_h",
+  "rtsMethodPeakTime_h",
+]);
 
 /** Result quantities that count things: printed as whole numbers. */
 const COUNTS: ReadonlySet<EffectQuantity> = new Set(["limitsNotMet"]);
@@ -92,7 +107,7 @@ const COUNTS: ReadonlySet<EffectQuantity> = new Set(["limitsNotMet"]);
 export function effectValue(e: Effect, value: number | null): string {
   if (value === null) return "—";
   if (COUNTS.has(e.quantity)) return String(Math.round(value));
-  if (e.quantity === "peakTime_h" || e.quantity === "peakCoolingLoadTime_h") return clock(value);
+  if (CLOCK_HOURS.has(e.quantity)) return clock(value);
   if (e.unit === "J") return withUnit(formatSig(value / 3.6e6, 4), "kWh");
   return withUnit(formatSig(value, 4), e.unit);
 }

@@ -1,5 +1,6 @@
 import type { HeatingResults } from "../scenarios/heatingTypes.ts";
 import type { ConstructionResults, ResultsJson, ScenarioResults } from "../results/types.ts";
+import { roomQuantities, roomsOf } from "./roomEffects.ts";
 import type { Effect, EffectQuantity } from "./types.ts";
 
 interface Quantity {
@@ -167,6 +168,7 @@ function quantitiesOf(results: ResultsJson, other: ResultsJson): Quantity[] {
     ),
     ...Object.entries(results.scenarios ?? {}).flatMap(([id, s]) => scenarioQuantities(id, s)),
     ...Object.entries(results.heating ?? {}).flatMap(([id, h]) => heatingQuantities(id, h)),
+    ...Object.entries(roomsOf(results)).flatMap(([id, r]) => roomQuantities(id, r)),
   ];
 }
 
@@ -179,7 +181,8 @@ export function relativeChange(oldValue: number | null, newValue: number | null)
 /**
  * Compares the headline results of two runs: per construction U, decrement factor and time lag; per
  * scenario the peak heat gain and its hour, the daily (design day) or annual (weather) totals, and each
- * surface's peak. Returns the quantities that differ, largest |relative| change first, and how many agree.
+ * surface's peak; per room its load peaks by both methods, design heat loss and heat loss coefficient (roomEffects.ts).
+ * Returns the quantities that differ, largest |relative| change first, and how many agree.
  */
 export function compareResults(a: ResultsJson, b: ResultsJson): { effects: Effect[]; unchanged: number } {
   const key = (q: Quantity) => `${q.subject}\u0000${q.quantity}`;

@@ -35,7 +35,8 @@ export const UNIT = {
   coefficient: "W/(m²·K)",
 } as const;
 
-function field(key: string, value: FieldValue | undefined, unit = "", find?: RegExp): Field[] {
+/** One field, or none when the value is absent. */
+export function field(key: string, value: FieldValue | undefined, unit = "", find?: RegExp): Field[] {
   if (value === undefined) return [];
   return [find === undefined ? { key, value, unit } : { key, value, unit, find }];
 }
@@ -143,7 +144,8 @@ export function layerFields(
   ];
 }
 
-function profileFields(key: string, p: TemperatureProfile): Field[] {
+/** A temperature input: one value, or 24 hourly values under `<key>.hourly`. */
+export function profileFields(key: string, p: TemperatureProfile): Field[] {
   return p.kind === "constant"
     ? field(key, p.valueC, UNIT.celsius)
     : field(`${key}.hourly`, p.hourlyC, UNIT.celsius, new RegExp(`(^|[\\s{,])${key}\\s*:`));

@@ -29,6 +29,7 @@ export const SECTION_TITLES: readonly (readonly [ChangeSection, string])[] = [
   ["material", "Materials"],
   ["construction", "Constructions"],
   ["scenario", "Scenarios"],
+  ["room", "Rooms"],
 ];
 
 function width(text: string): number {

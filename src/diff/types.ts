@@ -14,15 +14,17 @@
  *   "checks": [ { "subject", "id", "description", "old": "pass" | "fail" | null, "new": same,
  *                 "oldValue", "newValue": number | null, "limit" } ],
  *   "files": [ { "path", "status": "added" | "removed" | "changed", "proseChanged": bool | null } ],
- *   "changes": [ { "section": "project" | "material" | "construction" | "scenario",
+ *   "changes": [ { "section": "project" | "material" | "construction" | "scenario" | "room",
  *                  "subject": id ("project.md" for the front matter),
- *                  "part": "layer 2" | "layer 2 → 3" | "surface <id>" | null,
+ *                  "part": "layer 2" | "layer 2 → 3" | "surface <id>" | "window <id>" | "gain <name>"
+ *                          | "thermal bridge <name>" | "point bridge <name>" | null,
  *                  "key": e.g. "conductivity" | null (null: the whole subject or part was added or removed),
  *                  "change": "added" | "removed" | "changed",
  *                  "old": value | null, "new": value | null,   (SI numbers, text, or lists of numbers)
  *                  "unit": SI unit of the values ("" for pure numbers and text),
  *                  "oldAt": "path:line:col" | null, "newAt": "path:line:col" | null } ],
- *   "effects": [ { "subject": "construction:<id>" | "scenario:<id>" | "scenario:<id>/<surface>",
+ *   "effects": [ { "subject": "construction:<id>" | "scenario:<id>" | "scenario:<id>/<surface>"
+ *                              | "heating:<id>" | "heating:<id>/<surface>" | "room:<id>" | "room:<id>/<surface>",
  *                  "quantity": one of EffectQuantity, "unit",
  *                  "old": number | null, "new": number | null,
  *                  "absolute": new − old | null, "relative": (new − old) / |old| | null,
@@ -44,7 +46,7 @@
 export type FieldValue = number | string | boolean | readonly number[] | null;
 
 /** Which kind of input a change belongs to. */
-export type ChangeSection = "project" | "material" | "construction" | "scenario";
+export type ChangeSection = "project" | "material" | "construction" | "scenario" | "room";
 
 /** One changed input key (or one added or removed subject or part) with its place on each side. */
 export interface Change {
@@ -78,7 +80,13 @@ export type EffectQuantity =
   | "peakCoolingLoadTime_h"
   | "designHeatLoss"
   | "insideSurfaceTemperature"
-  | "mouldMargin";
+  | "mouldMargin"
+  | "heatBalancePeak"
+  | "heatBalancePeakTime_h"
+  | "rtsMethodPeak"
+  | "rtsMethodPeakTime_h"
+  | "heatLossCoefficient"
+  | "peakInsideSurfaceTemperature";
 
 /** How one result quantity moved between the two sides. */
 export interface Effect {

@@ -13,6 +13,7 @@ import { reviewLimits } from "./limitRules.ts";
 import { reviewMaterials } from "./materialRules.ts";
 import { reviewOrder } from "./orderRules.ts";
 import { reviewProvenance } from "./provenanceRules.ts";
+import { reviewRooms } from "./roomRules.ts";
 import { reviewScenarios } from "./scenarioRules.ts";
 
 export { REVIEW_RULES, type ReviewRule } from "./catalogue.ts";
@@ -27,6 +28,7 @@ export function reviewProject(model: Model, results?: ResultsJson): Diagnostic[]
     ...reviewProvenance(model, results),
     ...reviewScenarios(model, results),
     ...reviewConditions(model),
+    ...reviewRooms(model),
     ...(results === undefined ? [] : reviewElements(model, results)),
     ...(results === undefined ? [] : reviewLimits(model, results)),
   ];

@@ -76,6 +76,7 @@ const DEMO_FILES = [
   "40-scenarios.md",
   "45-weather-year.md",
   "50-winter.md",
+  "60-reading-room.md",
 ];
 
 const headingText = (h: Element) => (h.textContent ?? "").replace(/\s+/g, " ").trim();
@@ -199,6 +200,11 @@ Deno.test("the contents lists every construction's results in input order, under
   assert.deepEqual(under("50. Winter design heat loss and surface condensation screening"), [
     "Results of heating scenario winter-design",
   ]);
+  assert.deepEqual(under("60. Reading room — cooling load and heat loss").slice(0, 3), [
+    "Results of construction GF-1",
+    "Results of construction IW-1",
+    "Results of construction IW-2",
+  ]);
   // Every contents link lands on an element of the package.
   for (const a of Array.from(doc.querySelectorAll("nav.contents a"))) {
     const id = a.getAttribute("href")!.slice(1);
@@ -207,14 +213,14 @@ Deno.test("the contents lists every construction's results in input order, under
   // The package's own sections follow the files.
   const top = items.map((li) => headingText(li.querySelector("a")!));
   assert.ok(
-    top.indexOf("50. Winter design heat loss and surface condensation screening") < top.indexOf("Cautions"),
+    top.indexOf("60. Reading room — cooling load and heat loss") < top.indexOf("Cautions"),
   );
 });
 
 Deno.test("the sensitivity study comes out in construction block order, in results.json and the package", async () => {
   const { doc, results } = await builtDemo();
-  // Block order of the demo: 20-walls.md EW-1 … EW-4, then 30-roof.md RF-1.
-  const order = ["EW-1", "EW-2", "EW-3", "EW-4", "RF-1"];
+  // Block order of the demo: 20-walls.md EW-1 … EW-4, 30-roof.md RF-1, then 60-reading-room.md GF-1, IW-1, IW-2.
+  const order = ["EW-1", "EW-2", "EW-3", "EW-4", "RF-1", "GF-1", "IW-1", "IW-2"];
   assert.deepEqual(Object.keys(results.sensitivity.constructions), order);
   // The per-construction tables are Appendix F's (the body keeps one ranked table).
   const study = doc.getElementById("s-f")!;

@@ -55,7 +55,7 @@ Deno.test({
       const byPage = text.split("\f");
       assert.match(byPage[2] ?? "", new RegExp(`Page 3 of ${pages}`), "page number in the margin");
       // The running header: title | reference rev revision, spaces kept (project.md of the demo).
-      assert.ok(byPage[2]?.includes("QBP-2417-TH-01 rev B"), "running header with its spaces");
+      assert.ok(byPage[2]?.includes("QBP-2417-TH-01 rev C"), "running header with its spaces");
       const outline = pageNumbersFromOutline(await Deno.readFile(pdfPath));
       assert.ok(outline.length >= 10, `${outline.length} outline entries`);
       assert.ok(outline.some((e) => e.title.startsWith("Appendix A")), "the appendices are in the outline");

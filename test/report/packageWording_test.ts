@@ -75,9 +75,9 @@ Deno.test("demo package: the runtime is named once; the build line counts the he
     r.querySelector("th")?.textContent === "Runtime"
   );
   assert.match(row?.querySelector("td")?.textContent ?? "", /^Deno \d+\.\d+\.\d+$/);
-  // projects/demo: EW-1…EW-4, RF-1, GF-1, IW-1, IW-2; july-design-day, weather-year-synthetic and the heating
+  // projects/demo: EW-1…EW-4, RF-1, GF-1, IW-2; july-design-day, weather-year-synthetic and the heating
   // scenario winter-design; the room reading-room.
-  assert.match(stdout.join("\n"), /\(8 constructions, 3 scenarios, 1 room\)/);
+  assert.match(stdout.join("\n"), /\(7 constructions, 3 scenarios, 1 room\)/);
 });
 
 Deno.test("built-in library: every source is a material-data source, not a simulation test case", () => {

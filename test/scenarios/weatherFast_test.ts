@@ -34,7 +34,7 @@ Deno.test("the demo snapshot matches projects/demo as read by loadProject, and s
   const loaded = await loadProject(DEMO_FOLDER);
   assert.ok(loaded.model !== undefined, loaded.diagnostics.map((d) => d.message).join("\n"));
   const scenario = loaded.model.scenarios.find((s) => s.id === demo.scenario.id);
-  // The snapshot holds the weather year's constructions; the demo's room adds GF-1, IW-1 and IW-2 in 60-reading-room.md.
+  // The snapshot holds the weather year's constructions; the demo's room adds GF-1 and IW-2 in 60-reading-room.md.
   const yearConstructions = loaded.model.constructions.filter((c) =>
     (DEMO_CONSTRUCTIONS as readonly string[]).includes(c.id)
   );

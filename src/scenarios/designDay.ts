@@ -1,4 +1,9 @@
-import { type BoundarySurface, designDayBoundary, expandHourlyToSteps } from "../climate/mod.ts";
+import {
+  type BoundarySurface,
+  designDayBoundary,
+  type DesignDayInput,
+  expandHourlyToSteps,
+} from "../climate/mod.ts";
 import type { DynamicAnalysis } from "../engine/mod.ts";
 import {
   ctfRepeatedDayFlux,
@@ -49,6 +54,25 @@ export const ENERGY_BALANCE_LIMIT = 1e-6;
 
 type DesignDayScenario = Extract<Scenario, { kind: "design-day" }>;
 
+/** The climate input of a design-day scenario for the given outside surfaces (2013 clear sky, handbook diffuse). */
+export function designDayInput(
+  scenario: DesignDayScenario,
+  surfaces: readonly BoundarySurface[],
+): DesignDayInput {
+  return {
+    site: scenario.site ?? { latitudeDeg: 0, longitudeDeg: 0, timeZoneH: 0 },
+    month: scenario.month,
+    day: scenario.day,
+    timestepS: scenario.timestepS,
+    outdoor: scenario.outdoor,
+    sky: scenario.sky.kind === "none"
+      ? { kind: "none" }
+      : { ...scenario.sky, edition: "2013", skyDiffuseModel: "handbook" },
+    surfaces,
+    solarPositionMethod: "meeus",
+  };
+}
+
 /** Expands a constant or 24-value hourly temperature to one value per step. */
 export function temperatureSteps(profile: TemperatureProfile, timestepS: number): number[] {
   return profile.kind === "constant"
@@ -85,18 +109,7 @@ export function computeDesignDay(scenario: DesignDayScenario, context: ScenarioC
         longwave: { kind: "given", correctionK: p.longwaveCorrectionK },
       };
   });
-  const boundary = designDayBoundary({
-    site: scenario.site ?? { latitudeDeg: 0, longitudeDeg: 0, timeZoneH: 0 },
-    month: scenario.month,
-    day: scenario.day,
-    timestepS,
-    outdoor: scenario.outdoor,
-    sky: scenario.sky.kind === "none"
-      ? { kind: "none" }
-      : { ...scenario.sky, edition: "2013", skyDiffuseModel: "handbook" },
-    surfaces: boundarySurfaces,
-    solarPositionMethod: "meeus",
-  });
+  const boundary = designDayBoundary(designDayInput(scenario, boundarySurfaces));
   const indoor = temperatureSteps(scenario.indoor, timestepS);
   const surfaces: Record<string, SurfaceResults> = {};
   const checks: CheckResult[] = [];

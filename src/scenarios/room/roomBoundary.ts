@@ -3,6 +3,7 @@
  * design-day scenario) and the solar transmitted by its windows.
  */
 import { type BoundarySurface, type DesignDayBoundary, designDayBoundary } from "../../climate/mod.ts";
+import { designDayInput } from "../designDay.ts";
 import type { Assumption, Construction, Scenario, ScenarioSurface } from "../../project/model.ts";
 import type { Room, RoomSurface, RoomWindow } from "../../project/roomModel.ts";
 import { DEFAULT_RADIANT_SPLIT } from "../../engine/room/mod.ts";
@@ -124,18 +125,7 @@ export function roomDay(
       longwave: { kind: "given", correctionK: 0 },
     });
   }
-  const boundary = designDayBoundary({
-    site: scenario.site ?? { latitudeDeg: 0, longitudeDeg: 0, timeZoneH: 0 },
-    month: scenario.month,
-    day: scenario.day,
-    timestepS: scenario.timestepS,
-    outdoor: scenario.outdoor,
-    sky: scenario.sky.kind === "none"
-      ? { kind: "none" }
-      : { ...scenario.sky, edition: "2013", skyDiffuseModel: "handbook" },
-    surfaces: solarSurfaces,
-    solarPositionMethod: "meeus",
-  });
+  const boundary = designDayBoundary(designDayInput(scenario, solarSurfaces));
   const byId = new Map(boundary.surfaces.map((b) => [b.id, b]));
   const solAirC = new Map(outdoor.map((s) => [s.id, byId.get(s.id)!.solAirC]));
   const transmittedSolarW = new Map(room.windows.map((window) => {

@@ -42,11 +42,17 @@ export const ROOM_CAUTION =
   "steady-periodic (the design day repeated, the air held at the set point). Local codes and the review of a " +
   "licensed professional govern the sizing.";
 
+/** The room caution naming the computed rooms, or nothing when the package computes none. */
+function roomCaution(input: PackageInput): Trusted {
+  const rooms = Object.keys(input.results.rooms ?? {});
+  if (rooms.length === 0) return html``;
+  return html`<li class="caution-room" id="caution-room">${ROOM_CAUTION} Rooms: ${rooms.join(", ")}.</li>`;
+}
+
 /** Renders the cautions for the package input; `extra` holds cautions produced with the results (outside film). */
 export function renderCautionsSection(input: PackageInput, extra: readonly string[] = []): Trusted {
   const synthetic = syntheticWeather(input);
   const memory = unconfirmedLibraryValues(input);
-  const rooms = Object.keys(input.results.rooms ?? {});
   return html`
     <section id="s-8">
       <h2>Cautions</h2>
@@ -76,13 +82,11 @@ surface exchange), assess it separately.</li>`,
         <li
           class="caution-outside-film">Outside film of the weather scenarios: the sol-air temperature and the conduction use one outside coefficient, h_o = 1/R_se of each construction (the ISO 6946 value for U-values), not a wind-dependent coefficient. A different choice changes the solar part of the heat gains; where it matters, give h_o per surface and compare.</li>
       `
-      : html``}${rooms.length === 0 ? html`` : html`
-      <li class="caution-room" id="caution-room">${ROOM_CAUTION} Rooms: ${rooms.join(", ")}.</li>
-    `}${extra.map((c) =>
-      html`
-        <li class="caution-outside-film">${c}</li>
-      `
-    )}
+      : html``}${extra.map((c) =>
+        html`
+          <li class="caution-outside-film">${c}</li>
+        `
+      )}${roomCaution(input)}
       </ul>
     </section>
   `;

@@ -39,8 +39,8 @@ export const ROOM_CAUTION =
   "Room loads: a design load is not a system size. Sizing the plant needs the diversity between rooms, safety " +
   "margins, pull-down after set-back or intermittent operation, the latent load and the losses of the system " +
   "(fans, ducts, pipes), none of which is in these figures; the heat balance and radiant time series loads are " +
-  "steady-periodic (the design day repeated, the air held at the set point). Local codes and the review of a " +
-  "licensed professional govern the sizing.";
+  "steady-periodic (the design day repeated, the air held at the set point). The codes that apply where the " +
+  "building stands, and the review of a person qualified to sign under them, govern the sizing.";
 
 /** The room caution naming the computed rooms, or nothing when the package computes none. */
 function roomCaution(input: PackageInput): Trusted {

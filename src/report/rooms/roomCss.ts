@@ -15,6 +15,7 @@ table.room-rts td, table.room-rts th { padding: 0 1.2mm; }
 tr.subtotal td { font-style: italic; }
 tr.total-row th, tr.total-row td { font-weight: bold; border-top: 2px solid var(--ink); }
 td.room-quantities { font-size: 7.5pt; }
+table.room-checks code { font-size: 7.5pt; }
 .room-notes { font-size: 8pt; }
 .room-conditions { font-size: 9pt; }
 @media print {

@@ -109,17 +109,16 @@ const GROUND_INPUTS: Readonly<Record<string, readonly [string, Parameters<typeof
 };
 
 function groundInputs(g: GroundFloorResults, d: DisplayUnits): Trusted {
+  const entries = Object.entries(g.inputs);
   return html`${
-    Object.entries(g.inputs).map(([key, input]) => {
+    entries.map(([key, input], i) => {
       const [symbol, kind] = GROUND_INPUTS[key] ?? [key, undefined];
       const value = kind === undefined ? formatSig(input.value, 3) : sigU(d, kind, input.value);
-      return html`
-        <span class="room-ground-input">${symbol} = ${value}${input.defaulted
-          ? html`
-            <span class="default-mark" title="${input.source}">(default)</span>
-          `
-          : html``}</span>;
-      `;
+      const mark = input.defaulted
+        ? html`<span class="default-mark" title="${input.source}">(default)</span>`
+        : html``;
+      const sep = i === entries.length - 1 ? "" : "; ";
+      return html`<span class="room-ground-input">${symbol} = ${value}${mark}</span>${sep}`;
     })
   }`;
 }

@@ -89,7 +89,7 @@ export function windowsTable(room: Room, d: DisplayUnits): Trusted {
         <td class="num">${formatFixed(w.solarFactor, 2)}</td>
         <td class="num">${formatFixed(w.frameFraction, 2)}</td>
         <td>${w.angleDependence === undefined
-          ? "constant g"
+          ? "constant"
           : `by angle, ${w.angleDependence.length} points`}</td>
       </tr>
     `
@@ -105,7 +105,7 @@ export function windowsTable(room: Room, d: DisplayUnits): Trusted {
           <th>U<sub>w</sub> ${unitHead(d, "transmittance")}</th>
           <th>g</th>
           <th>Frame fraction</th>
-          <th>g with angle</th>
+          <th>g(θ)</th>
         </tr>
       </thead>
       <tbody>${rows}</tbody>
@@ -152,7 +152,7 @@ export function loadsTables(room: Room, d: DisplayUnits): Trusted {
           <th>Sensible ${unitHead(d, "heatGain")}</th>
           <th>Latent ${unitHead(d, "heatGain")}</th>
           <th>Radiant fraction</th>
-          <th>Schedule</th>
+          <th>On</th>
         </tr>
       </thead>
       <tbody>${room.gains.map((g) => gainRow(g, d))}</tbody>

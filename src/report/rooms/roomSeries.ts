@@ -1,14 +1,11 @@
 /** The room's own radiant time series: the 24 shares of both series in a table, and a plot of them beside it. */
 import * as Plot from "@observablehq/plot";
 import type { RoomCoolingLoadResults } from "../../scenarios/room/roomTypes.ts";
-import { formatFixed } from "../page/format.ts";
+import { formatSig } from "../page/format.ts";
 import { html, type Trusted } from "../page/html.ts";
 import { renderPlotSvg } from "../page/plotSvg.ts";
 import { tick } from "../scenarios/dayPlot.ts";
 import { lineSwatch, type SeriesStyle } from "../scenarios/scenarioStyle.ts";
-
-/** Decimals of a printed share r_j (the printed 24 add to 1 within 24 × 0.00005). */
-export const SHARE_DECIMALS = 4;
 
 export const NONSOLAR_STYLE: SeriesStyle = { colour: "#1f4e79", dash: "none" };
 export const SOLAR_STYLE: SeriesStyle = { colour: "#c77c0e", dash: "6 3" };
@@ -16,7 +13,8 @@ export const SOLAR_STYLE: SeriesStyle = { colour: "#c77c0e", dash: "6 3" };
 const sum = (xs: readonly number[]) => xs.reduce((a, x) => a + x, 0);
 
 function seriesTable(rts: RoomCoolingLoadResults["radiantTimeSeries"]): Trusted {
-  const share = (v: number | undefined) => formatFixed(v ?? NaN, SHARE_DECIMALS);
+  // Three significant figures, as every number of the package: the printed 24 add to 1 within their rounding.
+  const share = (v: number | undefined) => formatSig(v ?? NaN, 3);
   const cells = (j: number) =>
     html`
       <td class="num j">${String(j)}</td>
@@ -42,10 +40,10 @@ function seriesTable(rts: RoomCoolingLoadResults["radiantTimeSeries"]): Trusted 
         <tr class="total-row"><th scope="row" colspan="4">Σ r<sub>j</sub></th><td class="num" data-q="rts-sum-nonsolar">${share(
           sum(rts.nonsolar),
         )}</td><td class="num" data-q="rts-sum-solar">${share(sum(rts.solar))}</td></tr>
-        <tr><th scope="row" colspan="4">Retained share of the pulse</th><td class="num" data-q="retained-nonsolar">${formatFixed(
+        <tr><th scope="row" colspan="4">Retained share of the pulse</th><td class="num" data-q="retained-nonsolar">${formatSig(
           rts.retained.nonsolar,
           3,
-        )}</td><td class="num" data-q="retained-solar">${formatFixed(rts.retained.solar, 3)}</td></tr>
+        )}</td><td class="num" data-q="retained-solar">${formatSig(rts.retained.solar, 3)}</td></tr>
       </tbody>
     </table>
   `;

@@ -55,8 +55,7 @@ export function surfacesTable(room: Room, r: RoomResults, d: DisplayUnits): Trus
   });
   return html`
     <table class="compact room-surfaces">
-      <caption>Surfaces of ${room
-        .id}: net area = gross less the windows in it; azimuth clockwise from north, tilt from horizontal (0° faces up, 180° a floor).</caption>
+      <caption>Surfaces: net = gross less the windows in it; azimuth from north, tilt from horizontal (180° = a floor).</caption>
       <thead>
         <tr>
           <th>Surface</th>
@@ -86,17 +85,14 @@ export function windowsTable(room: Room, d: DisplayUnits): Trusted {
         <td>${w.in}</td>
         <td class="num">${sig(d, "area", w.areaM2)}</td>
         <td class="num">${sig(d, "transmittance", w.uValue)}</td>
-        <td class="num">${formatFixed(w.solarFactor, 2)}</td>
+        <td class="num">${formatFixed(w.solarFactor, 2)}${w.angleDependence === undefined ? "" : " (θ)"}</td>
         <td class="num">${formatFixed(w.frameFraction, 2)}</td>
-        <td>${w.angleDependence === undefined
-          ? "constant"
-          : `by angle, ${w.angleDependence.length} points`}</td>
       </tr>
     `
   );
   return html`
     <table class="compact room-windows">
-      <caption>Windows: massless; solar in = irradiance × g × (1 − frame fraction).</caption>
+      <caption>Windows (frame: frame fraction; g constant with the angle unless marked (θ)).</caption>
       <thead>
         <tr>
           <th>Window</th>
@@ -104,8 +100,7 @@ export function windowsTable(room: Room, d: DisplayUnits): Trusted {
           <th>Area ${unitHead(d, "area")}</th>
           <th>U<sub>w</sub> ${unitHead(d, "transmittance")}</th>
           <th>g</th>
-          <th>Frame fraction</th>
-          <th>g(θ)</th>
+          <th>Frame</th>
         </tr>
       </thead>
       <tbody>${rows}</tbody>
@@ -145,13 +140,13 @@ function gainRow(g: RoomGain, d: DisplayUnits): Trusted {
 export function loadsTables(room: Room, d: DisplayUnits): Trusted {
   const gains = room.gains.length === 0 ? html`` : html`
     <table class="compact room-gains">
-      <caption>Internal gains at their peak, on in the hours of the schedule.</caption>
+      <caption>Internal gains at their peak.</caption>
       <thead>
         <tr>
           <th>Gain</th>
           <th>Sensible ${unitHead(d, "heatGain")}</th>
           <th>Latent ${unitHead(d, "heatGain")}</th>
-          <th>Radiant fraction</th>
+          <th>Radiant</th>
           <th>On</th>
         </tr>
       </thead>

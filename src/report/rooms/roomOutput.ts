@@ -58,7 +58,7 @@ export function roomVerdict(r: RoomResults, d: DisplayUnits): Trusted {
         : html`Latent load, apart from the sensible: peak <span data-q="verdict-latent">${
           w(latent.load)
         }</span> from ${clockTime(latent.time_h)}.`}</p>
-      <p>${heating}</p>
+      <p>${heating} <span class="room-caution-pointer">A design load is not a system size: see the <a href="#caution-room">cautions</a>.</span></p>
     </div>
   `;
 }
@@ -113,7 +113,6 @@ function renderComputed(room: Room, r: RoomResults, anchor: string, ctx: RenderC
       ${surfacesTable(room, r, d)}
       ${loadsTables(room, d)}
       <h5>The room's own radiant time series</h5>
-      <p class="room-lead">A periodic unit radiant pulse run through this room's heat balance (non-solar: onto all inside surfaces by area; solar: onto the floor) gives the share that reaches the air each hour after it.</p>
       ${renderRoomSeries(r.coolingLoad, anchor)}
       <h5>Sensible cooling load by both methods</h5>
       ${renderRoomLoad(r, anchor, d)}
@@ -123,7 +122,6 @@ function renderComputed(room: Room, r: RoomResults, anchor: string, ctx: RenderC
       <h5>Checks and method notes</h5>
       ${checksPart(ctx.input.results.checks, room.id)}
       <ul class="scenario-notes room-notes">${r.notes.map((n) => html`<li>${quotedNumbers(n, d)}</li>`)}</ul>
-      <p class="room-caution-pointer"><strong>A design load is not a system size</strong>: see the <a href="#caution-room">cautions</a>.</p>
     </div>
   `;
 }

@@ -95,7 +95,7 @@ export function renderRoomSeries(cl: RoomCoolingLoadResults, prefix: string): Tr
         class="legend-entry">${lineSwatch(NONSOLAR_STYLE)} non-solar (gains, conduction)</span> <span
         class="legend-entry">${lineSwatch(
           SOLAR_STYLE,
-        )} solar (onto the floor)</span>. Each series sums to 1; "retained" is the share of the pulse that reaches the air before normalising, the rest is conducted out.</figcaption></figure>
+        )} solar (onto the floor)</span>. A periodic unit radiant pulse through this room's heat balance; each series sums to 1; "retained": the share of the pulse that reaches the air before normalising (the rest is conducted out).</figcaption></figure>
     </div>
   `;
 }

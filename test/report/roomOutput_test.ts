@@ -137,6 +137,12 @@ Deno.test("an IP package prints the room's loads in Btu/h, H in Btu/(h·°F) and
       table.className,
     );
   }
+  // The method notes convert a value with an SI unit; the inside convection note gives each of its three.
+  const convection = Array.from(out.querySelectorAll(".room-notes li")).map((li) => li.textContent ?? "")
+    .find((t) => t.startsWith("Inside convection h_c"));
+  assert.ok(convection !== undefined);
+  assert.equal(convection.match(/Btu\/\(h·ft²·°F\)/g)?.length, 3, convection);
+  assert.doesNotMatch(convection, /W\/\(m²/);
   const ground = num(text(out, "ground-u"));
   assert.equal(
     ground,

@@ -6,7 +6,9 @@
  * room in the contents, the summary, the cautions and Appendix E.
  */
 import assert from "node:assert/strict";
+import { cp } from "node:fs/promises";
 import { dirname, join } from "node:path";
+import { runBuild } from "../../src/commands/build.ts";
 import type { RoomResults } from "../../src/scenarios/room/roomTypes.ts";
 import { formatSig, MINUS, THIN_SPACE } from "../../src/report/page/format.ts";
 import { demoPackage } from "./demoBuild.ts";
@@ -171,4 +173,46 @@ Deno.test("the contents list the room and its heat loss, and the cautions and Ap
   assert.equal(hb[15], Math.round(room.coolingLoad.heatBalancePeak.load));
   for (let h = 0; h < 24; h++) assert.ok(Math.abs(rts[h]! - hb[h]! - difference[h]!) <= 1.5);
   assert.doesNotMatch(doc.body.textContent ?? "", /This version computes no room loads/);
+});
+
+Deno.test("a room on a 5 min design day without a heating scenario: peaks at their step, hours sampled, no heat loss", async () => {
+  const root = await Deno.makeTempDir({ prefix: "fluxnote-room-output-" });
+  try {
+    const project = join(root, "demo");
+    await cp(new URL("../../projects/demo/", import.meta.url).pathname, project, { recursive: true });
+    const day = join(project, "40-scenarios.md");
+    await Deno.writeTextFile(
+      day,
+      (await Deno.readTextFile(day)).replace("\ntimestep: 1 h\n", "\ntimestep: 5 min\n"),
+    );
+    const roomFile = join(project, "60-reading-room.md");
+    const roomText = await Deno.readTextFile(roomFile);
+    assert.ok(roomText.includes("\nheating: winter-design\n"));
+    await Deno.writeTextFile(roomFile, roomText.replace("\nheating: winter-design\n", "\n"));
+    const out = join(root, "out");
+    assert.equal(await runBuild({ project, out }, { stdout: () => {}, stderr: () => {} }), 0);
+    const room: RoomResults =
+      JSON.parse(await Deno.readTextFile(join(out, "results.json"))).rooms["reading-room"];
+    const doc = parseDocument(await Deno.readTextFile(join(out, "package.html")));
+    assert.equal(room.timestep_h, 5 / 60);
+    assert.equal(room.heating, undefined);
+    const o = output(doc);
+    assert.equal(
+      text(o, "verdict-hb"),
+      `${formatSig(room.coolingLoad.heatBalancePeak.load, 3)}${THIN_SPACE}W`,
+    );
+    assert.match(o.textContent ?? "", /No heating scenario named: no design heat loss/);
+    assert.equal(o.querySelector("table.room-heat-loss"), null);
+    const links = Array.from(doc.querySelectorAll("nav.contents a")).map((a) => a.getAttribute("href"));
+    assert.ok(links.includes("#rm-reading-room"));
+    assert.ok(!links.includes("#rm-reading-room-heat-loss"));
+    // Appendix E prints the heat balance at the full hours: step 12·h of the 5 min series.
+    const hb = texts(doc.querySelector("#e-rm-reading-room")!, "hb").map(num);
+    assert.deepEqual(
+      hb,
+      Array.from({ length: 24 }, (_, h) => Math.round(room.coolingLoad.heatBalance[12 * h]!)),
+    );
+  } finally {
+    await Deno.remove(root, { recursive: true });
+  }
 });

@@ -1,7 +1,7 @@
 /**
  * The issued demo package printed as a reader gets it (`build --pdf`, Debian's Chromium, A4) in SI and in IP:
  * the body (cover to the end of the cautions) fits in 30 pages
- * and the whole package in 60; no heading (h1–h4) or "Computed output" label is the last line of a page; no
+ * and the whole package in 60 (each raised for the demo's room, below); no heading (h1–h4) or "Computed output" label is the last line of a page; no
  * table is wider than its column, so Chromium never shrinks the print below 100 %. The page counts are printed
  * so that CI logs show them. Needs /usr/bin/chromium and poppler-utils (pdftotext); skipped without Chromium.
  */
@@ -17,9 +17,14 @@ import { copyDir, HAS_CHROMIUM, tool } from "./browserTools.ts";
 
 const DEMO = new URL("../projects/demo/", import.meta.url).pathname;
 
-/** The budgets of issue 11 for the demo, on A4. */
-const BODY_BUDGET = 30;
-const PACKAGE_BUDGET = 60;
+/**
+ * The budgets of issue 11 for the demo, on A4, raised for the demo's room (measured against the package before it
+ * printed room output: body 37 → 40 SI / 41 IP, whole 70 → 75 SI / 76 IP).
+ */
+// issue 13: one room, 4 pages in the body (its output under its block, about 3 pages; its summary line and caution)
+const BODY_BUDGET = 30 + 4;
+// issue 13: one room, 6 pages in the whole (the body's 4, its part of Appendix E, one page of shifted breaks)
+const PACKAGE_BUDGET = 60 + 6;
 /** A4 (210 mm, ISO 216, from memory) less the package's 18 mm side margins (src/report/page/css.ts @page). */
 const A4_COLUMN_PX = Math.floor(((210 - 2 * 18) / 25.4) * 96);
 

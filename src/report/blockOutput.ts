@@ -9,6 +9,7 @@ import { materialTableHead, materialTableRow } from "./constructions/materialRow
 import { blockTextAnchor } from "./appendices/inputBlocks.ts";
 import { renderScenarioOutput } from "./scenarios/scenarioOutput.ts";
 import { renderHeatingBlock } from "./scenarios/heatingOutput.ts";
+import { renderRoomOutput } from "./rooms/roomOutput.ts";
 
 type BlockSegment = Extract<Segment, { kind: "block" }>;
 
@@ -79,17 +80,10 @@ function constructionOutput(block: BlockSegment, ctx: RenderContext): Trusted {
   );
 }
 
-/** A room as read and checked; its loads are not computed by this version, and the output says so. */
 function roomOutput(block: BlockSegment, ctx: RenderContext): Trusted {
   const room = ctx.input.model.rooms?.find((r) => r.id === block.id);
   if (room === undefined) return unresolved(block);
-  const count = (n: number, one: string) => `${n} ${one}${n === 1 ? "" : "s"}`;
-  return html`
-    <p>Room ${room.id} (${room.name}) read and checked: ${count(room.surfaces.length, "surface")}, ${count(
-      room.windows.length,
-      "window",
-    )}, ${count(room.gains.length, "gain")}. This version computes no room loads.</p>
-  `;
+  return renderRoomOutput(room, ctx);
 }
 
 function outputFor(block: BlockSegment, ctx: RenderContext): Trusted {

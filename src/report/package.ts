@@ -6,7 +6,14 @@ import { METHODS_APPENDIX_TITLE } from "./registers/methodSection.ts";
 import { documentTitle, renderCalculationSection } from "./calculationSection.ts";
 import { contentsOutputs } from "./front/contentsOutputs.ts";
 import { documentAnchor, SENSITIVITY_ANCHOR, sensitivityAnchor } from "./page/anchors.ts";
-import { hasHourlyAppendix, HOURLY_APPENDIX, renderHourlyAppendix } from "./scenarios/hourlyAppendix.ts";
+import {
+  hasHourlyAppendix,
+  HOURLY_APPENDIX,
+  hourlyScenarioParts,
+  renderHourlyAppendix,
+} from "./scenarios/hourlyAppendix.ts";
+import { roomHourlyParts } from "./rooms/roomHourly.ts";
+import { ROOM_CSS } from "./rooms/roomCss.ts";
 import { renderSensitivityAppendix, SENSITIVITY_APPENDIX } from "./scenarios/sensitivityOutput.ts";
 import { renderChecksSection } from "./registers/checksSection.ts";
 import { renderCover, STATUS_LABEL, watermarkFor } from "./front/cover.ts";
@@ -57,7 +64,7 @@ function entry(anchor: string, title: string, nested: readonly Trusted[] = []): 
   return html`<li><a href="#${anchor}">${title}</a>${list}</li>`;
 }
 
-function renderContents(ctx: RenderContext): Trusted {
+function renderContents(ctx: RenderContext, roomParts: number): Trusted {
   const docs = ctx.input.model.documents.map((doc, i) => {
     const title = documentTitle(doc);
     const file = title.fromHeading
@@ -82,7 +89,7 @@ function renderContents(ctx: RenderContext): Trusted {
   ]);
   const summary = ctx.input.results.summary === undefined ? html`` : entry("s-summary", "Summary of results");
   const absent = new Set<string>();
-  if (!hasHourlyAppendix(ctx)) absent.add(HOURLY_APPENDIX[0]);
+  if (!hasHourlyAppendix(ctx, roomParts)) absent.add(HOURLY_APPENDIX[0]);
   if (ctx.input.results.sensitivity === undefined) absent.add(SENSITIVITY_APPENDIX[0]);
   const ownSections = OWN_SECTIONS.filter(([id]) => !absent.has(id));
   return html`
@@ -105,9 +112,11 @@ export function renderPackage(input: PackageInput): string {
   const info = input.model.info;
   const status = STATUS_LABEL[info.status];
   const headerLeft = `${info.title} | ${info.reference} rev ${info.revision}`;
+  const rooms = (input.model.rooms ?? []).length > 0;
   const css = html`${
     packageCss({ left: headerLeft, right: status }, watermarkFor(info.status))
-  }${APPENDIX_CSS}`;
+  }${APPENDIX_CSS}${rooms ? ROOM_CSS : html``}`;
+  const roomParts = roomHourlyParts(ctx, hourlyScenarioParts(ctx) + 1);
   const page = html`
     <html lang="en">
       <head>
@@ -122,7 +131,7 @@ export function renderPackage(input: PackageInput): string {
     <div class="running-header">${headerLeft} | ${status}</div>
     ${renderCover(input)}
     ${renderSummarySection(ctx)}
-    ${renderContents(ctx)}
+    ${renderContents(ctx, roomParts.length)}
     <main>
     ${renderCalculationSection(ctx)}
     ${renderChecksSection(ctx)}
@@ -142,7 +151,7 @@ export function renderPackage(input: PackageInput): string {
     ${renderResultsAppendix(ctx)}
     ${renderChecksAppendix(ctx)}
     ${renderFactorsAppendix(ctx)}
-    ${renderHourlyAppendix(ctx)}
+    ${renderHourlyAppendix(ctx, roomParts)}
     ${renderSensitivityAppendix(ctx)}
     ${renderMethodSection(ctx, renderScopeSection(ctx.display))}
     </main>

@@ -1,6 +1,6 @@
 /**
- * A project with a `room` block is accepted by `check` and `build` before anything computes rooms: the block is
- * read into the model and shown in the package like every other input block (issue 13, the room block reader).
+ * A project with a `room` block is accepted by `check` and `build`: the block is read into the model, shown in the
+ * package like every other input block, and followed by the room's computed output (issue 13).
  */
 import assert from "node:assert/strict";
 import { join } from "node:path";
@@ -59,10 +59,11 @@ Deno.test("check and build accept the demo with a room block, and the package sh
     const escaped = ROOM_BLOCK.replaceAll("&", "&amp;").replaceAll('"', "&quot;").replaceAll("<", "&lt;");
     assert.ok(page.includes(escaped), "the room block's text is missing from package.html");
     assert.match(page, /room block &quot;study-room&quot;, 50-winter\.md:\d+:1/);
-    assert.match(
-      page,
-      /Room study-room \(Reading room, first floor\) read and checked: 5 surfaces, 1 window, 1 gain/,
-    );
+    // The room's computed output follows its block (issue 13): the verdict, not the old "computes no room loads".
+    assert.doesNotMatch(page, /This version computes no room loads/);
+    assert.match(page, /<div class="room-output" id="rm-study-room">/);
+    assert.match(page, /Results of room study-room<\/h4>/);
+    assert.match(page, /Peak sensible cooling load \(heat balance\): <strong data-q="verdict-hb">/);
   } finally {
     await Deno.remove(dir, { recursive: true });
   }

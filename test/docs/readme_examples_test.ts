@@ -77,12 +77,12 @@ Deno.test("README example blocks build together as a project with no errors", as
     // Every block was read and used, not skipped: each construction and scenario id shows in the results,
     // and each material's name in the layer table of a construction that uses it.
     const results = await Deno.readTextFile(join(out, "results.json"));
-    // Rooms are read and checked but not computed yet: each room id shows as its block's label in the package.
+    // Each room is computed: its output under its block is titled by its id, and results.json holds it.
     const page = await Deno.readTextFile(join(out, "package.html"));
     for (const b of blocks.filter((b) => b.kind === "room")) {
       const id = /^id: *(.+?) *(#.*)?$/m.exec(b.text)?.[1];
       assert.ok(
-        id !== undefined && page.includes(`Room ${id} (`),
+        id !== undefined && page.includes(`Results of room ${id}</h4>`) && results.includes(`"${id}": {`),
         `README.md:${b.line}: room "${id}" is missing from the package`,
       );
     }

@@ -33,8 +33,8 @@ export function heatBalanceNotes(room: RoomInput, radiation: number): RoomNote[]
       id: "heat-balance-convection",
       text:
         `Inside convection h_c (ISO 6946:2017 Annex C, from memory): walls ${DEFAULT_CONVECTION.wall} W/(m² K) ` +
-        `(horizontal flow); ceilings ${DEFAULT_CONVECTION.ceiling} (downward flow: on a cooling design day a ` +
-        `ceiling is taken warmer than the air); floors ${DEFAULT_CONVECTION.floor} (upward flow: a floor warmed ` +
+        `(horizontal flow); ceilings ${DEFAULT_CONVECTION.ceiling} W/(m² K) (downward flow: on a cooling design day a ` +
+        `ceiling is taken warmer than the air); floors ${DEFAULT_CONVECTION.floor} W/(m² K) (upward flow: a floor warmed ` +
         "by the sun and the radiant gains gives heat up to the air); a value given for a surface replaces these.",
     },
     {

@@ -2,6 +2,7 @@
 import type { ProjectDocument } from "../../project/model.ts";
 import { coolingLoadAnchor, heatingAnchor, scenarioFigurePrefix } from "../page/anchors.ts";
 import type { RenderContext } from "../page/packageInput.ts";
+import { roomAnchor, roomHeatLossAnchor } from "../rooms/roomAnchors.ts";
 
 /** One contents entry: the fragment it links to, its title and the entries nested under it. */
 export interface ContentsOutput {
@@ -11,8 +12,8 @@ export interface ContentsOutput {
 }
 
 /**
- * Each construction's, scenario's and heating scenario's output in `doc`, in block order, with a design day's
- * cooling load nested under it. A block whose output is not placed (unresolved, or an id already used) has no entry.
+ * Each construction's, scenario's, heating scenario's and room's output in `doc`, in block order, with a design
+ * day's cooling load and a room's design heat loss nested under it. A block whose output is not placed (unresolved, or an id already used) has no entry.
  */
 export function contentsOutputs(doc: ProjectDocument, ctx: RenderContext): ContentsOutput[] {
   const model = ctx.input.model;
@@ -45,6 +46,14 @@ export function contentsOutputs(doc: ProjectDocument, ctx: RenderContext): Conte
         nested: [],
       }];
       add(anchor, `Results of scenario ${id}`, coolingLoad);
+    } else if (segment.blockKind === "room") {
+      const results = ctx.input.results.rooms ?? {};
+      if (model.rooms?.some((r) => r.id === id) !== true || !Object.hasOwn(results, id)) continue;
+      const anchor = roomAnchor(model, id);
+      const heatLoss = results[id]!.heating === undefined
+        ? []
+        : [{ anchor: roomHeatLossAnchor(anchor), title: `Design heat loss of ${id}`, nested: [] }];
+      add(anchor, `Results of room ${id}`, heatLoss);
     }
   }
   return out;

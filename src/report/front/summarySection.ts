@@ -11,6 +11,7 @@ import { formatSig } from "../page/format.ts";
 import type { DisplayUnits } from "../page/displayUnits.ts";
 import type { RenderContext } from "../page/packageInput.ts";
 import { constructionsTable, scenariosTable } from "./summaryTables.ts";
+import { roomsSummaryTable } from "../rooms/roomSummary.ts";
 
 /** Printed name of each open-item kind. */
 export const OPEN_ITEM_LABEL: Readonly<Record<OpenItemKind, string>> = {
@@ -144,6 +145,7 @@ export function renderSummarySection(ctx: RenderContext): Trusted {
 <h2 id="s-summary-h">Summary of results</h2>
 ${constructionsTable(summary.constructions, ctx.display)}
 ${scenariosTable(summary.scenarios, ctx.display)}
+${roomsSummaryTable(ctx)}
 ${outsideFilm(ctx)}
 ${failedChecks(summary, ctx.display)}
 ${openItems(summary, ctx.display)}

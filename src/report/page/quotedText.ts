@@ -23,9 +23,11 @@ const DIGITS = 3;
 const SI_TEXT_UNITS: readonly (readonly [string, QuantityKind | "heatLossCoefficient" | "pressure"])[] = [
   ["W/(m²·K)", "transmittance"],
   ["W/(m²K)", "transmittance"],
+  ["W/(m² K)", "transmittance"],
   ["m²·K/W", "resistance"],
   ["m² K/W", "resistance"],
   ["W/(m·K)", "conductivity"],
+  ["W/(m K)", "conductivity"],
   ["kJ/(m²·K)", "arealHeatCapacity"],
   ["J/(kg·K)", "specificHeat"],
   ["kg/m³", "density"],

@@ -34,6 +34,21 @@ function sharedOutsideFilm(input: PackageInput): boolean {
   );
 }
 
+/** The caution on room loads, printed once when the package computes a room. */
+export const ROOM_CAUTION =
+  "Room loads: a design load is not a system size. Sizing the plant needs the diversity between rooms, safety " +
+  "margins, pull-down after set-back or intermittent operation, the latent load and the losses of the system " +
+  "(fans, ducts, pipes), none of which is in these figures; the heat balance and radiant time series loads are " +
+  "steady-periodic (the design day repeated, the air held at the set point). The codes that apply where the " +
+  "building stands, and the review of a person qualified to sign under them, govern the sizing.";
+
+/** The room caution naming the computed rooms, or nothing when the package computes none. */
+function roomCaution(input: PackageInput): Trusted {
+  const rooms = Object.keys(input.results.rooms ?? {});
+  if (rooms.length === 0) return html``;
+  return html`<li class="caution-room" id="caution-room">${ROOM_CAUTION} Rooms: ${rooms.join(", ")}.</li>`;
+}
+
 /** Renders the cautions for the package input; `extra` holds cautions produced with the results (outside film). */
 export function renderCautionsSection(input: PackageInput, extra: readonly string[] = []): Trusted {
   const synthetic = syntheticWeather(input);
@@ -71,7 +86,7 @@ surface exchange), assess it separately.</li>`,
         html`
           <li class="caution-outside-film">${c}</li>
         `
-      )}
+      )}${roomCaution(input)}
       </ul>
     </section>
   `;

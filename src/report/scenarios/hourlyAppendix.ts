@@ -26,16 +26,24 @@ function steppedScenarios(ctx: RenderContext): { id: string; results: ScenarioRe
   });
 }
 
-/** Whether the package has an Appendix E (some scenario has step series). */
-export function hasHourlyAppendix(ctx: RenderContext): boolean {
-  return steppedScenarios(ctx).length > 0;
+/** Whether the package has an Appendix E (some scenario has step series, or `more` parts follow them). */
+export function hasHourlyAppendix(ctx: RenderContext, more = 0): boolean {
+  return steppedScenarios(ctx).length + more > 0;
 }
 
-/** Renders Appendix E, or nothing when no scenario has step series in results.json. */
-export function renderHourlyAppendix(ctx: RenderContext): Trusted {
+/** How many parts (E.1, E.2, …) the scenarios take, so that parts added after them number on. */
+export function hourlyScenarioParts(ctx: RenderContext): number {
+  return steppedScenarios(ctx).length;
+}
+
+/**
+ * Renders Appendix E, or nothing when no scenario has step series in results.json and no part is added; `more`
+ * are parts printed after the scenarios' (the rooms', made by the caller so that this folder needs no room code).
+ */
+export function renderHourlyAppendix(ctx: RenderContext, more: readonly Trusted[] = []): Trusted {
   const d = ctx.display;
   const scenarios = steppedScenarios(ctx);
-  if (scenarios.length === 0) return html``;
+  if (scenarios.length === 0 && more.length === 0) return html``;
   const parts = scenarios.map(({ id, results }, i) => {
     const anchor = hourlyAnchor(ctx.scenarioAnchors.get(id) ?? "sc-scenario");
     const cooling = results.coolingLoad === undefined
@@ -53,8 +61,11 @@ export function renderHourlyAppendix(ctx: RenderContext): Trusted {
   return html`
     <section id="${HOURLY_APPENDIX[0]}" class="appendix hourly-appendix">
       <h2>${HOURLY_APPENDIX[1]}</h2>
-      <p>The values of each design day at every step, in the display units: outdoor and indoor air, and per surface the sol-air temperature, the incident irradiance, the heat gain and, where a radiant time series is given, the cooling load. A weather year's step series are in its CSV file only (section 2 names it).</p>
-      ${parts}
+      <p>The values of each design day at every step, in the display units: outdoor and indoor air, and per surface the sol-air temperature, the incident irradiance, the heat gain and, where a radiant time series is given, the cooling load. A weather year's step series are in its CSV file only (section 2 names it).${more
+          .length === 0
+        ? ""
+        : " Each room follows: its inside surface temperatures, mean radiant temperature and its load by both methods."}</p>
+      ${parts}${more}
     </section>
   `;
 }

@@ -5,6 +5,22 @@ import type { Assumption, HeatingScenario } from "../../project/model.ts";
 import { formatPosition } from "../../project/position.ts";
 import type { Room } from "../../project/roomModel.ts";
 
+/** How the ISO 13370 inputs that can default are named in the assumptions register. */
+const GROUND_INPUT_NAMES: Readonly<Record<string, { key: string; text: string; unit: string }>> = {
+  soilConductivityWPerMK: { key: "soil-conductivity", text: "soil conductivity λ_g", unit: "W/(m·K)" },
+  wallThicknessM: { key: "ground-wall-thickness", text: "wall thickness w", unit: "m" },
+  insideResistanceM2KPerW: {
+    key: "ground-inside-resistance",
+    text: "inside surface resistance R_si",
+    unit: "m²·K/W",
+  },
+  outsideResistanceM2KPerW: {
+    key: "ground-outside-resistance",
+    text: "outside surface resistance R_se",
+    unit: "m²·K/W",
+  },
+};
+
 /** The temperatures the room's ground floors see, after defaults. */
 export interface RoomTemperatures {
   /** Under the slab on the design day, °C. */
@@ -46,8 +62,9 @@ export function roomAssumptions(
   }
   for (const [id, floor] of floors) {
     for (const [key, used] of Object.entries(floor.inputs)) {
-      if (!used.defaulted) continue;
-      log(`ground-${key}:${id}`, `ISO 13370 input ${key} of ${id}: ${used.value}`, used.source);
+      const named = GROUND_INPUT_NAMES[key];
+      if (!used.defaulted || named === undefined) continue;
+      log(`${named.key}:${id}`, `ISO 13370 ${named.text} of ${id}: ${used.value} ${named.unit}`, used.source);
     }
   }
   for (const window of room.windows) {

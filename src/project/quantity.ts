@@ -50,56 +50,9 @@ export function describeCodePoints(text: string): string {
  */
 export function parseQuantity(text: string, kind: QuantityKind, natural?: NaturalUnit): QuantityResult {
   const spec = natural === undefined ? QUANTITY_KINDS[kind] : { ...QUANTITY_KINDS[kind], ...natural };
-  const trimmed = text.trim();
-  if (SPOOF_CHARS.test(trimmed)) {
-    return fail(
-      `Cannot read ${spec.label} "${
-        describeCodePoints(trimmed)
-      }": it contains invisible or direction-control characters`,
-      `retype the value as plain text, e.g. "${spec.example}"`,
-    );
-  }
-  if (NON_DECIMAL_NUMBER.test(trimmed)) {
-    return fail(
-      `Cannot read ${spec.label} "${trimmed}": only decimal numbers are accepted, not hexadecimal, octal or binary`,
-      `write the number in decimal digits, e.g. "${spec.example}"`,
-    );
-  }
-  const numberMatch = NUMBER.exec(trimmed);
-  if (numberMatch === null) {
-    return fail(
-      `Cannot read ${spec.label} "${describeCodePoints(trimmed)}": it does not start with a number`,
-      `write e.g. "${spec.example}"`,
-    );
-  }
-  const numberText = numberMatch[0];
-  const rest = trimmed.slice(numberText.length);
-  if (/^,\d/.test(rest)) {
-    return fail(
-      `Cannot read ${spec.label} "${trimmed}": a comma is not accepted in numbers`,
-      `use a point as the decimal mark and no thousands separators, e.g. "${spec.example}"`,
-    );
-  }
-  const number = Number(numberText);
-  if (!Number.isFinite(number) || Math.abs(number) > LARGEST_MAGNITUDE) {
-    return fail(
-      `Cannot read ${spec.label} "${trimmed}": the number is out of range`,
-      `write e.g. "${spec.example}"`,
-    );
-  }
-  const unitText = rest.trim();
-  if (unitText === "") {
-    return fail(
-      `Missing unit in ${spec.label} "${trimmed}": a bare number is ambiguous`,
-      `write the unit, e.g. "${numberText} ${natural?.unit ?? exampleUnit(kind)}"`,
-    );
-  }
-  if (/^\d/.test(unitText)) {
-    return fail(
-      `Cannot read ${spec.label} "${trimmed}": a space is not accepted in numbers`,
-      `write the digits together, without thousands separators, e.g. "${spec.example}"`,
-    );
-  }
+  const split = splitQuantity(text, spec, natural?.unit ?? exampleUnit(kind));
+  if (!split.ok) return split;
+  const { trimmed, numberText, number, unitText } = split;
   if (!UNIT_CHARS.test(unitText)) {
     return fail(
       `Cannot read the unit "${
@@ -197,10 +150,87 @@ function toTarget(number: number, from: readonly UnitTerm[], to: readonly UnitTe
   return value;
 }
 
+/** A quantity's text split into its number and its unit text, or why it cannot be. */
+export type QuantitySplit =
+  | {
+    readonly ok: true;
+    readonly trimmed: string;
+    readonly numberText: string;
+    readonly number: number;
+    readonly unitText: string;
+  }
+  | { readonly ok: false; readonly message: string; readonly hint: string };
+
+/**
+ * The number rules every quantity shares: no invisible characters, decimal digits only, a point as the decimal
+ * mark, no thousands separators, a magnitude up to 1e12, and a unit after it (`unitHint` names one in the hint).
+ */
+export function splitQuantity(
+  text: string,
+  spec: { readonly label: string; readonly example: string },
+  unitHint: string,
+): QuantitySplit {
+  const trimmed = text.trim();
+  if (SPOOF_CHARS.test(trimmed)) {
+    return fail(
+      `Cannot read ${spec.label} "${
+        describeCodePoints(trimmed)
+      }": it contains invisible or direction-control characters`,
+      `retype the value as plain text, e.g. "${spec.example}"`,
+    );
+  }
+  if (NON_DECIMAL_NUMBER.test(trimmed)) {
+    return fail(
+      `Cannot read ${spec.label} "${trimmed}": only decimal numbers are accepted, not hexadecimal, octal or binary`,
+      `write the number in decimal digits, e.g. "${spec.example}"`,
+    );
+  }
+  const numberMatch = NUMBER.exec(trimmed);
+  if (numberMatch === null) {
+    return fail(
+      `Cannot read ${spec.label} "${describeCodePoints(trimmed)}": it does not start with a number`,
+      `write e.g. "${spec.example}"`,
+    );
+  }
+  const numberText = numberMatch[0];
+  const rest = trimmed.slice(numberText.length);
+  if (/^,\d/.test(rest)) {
+    return fail(
+      `Cannot read ${spec.label} "${trimmed}": a comma is not accepted in numbers`,
+      `use a point as the decimal mark and no thousands separators, e.g. "${spec.example}"`,
+    );
+  }
+  const number = Number(numberText);
+  if (!Number.isFinite(number) || Math.abs(number) > LARGEST_MAGNITUDE) {
+    return fail(
+      `Cannot read ${spec.label} "${trimmed}": the number is out of range`,
+      `write e.g. "${spec.example}"`,
+    );
+  }
+  const unitText = rest.trim();
+  if (unitText === "") {
+    return fail(
+      `Missing unit in ${spec.label} "${trimmed}": a bare number is ambiguous`,
+      `write the unit, e.g. "${numberText} ${unitHint}"`,
+    );
+  }
+  // A digit group after the number ("1 000 J/(kg K)") is a thousands separator; "1/h" is a unit.
+  if (/^\d+(?:\s|$)/.test(unitText)) {
+    return fail(
+      `Cannot read ${spec.label} "${trimmed}": a space is not accepted in numbers`,
+      `write the digits together, without thousands separators, e.g. "${spec.example}"`,
+    );
+  }
+  return { ok: true, trimmed, numberText, number, unitText };
+}
+
 function exampleUnit(kind: QuantityKind): string {
   return kind === "length" ? "mm" : QUANTITY_KINDS[kind].si;
 }
 
-function fail(message: string, hint: string): QuantityResult {
+function fail(
+  message: string,
+  hint: string,
+): { readonly ok: false; readonly message: string; readonly hint: string } {
   return { ok: false, message, hint };
 }

@@ -6,7 +6,7 @@
  */
 import { type Diagnostic, error } from "./diagnostic.ts";
 import { describe, type Fields, missing } from "./fields.ts";
-import { describeCodePoints, NON_DECIMAL_NUMBER } from "./quantity.ts";
+import { describeCodePoints, splitQuantity } from "./quantity.ts";
 import type { YamlValue } from "./yamlTree.ts";
 
 /** The international foot, m (exact). */
@@ -78,10 +78,6 @@ export type RoomQuantityResult =
   | { readonly ok: true; readonly value: number }
   | { readonly ok: false; readonly message: string; readonly hint: string };
 
-const NUMBER = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?/;
-const SPOOF_CHARS = /[\u200B-\u200F\u202A-\u202E\u2060-\u2069\uFEFF]/;
-const LARGEST_MAGNITUDE = 1e12;
-
 /** A unit spelling without the spaces that do not change it: `W/(m K)` and `W / (m K)` read alike. */
 function unitKey(unit: string): string {
   return unit.trim().replace(/\s+/g, " ").replace(/ ?([/()*]) ?/g, "$1");
@@ -90,51 +86,11 @@ function unitKey(unit: string): string {
 /** Parses `"<number> <unit>"` of a room quantity kind into its stored unit. */
 export function parseRoomQuantity(text: string, kind: RoomQuantityKind): RoomQuantityResult {
   const spec: RoomKindSpec = ROOM_QUANTITY_KINDS[kind];
-  const trimmed = text.trim();
   const fail = (message: string, hint: string): RoomQuantityResult => ({ ok: false, message, hint });
-  if (SPOOF_CHARS.test(trimmed)) {
-    return fail(
-      `Cannot read ${spec.label} "${
-        describeCodePoints(trimmed)
-      }": it contains invisible or direction-control characters`,
-      `retype the value as plain text, e.g. "${spec.example}"`,
-    );
-  }
-  if (NON_DECIMAL_NUMBER.test(trimmed)) {
-    return fail(
-      `Cannot read ${spec.label} "${trimmed}": only decimal numbers are accepted, not hexadecimal, octal or binary`,
-      `write the number in decimal digits, e.g. "${spec.example}"`,
-    );
-  }
-  const numberText = NUMBER.exec(trimmed)?.[0];
-  if (numberText === undefined) {
-    return fail(
-      `Cannot read ${spec.label} "${describeCodePoints(trimmed)}": it does not start with a number`,
-      `write e.g. "${spec.example}"`,
-    );
-  }
-  const rest = trimmed.slice(numberText.length);
-  if (/^,\d/.test(rest)) {
-    return fail(
-      `Cannot read ${spec.label} "${trimmed}": a comma is not accepted in numbers`,
-      `use a point as the decimal mark and no thousands separators, e.g. "${spec.example}"`,
-    );
-  }
-  const number = Number(numberText);
-  if (!Number.isFinite(number) || Math.abs(number) > LARGEST_MAGNITUDE) {
-    return fail(
-      `Cannot read ${spec.label} "${trimmed}": the number is out of range`,
-      `write e.g. "${spec.example}"`,
-    );
-  }
-  const unitText = rest.trim();
   const accepted = Object.keys(spec.units);
-  if (unitText === "") {
-    return fail(
-      `Missing unit in ${spec.label} "${trimmed}": a bare number is ambiguous`,
-      `write the unit, e.g. "${numberText} ${accepted[0]}"`,
-    );
-  }
+  const split = splitQuantity(text, spec, accepted[0]!);
+  if (!split.ok) return split;
+  const { number, unitText } = split;
   const factor = Object.entries(spec.units).find(([unit]) => unitKey(unit) === unitKey(unitText))?.[1];
   if (factor === undefined) {
     return fail(

@@ -26,7 +26,7 @@ export async function runCheck(options: CheckOptions, io: CommandIo): Promise<nu
   const loaded = await loadProject(options.project);
   const computed = loaded.model === undefined
     ? undefined
-    : computeProject(loaded.model, loaded.inputRecords, loaded.dataTexts);
+    : computeProject(loaded.model, loaded.inputRecords, loaded.dataTexts, undefined, { packageParts: false });
   const review = loaded.model === undefined
     ? []
     : reviewProject(loaded.model, computed?.ok ? computed.computed.results : undefined);

@@ -100,6 +100,22 @@ let lastLexed: { readonly body: string; readonly tokens: Token[] } | undefined;
  * running offset gives each token's line.
  */
 export function splitMarkdown(body: string, firstLine: number): MarkdownPiece[] {
+  if (!mayHoldFence(body)) {
+    // No fence anywhere: all prose, as the lexer's tokens would give it (their raw texts concatenate to the
+    // body), without lexing it.
+    const prose = body.replace(/\r\n?/g, "\n");
+    return prose.trim() === "" ? [] : [{ kind: "prose", markdown: prose, line: firstLine }];
+  }
+  return splitLexed(body, firstLine);
+}
+
+/** A fence opens with three backticks or tildes; a body without either holds no fence, at any nesting. */
+function mayHoldFence(body: string): boolean {
+  return body.includes("```") || body.includes("~~~");
+}
+
+/** `splitMarkdown` by the lexer's tokens, whatever the body (exported for the test of the shortcut above). */
+export function splitLexed(body: string, firstLine: number): MarkdownPiece[] {
   const tokens = lexBlocks(body);
   const pieces: MarkdownPiece[] = [];
   let line = firstLine;
@@ -161,6 +177,7 @@ const NESTED_OPENER = /^((?:[ \t]*(?:>|[-*+]|\d{1,9}[.)]))*[ \t]*)(`{3,}|~{3,})[
  * file), and fences inside lists, block quotes or indented code (they would silently become prose).
  */
 export function findFenceProblems(body: string, firstLine: number, infos: readonly string[]): FenceProblem[] {
+  if (!mayHoldFence(body)) return []; // both kinds of problem start at fence characters
   const problems: FenceProblem[] = [];
   let line = firstLine;
   for (const token of lexBlocks(body)) {

@@ -10,7 +10,6 @@
  */
 const started = performance.now();
 if (Deno.args.includes("--with-mathjs")) await import("mathjs/lib/browser/math.js");
-(await import("../src/commands/quietDependencies.ts")).hideEnvironmentFromDependencies(); // as src/cli.ts does
 (await import("../src/project/yamlLibrary.ts")).deferYamlLibrary(); // as src/cli.ts does for check
 const { loadProject } = await import("../src/commands/loadProject.ts");
 const { computeProject } = await import("../src/results/buildResults.ts");

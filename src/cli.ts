@@ -298,8 +298,12 @@ async function dispatch(
     io.stderr(`fluxnote: unknown command "${command}"\n\n${USAGE}`);
     return 2;
   }
-  // Before any command module (and the YAML parser with it) is loaded.
-  (await import("./commands/quietDependencies.ts")).hideEnvironmentFromDependencies();
+  // Before any command module (and the YAML parser with it) is loaded. `check` loads the parser only for a
+  // block that needs it, and hides the environment then (src/commands/loadProject.ts): Node's process
+  // object costs start-up time.
+  if (command !== "check") {
+    (await import("./commands/quietDependencies.ts")).hideEnvironmentFromDependencies();
+  }
   const { parseArgs } = await import("node:util");
   try {
     const parsed = parseArgs({

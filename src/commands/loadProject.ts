@@ -38,6 +38,7 @@ export async function loadProject(
     return await loadOnce(folder, librarySource);
   } catch (cause) {
     if (!(cause instanceof YamlLibraryNeeded)) throw cause;
+    (await import("./quietDependencies.ts")).hideEnvironmentFromDependencies(); // before the parser runs
     await loadYamlLibrary();
     return await loadOnce(folder, librarySource);
   }

@@ -89,7 +89,8 @@ Deno.test("check of the template reads its YAML without loading the YAML library
 });
 
 Deno.test("check loads the YAML library for a block only the library reads, and reports what the library finds", async () => {
-  // A custom tag: refused by the reader (yaml-tag), which only the library can see.
+  // A custom tag: refused by the reader, which only the library can see. The environment must be hidden from
+  // the library before it parses (it reads LOG_TOKENS; without --allow-env that read fails the run).
   const run = await deno([
     "run",
     "--quiet",

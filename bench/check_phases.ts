@@ -10,7 +10,7 @@
  */
 const started = performance.now();
 if (Deno.args.includes("--with-mathjs")) await import("mathjs/lib/browser/math.js");
-(await import("../src/project/yamlLibrary.ts")).deferYamlLibrary(); // as src/cli.ts does for check
+(await import("../src/project/readerLibraries.ts")).deferReaderLibraries(); // as src/cli.ts does for check
 const { loadProject } = await import("../src/commands/loadProject.ts");
 const { computeProject } = await import("../src/results/buildResults.ts");
 const { reviewProject } = await import("../src/review/mod.ts");

@@ -167,8 +167,8 @@ const COMMANDS: Record<string, CommandSpec> = {
     run: async ([project = ""], values, io) => {
       const format = choice("format", values.format, ["text", "json"] as const);
       const severity = choice("severity", values.severity, ["error", "warning", "note"] as const);
-      // Plain YAML is read without the YAML library; it is loaded only for a block that needs it.
-      (await import("./project/yamlLibrary.ts")).deferYamlLibrary();
+      // Plain YAML and Markdown are read without their libraries, loaded only for a text that needs them.
+      (await import("./project/readerLibraries.ts")).deferReaderLibraries();
       const { runCheck } = await import("./commands/check.ts");
       return runCheck({ project, format, strict: values.strict === true, severity }, io);
     },

@@ -11,7 +11,6 @@ import {
 } from "../project/resolveProject.ts";
 import type { InputFileRecord } from "../results/types.ts";
 import { placeholderFindings } from "../review/placeholderRules.ts";
-import { loadYamlLibrary, YamlLibraryNeeded } from "../project/yamlLibrary.ts";
 
 /** A project read and resolved, ready to compute, or the diagnostics that stopped it. */
 export interface LoadedProject {
@@ -25,26 +24,11 @@ export interface LoadedProject {
   readonly dataTexts: ReadonlyMap<string, string>;
 }
 
-/**
- * Reads and resolves a project folder; every diagnostic of both stages is collected and sorted. With the YAML
- * library deferred (`fluxnote check`), a project with a block only the library reads is read again once it
- * is loaded (src/project/yamlLibrary.ts).
- */
+/** Reads and resolves a project folder; every diagnostic of both stages is collected and sorted. */
 export async function loadProject(
   folder: string | ProjectFs,
   librarySource: LibrarySource = BUILT_IN_LIBRARY,
 ): Promise<LoadedProject> {
-  try {
-    return await loadOnce(folder, librarySource);
-  } catch (cause) {
-    if (!(cause instanceof YamlLibraryNeeded)) throw cause;
-    (await import("./quietDependencies.ts")).hideEnvironmentFromDependencies(); // before the parser runs
-    await loadYamlLibrary();
-    return await loadOnce(folder, librarySource);
-  }
-}
-
-async function loadOnce(folder: string | ProjectFs, librarySource: LibrarySource): Promise<LoadedProject> {
   const fs = typeof folder === "string" ? await diskProjectFs(folder) : folder;
   if (fs === undefined) {
     // The folder itself is the place (line 0: no line of any file), not a project.md that is not there.

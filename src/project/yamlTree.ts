@@ -2,14 +2,14 @@ import type { Node } from "yaml";
 import { type Diagnostic, error } from "./diagnostic.ts";
 import type { Position } from "./position.ts";
 import { describeCodePoints, NON_DECIMAL_NUMBER } from "./quantity.ts";
-import { loadYamlLibrary, yamlLibrary, yamlLibraryDeferred } from "./yamlLibrary.ts";
+import { loadReaderLibraries, readerLibrariesDeferred, yamlLibrary } from "./readerLibraries.ts";
 import { parseSimpleYaml } from "./yamlSubset.ts";
 import type { YamlEntry, YamlValue } from "./yamlValue.ts";
 
 export type { YamlEntry, YamlValue } from "./yamlValue.ts";
 
-// The library is there before any reading, unless `fluxnote check` deferred it (src/project/yamlLibrary.ts).
-if (!yamlLibraryDeferred()) await loadYamlLibrary();
+// The library is there before any reading, unless `fluxnote check` deferred it (src/project/readerLibraries.ts).
+if (!readerLibrariesDeferred()) await loadReaderLibraries();
 
 export type YamlParse =
   | { readonly ok: true; readonly value: YamlValue }

@@ -1,6 +1,6 @@
 /**
  * Runs `fluxnote check <project>` through src/cli.ts's `main` in this fresh process and prints one JSON line:
- * the exit code, the rules of the findings and whether the YAML library was loaded. For test/commands/checkStartup_test.ts.
+ * the exit code, the rules of the findings and which reader libraries were loaded. For test/commands/checkStartup_test.ts.
  *
  *   deno run --allow-read test/commands/_checkLoads.ts <project folder>
  */
@@ -12,12 +12,14 @@ const code = await main(["check", Deno.args[0] ?? "", "--format", "json"], {
   stderr: () => {},
   colour: false,
 });
-const { yamlLibrary } = await import("../../src/project/yamlLibrary.ts");
-let yamlLoaded = true;
-try {
-  yamlLibrary();
-} catch {
-  yamlLoaded = false;
-}
+const { markdownLibrary, yamlLibrary } = await import("../../src/project/readerLibraries.ts");
+const loaded = Object.entries({ YAML: yamlLibrary, Markdown: markdownLibrary }).flatMap(([name, library]) => {
+  try {
+    library();
+    return [name];
+  } catch {
+    return [];
+  }
+});
 const rules = (JSON.parse(out) as { findings: { rule: string }[] }).findings.map((f) => f.rule);
-console.log(JSON.stringify({ code, rules: [...new Set(rules)], yamlLoaded }));
+console.log(JSON.stringify({ code, rules: [...new Set(rules)], loaded }));

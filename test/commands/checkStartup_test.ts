@@ -1,8 +1,8 @@
 /**
  * `fluxnote check` starts fast (README, "Start-up"): its modules do not include the package renderer, the
- * plotting and DOM libraries or the YAML library, plain YAML is read without the library (loaded only for a
- * block that needs it, with the same findings), and the work only the package shows (the sensitivity study,
- * the CSV tables) is not done.
+ * plotting and DOM libraries, the YAML parser or the Markdown lexer; plain YAML and Markdown are read without
+ * them (loaded only for a text that needs them, with the same findings), and the work only the package shows
+ * (the sensitivity study, the CSV tables) is not done.
  */
 import assert from "node:assert/strict";
 import { join } from "node:path";
@@ -52,14 +52,14 @@ function staticModules(
   return [...seen];
 }
 
-Deno.test("the static module graph of check holds no YAML, plotting, DOM or package-rendering module", async () => {
+Deno.test("the static module graph of check holds no YAML, Markdown, plotting, DOM or package-rendering module", async () => {
   const info = await deno(["info", "--json", "--config", "deno.json", "src/commands/check.ts"]);
   assert.equal(info.code, 0, info.err);
   const specifiers = staticModules(JSON.parse(info.out));
   assert.ok(specifiers.some((s) => s.endsWith("/src/project/readProject.ts")), "the graph was read");
-  assert.ok(specifiers.some((s) => s.startsWith("npm:/marked@")), "npm modules are in the graph");
   for (
     const heavy of [
+      "npm:/marked@",
       "npm:/yaml@",
       "npm:/linkedom@",
       "npm:/@observablehq/plot@",
@@ -71,7 +71,7 @@ Deno.test("the static module graph of check holds no YAML, plotting, DOM or pack
   }
 });
 
-Deno.test("check of the template reads its YAML without loading the YAML library", async () => {
+Deno.test("check of the template reads its YAML and Markdown without loading their libraries", async () => {
   const run = await deno([
     "run",
     "--quiet",
@@ -85,10 +85,10 @@ Deno.test("check of the template reads its YAML without loading the YAML library
   const result = JSON.parse(run.out);
   assert.equal(result.code, 0);
   assert.ok(result.rules.includes("placeholder-text"), "the template's findings were made");
-  assert.equal(result.yamlLoaded, false);
+  assert.deepEqual(result.loaded, []);
 });
 
-Deno.test("check loads the YAML library for a block only the library reads, and reports what the library finds", async () => {
+Deno.test("check loads the libraries for a block only the YAML library reads, and reports what it finds", async () => {
   // A custom tag: refused by the reader, which only the library can see. The environment must be hidden from
   // the library before it parses (it reads LOG_TOKENS; without --allow-env that read fails the run).
   const run = await deno([
@@ -101,7 +101,7 @@ Deno.test("check loads the YAML library for a block only the library reads, and 
     "test/fixtures/hostile/yaml-custom-tag",
   ]);
   assert.equal(run.code, 0, run.err);
-  assert.deepEqual(JSON.parse(run.out), { code: 1, rules: ["yaml-syntax"], yamlLoaded: true });
+  assert.deepEqual(JSON.parse(run.out), { code: 1, rules: ["yaml-syntax"], loaded: ["YAML", "Markdown"] });
 });
 
 Deno.test("computeProject without the package parts skips the sensitivity study and the CSV tables, nothing else", async () => {

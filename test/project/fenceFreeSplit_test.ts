@@ -1,14 +1,22 @@
 /**
- * A Markdown body with no fence characters (three backticks or tildes) is all prose: `splitMarkdown` gives it
- * whole without running marked's lexer (start-up, README), and must give exactly what the lexer's tokens give
- * (the reference: marked 18.2.1's block lexer, GFM). Checked on the prose of every Markdown file of the
- * repository and on generated bodies of every block kind.
+ * `splitMarkdown` and `findFenceProblems` skip marked's lexer for a body with no fence characters (all prose)
+ * and for plain Markdown (src/project/plainMarkdown.ts: margin paragraphs and headings, closed backtick fences
+ * between blank lines), for start-up time (README). Their answers must be exactly those of the lexer's tokens
+ * (the reference: marked 18.2.1's block lexer, GFM): checked on every Markdown body of the repository and on
+ * generated bodies of every block kind.
  */
 import assert from "node:assert/strict";
 import { join } from "node:path";
 import fc from "fast-check";
 
-import { findFenceProblems, splitFrontMatter, splitLexed, splitMarkdown } from "../../src/project/fences.ts";
+import {
+  findFenceProblems,
+  lexedFenceProblems,
+  splitFrontMatter,
+  splitLexed,
+  splitMarkdown,
+} from "../../src/project/fences.ts";
+import { splitPlainMarkdown } from "../../src/project/plainMarkdown.ts";
 
 const ROOT = new URL("../../", import.meta.url).pathname;
 const INFOS = ["material", "construction", "scenario"];
@@ -23,34 +31,40 @@ function markdownFiles(folder: string): string[] {
   return out;
 }
 
-const fenceFree = (text: string) => !text.includes("```") && !text.includes("~~~");
-
 function agree(body: string, where: string): void {
   assert.deepEqual(splitMarkdown(body, 7), splitLexed(body, 7), where);
-  assert.deepEqual(findFenceProblems(body, 7, INFOS), [], where);
+  assert.deepEqual(findFenceProblems(body, 7, INFOS), lexedFenceProblems(body, 7, INFOS), where);
 }
 
-Deno.test("a body without fence characters splits as the lexer splits it: the repository's prose", () => {
-  let bodies = 0;
+Deno.test("a Markdown body splits as the lexer splits it, shortcuts or not: the repository's files", () => {
+  let plain = 0, bodies = 0;
   for (
     const path of ["projects", "templates", "test/fixtures"].flatMap((f) => markdownFiles(join(ROOT, f)))
   ) {
     const text = new TextDecoder().decode(Deno.readFileSync(path));
     const split = splitFrontMatter(text);
-    const candidates = [
-      split.body,
-      ...splitLexed(split.body, 1).flatMap((p) => p.kind === "prose" ? [p.markdown] : []),
-    ];
-    for (const body of candidates.filter(fenceFree)) {
+    const prose = splitLexed(split.body, 1).flatMap((p) => p.kind === "prose" ? [p.markdown] : []);
+    for (const body of [split.body, ...prose]) {
       agree(body, path);
       bodies++;
+      if (splitPlainMarkdown(body, 1) !== undefined) plain++;
     }
   }
-  assert.ok(bodies > 100, `only ${bodies} fence-free bodies`);
+  assert.ok(plain > 50 && bodies > plain, `${plain} of ${bodies} bodies plain`);
+});
+
+Deno.test("the template's Markdown is split without the lexer", () => {
+  for (const path of markdownFiles(join(ROOT, "templates", "new-project"))) {
+    const { body, bodyLine } = splitFrontMatter(Deno.readTextFileSync(path));
+    const fenceFree = !body.includes("```") && !body.includes("~~~");
+    assert.ok(fenceFree || splitPlainMarkdown(body, bodyLine) !== undefined, path);
+  }
 });
 
 const BLOCKS = [
   "# Heading",
+  "## Heading ##",
+  "#NoSpace",
   "Setext\n===",
   "Setext\n---",
   "para one\npara two",
@@ -62,6 +76,7 @@ const BLOCKS = [
   "> quote\nlazy",
   "> > nested",
   "| a | b |\n|---|---|\n| 1 | 2 |",
+  "a | b\n--|--",
   "<div>\nhtml\n</div>",
   "<!-- comment -->",
   "<pre>\nx\n\n</pre>",
@@ -80,20 +95,38 @@ const BLOCKS = [
   "text\r\nmore",
   "Placeholder: replace",
   "  - nested\n    - deeper",
-  "| lone pipe",
-  "1. x\n\n   ```\n",
+  "**Bold** start",
+  "** * **",
+  "2031 was a year",
+  "λ = 0.5 W/(m K)",
+  "1. x\n\n   ```material\n   a: 1\n   ```",
+  "```material\nid: a\n```",
+  "```construction\nid: b\nlayers:\n  - x\n```",
+  "```\n```",
+  "```scenario\n\n```",
+  "```material\nno close",
+  "````material\nid: a\n````",
+  "~~~material\nid: a\n~~~",
+  "```material\n  ```\n```",
+  " ```material\nid: a\n```",
+  "```material extra words\nid: a\n```",
+  "```material\n~~~\n```",
+  "```material\n```x\n```",
 ];
 
-Deno.test("a body without fence characters splits as the lexer splits it: generated bodies", () => {
+Deno.test("a Markdown body splits as the lexer splits it, shortcuts or not: generated bodies", () => {
+  let plain = 0;
   fc.assert(
     fc.property(
-      fc.array(fc.constantFrom(...BLOCKS), { minLength: 1, maxLength: 8 }),
-      fc.array(fc.constantFrom("\n", "\n\n", "\n\n\n", "\r\n"), { minLength: 8, maxLength: 8 }),
+      fc.array(fc.constantFrom(...BLOCKS), { minLength: 1, maxLength: 7 }),
+      fc.array(fc.constantFrom("\n", "\n\n", "\n\n", "\n\n\n", "\r\n", ""), { minLength: 7, maxLength: 7 }),
       (blocks, gaps) => {
         const body = blocks.map((b, i) => b + gaps[i]).join("");
-        if (fenceFree(body)) agree(body, JSON.stringify(body));
+        if (splitPlainMarkdown(body, 7) !== undefined) plain++;
+        agree(body, JSON.stringify(body));
       },
     ),
-    { numRuns: 1500, seed: 20312 },
+    { numRuns: 3000, seed: 20312 },
   );
+  assert.ok(plain > 80, `only ${plain} generated bodies plain`);
 });

@@ -299,7 +299,7 @@ async function dispatch(
     return 2;
   }
   // Before any command module (and the YAML parser with it) is loaded. `check` loads the parser only for a
-  // block that needs it, and hides the environment then (src/commands/loadProject.ts): Node's process
+  // block that needs it, and hides the environment then (src/commands/check.ts): Node's process
   // object costs start-up time.
   if (command !== "check") {
     (await import("./commands/quietDependencies.ts")).hideEnvironmentFromDependencies();

@@ -10,7 +10,7 @@
  */
 const started = performance.now();
 if (Deno.args.includes("--with-mathjs")) await import("mathjs/lib/browser/math.js");
-(await import("../src/commands/quietDependencies.ts")).hideEnvironmentFromDependencies(); // as src/cli.ts does
+(await import("../src/project/readerLibraries.ts")).deferReaderLibraries(); // as src/cli.ts does for check
 const { loadProject } = await import("../src/commands/loadProject.ts");
 const { computeProject } = await import("../src/results/buildResults.ts");
 const { reviewProject } = await import("../src/review/mod.ts");
@@ -19,7 +19,7 @@ const loaded = await loadProject(Deno.args.find((a) => !a.startsWith("--")) ?? "
 const read = performance.now();
 const computed = loaded.model === undefined
   ? undefined
-  : computeProject(loaded.model, loaded.inputRecords, loaded.dataTexts);
+  : computeProject(loaded.model, loaded.inputRecords, loaded.dataTexts, undefined, { packageParts: false });
 const done = performance.now();
 if (loaded.model !== undefined) {
   reviewProject(loaded.model, computed?.ok ? computed.computed.results : undefined);

@@ -167,6 +167,8 @@ const COMMANDS: Record<string, CommandSpec> = {
     run: async ([project = ""], values, io) => {
       const format = choice("format", values.format, ["text", "json"] as const);
       const severity = choice("severity", values.severity, ["error", "warning", "note"] as const);
+      // Plain YAML and Markdown are read without their libraries, loaded only for a text that needs them.
+      (await import("./project/readerLibraries.ts")).deferReaderLibraries();
       const { runCheck } = await import("./commands/check.ts");
       return runCheck({ project, format, strict: values.strict === true, severity }, io);
     },
@@ -296,8 +298,12 @@ async function dispatch(
     io.stderr(`fluxnote: unknown command "${command}"\n\n${USAGE}`);
     return 2;
   }
-  // Before any command module (and the YAML parser with it) is loaded.
-  (await import("./commands/quietDependencies.ts")).hideEnvironmentFromDependencies();
+  // Before any command module (and the YAML parser with it) is loaded. `check` loads the parser only for a
+  // block that needs it, and hides the environment then (src/commands/check.ts): Node's process
+  // object costs start-up time.
+  if (command !== "check") {
+    (await import("./commands/quietDependencies.ts")).hideEnvironmentFromDependencies();
+  }
   const { parseArgs } = await import("node:util");
   try {
     const parsed = parseArgs({

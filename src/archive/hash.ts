@@ -1,4 +1,3 @@
-import process from "node:process";
 import { sha256HexSmall } from "./sha256.ts";
 
 /** Up to this size data is hashed here; above it node:crypto is loaded, the first time it is needed. */
@@ -14,9 +13,9 @@ export function sha256Hex(data: Uint8Array | string): string {
   if (data.length <= SMALL / 4 || (typeof data !== "string" && data.length <= SMALL)) {
     return sha256HexSmall(typeof data === "string" ? new TextEncoder().encode(data) : data);
   }
-  nodeCrypto ??= (process as unknown as { getBuiltinModule(id: string): NodeCrypto }).getBuiltinModule(
-    "node:crypto",
-  );
+  // Node's process object, reached only here: loading it costs start-up time that small inputs never need.
+  nodeCrypto ??= (globalThis as unknown as { process: { getBuiltinModule(id: string): NodeCrypto } }).process
+    .getBuiltinModule("node:crypto");
   return nodeCrypto.createHash("sha256").update(data).digest("hex");
 }
 

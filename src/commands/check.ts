@@ -1,13 +1,14 @@
-import { type Severity, sortDiagnostics } from "../project/diagnostic.ts";
+import { type Diagnostic, type Severity, sortDiagnostics } from "../project/diagnostic.ts";
+import { loadReaderLibraries, ReaderLibraryNeeded } from "../project/readerLibraries.ts";
 import type { Acknowledgement } from "../project/signOff.ts";
-import { computeProject } from "../results/buildResults.ts";
+import { type ComputeOutcome, computeProject } from "../results/buildResults.ts";
 import { issueGate } from "../results/issueGate.ts";
 import { buildSummary } from "../results/summary.ts";
 import { formatPosition } from "../project/position.ts";
 import { formatFinding, reviewProject } from "../review/mod.ts";
 import { atLeast, formatGroups, groupFindings, markFindings } from "../review/findingGroups.ts";
 import type { CommandIo } from "./commandIo.ts";
-import { loadProject } from "./loadProject.ts";
+import { type LoadedProject, loadProject } from "./loadProject.ts";
 
 export interface CheckOptions {
   readonly project: string;
@@ -23,25 +24,18 @@ export interface CheckOptions {
  * marked, and does not count for `--strict`.
  */
 export async function runCheck(options: CheckOptions, io: CommandIo): Promise<number> {
-  const loaded = await loadProject(options.project);
-  const computed = loaded.model === undefined
-    ? undefined
-    : computeProject(loaded.model, loaded.inputRecords, loaded.dataTexts);
-  const review = loaded.model === undefined
-    ? []
-    : reviewProject(loaded.model, computed?.ok ? computed.computed.results : undefined);
-  const reviewed = [...loaded.diagnostics, ...review];
-  const gate = loaded.model === undefined || !computed?.ok ? [] : issueGate(
-    loaded.model,
-    buildSummary(loaded.model, computed.computed.results, reviewed),
-    reviewed,
-  );
-  const diagnostics = sortDiagnostics([
-    ...loaded.diagnostics,
-    ...(computed === undefined || computed.ok ? [] : computed.diagnostics),
-    ...review,
-    ...gate,
-  ]);
+  let checked: Checked;
+  try {
+    checked = await checkProject(options.project);
+  } catch (cause) {
+    // Plain YAML and Markdown are read without their libraries (src/project/readerLibraries.ts); a text that
+    // needs one is checked again with both loaded, and the environment hidden from them first.
+    if (!(cause instanceof ReaderLibraryNeeded)) throw cause;
+    (await import("./quietDependencies.ts")).hideEnvironmentFromDependencies();
+    await loadReaderLibraries();
+    checked = await checkProject(options.project);
+  }
+  const { loaded, computed, diagnostics } = checked;
   const marked = markFindings(diagnostics, loaded.model?.info.acknowledged ?? []);
   const open = marked.filter((m) => m.acknowledged === undefined).map((m) => m.finding);
   const failedChecks = computed?.ok ? computed.computed.results.checks.filter((c) => !c.pass) : [];
@@ -97,6 +91,36 @@ export async function runCheck(options: CheckOptions, io: CommandIo): Promise<nu
     );
   }
   return errors > 0 || (options.strict && warnings > 0) ? 1 : 0;
+}
+
+interface Checked {
+  readonly loaded: LoadedProject;
+  readonly computed: ComputeOutcome | undefined;
+  readonly diagnostics: readonly Diagnostic[];
+}
+
+/** Reads, computes (without the parts only the package shows) and reviews a project: every finding, sorted. */
+async function checkProject(project: string): Promise<Checked> {
+  const loaded = await loadProject(project);
+  const computed = loaded.model === undefined
+    ? undefined
+    : computeProject(loaded.model, loaded.inputRecords, loaded.dataTexts, undefined, { packageParts: false });
+  const review = loaded.model === undefined
+    ? []
+    : reviewProject(loaded.model, computed?.ok ? computed.computed.results : undefined);
+  const reviewed = [...loaded.diagnostics, ...review];
+  const gate = loaded.model === undefined || !computed?.ok ? [] : issueGate(
+    loaded.model,
+    buildSummary(loaded.model, computed.computed.results, reviewed),
+    reviewed,
+  );
+  const diagnostics = sortDiagnostics([
+    ...loaded.diagnostics,
+    ...(computed === undefined || computed.ok ? [] : computed.diagnostics),
+    ...review,
+    ...gate,
+  ]);
+  return { loaded, computed, diagnostics };
 }
 
 function ackJson(ack: Acknowledgement | undefined): { reason: string; by: string; at: string } | null {

@@ -1,23 +1,12 @@
-import { Lexer, type Token } from "marked";
+import type { Token } from "marked";
+import type { MarkdownPiece } from "./markdownPiece.ts";
+import { splitPlainMarkdown } from "./plainMarkdown.ts";
+import { loadReaderLibraries, markdownLibrary, readerLibrariesDeferred } from "./readerLibraries.ts";
 
-/** A top-level piece of a Markdown body: prose or a fenced code block, with its 1-based start line. */
-export type MarkdownPiece =
-  | { readonly kind: "prose"; readonly markdown: string; readonly line: number }
-  | {
-    readonly kind: "fence";
-    /** First word of the info string, read from the fence line itself. */
-    readonly info: string;
-    /** The whole info string after the fence characters, trimmed. */
-    readonly infoString: string;
-    /** Raw text of the whole fence, for display. */
-    readonly raw: string;
-    /** Text between the fences. */
-    readonly body: string;
-    /** Line of the opening fence. */
-    readonly line: number;
-    /** Line of the first body line. */
-    readonly bodyLine: number;
-  };
+export type { MarkdownPiece } from "./markdownPiece.ts";
+
+// The lexer is there before any reading, unless `fluxnote check` deferred it (src/project/readerLibraries.ts).
+if (!readerLibrariesDeferred()) await loadReaderLibraries();
 
 /** Front matter split from a Markdown file: the YAML text and the line its first line is on. */
 export interface FrontMatterSplit {
@@ -86,6 +75,7 @@ export function findSecondFrontMatter(body: string, firstLine: number): number |
  */
 function lexBlocks(body: string): Token[] {
   if (lastLexed?.body !== body) {
+    const { Lexer } = markdownLibrary();
     lastLexed = { body, tokens: new Lexer({ gfm: true }).blockTokens(body.replace(/\r\n?/g, "\n"), []) };
   }
   return lastLexed.tokens;
@@ -100,6 +90,22 @@ let lastLexed: { readonly body: string; readonly tokens: Token[] } | undefined;
  * running offset gives each token's line.
  */
 export function splitMarkdown(body: string, firstLine: number): MarkdownPiece[] {
+  const normalized = body.replace(/\r\n?/g, "\n");
+  if (!mayHoldFence(body) && !/[ \t]$/.test(normalized)) {
+    // No fence anywhere: all prose, as the lexer's tokens would give it (their raw texts concatenate to the
+    // body, except for a lone space or tab at its very end, which the lexer gives as a line break).
+    return normalized.trim() === "" ? [] : [{ kind: "prose", markdown: normalized, line: firstLine }];
+  }
+  return splitPlainMarkdown(body, firstLine) ?? splitLexed(body, firstLine);
+}
+
+/** A fence opens with three backticks or tildes; a body without either holds no fence, at any nesting. */
+function mayHoldFence(body: string): boolean {
+  return body.includes("```") || body.includes("~~~");
+}
+
+/** `splitMarkdown` by the lexer's tokens, whatever the body (exported for the test of the shortcut above). */
+export function splitLexed(body: string, firstLine: number): MarkdownPiece[] {
   const tokens = lexBlocks(body);
   const pieces: MarkdownPiece[] = [];
   let line = firstLine;
@@ -161,6 +167,17 @@ const NESTED_OPENER = /^((?:[ \t]*(?:>|[-*+]|\d{1,9}[.)]))*[ \t]*)(`{3,}|~{3,})[
  * file), and fences inside lists, block quotes or indented code (they would silently become prose).
  */
 export function findFenceProblems(body: string, firstLine: number, infos: readonly string[]): FenceProblem[] {
+  // Both kinds of problem start at fence characters; a plain body's fences are all closed, at the margin.
+  if (!mayHoldFence(body) || splitPlainMarkdown(body, firstLine) !== undefined) return [];
+  return lexedFenceProblems(body, firstLine, infos);
+}
+
+/** `findFenceProblems` by the lexer's tokens, whatever the body (exported for the test of the shortcuts). */
+export function lexedFenceProblems(
+  body: string,
+  firstLine: number,
+  infos: readonly string[],
+): FenceProblem[] {
   const problems: FenceProblem[] = [];
   let line = firstLine;
   for (const token of lexBlocks(body)) {

@@ -1,24 +1,15 @@
-import { isAlias, isMap, isScalar, isSeq, LineCounter, type Node, parseDocument } from "yaml";
+import type { Node } from "yaml";
 import { type Diagnostic, error } from "./diagnostic.ts";
 import type { Position } from "./position.ts";
 import { describeCodePoints, NON_DECIMAL_NUMBER } from "./quantity.ts";
+import { loadReaderLibraries, readerLibrariesDeferred, yamlLibrary } from "./readerLibraries.ts";
+import { parseSimpleYaml } from "./yamlSubset.ts";
+import type { YamlEntry, YamlValue } from "./yamlValue.ts";
 
-/** A YAML value with the position of its first character in the project file. */
-export type YamlValue =
-  | {
-    readonly kind: "scalar";
-    readonly value: string | number | boolean | null;
-    readonly text: string;
-    readonly at: Position;
-  }
-  | { readonly kind: "map"; readonly entries: readonly YamlEntry[]; readonly at: Position }
-  | { readonly kind: "list"; readonly items: readonly YamlValue[]; readonly at: Position };
+export type { YamlEntry, YamlValue } from "./yamlValue.ts";
 
-export interface YamlEntry {
-  readonly key: string;
-  readonly keyAt: Position;
-  readonly value: YamlValue;
-}
+// The library is there before any reading, unless `fluxnote check` deferred it (src/project/readerLibraries.ts).
+if (!readerLibrariesDeferred()) await loadReaderLibraries();
 
 export type YamlParse =
   | { readonly ok: true; readonly value: YamlValue }
@@ -34,6 +25,15 @@ const CONTROL = /[\u0000-\u0008\u000B-\u001F\u007F-\u009F]/;
  * Aliases, tags and duplicate keys are errors, so alias bombs and object tags cannot get in.
  */
 export function parseYamlAt(text: string, file: string, firstLine: number, firstCol = 1): YamlParse {
+  const simple = parseSimpleYaml(text, simplePlacer(text, file, firstLine, firstCol));
+  return simple === undefined
+    ? parseYamlWithLibrary(text, file, firstLine, firstCol)
+    : { ok: true, value: simple };
+}
+
+/** `parseYamlAt` by the YAML library alone (what the subset reader must agree with). */
+export function parseYamlWithLibrary(text: string, file: string, firstLine: number, firstCol = 1): YamlParse {
+  const { isAlias, isMap, isScalar, isSeq, LineCounter, parseDocument } = yamlLibrary();
   const lineCounter = new LineCounter();
   const doc = parseDocument(text, {
     lineCounter,
@@ -164,6 +164,26 @@ export function parseYamlAt(text: string, file: string, firstLine: number, first
   }
   if (diagnostics.length > 0 || value === undefined) return { ok: false, diagnostics };
   return { ok: true, value };
+}
+
+/** `place` of the library's reading, for the subset: line and column (UTF-16 units, 1-based) of an offset. */
+function simplePlacer(
+  text: string,
+  file: string,
+  firstLine: number,
+  firstCol: number,
+): (offset: number) => Position {
+  const starts = [0];
+  for (let i = text.indexOf("\n"); i >= 0; i = text.indexOf("\n", i + 1)) starts.push(i + 1);
+  return (offset) => {
+    let lo = 0, hi = starts.length - 1;
+    while (lo < hi) {
+      const mid = (lo + hi + 1) >> 1;
+      if (starts[mid]! <= offset) lo = mid;
+      else hi = mid - 1;
+    }
+    return { file, line: firstLine + lo, col: (lo === 0 ? firstCol - 1 : 0) + offset - starts[lo]! + 1 };
+  };
 }
 
 function firstSentence(message: string): string {

@@ -45,6 +45,16 @@ export interface ComputedProject {
   readonly csvFiles: readonly CsvTable[];
 }
 
+/** What to compute besides the results `check` reports (findings, checks, limits, summary). */
+export interface ComputeOptions {
+  /**
+   * Also compute the parts only the package shows: the sensitivity study and the CSV tables (default true).
+   * `check` passes false; everything it reports (checks, limits, warnings, assumptions, scenario results) is
+   * computed either way.
+   */
+  readonly packageParts?: boolean;
+}
+
 export type ComputeOutcome =
   | { readonly ok: true; readonly computed: ComputedProject }
   | { readonly ok: false; readonly diagnostics: readonly Diagnostic[] };
@@ -55,7 +65,9 @@ export function computeProject(
   inputs: readonly InputFileRecord[],
   dataTexts: ReadonlyMap<string, string> = new Map(),
   progress: (message: string) => void = () => {},
+  options: ComputeOptions = {},
 ): ComputeOutcome {
+  const packageParts = options.packageParts ?? true;
   const steady: Record<string, SteadyState> = {};
   const analyses: Record<string, DynamicAnalysis> = {};
   const constructions: Record<string, ConstructionResults> = {};
@@ -114,7 +126,7 @@ export function computeProject(
   const rooms = computeRooms(model, steady, correctedU);
   if (rooms.problems.length > 0) return { ok: false, diagnostics: rooms.problems };
   checks.push(...rooms.checks);
-  const variation = model.info.sensitivityVariation;
+  const variation = packageParts ? model.info.sensitivityVariation : undefined;
   if (variation !== undefined) progress("sensitivity study");
   const sensitivity = variation === undefined
     ? undefined
@@ -146,11 +158,13 @@ export function computeProject(
       : { heating: Object.fromEntries(heating.map(([id, h]) => [id, h.results])) }),
     ...(rooms.results === undefined ? {} : { rooms: rooms.results }),
   };
-  const csvFiles = [
-    ...scenarioParts.csvFiles,
-    ...heating.map(([id, h]) => heatingCsv(id, h.results)),
-    ...roomCsvTables(rooms.results),
-  ];
+  const csvFiles = packageParts
+    ? [
+      ...scenarioParts.csvFiles,
+      ...heating.map(([id, h]) => heatingCsv(id, h.results)),
+      ...roomCsvTables(rooms.results),
+    ]
+    : [];
   return { ok: true, computed: { results, steady, analyses, csvFiles } };
 }
 

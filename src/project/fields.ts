@@ -7,6 +7,7 @@ import {
   parseQuantity,
   QUANTITY_KINDS,
   type QuantityKind,
+  type QuantityResult,
 } from "./quantity.ts";
 import { closest } from "./suggest.ts";
 import type { YamlEntry, YamlValue } from "./yamlTree.ts";
@@ -175,6 +176,20 @@ export function quantityOf(
   natural?: NaturalUnit,
 ): number | undefined {
   const spec = natural === undefined ? QUANTITY_KINDS[kind] : { ...QUANTITY_KINDS[kind], ...natural };
+  return scalarQuantityOf(value, spec, what, out, (text) => parseQuantity(text, kind, natural));
+}
+
+/**
+ * A scalar value read by `parse` (its quotes removed), reporting a list, a map or an empty value, and the parser's
+ * message, at the value.
+ */
+export function scalarQuantityOf(
+  value: YamlValue,
+  spec: { readonly label: string; readonly example: string },
+  what: string,
+  out: Diagnostic[],
+  parse: (text: string) => QuantityResult,
+): number | undefined {
   if (value.kind !== "scalar" || value.value === null) {
     out.push(
       error(
@@ -186,7 +201,7 @@ export function quantityOf(
     );
     return undefined;
   }
-  const result = parseQuantity(value.text.replace(/^(["'])(.*)\1$/, "$2"), kind, natural);
+  const result = parse(value.text.replace(/^(["'])(.*)\1$/, "$2"));
   if (!result.ok) {
     out.push(error(value.at, "bad-quantity", `${result.message} (for ${what})`, result.hint));
     return undefined;

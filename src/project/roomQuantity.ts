@@ -4,8 +4,8 @@
  * lists the units it accepts with their exact factor to SI, so no unit library is needed; the number is read by
  * the same rules as every other quantity (decimal point, no thousands separators, a unit required).
  */
-import { type Diagnostic, error } from "./diagnostic.ts";
-import { describe, type Fields, missing } from "./fields.ts";
+import type { Diagnostic } from "./diagnostic.ts";
+import { type Fields, missing, scalarQuantityOf } from "./fields.ts";
 import { describeCodePoints, splitQuantity } from "./quantity.ts";
 import type { YamlValue } from "./yamlTree.ts";
 
@@ -108,24 +108,13 @@ export function roomQuantityOf(
   what: string,
   out: Diagnostic[],
 ): number | undefined {
-  const spec = ROOM_QUANTITY_KINDS[kind];
-  if (value.kind !== "scalar" || value.value === null) {
-    out.push(
-      error(
-        value.at,
-        "expected-quantity",
-        `Expected ${spec.label} with its unit for ${what}, found ${describe(value)}`,
-        `write e.g. "${spec.example}"`,
-      ),
-    );
-    return undefined;
-  }
-  const result = parseRoomQuantity(value.text.replace(/^(["'])(.*)\1$/, "$2"), kind);
-  if (!result.ok) {
-    out.push(error(value.at, "bad-quantity", `${result.message} (for ${what})`, result.hint));
-    return undefined;
-  }
-  return result.value;
+  return scalarQuantityOf(
+    value,
+    ROOM_QUANTITY_KINDS[kind],
+    what,
+    out,
+    (text) => parseRoomQuantity(text, kind),
+  );
 }
 
 /** Reads a room quantity under `key` (reporting it missing when required). */

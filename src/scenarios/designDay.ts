@@ -54,6 +54,20 @@ export const ENERGY_BALANCE_LIMIT = 1e-6;
 
 type DesignDayScenario = Extract<Scenario, { kind: "design-day" }>;
 
+/** A sun-exposed outside surface for the climate layer, with the values resolved for it. */
+export function solarBoundarySurface(id: string, p: SurfaceParameters): BoundarySurface {
+  return {
+    kind: "solar",
+    id,
+    azimuthDeg: p.azimuthDeg,
+    tiltDeg: p.tiltDeg,
+    absorptance: p.absorptance ?? 0,
+    outsideCoefficientWPerM2K: p.outsideCoefficient,
+    groundReflectance: p.groundReflectance,
+    longwave: { kind: "given", correctionK: p.longwaveCorrectionK },
+  };
+}
+
 /** The climate input of a design-day scenario for the given outside surfaces (2013 clear sky, handbook diffuse). */
 export function designDayInput(
   scenario: DesignDayScenario,
@@ -98,16 +112,7 @@ export function computeDesignDay(scenario: DesignDayScenario, context: ScenarioC
     const p = parameters.get(surface.id)!;
     return surface.solAirC !== undefined
       ? { kind: "given-sol-air", id: surface.id, hourlyC: surface.solAirC }
-      : {
-        kind: "solar",
-        id: surface.id,
-        azimuthDeg: p.azimuthDeg,
-        tiltDeg: p.tiltDeg,
-        absorptance: p.absorptance ?? 0,
-        outsideCoefficientWPerM2K: p.outsideCoefficient,
-        groundReflectance: p.groundReflectance,
-        longwave: { kind: "given", correctionK: p.longwaveCorrectionK },
-      };
+      : solarBoundarySurface(surface.id, p);
   });
   const boundary = designDayBoundary(designDayInput(scenario, boundarySurfaces));
   const indoor = temperatureSteps(scenario.indoor, timestepS);

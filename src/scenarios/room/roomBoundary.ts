@@ -3,7 +3,7 @@
  * design-day scenario) and the solar transmitted by its windows.
  */
 import { type BoundarySurface, type DesignDayBoundary, designDayBoundary } from "../../climate/mod.ts";
-import { designDayInput } from "../designDay.ts";
+import { designDayInput, solarBoundarySurface } from "../designDay.ts";
 import type { Assumption, Construction, Scenario, ScenarioSurface } from "../../project/model.ts";
 import type { Room, RoomSurface, RoomWindow } from "../../project/roomModel.ts";
 import { DEFAULT_RADIANT_SPLIT } from "../../engine/room/mod.ts";
@@ -100,16 +100,7 @@ export function roomDay(
       "summer-design",
     );
     filmResistance.set(surface.id, p.responseOutsideResistance);
-    solarSurfaces.push({
-      kind: "solar",
-      id: surface.id,
-      azimuthDeg: p.azimuthDeg,
-      tiltDeg: p.tiltDeg,
-      absorptance: p.absorptance ?? 0,
-      outsideCoefficientWPerM2K: p.outsideCoefficient,
-      groundReflectance: p.groundReflectance,
-      longwave: { kind: "given", correctionK: p.longwaveCorrectionK },
-    });
+    solarSurfaces.push(solarBoundarySurface(surface.id, p));
   }
   const hosts = new Map(room.surfaces.map((s) => [s.id, s]));
   for (const window of room.windows) {

@@ -44,7 +44,12 @@ const peakOf = (xs: readonly number[], stepH: number) => {
 
 /** Computes one room; references were checked by the reader, so a missing one is a failure, not a throw. */
 export function computeRoom(room: Room, context: RoomContext): RoomOutcome {
-  const fail = (message: string) => ({ ok: false as const, message, at: room.at });
+  /** A failure at the surface or window it concerns, when there is one, else at the room block. */
+  const fail = (message: string, id?: string) => ({
+    ok: false as const,
+    message,
+    at: [...room.surfaces, ...room.windows].find((item) => item.id === id)?.at ?? room.at,
+  });
   const scenario = context.designDays.get(room.designDay);
   if (scenario === undefined) return fail(`design day "${room.designDay}" was not computed`);
   const areas = netOpaqueAreas(
@@ -53,7 +58,7 @@ export function computeRoom(room: Room, context: RoomContext): RoomOutcome {
   );
   if (areas.kind === "rejected") return fail(areas.message);
   const floors = roomGroundFloors(room, context.constructions);
-  if ("failure" in floors) return fail(`ground floor ${floors.surface}: ${floors.failure}`);
+  if ("failure" in floors) return fail(`ground floor ${floors.surface}: ${floors.failure}`, floors.surface);
   const assumptions: Assumption[] = [];
   const warnings: SurfaceWarning[] = [];
   const day = roomDay(room, scenario, context.constructions, assumptions, warnings);
@@ -62,7 +67,7 @@ export function computeRoom(room: Room, context: RoomContext): RoomOutcome {
   const input = roomInput(room, context.constructions, areas.areas, day, { groundC: temperatures.groundC });
   const cooling = roomCoolingLoad(input);
   if (cooling.kind !== "room-cooling-load") {
-    return fail(`${cooling.id === undefined ? "" : `${cooling.id}: `}${cooling.message}`);
+    return fail(`${cooling.id === undefined ? "" : `${cooling.id}: `}${cooling.message}`, cooling.id);
   }
   const subject = `room:${room.id}`;
   const loss = heating === undefined ? undefined : roomHeatLoss(

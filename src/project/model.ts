@@ -204,10 +204,16 @@ export type Scenario =
     readonly synthetic?: { readonly note: string; readonly at: Position };
   });
 
-/** A radiant time series given by the user: 24 hourly fractions r_0…r_23 (Σ = 1) and where they come from. */
+/**
+ * A radiant time series: 24 hourly fractions r_0…r_23 (Σ = 1) given by the user with where they come from, or
+ * (`room`) the non-solar series this package generates for a room of the project: then `values` is empty as read
+ * and filled in when the room is computed.
+ */
 export interface RadiantTimeSeries {
   readonly values: readonly number[];
   readonly source: string;
+  /** Id of the room whose own non-solar series is used (`radiant-time-series: { room: <id> }`). */
+  readonly room?: string;
   readonly at: Position;
 }
 

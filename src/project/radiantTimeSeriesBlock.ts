@@ -1,10 +1,10 @@
 /** Reads the optional `radiant-time-series` key of a design-day scenario: 24 fractions and their source. */
 import { type Diagnostic, error, errorCount } from "./diagnostic.ts";
-import { describe, type Fields, readFields, readText } from "./fields.ts";
-import type { RadiantTimeSeries } from "./model.ts";
+import { describe, type Fields, readFields, readText, withSuggestion } from "./fields.ts";
+import type { RadiantTimeSeries, Scenario } from "./model.ts";
 
 /** Allowed keys of the `radiant-time-series` mapping. */
-export const RADIANT_TIME_SERIES_KEYS = ["values", "source"] as const;
+export const RADIANT_TIME_SERIES_KEYS = ["values", "source", "room"] as const;
 /** Number of hourly terms r_0 … r_23 of a radiant time series. */
 export const RADIANT_TIME_SERIES_LENGTH = 24;
 /** How far Σ r_j may be from 1 (printed tables are rounded). */
@@ -17,6 +17,7 @@ export function readRadiantTimeSeries(fields: Fields, out: Diagnostic[]): Radian
   const rts = readFields(entry.value, RADIANT_TIME_SERIES_KEYS, "radiant time series", out);
   if (rts === undefined) return undefined;
   const before = errorCount(out);
+  if (rts.entries.has("room")) return readRoomSeries(rts, entry.value.at, out);
   const values = readValues(rts, out);
   const source = readText(rts, "source", out);
   if (source === undefined && !rts.entries.has("source")) {
@@ -31,6 +32,35 @@ export function readRadiantTimeSeries(fields: Fields, out: Diagnostic[]): Radian
   }
   if (errorCount(out) > before || values === undefined || source === undefined) return undefined;
   return { values, source, at: entry.value.at };
+}
+
+/** The source a series generated for a room is given in the package. */
+export function roomSeriesSource(roomId: string): string {
+  return `the non-solar radiant time series this package generates for room "${roomId}" from its own constructions (heat balance, unit radiant pulse)`;
+}
+
+/** `radiant-time-series: { room: <id> }`: the room's own series, alone (no values, no source). */
+function readRoomSeries(
+  rts: Fields,
+  at: RadiantTimeSeries["at"],
+  out: Diagnostic[],
+): RadiantTimeSeries | undefined {
+  const before = errorCount(out);
+  for (const key of ["values", "source"]) {
+    const other = rts.entries.get(key);
+    if (other === undefined) continue;
+    out.push(
+      error(
+        other.keyAt,
+        "rts-room-and-values",
+        `Cannot give "${key}" with "room" in the radiant time series: the room's own series is used`,
+        `remove "${key}", or remove "room" to give the 24 values and their source yourself`,
+      ),
+    );
+  }
+  const room = readText(rts, "room", out);
+  if (errorCount(out) > before || room === undefined) return undefined;
+  return { values: [], source: roomSeriesSource(room), room, at };
 }
 
 function readValues(rts: Fields, out: Diagnostic[]): number[] | undefined {
@@ -112,4 +142,28 @@ function readValues(rts: Fields, out: Diagnostic[]): number[] | undefined {
     return undefined;
   }
   return values;
+}
+
+/** A design day's `radiant-time-series: { room }` must name a room of the project (a broken room adds no error). */
+export function checkRoomSeriesReferences(
+  scenarios: readonly Scenario[],
+  roomIds: readonly string[],
+  brokenRoomIds: ReadonlySet<string>,
+  out: Diagnostic[],
+): void {
+  for (const scenario of scenarios) {
+    const series = scenario.kind === "design-day" ? scenario.radiantTimeSeries : undefined;
+    const room = series?.room;
+    if (series === undefined || room === undefined || roomIds.includes(room) || brokenRoomIds.has(room)) {
+      continue;
+    }
+    out.push(
+      error(
+        series.at,
+        "unknown-room",
+        `Unknown room "${room}" for the radiant time series of scenario "${scenario.id}"`,
+        withSuggestion(room, roomIds, `rooms defined: ${roomIds.join(", ") || "none (add a room block)"}`),
+      ),
+    );
+  }
 }

@@ -21,6 +21,7 @@ import type {
 } from "./model.ts";
 import { formatPosition, type Position } from "./position.ts";
 import { readRooms, roomReferences } from "./roomBlock.ts";
+import { checkRoomSeriesReferences } from "./radiantTimeSeriesBlock.ts";
 import { readScenarioBlock } from "./scenarioBlock.ts";
 import type { SourceText } from "./sourceText.ts";
 import { parseYamlAt } from "./yamlTree.ts";
@@ -122,6 +123,8 @@ export function resolveProject(
     roomReferences(files, allConstructionIds, [...scenarios, ...heatingScenarios]),
     out,
   );
+  const roomIds = rooms.map((r) => r.id);
+  checkRoomSeriesReferences(scenarios, roomIds, brokenIds(files, "room", new Set(roomIds)), out);
   for (const entry of [...libraryUsed.values()].sort((a, b) => a.id < b.id ? -1 : 1)) {
     assumptions.push({
       id: `library:material:${entry.id}`,

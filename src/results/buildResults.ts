@@ -12,7 +12,7 @@ import type { Assumption, Construction, Model } from "../project/model.ts";
 import { formatPosition } from "../project/position.ts";
 import { computeDesignDay, type ScenarioContext } from "../scenarios/designDay.ts";
 import { computeHeating } from "../scenarios/heating.ts";
-import { computeRooms } from "./roomResults.ts";
+import { computeRooms, withRoomSeries } from "./roomResults.ts";
 import { roomCsvTables } from "../scenarios/room/roomCsv.ts";
 import { heatingCsv } from "../scenarios/heatingCsv.ts";
 import type { CsvTable } from "../tables/csvTable.ts";
@@ -113,7 +113,11 @@ export function computeProject(
     designWarnings.push(...design.warnings);
   }
   if (problems.length > 0) return { ok: false, diagnostics: problems };
-  const scenarioParts = computeScenarios(model, analyses, dataTexts, progress);
+  // Rooms need only the model; computed first so a design day can use a room's own radiant time series.
+  const rooms = computeRooms(model, steady, correctedU);
+  if (rooms.problems.length > 0) return { ok: false, diagnostics: rooms.problems };
+  const withSeries = withRoomSeries(model, rooms.results);
+  const scenarioParts = computeScenarios(withSeries, analyses, dataTexts, progress);
   if (scenarioParts.problems.length > 0) return { ok: false, diagnostics: scenarioParts.problems };
   checks.push(...scenarioParts.checks);
   methodNotes.push(...scenarioParts.methodNotes);
@@ -123,14 +127,12 @@ export function computeProject(
       computeHeating(s, new Map(model.constructions.map((c) => [c.id, c])), steady, correctedU),
     ] as const
   );
-  const rooms = computeRooms(model, steady, correctedU);
-  if (rooms.problems.length > 0) return { ok: false, diagnostics: rooms.problems };
   checks.push(...rooms.checks);
   const variation = packageParts ? model.info.sensitivityVariation : undefined;
   if (variation !== undefined) progress("sensitivity study");
   const sensitivity = variation === undefined
     ? undefined
-    : sensitivityStudy(model, variation, new Map(Object.entries(analyses)));
+    : sensitivityStudy(withSeries, variation, new Map(Object.entries(analyses)));
   const results: ResultsJson = {
     schema: "fluxnote-results/1",
     tool: { name: "fluxnote", version: TOOL_VERSION },

@@ -55,3 +55,26 @@ export function computeRooms(
   }
   return { results, checks, assumptions, warnings, problems };
 }
+
+/**
+ * The model with every design day's `radiant-time-series: { room }` filled in with that room's own non-solar
+ * series (unchanged when no design day names a room).
+ */
+export function withRoomSeries(
+  model: Model,
+  rooms: Readonly<Record<string, RoomResults>> | undefined,
+): Model {
+  if (!model.scenarios.some((s) => s.kind === "design-day" && s.radiantTimeSeries?.room !== undefined)) {
+    return model;
+  }
+  return {
+    ...model,
+    scenarios: model.scenarios.map((s) => {
+      const room = s.kind === "design-day" ? s.radiantTimeSeries?.room : undefined;
+      const series = room === undefined ? undefined : rooms?.[room]?.coolingLoad.radiantTimeSeries.nonsolar;
+      return s.kind !== "design-day" || s.radiantTimeSeries === undefined || series === undefined
+        ? s
+        : { ...s, radiantTimeSeries: { ...s.radiantTimeSeries, values: [...series] } };
+    }),
+  };
+}

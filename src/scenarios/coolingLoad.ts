@@ -60,7 +60,11 @@ export function designDayCoolingLoad(
       peak: { value: peak.value, time_h: peak.index },
       totalHeatGain: gains,
       heatGainPeak: { value: gainPeak.value, time_h: gainPeak.index },
-      radiantTimeSeries: { values: [...rts.values], source: rts.source },
+      radiantTimeSeries: {
+        values: [...rts.values],
+        source: rts.source,
+        ...(rts.room === undefined ? {} : { room: rts.room }),
+      },
     },
   };
 }

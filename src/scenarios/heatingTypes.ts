@@ -17,7 +17,12 @@ export interface CoolingLoadResults {
   readonly totalHeatGain: readonly number[];
   readonly heatGainPeak: PeakAt;
   /** The user's series r_0 … r_23 and its source, as given. */
-  readonly radiantTimeSeries: { readonly values: readonly number[]; readonly source: string };
+  /** The series used; `room` (extension) names the room of the project whose own series it is. */
+  readonly radiantTimeSeries: {
+    readonly values: readonly number[];
+    readonly source: string;
+    readonly room?: string;
+  };
 }
 
 /** Pass or fail of one ISO 13788 criterion on a surface, with its margin (positive = on the safe side). */

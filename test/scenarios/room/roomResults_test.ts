@@ -197,6 +197,7 @@ Deno.test("a design day that names a room takes that room's own non-solar series
     assert.ok(used !== undefined && own !== undefined);
     assert.deepEqual(used.values, own);
     assert.match(used.source, /generates for room "reading-room"/);
+    assert.equal(used.room, "reading-room");
     // The design day's cooling load is the radiant time series method with these r_j: daily sums of load and
     // gain are equal because the series sums to 1 (ASHRAE Handbook—Fundamentals, RTS method, from memory).
     const cl = results.scenarios["july-design-day"]!.coolingLoad!;

@@ -20,6 +20,9 @@ function gainAt(results: ScenarioResults, series: readonly number[], h: number):
 }
 
 function rtsTable(cl: CoolingLoadResults): Trusted {
+  // The user's values as written (up to 4 figures); a room's own series in the package's 3 significant figures.
+  const own = cl.radiantTimeSeries.room;
+  const digits = own === undefined ? 4 : 3;
   // Two halves of twelve hours; the hour row of each is a header row, the first one the table's thead.
   const hours = (start: number) =>
     html`<tr><th scope="col">j</th>${
@@ -28,12 +31,15 @@ function rtsTable(cl: CoolingLoadResults): Trusted {
   const shares = (start: number) =>
     html`<tr><th scope="row">r<sub>j</sub></th>${
       HOURS.slice(start, start + 12).map((j) =>
-        html`<td class="num" data-q="rts">${formatTrim(cl.radiantTimeSeries.values[j] ?? NaN, 4)}</td>`
+        html`<td class="num" data-q="rts">${formatTrim(cl.radiantTimeSeries.values[j] ?? NaN, digits)}</td>`
       )
     }</tr>`;
   return html`
     <table class="rts-table compact">
-      <caption>Radiant time series used (r<sub>j</sub>: share of a radiant gain that becomes cooling load j hours later), as given in the input.</caption>
+      <caption>Radiant time series used (r<sub>j</sub>: share of a radiant gain that becomes cooling load j hours later), ${own ===
+          undefined
+        ? "as given in the input"
+        : `the non-solar series of room ${own}`}.</caption>
       <thead>${hours(0)}</thead>
       <tbody>${shares(0)}${hours(12)}${shares(12)}</tbody>
     </table>

@@ -15,6 +15,7 @@ import { roomAssumptions } from "./roomAssumptions.ts";
 import { steadyLimitChecks } from "./steadyLimit.ts";
 import type { RoomResults, RoomSurfaceResults } from "./roomTypes.ts";
 import { sourceLabel } from "./sourceLabel.ts";
+import { peakOf } from "../seriesStats.ts";
 
 type DesignDayScenario = Extract<Scenario, { kind: "design-day" }>;
 
@@ -37,9 +38,10 @@ export type RoomOutcome =
   }
   | { readonly ok: false; readonly message: string; readonly at: Room["at"] };
 
-const peakOf = (xs: readonly number[], stepH: number) => {
-  const index = xs.reduce((best, v, k) => (v > xs[best]! ? k : best), 0);
-  return { load: xs[index]!, time_h: index * stepH };
+/** A load peak in results.json form: W and the clock time of its step. */
+const loadPeak = (xs: readonly number[], stepH: number) => {
+  const peak = peakOf(xs);
+  return { load: peak.value, time_h: peak.index * stepH };
 };
 
 /** Computes one room; references were checked by the reader, so a missing one is a failure, not a throw. */
@@ -99,7 +101,7 @@ export function computeRoom(room: Room, context: RoomContext): RoomOutcome {
     outdoor: input.outdoorAirC,
     coolingLoad: {
       heatBalance: hb.loadW,
-      heatBalancePeak: peakOf(hb.loadW, stepH),
+      heatBalancePeak: loadPeak(hb.loadW, stepH),
       radiantTimeSeries: {
         nonsolar: cooling.radiantTimeSeries.nonsolar,
         solar: cooling.radiantTimeSeries.solar,
@@ -109,7 +111,7 @@ export function computeRoom(room: Room, context: RoomContext): RoomOutcome {
         },
       },
       rtsMethod: cooling.rtsMethod.loadW,
-      rtsMethodPeak: peakOf(cooling.rtsMethod.loadW, 1),
+      rtsMethodPeak: loadPeak(cooling.rtsMethod.loadW, 1),
       difference: cooling.differenceW,
       peakDifference: cooling.peakDifference,
       bySource: Object.fromEntries(hb.split.map((part) => [sourceLabel(part.source), part.loadW])),

@@ -4,6 +4,7 @@ import type { GroundFloorU } from "../../engine/room/groundFloor.ts";
 import type { Assumption, HeatingScenario } from "../../project/model.ts";
 import { formatPosition } from "../../project/position.ts";
 import type { Room } from "../../project/roomModel.ts";
+import { meanOf } from "../seriesStats.ts";
 
 /** How the ISO 13370 inputs that can default are named in the assumptions register. */
 const GROUND_INPUT_NAMES: Readonly<Record<string, { key: string; text: string; unit: string }>> = {
@@ -41,7 +42,7 @@ export function roomAssumptions(
   const log = (key: string, text: string, source: string) =>
     assumptions.push({ id: `default:${key}:${room.id}`, text, source, at });
   const hasGround = floors.size > 0;
-  const dayMean = outdoorC.reduce((a, b) => a + b, 0) / outdoorC.length;
+  const dayMean = meanOf(outdoorC);
   const groundC = room.ground?.temperatureC ?? dayMean;
   if (hasGround && room.ground?.temperatureC === undefined) {
     log(

@@ -2,18 +2,10 @@
 import { designHeatLoss, type DesignHeatLossResult } from "../../engine/room/designHeatLoss.ts";
 import { type GroundFloorU, groundFloorU } from "../../engine/room/groundFloor.ts";
 import type { NetOpaqueArea } from "../../engine/room/netOpaqueAreas.ts";
+import { steadyState } from "../../engine/steady.ts";
 import type { Construction, HeatingScenario } from "../../project/model.ts";
 import type { Room } from "../../project/roomModel.ts";
 import type { GroundFloorResults, RoomHeatingResults } from "./roomTypes.ts";
-
-/** R_f of a floor: the sum of its layers' resistances, surface films excluded, m²K/W. */
-export function layerResistance(construction: Construction): number {
-  return construction.layers.reduce(
-    (sum, layer) =>
-      sum + (layer.kind === "massive" ? layer.thicknessM / layer.conductivity : layer.resistance),
-    0,
-  );
-}
 
 /** ISO 13370 U of each ground surface of the room, or the message of the first input it rejects. */
 export function roomGroundFloors(
@@ -26,7 +18,8 @@ export function roomGroundFloors(
     const result = groundFloorU({
       areaM2: surface.areaM2,
       exposedPerimeterM: surface.exposedPerimeterM ?? NaN,
-      floorResistanceM2KPerW: layerResistance(constructions.get(surface.construction)!),
+      // R_f: the floor's layers, surface films excluded.
+      floorResistanceM2KPerW: steadyState(constructions.get(surface.construction)!).layersResistance,
       ...(room.ground?.soilConductivity === undefined
         ? {}
         : { soilConductivityWPerMK: room.ground.soilConductivity }),

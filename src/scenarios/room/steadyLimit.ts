@@ -6,12 +6,13 @@
  */
 import { roomHeatBalance, type RoomInput } from "../../engine/room/mod.ts";
 import type { CheckResult } from "../../engine/checkResult.ts";
+import { steadyState } from "../../engine/steady.ts";
+import { meanOf } from "../seriesStats.ts";
 
-const mean = (xs: readonly number[]) => xs.reduce((a, b) => a + b, 0) / xs.length;
-const constant = (xs: readonly number[]) => xs.map(() => mean(xs));
+const constant = (xs: readonly number[]) => xs.map(() => meanOf(xs));
 
 /** The room with every input replaced by its steady limit. */
-export function steadyLimitInput(room: RoomInput): RoomInput {
+function steadyLimitInput(room: RoomInput): RoomInput {
   return {
     ...room,
     airTemperatureC: constant(room.airTemperatureC),
@@ -26,23 +27,15 @@ export function steadyLimitInput(room: RoomInput): RoomInput {
   };
 }
 
-/** Air-to-air U of an opaque surface as the hand sum takes it: 1/(R_se + Σ R + R_si), W/(m²K). */
-function airToAirU(s: RoomInput["surfaces"][number]): number {
-  const layers = s.construction.layers.reduce(
-    (sum, l) => sum + (l.kind === "massive" ? l.thicknessM / l.conductivity : l.resistance),
-    0,
-  );
-  return 1 / (s.construction.outsideResistance + layers + s.construction.insideResistance);
-}
-
-/** The hand sum and its terms, W. */
-export function steadyHandSum(room: RoomInput): { readonly total: number; readonly magnitude: number } {
-  const steady = steadyLimitInput(room);
+/** The hand sum of a room in its steady limit (`steadyLimitInput`) and the sum of its terms' magnitudes, W. */
+function steadyHandSum(steady: RoomInput): { readonly total: number; readonly magnitude: number } {
   const air = steady.airTemperatureC[0]!;
   const outdoor = steady.outdoorAirC[0]!;
   const terms = [
     ...steady.surfaces.map((s) =>
-      s.farSide.kind === "temperature" ? airToAirU(s) * s.areaM2 * (s.farSide.temperatureC[0]! - air) : 0
+      s.farSide.kind === "temperature"
+        ? steadyState(s.construction).uValue * s.areaM2 * (s.farSide.temperatureC[0]! - air)
+        : 0
     ),
     ...steady.windows.map((w) => w.uValue * w.areaM2 * (outdoor - air)),
     (steady.ventilationWPerK + steady.thermalBridgesWPerK) * (outdoor - air),
@@ -57,11 +50,7 @@ function farConductance(room: RoomInput, id: string, kind: string, h: number): n
   const window = room.windows.find((w) => w.id === id);
   if (window !== undefined) return 1 / (1 / window.uValue - 1 / h);
   const s = room.surfaces.find((x) => x.id === id)!;
-  return 1 / (airToAirResistance(s) - s.construction.insideResistance);
-}
-
-function airToAirResistance(s: RoomInput["surfaces"][number]): number {
-  return 1 / airToAirU(s);
+  return 1 / (s.construction.outsideResistance + steadyState(s.construction).layersResistance);
 }
 
 /** The steady-limit checks of a room (subject `room:<id>`) and the statement of its hand sum. */
@@ -107,7 +96,7 @@ export function steadyLimitChecks(
     closedForm += f.areaM2 * u * (far - air);
   }
   closedForm -= longWave + radiantOut;
-  const hand = steadyHandSum(room);
+  const hand = steadyHandSum(steady);
   const check = (id: string, description: string, value: number, limit: number): CheckResult => ({
     id,
     subject,

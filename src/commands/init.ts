@@ -1,8 +1,10 @@
 import { join } from "node:path";
 import type { CommandIo } from "./commandIo.ts";
 
-/** The template folder a new project is copied from. */
-// Two folders below the repository, as the launcher's compiled copy (.cache/compiled-*/) is too.
+/**
+ * The template folder a new project is copied from. Found from two folders below the repository, where the
+ * launcher's compiled copy (.cache/compiled-*/) is too.
+ */
 export const TEMPLATE_FOLDER = new URL("../../templates/new-project/", import.meta.url);
 
 /** Creates a new project folder from the template; refuses to touch a folder that already has files. */

@@ -3,7 +3,7 @@ import type { CommandIo } from "./commandIo.ts";
 
 /**
  * The template folder a new project is copied from. Found from two folders below the repository, where the
- * launcher's compiled copy (.cache/compiled-*/) is too.
+ * launcher's compiled copy (in .cache/) is too.
  */
 export const TEMPLATE_FOLDER = new URL("../../templates/new-project/", import.meta.url);
 

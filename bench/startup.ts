@@ -1,26 +1,55 @@
 /**
- * Start-up time of the command line, side by side for three ways of starting: each command is run as a fresh
- * `deno run` process (warm module cache; one unmeasured run first) and the median and the fastest of the runs
- * are printed. "eager" is bench/startup_eager.ts (every command module loaded first, as src/cli.ts did before
- * per-command loading), "mathjs" is bench/startup_mathjs.ts (mathjs's single-file build loaded first, as the
- * unit reader did before our own; `check` only), "now" is src/cli.ts. Then where `check` of the template spends its time
- * (bench/check_phases.ts, medians in ms): loading modules, reading, computing, reviewing. Not a test: figures
- * depend on the machine and its load.
+ * Start-up time of the command line, side by side for the ways of starting it: each command is run as a fresh
+ * process (warm module cache; one unmeasured run of each first), the ways taking turns run by run so that the
+ * machine's load falls on all alike, and the median and the fastest of the runs are printed.
+ * - "eager": bench/startup_eager.ts, every command module loaded first (as src/cli.ts did before per-command
+ *   loading);
+ * - "mathjs": bench/startup_mathjs.ts, mathjs's single-file build loaded first (as the unit reader did before
+ *   our own; `check` only);
+ * - "sources": `deno run src/cli.ts`, the module graph of src/ as it is;
+ * - "launcher": `sh bin/fluxnote`, what a user runs: the launcher's checks, then its compiled copy of src/
+ *   (made once before the runs);
+ * - "launcher, sources": the launcher with FLUXNOTE_FROM_SOURCE=1 (no compiled copy).
+ * Then where `check` of the template spends its time (bench/check_phases.ts, medians in ms): loading modules,
+ * reading, computing, reviewing. Not a test: figures depend on the machine and its load.
  *
- *   npx -y deno@2.9.6 run --allow-read --allow-run bench/startup.ts [runs]
+ *   npx -y deno@2.9.6 run --allow-read --allow-run --allow-env bench/startup.ts [runs]
  */
 import { fileURLToPath as fromFileUrl } from "node:url";
 
 const RUNS = Number(Deno.args[0] ?? "15");
 const here = (path: string): string => fromFileUrl(new URL(path, import.meta.url));
-const COLUMNS = [
-  { label: "eager", entry: here("./startup_eager.ts"), checkOnly: false },
-  { label: "mathjs", entry: here("./startup_mathjs.ts"), checkOnly: true },
-  { label: "now", entry: here("../src/cli.ts"), checkOnly: false },
+const CONFIG = here("../deno.json");
+const LAUNCHER = here("../bin/fluxnote");
+/** PATH with this Deno first, so the launcher takes it as the pinned one. */
+const PATH = [Deno.execPath().replace(/\/[^/]*$/, ""), Deno.env.get("PATH") ?? ""].join(":");
+
+interface Way {
+  readonly label: string;
+  readonly checkOnly: boolean;
+  readonly command: (
+    args: readonly string[],
+  ) => { program: string; args: string[]; env?: Record<string, string> };
+}
+
+const denoRun = (entry: string) => (args: readonly string[]) => ({
+  program: Deno.execPath(),
+  args: ["run", "--quiet", "--no-prompt", "--config", CONFIG, "--allow-read", entry, ...args],
+});
+const launcher = (env: Record<string, string>) => (args: readonly string[]) => ({
+  program: "sh",
+  args: [LAUNCHER, ...args],
+  env: { PATH, ...env },
+});
+const WAYS: readonly Way[] = [
+  { label: "eager", checkOnly: false, command: denoRun(here("./startup_eager.ts")) },
+  { label: "mathjs", checkOnly: true, command: denoRun(here("./startup_mathjs.ts")) },
+  { label: "sources", checkOnly: false, command: denoRun(here("../src/cli.ts")) },
+  { label: "launcher", checkOnly: false, command: launcher({}) },
+  { label: "launcher, sources", checkOnly: false, command: launcher({ FLUXNOTE_FROM_SOURCE: "1" }) },
 ];
 const EMPTY = here("./startup_empty.ts");
 const PHASES = here("./check_phases.ts");
-const CONFIG = here("../deno.json");
 const TEMPLATE = here("../templates/new-project/");
 const CASES: { readonly label: string; readonly args: readonly string[] }[] = [
   { label: "fluxnote --version", args: ["--version"] },
@@ -29,23 +58,31 @@ const CASES: { readonly label: string; readonly args: readonly string[] }[] = [
 ];
 
 /** Runs one fresh process; returns its wall-clock seconds (start-up included) and its standard output. */
-async function runOnce(entry: string, args: readonly string[]): Promise<{ seconds: number; stdout: string }> {
-  const command = new Deno.Command(Deno.execPath(), {
-    args: ["run", "--quiet", "--no-prompt", "--config", CONFIG, "--allow-read", entry, ...args],
+async function runOnce(
+  spec: { program: string; args: string[]; env?: Record<string, string> },
+): Promise<{ seconds: number; stdout: string }> {
+  const command = new Deno.Command(spec.program, {
+    args: spec.args,
+    ...(spec.env === undefined ? {} : { env: spec.env }),
     stdout: "piped",
     stderr: "null",
   });
   const start = performance.now();
   const { code, stdout } = await command.output();
   const seconds = (performance.now() - start) / 1000;
-  if (code !== 0) throw new Error(`${entry} ${args.join(" ")} exited ${code}`);
+  if (code !== 0) throw new Error(`${spec.program} ${spec.args.join(" ")} exited ${code}`);
   return { seconds, stdout: new TextDecoder().decode(stdout) };
 }
 
-async function times(entry: string, args: readonly string[]): Promise<number[]> {
-  await runOnce(entry, args); // fills the module cache
-  const out: number[] = [];
-  for (let i = 0; i < RUNS; i++) out.push((await runOnce(entry, args)).seconds);
+/** Seconds of each way, the ways taking turns run by run. */
+async function timesTakingTurns(
+  specs: readonly { program: string; args: string[]; env?: Record<string, string> }[],
+): Promise<number[][]> {
+  for (const spec of specs) await runOnce(spec); // fills the module cache (and makes the compiled copy)
+  const out = specs.map(() => [] as number[]);
+  for (let i = 0; i < RUNS; i++) {
+    for (const [k, spec] of specs.entries()) out[k]!.push((await runOnce(spec)).seconds);
+  }
   return out;
 }
 
@@ -68,29 +105,32 @@ const seconds = (values: readonly number[]): string[] => [
   `${median(values).toFixed(3)} s`,
   `${Math.min(...values).toFixed(3)} s`,
 ];
-const rows: string[][] = [["command", ...COLUMNS.flatMap((c) => [`${c.label} median`, `${c.label} min`])]];
+const rows: string[][] = [["command", ...WAYS.flatMap((w) => [`${w.label} median`, `${w.label} min`])]];
 for (const c of CASES) {
-  const figures: string[] = [c.label];
-  for (const column of COLUMNS) {
-    // mathjs was loaded by the unit reader: --version and --help never loaded it.
-    const applies = !column.checkOnly || c.args[0] === "check";
-    figures.push(...(applies ? seconds(await times(column.entry, c.args)) : ["", ""]));
-  }
-  rows.push(figures);
+  // mathjs was loaded by the unit reader: --version and --help never loaded it.
+  const ways = WAYS.filter((w) => !w.checkOnly || c.args[0] === "check");
+  const measured = await timesTakingTurns(ways.map((w) => w.command(c.args)));
+  rows.push([
+    c.label,
+    ...WAYS.flatMap((w) => {
+      const k = ways.indexOf(w);
+      return k < 0 ? ["", ""] : seconds(measured[k]!);
+    }),
+  ]);
 }
 // The floor: Deno starting and running a module that does nothing.
-rows.push(["deno run <empty module>", ...seconds(await times(EMPTY, [])), "", "", "", ""]);
+const [empty] = await timesTakingTurns([denoRun(EMPTY)([])]);
+rows.push(["deno run <empty module>", ...seconds(empty!), ...WAYS.slice(1).flatMap(() => ["", ""])]);
 console.log(`${RUNS} runs each, Deno ${Deno.version.deno}`);
 print(rows);
 
 // Where check of the template spends its time, in one process: medians in ms.
 const phaseRows: string[][] = [["check <template>, ms", "import", "load", "compute", "review"]];
 for (const [label, extra] of [["mathjs", ["--with-mathjs"]], ["now", []]] as const) {
-  await runOnce(PHASES, [TEMPLATE, ...extra]);
+  const phases = denoRun(PHASES)([TEMPLATE, ...extra]);
+  await runOnce(phases);
   const samples: Record<string, number>[] = [];
-  for (let i = 0; i < RUNS; i++) {
-    samples.push(JSON.parse((await runOnce(PHASES, [TEMPLATE, ...extra])).stdout));
-  }
+  for (let i = 0; i < RUNS; i++) samples.push(JSON.parse((await runOnce(phases)).stdout));
   phaseRows.push([
     label,
     ...["import", "load", "compute", "review"].map((k) => median(samples.map((s) => s[k]!)).toFixed(0)),

@@ -1,7 +1,10 @@
 import { join } from "node:path";
 import type { CommandIo } from "./commandIo.ts";
 
-/** The template folder a new project is copied from. */
+/**
+ * The template folder a new project is copied from. Found from two folders below the repository, where the
+ * launcher's compiled copy (in .cache/) is too.
+ */
 export const TEMPLATE_FOLDER = new URL("../../templates/new-project/", import.meta.url);
 
 /** Creates a new project folder from the template; refuses to touch a folder that already has files. */

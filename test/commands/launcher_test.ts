@@ -114,7 +114,7 @@ Deno.test("the launcher gives each command only the permissions it needs", async
   const fake = await recordingDeno();
   try {
     const permissionsOf = async (args: string[]) => {
-      const result = await launch(args, fake, { PATH: pathWith(fake) });
+      const result = await launch(args, fake, { PATH: pathWith(fake), FLUXNOTE_FROM_SOURCE: "1" });
       assert.equal(result.code, 0, result.err);
       const words = result.out.trimEnd().split("\n");
       assert.equal(words[0], "run");
@@ -264,5 +264,145 @@ Deno.test("npm link, the README's set-up line, puts a working fluxnote command o
   } finally {
     await Deno.remove(prefix, { recursive: true });
     await Deno.remove(caller, { recursive: true });
+  }
+});
+
+/** A copy of what the launcher needs of the repository (sources, template, configuration), in a new folder. */
+async function repositoryCopy(): Promise<string> {
+  const copy = await Deno.makeTempDir({ prefix: "fluxnote-repo-copy-" });
+  const copyTree = (from: string, to: string) => {
+    Deno.mkdirSync(to, { recursive: true });
+    for (const entry of Deno.readDirSync(from)) {
+      if (entry.isDirectory) copyTree(join(from, entry.name), join(to, entry.name));
+      else Deno.copyFileSync(join(from, entry.name), join(to, entry.name));
+    }
+  };
+  for (const folder of ["src", "bin", "templates"]) copyTree(join(REPO, folder), join(copy, folder));
+  for (const file of ["deno.json", "deno.lock", "package.json"]) {
+    Deno.copyFileSync(join(REPO, file), join(copy, file));
+  }
+  return copy;
+}
+
+async function launchCopy(
+  copy: string,
+  args: readonly string[],
+  cwd: string,
+  env: Record<string, string> = {},
+): Promise<{ code: number; out: string; err: string }> {
+  const result = await new Deno.Command("sh", {
+    args: [join(copy, "bin", "fluxnote"), ...args],
+    cwd,
+    env: { PATH: pathWith(), NO_COLOR: "1", ...env },
+    stdout: "piped",
+    stderr: "piped",
+  }).output();
+  const decode = (b: Uint8Array) => new TextDecoder().decode(b);
+  return { code: result.code, out: decode(result.stdout), err: decode(result.stderr) };
+}
+
+const compiledPointer = (copy: string) => {
+  try {
+    return Deno.readTextFileSync(join(copy, ".cache", "compiled")).trim();
+  } catch {
+    return undefined;
+  }
+};
+
+Deno.test("the launcher runs a compiled copy of the sources that writes the same files, and makes it again after a source change", async () => {
+  const copy = await repositoryCopy();
+  const outputs = await Deno.makeTempDir({ prefix: "fluxnote-compiled-out-" });
+  try {
+    const demo = join(REPO, "projects", "demo");
+    const compiled = await launchCopy(copy, ["build", demo, "--out", join(outputs, "compiled")], outputs);
+    assert.equal(compiled.code, 0, compiled.err);
+    const first = compiledPointer(copy);
+    assert.ok(first !== undefined, "the first run made a compiled copy");
+    assert.ok(Deno.statSync(join(copy, ".cache", first, "cli.js")).isFile);
+    const source = await launchCopy(copy, ["build", demo, "--out", join(outputs, "source")], outputs, {
+      FLUXNOTE_FROM_SOURCE: "1",
+    });
+    assert.equal(source.code, 0, source.err);
+    const files = (folder: string): string[] =>
+      [...Deno.readDirSync(folder)].flatMap((e) =>
+        e.isDirectory ? files(join(folder, e.name)).map((f) => join(e.name, f)) : [e.name]
+      ).sort();
+    const compiledFiles = files(join(outputs, "compiled"));
+    assert.deepEqual(compiledFiles, files(join(outputs, "source")));
+    assert.ok(compiledFiles.includes("package.html") && compiledFiles.length > 5);
+    for (const name of compiledFiles) {
+      assert.deepEqual(
+        Deno.readFileSync(join(outputs, "compiled", name)),
+        Deno.readFileSync(join(outputs, "source", name)),
+        `${name} differs between the compiled copy and the sources`,
+      );
+    }
+    // init through the compiled copy finds the template beside the sources.
+    const init = await launchCopy(copy, ["init", "fresh"], outputs);
+    assert.equal(init.code, 0, init.err);
+    assert.ok(Deno.statSync(join(outputs, "fresh", "project.md")).isFile);
+    assert.equal(compiledPointer(copy), first, "an unchanged source tree keeps its compiled copy");
+    // A changed source file: the next run compiles again and runs the change.
+    const versionFile = join(copy, "src", "version.ts");
+    const versionText = Deno.readTextFileSync(versionFile);
+    Deno.writeTextFileSync(versionFile, versionText.replace(/"(\d+\.\d+\.\d+)"/, '"$1-changed"'));
+    const version = await launchCopy(copy, ["--version"], outputs);
+    assert.equal(version.code, 0, version.err);
+    assert.match(version.out, /-changed/);
+    assert.notEqual(compiledPointer(copy), first, "the change made a new compiled copy");
+  } finally {
+    await Deno.remove(copy, { recursive: true });
+    await Deno.remove(outputs, { recursive: true });
+  }
+});
+
+Deno.test("where no compiled copy can be made, the launcher runs the sources", async () => {
+  const copy = await repositoryCopy();
+  const caller = await Deno.makeTempDir({ prefix: "fluxnote-no-cache-" });
+  try {
+    Deno.writeTextFileSync(join(copy, ".cache"), "a file where the cache folder would be\n");
+    for (const name of ["project.md", "walls.md"]) Deno.copyFileSync(join(MINIMAL, name), join(caller, name));
+    const check = await launchCopy(copy, ["check", "."], caller);
+    assert.equal(check.code, 0, check.err);
+    assert.match(check.out, /1 constructions read/);
+    assert.doesNotMatch(check.err, /compil|cache/i, "nothing is said about the cache");
+  } finally {
+    await Deno.remove(copy, { recursive: true });
+    await Deno.remove(caller, { recursive: true });
+  }
+});
+
+Deno.test("the packages the compiled copy leaves out are deno.json's imports", () => {
+  const line = Deno.readTextFileSync(LAUNCHER).match(/^EXTERNAL_PACKAGES="([^"]*)"$/m);
+  assert.ok(line !== null, "EXTERNAL_PACKAGES is set in bin/fluxnote");
+  const imports = Object.keys(JSON.parse(Deno.readTextFileSync(join(REPO, "deno.json"))).imports).sort();
+  assert.deepEqual(line[1]!.split(" ").sort(), imports);
+});
+
+Deno.test("without the pinned Deno on the PATH, the launcher asks npx for it once and remembers the binary", async () => {
+  const copy = await repositoryCopy();
+  const fake = await Deno.makeTempDir({ prefix: "fluxnote-fake-npx-" });
+  try {
+    // A stand-in npx that logs each call and answers `eval` with the path of the Deno running these tests.
+    const log = join(fake, "calls.log");
+    Deno.writeTextFileSync(
+      join(fake, "npx"),
+      `#!/bin/sh\nprintf '%s\\n' "$*" >>"${log}"\n` +
+        `case "$*" in *eval*) echo "${Deno.execPath()}" ;; *) exit 3 ;; esac\n`,
+    );
+    Deno.chmodSync(join(fake, "npx"), 0o755);
+    const env = { PATH: `${fake}:/usr/bin:/bin`, FLUXNOTE_FROM_SOURCE: "1" };
+    for (let run = 0; run < 2; run++) {
+      const version = await launchCopy(copy, ["--version"], fake, env);
+      assert.equal(version.code, 0, version.err);
+      assert.match(version.out, /^fluxnote \d+\.\d+\.\d+/);
+    }
+    const calls = Deno.readTextFileSync(log).trimEnd().split("\n");
+    assert.equal(calls.length, 1, `npx was asked once: ${calls.join(" | ")}`);
+    assert.match(calls[0]!, /^-y deno@2\.9\.6 eval /);
+    assert.equal(Deno.readTextFileSync(join(copy, ".cache", "deno-2.9.6")).trim(), Deno.execPath());
+  } finally {
+    await Deno.remove(copy, { recursive: true });
+    await Deno.remove(fake, { recursive: true });
   }
 });

@@ -34,9 +34,10 @@ async function launch(
   args: readonly string[],
   cwd: string,
   env: Record<string, string> = {},
+  launcher = LAUNCHER,
 ): Promise<{ code: number; out: string; err: string }> {
   const result = await new Deno.Command("sh", {
-    args: [LAUNCHER, ...args],
+    args: [launcher, ...args],
     cwd,
     env: { PATH: pathWith(), NO_COLOR: "1", ...env },
     stdout: "piped",
@@ -284,22 +285,9 @@ async function repositoryCopy(): Promise<string> {
   return copy;
 }
 
-async function launchCopy(
-  copy: string,
-  args: readonly string[],
-  cwd: string,
-  env: Record<string, string> = {},
-): Promise<{ code: number; out: string; err: string }> {
-  const result = await new Deno.Command("sh", {
-    args: [join(copy, "bin", "fluxnote"), ...args],
-    cwd,
-    env: { PATH: pathWith(), NO_COLOR: "1", ...env },
-    stdout: "piped",
-    stderr: "piped",
-  }).output();
-  const decode = (b: Uint8Array) => new TextDecoder().decode(b);
-  return { code: result.code, out: decode(result.stdout), err: decode(result.stderr) };
-}
+/** Runs the launcher of a repository copy. */
+const launchCopy = (copy: string, args: readonly string[], cwd: string, env: Record<string, string> = {}) =>
+  launch(args, cwd, env, join(copy, "bin", "fluxnote"));
 
 const compiledPointer = (copy: string) => {
   try {

@@ -3,7 +3,7 @@ import { reviewProject } from "../review/mod.ts";
 import { formatPosition } from "../project/position.ts";
 import { renderPackage } from "../report/package.ts";
 import { computeProject } from "../results/buildResults.ts";
-import { resultsJsonText, type SharedTexts } from "../results/jsonText.ts";
+import { resultsJsonText } from "../results/jsonText.ts";
 import { packageResultsCopy } from "../results/packageCopy.ts";
 import { issueGate } from "../results/issueGate.ts";
 import { buildSummary } from "../results/summary.ts";
@@ -80,11 +80,9 @@ export function produceOutputs(
   };
   phaseDone("review");
   progress?.("rendering the package");
-  // The copy shares every member but the long series with the results: their texts are written once.
-  const shared: SharedTexts = new Map();
-  const resultsText = resultsJsonText(results, shared);
+  const resultsText = resultsJsonText(results);
   phaseDone("results-json");
-  const embeddedResultsText = resultsJsonText(packageResultsCopy(results), shared);
+  const embeddedResultsText = resultsJsonText(packageResultsCopy(results));
   phaseDone("package-copy");
   const page = renderPackage({
     model: loaded.model,

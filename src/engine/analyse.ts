@@ -6,7 +6,7 @@ import { type Unresolvable, unresolvable } from "./engineError.ts";
 import { estimatedPoles, MAX_POLES } from "./poleBudget.ts";
 import { harmonicErrors } from "./harmonicCheck.ts";
 import { iso13786, type Iso13786Characteristics } from "./iso13786.ts";
-import type { ConstructionInput } from "./layer.ts";
+import { type ConstructionInput, sameLayers } from "./layer.ts";
 import { foldPeriodic, periodicFromModes } from "./periodic.ts";
 import { foldedModalTail, modalTailSum, type PulseModes, pulseModes } from "./pulseModes.ts";
 import { responseFactors } from "./responseFactors.ts";
@@ -22,6 +22,13 @@ import { type SteadyState, steadyState } from "./steady.ts";
 export interface AnalysisOptions {
   /** Run the state-space method as the second route (default true). */
   readonly stateSpace?: boolean;
+  /**
+   * An analysis already made of a construction with the same layers (its films may differ, as a design day's
+   * outside film does). No film enters the surface-to-surface chain, so its root analysis at the same time step is
+   * the one this analysis would compute (bit for bit: the same function of the same numbers) and is taken as it
+   * is; with other layers or another time step it is computed afresh.
+   */
+  readonly sameLayers?: { readonly input: ConstructionInput; readonly analysis: DynamicAnalysis };
 }
 
 /** 24-hour periodic response factors at 1 h (air to air) and the conduction time series. */
@@ -167,6 +174,16 @@ function hourlyAnalysis(airToAir: RootAnalysis): RootAnalysis {
   return { ...airToAir, responseFactors: responseFactors(airToAir.ramp, 3600), modes };
 }
 
+/** The surface-to-surface root analysis of `sameLayers`, when it is of these layers at this time step. */
+function reusableSurface(
+  input: ConstructionInput,
+  timestepS: number,
+  given: AnalysisOptions["sameLayers"],
+): RootAnalysis | undefined {
+  if (given === undefined || given.analysis.timestepS !== timestepS) return undefined;
+  return sameLayers(given.input.layers, input.layers) ? given.analysis.surfaceToSurface : undefined;
+}
+
 /** Dynamic conduction analysis of a construction at the given timestep (s), or why it cannot be resolved. */
 export function analyseConstruction(
   input: ConstructionInput,
@@ -194,7 +211,8 @@ export function analyseConstruction(
   const surface = conductionChain(input, "surface-to-surface");
   if (surface.kind === "unresolvable") return surface;
   const airToAir = rootAnalysis(air, timestepS);
-  const surfaceToSurface = rootAnalysis(surface, timestepS);
+  const surfaceToSurface = reusableSurface(input, timestepS, options.sameLayers) ??
+    rootAnalysis(surface, timestepS);
   const hourly = hourlyAnalysis(airToAir);
   const periodic = periodicFactors(hourly);
   const stateSpace = options.stateSpace === false

@@ -147,6 +147,7 @@ function candidateWithSeries(
   stopAbove: number,
   counter?: DivisionCounter,
   space?: DivisionSeries,
+  bestScore?: number,
 ): CandidateWithSeries {
   const d = denominatorFromPoles(ratios);
   const X = numeratorByConvolution(rf.X, d);
@@ -156,28 +157,42 @@ function candidateWithSeries(
   const identityError = ctfIdentityError({ X, Y, Z, Phi }, uValue);
   const all = [...X, ...Y, ...Z, ...Phi];
   const maxAbsCoefficient = all.reduce((m, v) => Math.max(m, Math.abs(v)), 0);
-  // A candidate over the coefficient bound is rejected whatever its resynthesis: skip the long division.
-  const division = maxAbsCoefficient > CTF_MAX_COEFFICIENT && stopAbove !== Infinity
-    ? undefined
-    : resynthesis([X, Y, Z], d, [rf.X, rf.Y, rf.Z], uValue, stopAbove, counter, space);
-  const resynthesisError = division === undefined ? Infinity : Math.max(...division.errors);
   const roundoff = identityRoundoffBound(ratios, rf, uValue);
   const identityRoundoff = Number.isFinite(roundoff) ? roundoff : Infinity;
-  const candidate: CtfCandidate = {
-    ctf: { X, Y, Z, Phi },
+  const figures = {
     maxAbsCoefficient,
-    resynthesisError: Number.isNaN(resynthesisError) ? Infinity : resynthesisError,
     identityError: Number.isNaN(identityError) ? Infinity : identityError,
     identityRoundoff,
     identityLimit: Math.max(CTF_MAX_IDENTITY_ERROR, identityRoundoff),
+  };
+  // A candidate whose other figures already score no better than the best cannot be chosen, whatever its
+  // resynthesis: its division need only tell whether it meets the search's target (`selectCtfWithSeries`).
+  const stop = bestScore !== undefined && scoreWithout(figures) >= bestScore
+    ? Math.min(stopAbove, CTF_TARGET_ERROR)
+    : stopAbove;
+  // A candidate over the coefficient bound is rejected whatever its resynthesis: skip the long division.
+  const division = maxAbsCoefficient > CTF_MAX_COEFFICIENT && stopAbove !== Infinity
+    ? undefined
+    : resynthesis([X, Y, Z], d, [rf.X, rf.Y, rf.Z], uValue, stop, counter, space);
+  const resynthesisError = division === undefined ? Infinity : Math.max(...division.errors);
+  const candidate: CtfCandidate = {
+    ctf: { X, Y, Z, Phi },
+    ...figures,
+    resynthesisError: Number.isNaN(resynthesisError) ? Infinity : resynthesisError,
   };
   return division?.series === undefined ? { candidate } : { candidate, series: division.series };
 }
 
 /** Worst of the acceptance ratios (≤ 1 means accepted). */
 function score(c: CtfCandidate): number {
+  return Math.max(c.resynthesisError / CTF_MAX_RESYNTHESIS_ERROR, scoreWithout(c));
+}
+
+/** Worst of the acceptance ratios other than the resynthesis (known before the long division). */
+function scoreWithout(
+  c: Pick<CtfCandidate, "identityError" | "identityLimit" | "identityRoundoff" | "maxAbsCoefficient">,
+): number {
   return Math.max(
-    c.resynthesisError / CTF_MAX_RESYNTHESIS_ERROR,
     c.identityError / c.identityLimit,
     c.identityRoundoff / CTF_MAX_IDENTITY_ROUNDOFF,
     c.maxAbsCoefficient / CTF_MAX_COEFFICIENT,
@@ -238,7 +253,8 @@ export function selectCtfWithSeries(
   let kept = divisionSpace(rf.X.length);
   for (let n = 0; n <= usable.length; n++) {
     const stopAbove = Math.max(best?.candidate.resynthesisError ?? Infinity, CTF_MAX_RESYNTHESIS_ERROR);
-    const next = candidateWithSeries(usable.slice(0, n), rf, uValue, stopAbove, counter, spare);
+    const bestScore = best === undefined ? undefined : score(best.candidate);
+    const next = candidateWithSeries(usable.slice(0, n), rf, uValue, stopAbove, counter, spare, bestScore);
     const candidate = next.candidate;
     if (best === undefined || score(candidate) < score(best.candidate)) {
       best = next;

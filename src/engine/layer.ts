@@ -28,3 +28,19 @@ export interface ConstructionInput {
   /** R_si, m^2 K/W */
   readonly insideResistance: number;
 }
+
+/** Whether two constructions' layers are the same, value for value (the films are not compared). */
+export function sameLayers(a: readonly Layer[], b: readonly Layer[]): boolean {
+  if (a === b) return true;
+  if (a.length !== b.length) return false;
+  return a.every((layer, i) => {
+    const other = b[i]!;
+    if (layer.kind === "resistive" || other.kind === "resistive") {
+      return layer.kind === "resistive" && other.kind === "resistive" &&
+        Object.is(layer.resistance, other.resistance);
+    }
+    return Object.is(layer.thicknessM, other.thicknessM) &&
+      Object.is(layer.conductivity, other.conductivity) &&
+      Object.is(layer.density, other.density) && Object.is(layer.specificHeat, other.specificHeat);
+  });
+}

@@ -129,9 +129,26 @@ export function realTransmission(chain: ConductionChain, beta: number): RealTran
   return { m, dmds: dm };
 }
 
-/** Value B(−β) of the chain, the function whose zeros are the poles. */
+/**
+ * Value B(−β) of the chain, the function whose zeros are the poles: the product of the elements' matrices as in
+ * `realTransmission`, the same operations in the same order, without the derivatives (the root polish calls it
+ * some ten times per pole).
+ */
 export function realB(chain: ConductionChain, beta: number): number {
-  let m = REAL_IDENTITY2;
-  for (const element of chain.elements) m = rMatMul(m, elementRealTransmission(element, beta).m);
-  return m.b;
+  let a = REAL_IDENTITY2.a, b = REAL_IDENTITY2.b, c = REAL_IDENTITY2.c, d = REAL_IDENTITY2.d;
+  for (const element of chain.elements) {
+    let ea: number, eb: number, ec: number;
+    if (element.kind === "resistive") {
+      ea = 1, eb = element.resistance, ec = 0;
+    } else {
+      const { thicknessM: l, conductivity: k, diffusivity: alpha } = element;
+      const theta = l * Math.sqrt(beta / alpha);
+      const sc = sinc(theta);
+      ea = Math.cos(theta), eb = (l / k) * sc, ec = -((k * theta * theta) / l) * sc;
+    }
+    // rMatMul([[a, b], [c, d]], [[ea, eb], [ec, ea]])
+    const na = a * ea + b * ec, nb = a * eb + b * ea, nc = c * ea + d * ec, nd = c * eb + d * ea;
+    a = na, b = nb, c = nc, d = nd;
+  }
+  return b;
 }

@@ -209,9 +209,11 @@ function computeScenarios(
       const key = `${constructionId}@${timestepS}@${film ?? "own"}`;
       const cached = cache.get(key);
       if (cached !== undefined) return cached;
+      // The surface-to-surface analysis has no film in it: the construction's own is reused when the step matches.
       const analysis = analyseConstruction(
         film === undefined ? construction : { ...construction, outsideResistance: film },
         timestepS,
+        own === undefined ? {} : { sameLayers: { input: construction, analysis: own } },
       );
       if (analysis.kind === "unresolvable") {
         throw new Error(`construction ${constructionId} at ${timestepS} s: ${analysis.message}`);

@@ -218,7 +218,10 @@ function peakOf(
       const key = `${timestepS}|${film}`;
       const cached = byKey.get(key);
       if (cached !== undefined) return cached;
-      const fresh = analyseConstruction({ ...c, outsideResistance: film }, timestepS, { stateSpace: false });
+      const fresh = analyseConstruction({ ...c, outsideResistance: film }, timestepS, {
+        stateSpace: false,
+        ...(a === undefined ? {} : { sameLayers: { input: c, analysis: a } }),
+      });
       if (fresh.kind !== "analysis") throw new Error(fresh.message);
       byKey.set(key, fresh);
       return fresh;

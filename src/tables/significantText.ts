@@ -49,13 +49,7 @@ const ZEROS = "0".repeat(330);
 /** The digits of a whole number `n` (leading digit in the 10^exponent place) as a plain decimal, zeros trimmed. */
 function placedDigits(sign: string, n: number, exponent: number): string {
   while (n % 10 === 0) n /= 10;
-  const digits = String(n);
-  if (exponent < 0) return `${sign}0.${ZEROS.slice(0, -exponent - 1)}${digits}`;
-  const integerDigits = exponent + 1;
-  if (integerDigits >= digits.length) {
-    return `${sign}${digits}${ZEROS.slice(0, integerDigits - digits.length)}`;
-  }
-  return `${sign}${digits.slice(0, integerDigits)}.${digits.slice(integerDigits)}`;
+  return placedText(sign, String(n), exponent);
 }
 
 /** The text by `toPrecision` itself (every case; the reference of the fast route). */
@@ -65,14 +59,65 @@ export function significantTextByToPrecision(value: number, p: number): string {
   return text === "-0" ? "0" : text;
 }
 
+/** Texts of 0 … 999: plain, padded to three digits, and both without trailing zeros (built on first use). */
+interface DigitTables {
+  readonly plain: readonly string[];
+  readonly padded: readonly string[];
+  readonly trimmed: readonly string[];
+  readonly paddedTrimmed: readonly string[];
+}
+let tables: DigitTables | undefined;
+
+function digitTables(): DigitTables {
+  const plain: string[] = [], padded: string[] = [], trimmed: string[] = [], paddedTrimmed: string[] = [];
+  const strip = (text: string) => text.replace(/0+$/, "");
+  for (let k = 0; k < 1000; k++) {
+    const text = String(k);
+    plain.push(text);
+    padded.push(text.padStart(3, "0"));
+    trimmed.push(strip(text));
+    paddedTrimmed.push(strip(text.padStart(3, "0")));
+  }
+  return { plain, padded, trimmed, paddedTrimmed };
+}
+
 /**
- * `value` (finite) to `p` significant figures (1 ≤ p ≤ 15) as a plain decimal; "-0" is written "0". The scaled
- * value s = |value|·10^k (k = p − 1 − exponent, 10^|k| exact) carries at most half an ulp of error, s·2^−53; unless
- * its fraction lies within s·1e−15 of one half, rounding it gives the digits `toPrecision` gives.
+ * The digits of a whole number 0 < n < 10⁶ without its trailing zeros, from the tables: the same text as
+ * `String(n)` with trailing zeros removed, without a number-to-text conversion.
+ */
+function significantDigits(n: number, t: DigitTables): string {
+  const hi = Math.floor(n / 1000);
+  const lo = n - 1000 * hi;
+  if (hi === 0) return t.trimmed[lo]!;
+  return lo === 0 ? t.trimmed[hi]! : t.plain[hi]! + t.paddedTrimmed[lo]!;
+}
+
+/** `digits` (no trailing zeros, leading digit in the 10^exponent place) as a plain decimal. */
+function placedText(sign: string, digits: string, exponent: number): string {
+  if (exponent < 0) return `${sign}0.${ZEROS.slice(0, -exponent - 1)}${digits}`;
+  const integerDigits = exponent + 1;
+  if (integerDigits >= digits.length) {
+    return `${sign}${digits}${ZEROS.slice(0, integerDigits - digits.length)}`;
+  }
+  return `${sign}${digits.slice(0, integerDigits)}.${digits.slice(integerDigits)}`;
+}
+
+/**
+ * `value` (finite) to `p` significant figures (1 ≤ p ≤ 15) as a plain decimal; "-0" is written "0". A whole
+ * number of at most p digits (below 10⁶) is its own text. Otherwise the scaled value s = |value|·10^k
+ * (k = p − 1 − exponent, 10^|k| exact) carries at most half an ulp of error, s·2^−53; unless its fraction lies
+ * within s·1e−15 of one half, rounding it gives the digits `toPrecision` gives.
  */
 export function significantText(value: number, p: number, counter?: SignificantTextCounter): string {
   if (value === 0) return "0";
   const size = Math.abs(value);
+  if (size < 1e6 && size < EXACT_POWERS[p]! && Number.isInteger(size)) {
+    const t = tables ??= digitTables();
+    const hi = Math.floor(size / 1000);
+    const lo = size - 1000 * hi;
+    const digits = hi === 0 ? t.plain[lo]! : t.plain[hi]! + t.padded[lo]!;
+    return value < 0 ? `-${digits}` : digits;
+  }
   const exponent = Math.floor(Math.log10(size));
   const k = p - 1 - exponent;
   if (k <= 22 && k >= -22) {
@@ -81,7 +126,9 @@ export function significantText(value: number, p: number, counter?: SignificantT
     const fraction = s - whole;
     const n = fraction > 0.5 ? whole + 1 : whole;
     if (Math.abs(fraction - 0.5) > s * 1e-15 && n >= EXACT_POWERS[p - 1]! && n < EXACT_POWERS[p]!) {
-      return placedDigits(value < 0 ? "-" : "", n, exponent);
+      const sign = value < 0 ? "-" : "";
+      if (n < 1e6) return placedText(sign, significantDigits(n, tables ??= digitTables()), exponent);
+      return placedDigits(sign, n, exponent);
     }
   }
   if (counter !== undefined) counter.fallback++;

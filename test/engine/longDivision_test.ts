@@ -1,6 +1,15 @@
 import assert from "node:assert/strict";
 import { conductionChain } from "../../src/engine/elements.ts";
-import { resynthesise, selectCtfWithSeries } from "../../src/engine/ctf.ts";
+import {
+  CTF_MAX_COEFFICIENT,
+  CTF_MAX_IDENTITY_ROUNDOFF,
+  CTF_MAX_RESYNTHESIS_ERROR,
+  type CtfCandidate,
+  ctfCandidate,
+  resynthesise,
+  selectCtfWithSeries,
+} from "../../src/engine/ctf.ts";
+import type { ResponseFactors } from "../../src/engine/responseFactors.ts";
 import { type DivisionCounter, resynthesis } from "../../src/engine/longDivision.ts";
 import { rootAnalysis } from "../../src/engine/rootAnalysis.ts";
 import { stateSpaceAnalysis } from "../../src/engine/stateSpaceAnalysis.ts";
@@ -107,4 +116,57 @@ Deno.test("the chosen CTF's kept divisions are its own, whichever candidate the 
     checked++;
   }
   assert.ok(checked > 100, `${checked} selections with kept divisions`);
+});
+
+/** Worst acceptance ratio of a candidate, as ctf.ts documents its limits (≤ 1 accepted). */
+function scoreOf(c: CtfCandidate): number {
+  return Math.max(
+    c.resynthesisError / CTF_MAX_RESYNTHESIS_ERROR,
+    c.identityError / c.identityLimit,
+    c.identityRoundoff / CTF_MAX_IDENTITY_ROUNDOFF,
+    c.maxAbsCoefficient / CTF_MAX_COEFFICIENT,
+  );
+}
+
+/**
+ * The selection as ctf.ts documents it, every candidate divided over every term (`ctfCandidate` without a stop):
+ * slowest poles first, the first candidate that resynthesises to 1e-9 U with its identity to 1e-8 (or its
+ * roundoff bound) ends the search; else the best score, the search ending past the coefficient bound.
+ */
+function selectedInFull(ratios: readonly number[], rf: ResponseFactors, u: number) {
+  const usable = ratios.filter((q) => q > 1e-12);
+  let best: CtfCandidate | undefined;
+  let divided = 0;
+  for (let n = 0; n <= usable.length; n++) {
+    const c = ctfCandidate(usable.slice(0, n), rf, u);
+    divided += 3 * rf.X.length;
+    if (best === undefined || scoreOf(c) < scoreOf(best)) best = c;
+    if (c.resynthesisError <= 1e-9 && c.identityError <= Math.max(1e-8, c.identityRoundoff)) break;
+    if (c.maxAbsCoefficient > CTF_MAX_COEFFICIENT && best.maxAbsCoefficient <= CTF_MAX_COEFFICIENT) break;
+    if (c.maxAbsCoefficient > 1e12) break;
+  }
+  return { best: best!, divided };
+}
+
+Deno.test("a CTF candidate that cannot beat the best divides only until it misses the target; the choice is unchanged", () => {
+  // Reference: the same selection with every candidate divided in full. On the surface-to-surface factors of a
+  // heavy wall the search runs past its best candidate (later ones fit closer but score worse on their
+  // coefficients), and those need not be divided to the end.
+  let fewer = 0;
+  for (const wall of [HEAVY_WALL, LIGHT_WALL]) {
+    for (const boundary of ["air-to-air", "surface-to-surface"] as const) {
+      for (const dt of [3600, 900]) {
+        const chain = conductionChain(wall, boundary);
+        if (chain.kind !== "chain") throw new Error(chain.message);
+        const root = rootAnalysis(chain, dt);
+        const counter: DivisionCounter = { terms: 0 };
+        const chosen = selectCtfWithSeries(root.modes.Y.ratios, root.responseFactors, root.uValue, counter);
+        const full = selectedInFull(root.modes.Y.ratios, root.responseFactors, root.uValue);
+        assert.deepStrictEqual(chosen.candidate, full.best, `${boundary} ${dt} s`);
+        assert.ok(counter.terms <= full.divided);
+        if (counter.terms < full.divided) fewer++;
+      }
+    }
+  }
+  assert.ok(fewer > 0, "no selection divided less than in full");
 });

@@ -1,9 +1,9 @@
 import assert from "node:assert/strict";
 import { conductionChain } from "../../src/engine/elements.ts";
 import type { ConstructionInput } from "../../src/engine/layer.ts";
-import { realTransmission, transmission } from "../../src/engine/transmission.ts";
+import { realB, realTransmission, transmission } from "../../src/engine/transmission.ts";
 import { cAbs, cMul, cSub } from "../../src/engine/complex.ts";
-import { assertClose, HEAVY_WALL } from "./walls.ts";
+import { assertClose, HEAVY_WALL, LIGHT_WALL } from "./walls.ts";
 
 function chainOf(c: ConstructionInput) {
   const chain = conductionChain(c, "air-to-air");
@@ -67,5 +67,21 @@ Deno.test("transmission() determinant AD − BC = 1 (reciprocity) at complex s",
     const m = transmission(chain, s);
     const det = cSub(cMul(m.a, m.d), cMul(m.b, m.c));
     assert.ok(cAbs(cSub(det, { re: 1, im: 0 })) < 1e-9 * Math.max(1, cAbs(cMul(m.a, m.d))));
+  }
+});
+
+Deno.test("realB() is B of realTransmission() bit for bit, films or none, across the poles' range of β", () => {
+  // Reference: realTransmission (its B is checked against closed forms and the complex form above). realB forms
+  // the same product without the derivatives, for the root polish; the poles it finds must not move by a bit.
+  for (const wall of [HEAVY_WALL, LIGHT_WALL]) {
+    for (const boundary of ["air-to-air", "surface-to-surface"] as const) {
+      const chain = conductionChain(wall, boundary);
+      if (chain.kind !== "chain") throw new Error(chain.message);
+      for (let k = 0; k <= 400; k++) {
+        // β from 0 to 0.3 1/s (β Δ = 40 at a 2-minute step), dense at the small end where the slow poles lie.
+        const beta = k === 0 ? 0 : 1e-9 * Math.pow(1.05, k);
+        assert.ok(Object.is(realB(chain, beta), realTransmission(chain, beta).m.b), `${boundary} β ${beta}`);
+      }
+    }
   }
 });

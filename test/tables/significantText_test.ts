@@ -17,6 +17,10 @@ function testValues(): number[] {
   const bits = new Float64Array(1);
   const words = new Uint32Array(bits.buffer);
   const values = [0.5, 1, 999999.5, 999999.4999999999, 9.999995e-7, 1e-7, 123456.5, 1e21, 5e-324, -2.5e-300];
+  // Whole numbers (a CSV's step index and hours): each side of 10^p and 10^6, trailing zeros, negatives.
+  for (const w of [7, 10, 99, 100, 999, 1000, 1001, 9999, 10000, 12300, 99999, 100000, 120000, 999999]) {
+    values.push(w, -w, w + 1, w * 10, w * 1000);
+  }
   for (let i = 0; i < 40_000; i++) {
     values.push((rand() - 0.5) * 10 ** (Math.floor(rand() * 60) - 35));
     words[0] = (rand() * 2 ** 32) >>> 0;

@@ -1,6 +1,7 @@
 /** The computed output shown after a construction block: layer table, R and U, checks, section drawing. */
 import type { Construction, ResolvedLayer } from "../../project/model.ts";
 import type { CheckResult, ConstructionResults, MethodNoteResult } from "../../results/types.ts";
+import { checksOfSubject } from "../page/checksBySubject.ts";
 import {
   type DisplayUnits,
   formatThickness,
@@ -120,7 +121,7 @@ function totalRows(results: ConstructionResults | undefined, d: DisplayUnits): T
 
 /** Tables the automated checks on one subject: id, what is checked, value, limit and PASS/FAIL. */
 export function subjectChecks(checks: readonly CheckResult[], subject: string): Trusted {
-  return checksTable(checks.filter((c) => c.subject === subject));
+  return checksTable(checksOfSubject(checks, subject));
 }
 
 /**
@@ -257,7 +258,7 @@ export function renderConstructionOutput(
  * "N numerical checks passed (Appendix C)"; nothing when the subject has no check.
  */
 export function bodyChecks(checks: readonly CheckResult[], subject: string): Trusted {
-  const own = checks.filter((c) => c.subject === subject);
+  const own = checksOfSubject(checks, subject);
   if (own.length === 0) return html``;
   const failed = own.filter((c) => !c.pass);
   const passed = own.length - failed.length;

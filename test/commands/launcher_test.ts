@@ -337,7 +337,17 @@ Deno.test("the launcher runs a compiled copy of the sources that writes the same
     const version = await launchCopy(copy, ["--version"], outputs);
     assert.equal(version.code, 0, version.err);
     assert.match(version.out, /-changed/);
-    assert.notEqual(compiledPointer(copy), first, "the change made a new compiled copy");
+    const second = compiledPointer(copy);
+    assert.notEqual(second, first, "the change made a new compiled copy");
+    // A file replaced by an older version with its old modification time (as unpacking an archive or rsync -a
+    // leaves it): the copy is made again all the same.
+    Deno.writeTextFileSync(versionFile, versionText.replace(/"(\d+\.\d+\.\d+)"/, '"$1-older"'));
+    const longAgo = new Date("2001-02-03T04:05:06Z");
+    Deno.utimeSync(versionFile, longAgo, longAgo);
+    const older = await launchCopy(copy, ["--version"], outputs);
+    assert.equal(older.code, 0, older.err);
+    assert.match(older.out, /-older/);
+    assert.notEqual(compiledPointer(copy), second, "a file set back in time made a new compiled copy");
   } finally {
     await Deno.remove(copy, { recursive: true });
     await Deno.remove(outputs, { recursive: true });

@@ -377,18 +377,26 @@ Deno.test("the packages the compiled copy leaves out are deno.json's imports", (
   assert.deepEqual(line[1]!.split(" ").sort(), imports);
 });
 
+/**
+ * Writes a stand-in npx into `folder` that logs each call and answers `eval` with the path of the Deno running
+ * these tests; returns the log's path.
+ */
+function standInNpx(folder: string): string {
+  const log = join(folder, "calls.log");
+  Deno.writeTextFileSync(
+    join(folder, "npx"),
+    `#!/bin/sh\nprintf '%s\\n' "$*" >>"${log}"\n` +
+      `case "$*" in *eval*) echo "${Deno.execPath()}" ;; *) exit 3 ;; esac\n`,
+  );
+  Deno.chmodSync(join(folder, "npx"), 0o755);
+  return log;
+}
+
 Deno.test("without the pinned Deno on the PATH, the launcher asks npx for it once and remembers the binary", async () => {
   const copy = await repositoryCopy();
   const fake = await Deno.makeTempDir({ prefix: "fluxnote-fake-npx-" });
   try {
-    // A stand-in npx that logs each call and answers `eval` with the path of the Deno running these tests.
-    const log = join(fake, "calls.log");
-    Deno.writeTextFileSync(
-      join(fake, "npx"),
-      `#!/bin/sh\nprintf '%s\\n' "$*" >>"${log}"\n` +
-        `case "$*" in *eval*) echo "${Deno.execPath()}" ;; *) exit 3 ;; esac\n`,
-    );
-    Deno.chmodSync(join(fake, "npx"), 0o755);
+    const log = standInNpx(fake);
     const env = { PATH: `${fake}:/usr/bin:/bin`, FLUXNOTE_FROM_SOURCE: "1" };
     for (let run = 0; run < 2; run++) {
       const version = await launchCopy(copy, ["--version"], fake, env);
@@ -402,5 +410,27 @@ Deno.test("without the pinned Deno on the PATH, the launcher asks npx for it onc
   } finally {
     await Deno.remove(copy, { recursive: true });
     await Deno.remove(fake, { recursive: true });
+  }
+});
+
+Deno.test("where the repository cannot keep it, the launcher remembers the Deno binary in the user's cache folder", async () => {
+  const copy = await repositoryCopy();
+  const fake = await Deno.makeTempDir({ prefix: "fluxnote-fake-npx-" });
+  const userCache = await Deno.makeTempDir({ prefix: "fluxnote-user-cache-" });
+  try {
+    Deno.writeTextFileSync(join(copy, ".cache"), "a file where the cache folder would be\n");
+    const log = standInNpx(fake);
+    const env = { PATH: `${fake}:/usr/bin:/bin`, XDG_CACHE_HOME: userCache };
+    for (let run = 0; run < 2; run++) {
+      const version = await launchCopy(copy, ["--version"], fake, env);
+      assert.equal(version.code, 0, version.err);
+      assert.match(version.out, /^fluxnote \d+\.\d+\.\d+/);
+    }
+    assert.equal(Deno.readTextFileSync(log).trimEnd().split("\n").length, 1, "npx was asked once");
+    assert.equal(Deno.readTextFileSync(join(userCache, "fluxnote", "deno-2.9.6")).trim(), Deno.execPath());
+  } finally {
+    await Deno.remove(copy, { recursive: true });
+    await Deno.remove(fake, { recursive: true });
+    await Deno.remove(userCache, { recursive: true });
   }
 });

@@ -1,20 +1,7 @@
 import type { HeatingResults } from "../scenarios/heatingTypes.ts";
 import type { ConstructionResults, ResultsJson, ScenarioResults } from "../results/types.ts";
 import { roomQuantities, roomsOf } from "./roomEffects.ts";
-import type { Effect, EffectQuantity } from "./types.ts";
-
-interface Quantity {
-  readonly subject: string;
-  readonly quantity: EffectQuantity;
-  readonly unit: string;
-  readonly value: number | null;
-  /** False for a clock time, whose relative change means nothing. */
-  readonly ratio: boolean;
-  /** A clock hour of a design day: its change is taken the shortest way round the clock. */
-  readonly clock?: boolean;
-  /** A weather-year peak: its local time `YYYY-MM-DDTHH:MM` as results.json and the package give it. */
-  readonly time?: string | null;
-}
+import type { ComparedQuantity, Effect } from "./types.ts";
 
 function text(value: unknown): string | null {
   return typeof value === "string" && value !== "" ? value : null;
@@ -48,10 +35,10 @@ function hasCorrection(c: ConstructionResults | undefined): boolean {
   return c !== undefined && c.corrections !== undefined && c.corrections !== null;
 }
 
-function constructionQuantities(id: string, c: ConstructionResults, corrected: boolean): Quantity[] {
+function constructionQuantities(id: string, c: ConstructionResults, corrected: boolean): ComparedQuantity[] {
   const subject = `construction:${id}`;
   const dynamic = dynamicOf(c);
-  const correctedU: Quantity[] = corrected
+  const correctedU: ComparedQuantity[] = corrected
     ? [{ subject, quantity: "correctedU", unit: "W/(m²·K)", value: finite(c.correctedU), ratio: true }]
     : [];
   return [
@@ -72,11 +59,11 @@ function constructionQuantities(id: string, c: ConstructionResults, corrected: b
   ];
 }
 
-function heatingQuantities(id: string, h: HeatingResults): Quantity[] {
+function heatingQuantities(id: string, h: HeatingResults): ComparedQuantity[] {
   const subject = `heating:${id}`;
   return [
     { subject, quantity: "designHeatLoss", unit: "W", value: finite(h.totalHeatLoss), ratio: true },
-    ...Object.entries(h.surfaces ?? {}).flatMap(([surfaceId, s]): Quantity[] => [
+    ...Object.entries(h.surfaces ?? {}).flatMap(([surfaceId, s]): ComparedQuantity[] => [
       {
         subject: `${subject}/${surfaceId}`,
         quantity: "designHeatLoss",
@@ -102,14 +89,14 @@ function heatingQuantities(id: string, h: HeatingResults): Quantity[] {
   ];
 }
 
-function scenarioQuantities(id: string, s: ScenarioResults): Quantity[] {
+function scenarioQuantities(id: string, s: ScenarioResults): ComparedQuantity[] {
   const subject = `scenario:${id}`;
   const weather = s.kind === "weather";
   const period = weather ? "annual" : "daily";
   // A weather peak is a moment of the year (the package prints its local time); a design-day peak a clock hour.
   const when = (owner: unknown) =>
     weather ? { time: text((owner as Record<string, unknown>)?.peakTime) } : { clock: true };
-  const own: Quantity[] = [
+  const own: ComparedQuantity[] = [
     { subject, quantity: "peakHeatGain", unit: "W", value: finite(s.peak?.heatGain), ratio: true },
     {
       subject,
@@ -122,7 +109,7 @@ function scenarioQuantities(id: string, s: ScenarioResults): Quantity[] {
     { subject, quantity: `${period}Gain_J`, unit: "J", value: finite(s.totals?.gain_J), ratio: true },
     { subject, quantity: `${period}Loss_J`, unit: "J", value: finite(s.totals?.loss_J), ratio: true },
   ];
-  const surfaces = Object.entries(s.surfaces ?? {}).flatMap(([surfaceId, surface]): Quantity[] => [
+  const surfaces = Object.entries(s.surfaces ?? {}).flatMap(([surfaceId, surface]): ComparedQuantity[] => [
     {
       subject: `${subject}/${surfaceId}`,
       quantity: "peakHeatGain",
@@ -159,7 +146,7 @@ function scenarioQuantities(id: string, s: ScenarioResults): Quantity[] {
   return [...own, ...cooling, ...surfaces];
 }
 
-function quantitiesOf(results: ResultsJson, other: ResultsJson): Quantity[] {
+function quantitiesOf(results: ResultsJson, other: ResultsJson): ComparedQuantity[] {
   const corrected = (id: string, c: ConstructionResults) =>
     hasCorrection(c) || hasCorrection(other.constructions?.[id]);
   return [
@@ -185,12 +172,12 @@ export function relativeChange(oldValue: number | null, newValue: number | null)
  * Returns the quantities that differ, largest |relative| change first, and how many agree.
  */
 export function compareResults(a: ResultsJson, b: ResultsJson): { effects: Effect[]; unchanged: number } {
-  const key = (q: Quantity) => `${q.subject}\u0000${q.quantity}`;
+  const key = (q: ComparedQuantity) => `${q.subject}\u0000${q.quantity}`;
   const oldQ = new Map(quantitiesOf(a, b).map((q) => [key(q), q]));
   const newQ = quantitiesOf(b, a);
   const newKeys = new Set(newQ.map(key));
   const merged = [
-    ...newQ.map((n) => ({ q: n, o: oldQ.get(key(n)), n: n as Quantity | undefined })),
+    ...newQ.map((n) => ({ q: n, o: oldQ.get(key(n)), n: n as ComparedQuantity | undefined })),
     ...[...oldQ.values()].filter((o) => !newKeys.has(key(o))).map((o) => ({ q: o, o, n: undefined })),
   ];
   let unchanged = 0;

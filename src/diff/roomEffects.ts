@@ -5,17 +5,7 @@
  */
 import type { ResultsJson } from "../results/types.ts";
 import type { RoomResults } from "../scenarios/room/roomTypes.ts";
-import type { EffectQuantity } from "./types.ts";
-
-/** One compared quantity (see effects.ts). */
-export interface RoomQuantity {
-  readonly subject: string;
-  readonly quantity: EffectQuantity;
-  readonly unit: string;
-  readonly value: number | null;
-  readonly ratio: boolean;
-  readonly clock?: boolean;
-}
+import type { ComparedQuantity } from "./types.ts";
 
 function finite(value: unknown): number | null {
   return typeof value === "number" && Number.isFinite(value) ? value : null;
@@ -34,7 +24,7 @@ function highest(series: unknown): number | null {
 }
 
 /** The compared quantities of one room. */
-export function roomQuantities(id: string, r: RoomResults): RoomQuantity[] {
+export function roomQuantities(id: string, r: RoomResults): ComparedQuantity[] {
   const subject = `room:${id}`;
   const cooling = r.coolingLoad;
   return [
@@ -76,7 +66,7 @@ export function roomQuantities(id: string, r: RoomResults): RoomQuantity[] {
       value: finite(r.heatLossCoefficient),
       ratio: true,
     },
-    ...Object.entries(r.surfaces ?? {}).map(([surfaceId, s]): RoomQuantity => ({
+    ...Object.entries(r.surfaces ?? {}).map(([surfaceId, s]): ComparedQuantity => ({
       subject: `${subject}/${surfaceId}`,
       quantity: "peakInsideSurfaceTemperature",
       unit: "°C",

@@ -166,3 +166,17 @@ export interface ProjectDiff {
   readonly effects: readonly Effect[];
   readonly unchangedEffects: number;
 }
+
+/** One compared quantity of a construction, scenario, heating scenario or room (effects.ts compares them). */
+export interface ComparedQuantity {
+  readonly subject: string;
+  readonly quantity: EffectQuantity;
+  readonly unit: string;
+  readonly value: number | null;
+  /** False for a clock time, whose relative change means nothing. */
+  readonly ratio: boolean;
+  /** A clock hour of a design day: its change is taken the shortest way round the clock. */
+  readonly clock?: boolean;
+  /** A weather-year peak: its local time `YYYY-MM-DDTHH:MM` as results.json and the package give it. */
+  readonly time?: string | null;
+}

@@ -6,7 +6,6 @@ import {
   readId,
   readNumber,
   readQuantity,
-  readText,
   textOf,
   withSuggestion,
 } from "./fields.ts";
@@ -15,6 +14,7 @@ import { describeCodePoints } from "./quantity.ts";
 import { notAllowed, readItems, readMetres, requirePositive, requireWithin, valueAt } from "./roomFields.ts";
 import type { RoomBoundary, RoomSurface } from "./roomModel.ts";
 import { readTemperatureProfile } from "./scenarioBlock.ts";
+import { readKnownConstruction } from "./surfaceList.ts";
 import type { YamlValue } from "./yamlTree.ts";
 
 /** Allowed keys of a room surface. */
@@ -63,7 +63,7 @@ function readRoomSurface(
   const before = errorCount(out);
   const id = readId(surface, "id", out)?.id;
   const label = id ?? String(index + 1);
-  const construction = readConstruction(surface, label, constructionIds, out);
+  const construction = readKnownConstruction(surface, label, constructionIds, out);
   const areaM2 = readQuantity(surface, "area", "area", out, true);
   withinBound(areaM2, MAX_SURFACE_AREA, "an area of", valueAt(surface, "area"), out);
   requirePositive(
@@ -105,29 +105,6 @@ function readRoomSurface(
     ...(absorptance === undefined ? {} : { absorptance }),
     ...(exposedPerimeterM === undefined ? {} : { exposedPerimeterM }),
   };
-}
-
-function readConstruction(
-  surface: Fields,
-  label: string,
-  constructionIds: readonly string[],
-  out: Diagnostic[],
-): string | undefined {
-  const construction = readText(surface, "construction", out, { example: "EW-1" });
-  if (construction === undefined || constructionIds.includes(construction)) return construction;
-  out.push(
-    error(
-      valueAt(surface, "construction"),
-      "unknown-construction",
-      `Unknown construction "${describeCodePoints(construction)}" in surface ${label}`,
-      withSuggestion(
-        construction,
-        constructionIds,
-        `constructions defined: ${constructionIds.join(", ") || "none"}`,
-      ),
-    ),
-  );
-  return undefined;
 }
 
 /** `outdoor`, `ground`, `same-as-room`, or `{ adjacent: <temperature or 24 values>, heating-temperature: <temperature> }`. */

@@ -3,6 +3,7 @@ import { type Diagnostic, error, errorCount } from "./diagnostic.ts";
 import {
   describe,
   type Fields,
+  missing,
   quantityOf,
   readFields,
   readId,
@@ -72,12 +73,12 @@ function readWindow(
   const host = readHost(window, id ?? String(index + 1), hosts, out);
   const areaEntry = window.entries.get("area");
   const areaM2 = areaEntry === undefined
-    ? missingKey(window, "area", "12 m^2", out)
+    ? missing(window, "area", "12 m^2", out)
     : quantityOf(areaEntry.value, "area", `"area" in the ${window.what}`, out);
   requirePositive(window, "area", areaM2, "m^2", "give the whole window's area, frame included", out);
   const uEntry = window.entries.get("u-value");
   const uValue = uEntry === undefined
-    ? missingKey(window, "u-value", U_VALUE.example, out)
+    ? missing(window, "u-value", U_VALUE.example, out)
     : quantityOf(uEntry.value, "coefficient", `"u-value" in the ${window.what}`, out, U_VALUE);
   requirePositive(window, "u-value", uValue, "W/(m^2 K)", "give the window's U_w, frame included", out);
   const solarFactor = requiredFraction(window, "solar-factor", "0.40", out);
@@ -99,25 +100,13 @@ function readWindow(
   };
 }
 
-function missingKey(fields: Fields, key: string, example: string, out: Diagnostic[]): undefined {
-  out.push(
-    error(
-      fields.at,
-      "missing-key",
-      `Missing required key "${key}" in the ${fields.what}`,
-      `add e.g. \`${key}: ${example}\``,
-    ),
-  );
-  return undefined;
-}
-
 function requiredFraction(
   fields: Fields,
   key: string,
   example: string,
   out: Diagnostic[],
 ): number | undefined {
-  if (!fields.entries.has(key)) return missingKey(fields, key, example, out);
+  if (!fields.entries.has(key)) return missing(fields, key, example, out);
   return readNumber(fields, key, 0, 1, out);
 }
 

@@ -52,21 +52,7 @@ export function readSurfaceCore(
 ): { id: string | undefined; label: string; construction: string | undefined; areaM2: number | undefined } {
   const id = readId(surface, "id", out)?.id;
   const label = id ?? String(index + 1);
-  const construction = readText(surface, "construction", out, { example: "EW-1" });
-  if (construction !== undefined && !constructionIds.includes(construction)) {
-    out.push(
-      error(
-        surface.entries.get("construction")?.value.at ?? surface.at,
-        "unknown-construction",
-        `Unknown construction "${describeCodePoints(construction)}" in surface ${label}`,
-        withSuggestion(
-          construction,
-          constructionIds,
-          `constructions defined: ${constructionIds.join(", ") || "none"}`,
-        ),
-      ),
-    );
-  }
+  const construction = readKnownConstruction(surface, label, constructionIds, out);
   const areaM2 = readQuantity(surface, "area", "area", out, true);
   const areaAt = surface.entries.get("area")?.value.at ?? surface.at;
   withinBound(areaM2, MAX_SURFACE_AREA, "an area of", areaAt, out);
@@ -81,4 +67,28 @@ export function readSurfaceCore(
     );
   }
   return { id, label, construction, areaM2 };
+}
+
+/** A surface's `construction`: one of the project's, else reported (with the nearest id) and undefined. */
+export function readKnownConstruction(
+  surface: Fields,
+  label: string,
+  constructionIds: readonly string[],
+  out: Diagnostic[],
+): string | undefined {
+  const construction = readText(surface, "construction", out, { example: "EW-1" });
+  if (construction === undefined || constructionIds.includes(construction)) return construction;
+  out.push(
+    error(
+      surface.entries.get("construction")?.value.at ?? surface.at,
+      "unknown-construction",
+      `Unknown construction "${describeCodePoints(construction)}" in surface ${label}`,
+      withSuggestion(
+        construction,
+        constructionIds,
+        `constructions defined: ${constructionIds.join(", ") || "none"}`,
+      ),
+    ),
+  );
+  return undefined;
 }

@@ -71,16 +71,21 @@ Deno.test("the static module graph of check holds no YAML, Markdown, plotting, D
   }
 });
 
-Deno.test("check of the template reads its YAML and Markdown without loading their libraries", async () => {
-  const run = await deno([
+/** Runs `check` of a project in a fresh process (test/commands/_checkLoads.ts): exit code, rules, libraries loaded. */
+function checkLoads(project: string): Promise<{ code: number; out: string; err: string }> {
+  return deno([
     "run",
     "--quiet",
     "--config",
     "deno.json",
     "--allow-read",
     "test/commands/_checkLoads.ts",
-    "templates/new-project",
+    project,
   ]);
+}
+
+Deno.test("check of the template reads its YAML and Markdown without loading their libraries", async () => {
+  const run = await checkLoads("templates/new-project");
   assert.equal(run.code, 0, run.err);
   const result = JSON.parse(run.out);
   assert.equal(result.code, 0);
@@ -91,15 +96,7 @@ Deno.test("check of the template reads its YAML and Markdown without loading the
 Deno.test("check loads the libraries for a block only the YAML library reads, and reports what it finds", async () => {
   // A custom tag: refused by the reader, which only the library can see. The environment must be hidden from
   // the library before it parses (it reads LOG_TOKENS; without --allow-env that read fails the run).
-  const run = await deno([
-    "run",
-    "--quiet",
-    "--config",
-    "deno.json",
-    "--allow-read",
-    "test/commands/_checkLoads.ts",
-    "test/fixtures/hostile/yaml-custom-tag",
-  ]);
+  const run = await checkLoads("test/fixtures/hostile/yaml-custom-tag");
   assert.equal(run.code, 0, run.err);
   assert.deepEqual(JSON.parse(run.out), { code: 1, rules: ["yaml-syntax"], loaded: ["YAML", "Markdown"] });
 });

@@ -6,6 +6,7 @@
 import type { Room } from "../../project/roomModel.ts";
 import type { CheckResult } from "../../results/types.ts";
 import type { RoomResults } from "../../scenarios/room/roomTypes.ts";
+import { checksOfSubject } from "../page/checksBySubject.ts";
 import type { DisplayUnits } from "../page/displayUnits.ts";
 import { formatSig } from "../page/format.ts";
 import { html, type Trusted } from "../page/html.ts";
@@ -20,8 +21,8 @@ import { renderRoomSeries } from "./roomSeries.ts";
 import { sigU } from "./roomUnits.ts";
 
 /** The checks recorded on one room (subject `room:<id>`). */
-export function roomChecks(checks: readonly CheckResult[], id: string): CheckResult[] {
-  return checks.filter((c) => c.subject === `room:${id}`);
+export function roomChecks(checks: readonly CheckResult[], id: string): readonly CheckResult[] {
+  return checksOfSubject(checks, `room:${id}`);
 }
 
 /** The largest latent load and the time of its first step, or undefined when the room has none. */

@@ -8,12 +8,16 @@
  *   our own; `check` only);
  * - "sources": `deno run src/cli.ts`, the module graph of src/ as it is;
  * - "launcher": `sh bin/fluxnote`, what a user runs: the launcher's checks, then its compiled copy of src/
+ *   with every function compiled as its module loads (`--v8-flags=--no-lazy`)
  *   (made once before the runs);
- * - "launcher, sources": the launcher with FLUXNOTE_FROM_SOURCE=1 (no compiled copy).
+ * - "launcher, sources": the launcher with FLUXNOTE_FROM_SOURCE=1 (no compiled copy);
+ * - "compiled copy, lazy": `deno run` of a copy of the launcher's compiled copy without its `--v8-flags=--no-lazy`
+ *   (functions compiled at their first call, as V8 does by default). The copy has its own entries in Deno's code
+ *   cache, which V8 would otherwise reject and rewrite on every change of flags.
  * Then where `check` of the template spends its time (bench/check_phases.ts, medians in ms): loading modules,
  * reading, computing, reviewing. Not a test: figures depend on the machine and its load.
  *
- *   npx -y deno@2.9.6 run --allow-read --allow-run --allow-env bench/startup.ts [runs]
+ *   npx -y deno@2.9.6 run --allow-read --allow-write --allow-run --allow-env bench/startup.ts [runs]
  */
 import { fileURLToPath as fromFileUrl } from "node:url";
 
@@ -41,12 +45,25 @@ const launcher = (env: Record<string, string>) => (args: readonly string[]) => (
   args: [LAUNCHER, ...args],
   env: { PATH, ...env },
 });
+/** A copy of the launcher's compiled copy (made by one launcher run), in a temporary folder. */
+async function compiledCopyElsewhere(): Promise<string> {
+  await new Deno.Command("sh", { args: [LAUNCHER, "--version"], env: { PATH }, stdout: "null" }).output();
+  const cache = here("../.cache/");
+  const name = (await Deno.readTextFile(`${cache}compiled`)).trim();
+  const folder = await Deno.makeTempDir({ prefix: "fluxnote-startup-" });
+  for await (const entry of Deno.readDir(`${cache}${name}`)) {
+    await Deno.copyFile(`${cache}${name}/${entry.name}`, `${folder}/${entry.name}`);
+  }
+  return folder;
+}
+const lazyCopy = await compiledCopyElsewhere();
 const WAYS: readonly Way[] = [
   { label: "eager", checkOnly: false, command: denoRun(here("./startup_eager.ts")) },
   { label: "mathjs", checkOnly: true, command: denoRun(here("./startup_mathjs.ts")) },
   { label: "sources", checkOnly: false, command: denoRun(here("../src/cli.ts")) },
   { label: "launcher", checkOnly: false, command: launcher({}) },
   { label: "launcher, sources", checkOnly: false, command: launcher({ FLUXNOTE_FROM_SOURCE: "1" }) },
+  { label: "compiled copy, lazy", checkOnly: false, command: denoRun(`${lazyCopy}/cli.js`) },
 ];
 const EMPTY = here("./startup_empty.ts");
 const PHASES = here("./check_phases.ts");
@@ -101,28 +118,25 @@ function print(rows: string[][]): void {
   }
 }
 
-const seconds = (values: readonly number[]): string[] => [
-  `${median(values).toFixed(3)} s`,
-  `${Math.min(...values).toFixed(3)} s`,
-];
-const rows: string[][] = [["command", ...WAYS.flatMap((w) => [`${w.label} median`, `${w.label} min`])]];
+const seconds = (values: readonly number[]): string =>
+  `${median(values).toFixed(3)} s (${Math.min(...values).toFixed(3)})`;
+// One row per way, one column per command: "median (fastest)".
+const rows: string[][] = [["way", ...CASES.map((c) => c.label)], ...WAYS.map((w) => [w.label])];
 for (const c of CASES) {
   // mathjs was loaded by the unit reader: --version and --help never loaded it.
   const ways = WAYS.filter((w) => !w.checkOnly || c.args[0] === "check");
   const measured = await timesTakingTurns(ways.map((w) => w.command(c.args)));
-  rows.push([
-    c.label,
-    ...WAYS.flatMap((w) => {
-      const k = ways.indexOf(w);
-      return k < 0 ? ["", ""] : seconds(measured[k]!);
-    }),
-  ]);
+  WAYS.forEach((w, row) => {
+    const k = ways.indexOf(w);
+    rows[row + 1]!.push(k < 0 ? "" : seconds(measured[k]!));
+  });
 }
 // The floor: Deno starting and running a module that does nothing.
 const [empty] = await timesTakingTurns([denoRun(EMPTY)([])]);
-rows.push(["deno run <empty module>", ...seconds(empty!), ...WAYS.slice(1).flatMap(() => ["", ""])]);
-console.log(`${RUNS} runs each, Deno ${Deno.version.deno}`);
+rows.push(["deno run <empty module>", seconds(empty!), ...CASES.slice(1).map(() => "")]);
+console.log(`${RUNS} runs each, Deno ${Deno.version.deno}: median (fastest)`);
 print(rows);
+await Deno.remove(lazyCopy, { recursive: true });
 
 // Where check of the template spends its time, in one process: medians in ms.
 const phaseRows: string[][] = [["check <template>, ms", "import", "load", "compute", "review"]];

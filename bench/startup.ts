@@ -8,10 +8,9 @@
  *   our own; `check` only);
  * - "sources": `deno run src/cli.ts`, the module graph of src/ as it is;
  * - "launcher": `sh bin/fluxnote`, what a user runs: the launcher's checks, then its compiled copy of src/
- *   with every function compiled as its module loads (`--v8-flags=--no-lazy`)
- *   (made once before the runs);
+ *   (made once before the runs), with the launcher's V8 options (every function compiled as its module loads);
  * - "launcher, sources": the launcher with FLUXNOTE_FROM_SOURCE=1 (no compiled copy);
- * - "compiled copy, lazy": `deno run` of a copy of the launcher's compiled copy without its `--v8-flags=--no-lazy`
+ * - "compiled copy, lazy": `deno run` of a copy of the launcher's compiled copy without the launcher's V8 options
  *   (functions compiled at their first call, as V8 does by default). The copy has its own entries in Deno's code
  *   cache, which V8 would otherwise reject and rewrite on every change of flags.
  * Then where `check` of the template spends its time (bench/check_phases.ts, medians in ms): loading modules,

@@ -85,7 +85,7 @@ function rows(input: BuildStatusInput): Row[] {
     {
       label: "open items",
       count: open.length,
-      detail: open.length === 0 ? "" : `${blocking} blocking issue: ${kinds.join(", ")}`,
+      detail: open.length === 0 ? "" : `${kinds.join(", ")}; ${blocking} stop status: issued`,
       tone: blocking > 0 ? "warn" : "good",
     },
     {

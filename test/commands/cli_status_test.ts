@@ -52,7 +52,7 @@ Deno.test("build prints a status block after writing: failed checks, unmet limit
     );
     assert.match(block[0]!, /^ {2}failed checks +0$/);
     assert.match(block[1]!, /^ {2}unmet limits +1 {2}EW-1 max-u: 0\.\d+, limit 0\.1 W\/\(m²K\)$/);
-    assert.match(block[2]!, /^ {2}open items +\d+ {2}\d+ blocking issue: /);
+    assert.match(block[2]!, /^ {2}open items +\d+ {2}\d+ [a-z-]+.*; \d+ stop status: issued$/);
     assert.match(block[4]!, new RegExp(`^ {2}output +${out.replaceAll("/", "\\/")}/package\\.html$`));
     // Aligned: the counts are right-aligned in one column, and the output path starts where that column does.
     const counts = block.slice(0, 4).map((l) => /^( {2}\S+(?: \S+)? +)(\d+)/.exec(l)!);

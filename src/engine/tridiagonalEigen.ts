@@ -76,10 +76,19 @@ export function tridiagonalEigen(
         p = s * t;
         d[i + 1] = h + p;
         g = c * t - b;
-        for (let k = i; k < r * n; k += n) {
-          const vi = v[k]!, vj = v[k + 1]!;
-          v[k + 1] = s * vi + c * vj;
-          v[k] = c * vi - s * vj;
+        if (r === 2) {
+          // The two end rows a chain's responses need, written out (the same operations as the loop below).
+          const ai = v[i]!, aj = v[i + 1]!, bi = v[n + i]!, bj = v[n + i + 1]!;
+          v[i + 1] = s * ai + c * aj;
+          v[i] = c * ai - s * aj;
+          v[n + i + 1] = s * bi + c * bj;
+          v[n + i] = c * bi - s * bj;
+        } else {
+          for (let k = i; k < r * n; k += n) {
+            const vi = v[k]!, vj = v[k + 1]!;
+            v[k + 1] = s * vi + c * vj;
+            v[k] = c * vi - s * vj;
+          }
         }
       }
       if (i >= l) continue;

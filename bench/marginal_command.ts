@@ -6,16 +6,11 @@
  * splits the in-process part by phase. The two projects take turns run by run.
  * Run: deno run --allow-read --allow-write --allow-run --allow-env bench/marginal_command.ts [runs]
  */
-import { fileURLToPath } from "node:url";
 import { heavyWallFiles } from "../scripts/heavy-walls.ts";
+import { LAUNCHER, median, PATH_WITH_THIS_DENO as PATH } from "./launcherRuns.ts";
 
 const RUNS = Number(Deno.args[0] ?? 5);
-const LAUNCHER = fileURLToPath(new URL("../bin/fluxnote", import.meta.url));
-/** PATH with this Deno first, so the launcher takes it as the pinned one. */
-const PATH = [Deno.execPath().replace(/\/[^/]*$/, ""), Deno.env.get("PATH") ?? ""].join(":");
 const COUNTS = [41, 121];
-
-const median = (values: number[]) => [...values].sort((a, b) => a - b)[Math.floor(values.length / 2)]!;
 
 /** Seconds in the "1m2.5s" form of sh's `times`. */
 const shSeconds = (text: string) => {

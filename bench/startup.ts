@@ -19,13 +19,11 @@
  *   npx -y deno@2.9.6 run --allow-read --allow-write --allow-run --allow-env bench/startup.ts [runs]
  */
 import { fileURLToPath as fromFileUrl } from "node:url";
+import { LAUNCHER, median, PATH_WITH_THIS_DENO as PATH } from "./launcherRuns.ts";
 
 const RUNS = Number(Deno.args[0] ?? "15");
 const here = (path: string): string => fromFileUrl(new URL(path, import.meta.url));
 const CONFIG = here("../deno.json");
-const LAUNCHER = here("../bin/fluxnote");
-/** PATH with this Deno first, so the launcher takes it as the pinned one. */
-const PATH = [Deno.execPath().replace(/\/[^/]*$/, ""), Deno.env.get("PATH") ?? ""].join(":");
 
 interface Way {
   readonly label: string;
@@ -100,12 +98,6 @@ async function timesTakingTurns(
     for (const [k, spec] of specs.entries()) out[k]!.push((await runOnce(spec)).seconds);
   }
   return out;
-}
-
-function median(values: readonly number[]): number {
-  const sorted = [...values].sort((a, b) => a - b);
-  const mid = Math.floor(sorted.length / 2);
-  return sorted.length % 2 === 1 ? sorted[mid]! : (sorted[mid - 1]! + sorted[mid]!) / 2;
 }
 
 function print(rows: string[][]): void {

@@ -85,7 +85,9 @@ function rows(input: BuildStatusInput): Row[] {
     {
       label: "open items",
       count: open.length,
-      detail: open.length === 0 ? "" : `${kinds.join(", ")}; ${blocking} stop status: issued`,
+      detail: open.length === 0
+        ? ""
+        : `${kinds.join(", ")}; ${blocking} ${blocking === 1 ? "stops" : "stop"} status: issued`,
       tone: blocking > 0 ? "warn" : "good",
     },
     {
